@@ -1,0 +1,2 @@
+/** Budget documents: metadata, revisions, safe saving, templates. */
+package org.quire.engine.document;

@@ -1,0 +1,2 @@
+/** Reading and writing budget files (JSON). */
+package org.quire.engine.io;

@@ -1,0 +1,2 @@
+/** The Monte Carlo method of propagating distributions (JCGM 101). */
+package org.quire.engine.montecarlo;
