@@ -1,0 +1,16 @@
+package org.quire.app;
+
+import org.quire.engine.model.FunctionLibrary;
+
+/** The engine configuration the whole application shares: one function library, one place. */
+public final class Engine {
+    private static final FunctionLibrary LIBRARY = FunctionLibrary.standard();
+
+    private Engine() {
+    }
+
+    /** @return the functions every model in the application may call */
+    public static FunctionLibrary library() {
+        return LIBRARY;
+    }
+}

@@ -1,0 +1,62 @@
+package org.quire.app.cli;
+
+import java.io.IOException;
+import java.nio.file.InvalidPathException;
+import java.nio.file.NoSuchFileException;
+import java.nio.file.Path;
+import java.nio.file.Paths;
+import org.quire.engine.budget.Budget;
+import org.quire.engine.io.BudgetFormatException;
+import org.quire.engine.io.BudgetJson;
+
+/** Loading of budget files for commands, with messages that name the file. */
+final class Files {
+    private Files() {
+    }
+
+    static Path path(String name) throws UsageException {
+        try {
+            return Paths.get(name);
+        } catch (InvalidPathException e) {
+            throw new UsageException("'" + name + "' is not a valid file name");
+        }
+    }
+
+    static Budget loadBudget(String name) throws UsageException, FileProblem {
+        Path p = path(name);
+        if (java.nio.file.Files.isDirectory(p)) {
+            throw new UsageException("'" + name + "' is a folder, not a budget file");
+        }
+        try {
+            return BudgetJson.read(p);
+        } catch (NoSuchFileException e) {
+            throw new UsageException("no such file: " + name);
+        } catch (IOException e) {
+            throw new FileProblem(name, "cannot read the file: " + e.getMessage());
+        } catch (BudgetFormatException e) {
+            throw new FileProblem(name, e.getMessage());
+        }
+    }
+
+    /** @return the model's problems, each on its own line with the file, the model line and column */
+    static FileProblem modelProblem(String file, org.quire.engine.model.ModelException e) {
+        StringBuilder s = new StringBuilder();
+        for (org.quire.engine.model.ModelProblem p : e.problems()) {
+            if (s.length() > 0) {
+                s.append('\n').append(file).append(": ");
+            }
+            s.append(p.line() > 0 ? "model line " + p.line() + ", column " + p.column() + ": " : "")
+                    .append(p.isError() ? "" : "warning: ").append(p.message());
+        }
+        return new FileProblem(file, s.toString());
+    }
+
+    /** A file that could be opened but not used. */
+    static final class FileProblem extends Exception {
+        private static final long serialVersionUID = 1L;
+
+        FileProblem(String file, String message) {
+            super(file + ": " + message);
+        }
+    }
+}

@@ -1,0 +1,81 @@
+package org.quire.app.cli;
+
+import java.io.IOException;
+import java.io.PrintStream;
+import java.net.URI;
+import java.net.URISyntaxException;
+import java.nio.file.FileSystem;
+import java.nio.file.FileSystems;
+import java.nio.file.Path;
+import java.util.List;
+import java.util.Map;
+import java.util.Set;
+import org.quire.app.Engine;
+import org.quire.engine.validate.CheckOutcome;
+import org.quire.engine.validate.Validator;
+
+/**
+ * {@code quire validate [--dir DIR]}: runs every worked example, prints one line per check and ends with
+ * {@code N passed, N failed}; exits 1 when any check fails.
+ */
+final class ValidateCommand {
+    static final String USAGE = "quire validate [--dir DIR]";
+
+    private ValidateCommand() {
+    }
+
+    static int run(String[] argv, PrintStream out) throws Exception {
+        Args a = new Args(argv, 1, Set.of("dir"), Set.of());
+        a.expectPositional(0, USAGE);
+        Validator v = Validator.standard(Engine.library());
+        List<CheckOutcome> outcomes;
+        if (a.has("dir")) {
+            Path dir = Files.path(a.get("dir", ""));
+            if (!java.nio.file.Files.isDirectory(dir)) {
+                throw new UsageException("no such folder: " + dir);
+            }
+            outcomes = v.runAll(dir);
+        } else if (java.nio.file.Files.isDirectory(Path.of("worked-examples"))) {
+            outcomes = v.runAll(Path.of("worked-examples"));
+        } else {
+            outcomes = bundled(v);
+        }
+        return print(outcomes, out);
+    }
+
+    /** Runs the copy of the worked examples packed into the jar. */
+    private static List<CheckOutcome> bundled(Validator v) throws IOException, UsageException {
+        java.net.URL url = ValidateCommand.class.getResource("/worked-examples/");
+        if (url == null) {
+            throw new UsageException("no worked-examples folder here and none bundled; give one with --dir");
+        }
+        try {
+            URI uri = url.toURI();
+            if (uri.getScheme().equals("jar")) {
+                try (FileSystem fs = FileSystems.newFileSystem(uri, Map.of())) {
+                    return v.runAll(fs.getPath("/worked-examples"));
+                }
+            }
+            return v.runAll(Path.of(uri));
+        } catch (URISyntaxException e) {
+            throw new IOException(e);
+        }
+    }
+
+    static int print(List<CheckOutcome> outcomes, PrintStream out) {
+        int passed = 0;
+        int failed = 0;
+        for (CheckOutcome o : outcomes) {
+            if (o.passed()) {
+                passed++;
+            } else {
+                failed++;
+            }
+            out.printf("%-4s %-28s %-26s %-30s expected %-14s computed %-14s tolerance %s%s%n",
+                    o.passed() ? "ok" : "FAIL", o.example(), o.source(), o.figure(), o.expected(), o.computed(),
+                    o.tolerance(), o.message().isEmpty() ? "" : "  (" + o.message() + ")");
+        }
+        out.println(passed + " passed, " + failed + " failed");
+        return failed == 0 && passed > 0 ? 0 : 1;
+    }
+}

@@ -1,0 +1,181 @@
+package org.quire.engine.budget;
+
+import jakarta.json.Json;
+import jakarta.json.JsonObject;
+import java.util.ArrayList;
+import java.util.HashSet;
+import java.util.List;
+import java.util.Objects;
+import java.util.Set;
+import org.quire.engine.model.CompiledModel;
+import org.quire.engine.model.FunctionLibrary;
+import org.quire.engine.model.ModelCompiler;
+import org.quire.engine.model.ModelException;
+
+/**
+ * An uncertainty budget: the measurement model, its input quantities and their correlations, the outputs to
+ * report and the evaluation settings.
+ *
+ * <p>Immutable and thread-safe; every {@code with...} method returns a changed copy.
+ */
+public final class Budget {
+    private final String title;
+    private final String notes;
+    private final String model;
+    private final List<OutputQuantity> outputs;
+    private final List<InputQuantity> inputs;
+    private final List<Correlation> correlations;
+    private final EvaluationSettings settings;
+    private final JsonObject extensions;
+
+    private Budget(String title, String notes, String model, List<OutputQuantity> outputs,
+            List<InputQuantity> inputs, List<Correlation> correlations, EvaluationSettings settings,
+            JsonObject extensions) {
+        this.title = title;
+        this.notes = notes;
+        this.model = model;
+        this.outputs = List.copyOf(outputs);
+        this.inputs = List.copyOf(inputs);
+        this.correlations = List.copyOf(correlations);
+        this.settings = settings;
+        this.extensions = extensions;
+    }
+
+    /**
+     * @param model the model text, one equation a line
+     * @param outputs the outputs, each defined by an equation
+     * @param inputs the input quantities; names must be unique
+     * @throws IllegalArgumentException for a duplicate input name or output
+     */
+    public static Budget of(String model, List<OutputQuantity> outputs, List<InputQuantity> inputs) {
+        Budget b = new Budget("", "", Objects.requireNonNull(model, "model"), outputs, inputs, List.of(),
+                EvaluationSettings.defaults(), JsonObject.EMPTY_JSON_OBJECT);
+        b.checkNames();
+        return b;
+    }
+
+    private void checkNames() {
+        Set<String> seen = new HashSet<>();
+        for (InputQuantity q : inputs) {
+            if (!seen.add(q.name())) {
+                throw new IllegalArgumentException("input '" + q.name() + "' is listed twice");
+            }
+        }
+        Set<String> outs = new HashSet<>();
+        for (OutputQuantity o : outputs) {
+            if (!outs.add(o.name())) {
+                throw new IllegalArgumentException("output '" + o.name() + "' is listed twice");
+            }
+            if (seen.contains(o.name())) {
+                throw new IllegalArgumentException("'" + o.name() + "' is an input and cannot also be an output");
+            }
+        }
+    }
+
+    public Budget withTitle(String v) { return copy(v == null ? "" : v, notes, model, outputs, inputs, correlations, settings, extensions); }
+    public Budget withNotes(String v) { return copy(title, v == null ? "" : v, model, outputs, inputs, correlations, settings, extensions); }
+    public Budget withModel(String v) { return copy(title, notes, Objects.requireNonNull(v, "model"), outputs, inputs, correlations, settings, extensions); }
+    public Budget withOutputs(List<OutputQuantity> v) { return copy(title, notes, model, v, inputs, correlations, settings, extensions); }
+    public Budget withInputs(List<InputQuantity> v) { return copy(title, notes, model, outputs, v, correlations, settings, extensions); }
+    public Budget withCorrelations(List<Correlation> v) { return copy(title, notes, model, outputs, inputs, v, settings, extensions); }
+    public Budget withSettings(EvaluationSettings v) { return copy(title, notes, model, outputs, inputs, correlations, Objects.requireNonNull(v), extensions); }
+    /** @param v fields of the budget file this version of Quire does not interpret, kept on save */
+    public Budget withExtensions(JsonObject v) { return copy(title, notes, model, outputs, inputs, correlations, settings, v == null ? JsonObject.EMPTY_JSON_OBJECT : v); }
+
+    /** @return a copy with one input replaced (matched by position of the input named {@code name}) */
+    public Budget withInput(String name, InputQuantity replacement) {
+        List<InputQuantity> list = new ArrayList<>(inputs);
+        for (int i = 0; i < list.size(); i++) {
+            if (list.get(i).name().equals(name)) {
+                list.set(i, replacement);
+                return withInputs(list);
+            }
+        }
+        throw new IllegalArgumentException("no input named '" + name + "'");
+    }
+
+    private static Budget copy(String title, String notes, String model, List<OutputQuantity> outputs,
+            List<InputQuantity> inputs, List<Correlation> correlations, EvaluationSettings settings,
+            JsonObject extensions) {
+        Budget b = new Budget(title, notes, model, outputs, inputs, correlations, settings, extensions);
+        b.checkNames();
+        return b;
+    }
+
+    public String title() { return title; }
+    public String notes() { return notes; }
+    public String model() { return model; }
+    public List<OutputQuantity> outputs() { return outputs; }
+    public List<InputQuantity> inputs() { return inputs; }
+    public List<Correlation> correlations() { return correlations; }
+    public EvaluationSettings settings() { return settings; }
+    public JsonObject extensions() { return extensions; }
+
+    /** @return the input of that name, or null */
+    public InputQuantity input(String name) {
+        for (InputQuantity q : inputs) {
+            if (q.name().equals(name)) {
+                return q;
+            }
+        }
+        return null;
+    }
+
+    /** @return the input names in order */
+    public List<String> inputNames() {
+        List<String> n = new ArrayList<>();
+        for (InputQuantity q : inputs) {
+            n.add(q.name());
+        }
+        return n;
+    }
+
+    /** @return the output names in order */
+    public List<String> outputNames() {
+        List<String> n = new ArrayList<>();
+        for (OutputQuantity q : outputs) {
+            n.add(q.name());
+        }
+        return n;
+    }
+
+    /**
+     * @param library the functions the model may call
+     * @return the compiled model
+     * @throws ModelException listing every problem with its place
+     */
+    public CompiledModel compile(FunctionLibrary library) throws ModelException {
+        if (outputs.isEmpty()) {
+            throw new ModelException(new org.quire.engine.model.ModelProblem(0, 0, 0,
+                    org.quire.engine.model.ModelProblem.Severity.ERROR,
+                    "the budget names no output: mark at least one quantity the model defines as an output"));
+        }
+        return ModelCompiler.compile(model, inputNames(), outputNames(), library);
+    }
+
+    /** @return the checked correlation matrix of the inputs */
+    public CorrelationMatrix correlationMatrix() {
+        return CorrelationMatrix.of(inputs, correlations);
+    }
+
+    /** @return an empty JSON object, for callers that build extensions */
+    public static JsonObject noExtensions() {
+        return Json.createObjectBuilder().build();
+    }
+
+    @Override
+    public boolean equals(Object o) {
+        if (!(o instanceof Budget)) {
+            return false;
+        }
+        Budget b = (Budget) o;
+        return title.equals(b.title) && notes.equals(b.notes) && model.equals(b.model) && outputs.equals(b.outputs)
+                && inputs.equals(b.inputs) && correlations.equals(b.correlations) && settings.equals(b.settings)
+                && extensions.equals(b.extensions);
+    }
+
+    @Override
+    public int hashCode() {
+        return Objects.hash(title, model, outputs, inputs, correlations, settings);
+    }
+}

@@ -1,0 +1,336 @@
+package org.quire.engine.budget;
+
+import java.util.Collections;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+import java.util.Set;
+import org.quire.engine.gum.CoverageFactor;
+
+/**
+ * A Type B evaluation: a distribution stated from information other than repeated observations (a
+ * certificate, a handbook, a specification, experience), given by the parameters the engineer entered.
+ *
+ * <p>Distributions and their parameters (the names are those of the budget file):
+ * <ul>
+ * <li>{@code normal}: {@code estimate} and one of {@code standardUncertainty}; {@code expandedUncertainty}
+ *     with {@code coverageFactor}; or {@code expandedUncertainty} with {@code coverageProbability} and
+ *     {@code dof}, where k = t_p(nu) (JCGM 100:2008 4.3.4 and 4.3.5; G.3).</li>
+ * <li>{@code rectangular}, {@code triangular}, {@code arcsine} (U-shaped): {@code estimate} with
+ *     {@code halfWidth}, or {@code lower} and {@code upper} limits (JCGM 100:2008 4.3.7, 4.3.9;
+ *     JCGM 101:2008 6.4.2, 6.4.5, 6.4.6).</li>
+ * <li>{@code trapezoidal}: as rectangular plus {@code beta}, the ratio of the top to the base
+ *     (JCGM 101:2008 6.4.4).</li>
+ * <li>{@code curvilinear-trapezoid}: as rectangular plus {@code halfWidthUncertainty} d, when the limits are
+ *     themselves known only to +-d (JCGM 101:2008 6.4.3).</li>
+ * <li>{@code student-t}: {@code estimate}, {@code scale} and {@code dof} (JCGM 101:2008 6.4.9).</li>
+ * <li>{@code exponential}: {@code estimate}, the known expectation of a non-negative quantity
+ *     (JCGM 101:2008 6.4.10).</li>
+ * <li>{@code constant}: {@code estimate}, known exactly.</li>
+ * </ul>
+ * Degrees of freedom: infinite unless {@code dof} is given, or {@code relativeUncertaintyOfU}, the relative
+ * uncertainty of u(x_i) as a fraction, giving nu = (1/2) (Delta u / u)^-2 (JCGM 100:2008 G.4.2, eq. G.3).
+ *
+ * <p>Immutable and thread-safe.
+ */
+public final class TypeB implements Evaluation {
+
+    /** Names of the distributions, as written in budget files. */
+    public static final List<String> DISTRIBUTIONS = List.of("normal", "rectangular", "triangular", "arcsine",
+            "trapezoidal", "curvilinear-trapezoid", "student-t", "exponential", "constant");
+
+    private static final Set<String> PARAMETERS = Set.of("estimate", "standardUncertainty", "expandedUncertainty",
+            "coverageFactor", "coverageProbability", "dof", "halfWidth", "lower", "upper", "beta",
+            "halfWidthUncertainty", "scale", "relativeUncertaintyOfU");
+
+    private final String distributionName;
+    private final Map<String, Double> given;
+    private final Distribution distribution;
+    private final double dof;
+    private final String basis;
+
+    private TypeB(String distributionName, Map<String, Double> given, Distribution distribution, double dof,
+            String basis) {
+        this.distributionName = distributionName;
+        this.given = given;
+        this.distribution = distribution;
+        this.dof = dof;
+        this.basis = basis;
+    }
+
+    /** @return the names of all parameters a Type B evaluation may carry */
+    public static Set<String> parameterNames() {
+        return PARAMETERS;
+    }
+
+    /**
+     * @param distribution one of {@link #DISTRIBUTIONS}
+     * @param parameters the parameters as entered (see the class description)
+     * @return the evaluation
+     * @throws InvalidParameterException naming the parameter that is missing, superfluous or out of range
+     */
+    public static TypeB of(String distribution, Map<String, Double> parameters) {
+        if (distribution == null || !DISTRIBUTIONS.contains(distribution)) {
+            throw new InvalidParameterException("distribution", "unknown distribution '" + distribution
+                    + "'; expected one of " + String.join(", ", DISTRIBUTIONS));
+        }
+        Map<String, Double> p = new LinkedHashMap<>(parameters);
+        for (Map.Entry<String, Double> e : p.entrySet()) {
+            if (!PARAMETERS.contains(e.getKey())) {
+                throw new InvalidParameterException(e.getKey(), "'" + e.getKey()
+                        + "' is not a parameter of a Type B evaluation");
+            }
+            Double v = e.getValue();
+            if (v == null || Double.isNaN(v) || (Double.isInfinite(v) && !e.getKey().equals("dof"))) {
+                throw new InvalidParameterException(e.getKey(), e.getKey() + " must be a finite number, not " + v);
+            }
+        }
+        Params r = new Params(distribution, p);
+        Distribution d;
+        String basis;
+        switch (distribution) {
+            case "normal": {
+                double x = r.need("estimate");
+                double u;
+                if (p.containsKey("standardUncertainty")) {
+                    r.forbid("expandedUncertainty", "coverageFactor", "coverageProbability");
+                    u = r.positive("standardUncertainty");
+                    basis = "normal, u = " + fmt(u);
+                } else if (p.containsKey("coverageFactor")) {
+                    r.forbid("coverageProbability");
+                    double big = r.positive("expandedUncertainty");
+                    double k = r.positive("coverageFactor");
+                    u = big / k;
+                    basis = "normal, U = " + fmt(big) + " with k = " + fmt(k);
+                } else if (p.containsKey("coverageProbability")) {
+                    double big = r.positive("expandedUncertainty");
+                    double prob = r.need("coverageProbability");
+                    if (!(prob > 0 && prob < 1)) {
+                        throw new InvalidParameterException("coverageProbability",
+                                "coverageProbability must lie strictly between 0 and 1, not " + prob);
+                    }
+                    double nu = p.containsKey("dof") ? r.positive("dof") : Double.POSITIVE_INFINITY;
+                    double k = CoverageFactor.of(prob, nu);
+                    u = big / k;
+                    basis = "normal, U = " + fmt(big) + " at p = " + fmt(100 * prob) + " %"
+                            + (Double.isInfinite(nu) ? "" : " with nu = " + fmt(nu)) + ", k = " + fmt(k);
+                    if (!Double.isInfinite(nu)) {
+                        r.forbid("relativeUncertaintyOfU");
+                        return new TypeB(distribution, freeze(p), Distribution.StudentT.of(x, u, nu), nu, basis);
+                    }
+                } else {
+                    throw new InvalidParameterException("standardUncertainty", "a normal distribution needs "
+                            + "standardUncertainty, or expandedUncertainty with coverageFactor, or expandedUncertainty "
+                            + "with coverageProbability");
+                }
+                d = Distribution.Normal.of(x, u);
+                break;
+            }
+            case "rectangular":
+            case "triangular":
+            case "arcsine":
+            case "trapezoidal":
+            case "curvilinear-trapezoid": {
+                double[] lim = r.limits();
+                String what = distribution.equals("arcsine") ? "U-shaped" : distribution;
+                basis = what + " within [" + fmt(lim[0]) + ", " + fmt(lim[1]) + "]";
+                if (distribution.equals("rectangular")) {
+                    r.forbid("beta", "halfWidthUncertainty");
+                    d = Distribution.Rectangular.of(lim[0], lim[1]);
+                } else if (distribution.equals("triangular")) {
+                    r.forbid("beta", "halfWidthUncertainty");
+                    d = Distribution.Triangular.of(lim[0], lim[1]);
+                } else if (distribution.equals("arcsine")) {
+                    r.forbid("beta", "halfWidthUncertainty");
+                    d = Distribution.Arcsine.of(lim[0], lim[1]);
+                } else if (distribution.equals("trapezoidal")) {
+                    r.forbid("halfWidthUncertainty");
+                    double beta = r.need("beta");
+                    if (beta < 0 || beta > 1) {
+                        throw new InvalidParameterException("beta", "beta must lie between 0 and 1, not " + beta);
+                    }
+                    d = Distribution.Trapezoidal.of(lim[0], lim[1], beta);
+                    basis += ", beta = " + fmt(beta);
+                } else {
+                    r.forbid("beta");
+                    double dd = r.positive("halfWidthUncertainty");
+                    if (dd > 0.5 * (lim[1] - lim[0])) {
+                        throw new InvalidParameterException("halfWidthUncertainty",
+                                "halfWidthUncertainty must not exceed the half-width " + fmt(0.5 * (lim[1] - lim[0])));
+                    }
+                    d = Distribution.CurvilinearTrapezoid.of(lim[0], lim[1], dd);
+                    basis += ", limits known to +-" + fmt(dd);
+                }
+                break;
+            }
+            case "student-t": {
+                double x = r.need("estimate");
+                double scale = r.positive("scale");
+                double nu = r.positive("dof");
+                r.forbid("relativeUncertaintyOfU");
+                basis = "Student t, scale " + fmt(scale) + ", nu = " + fmt(nu);
+                return new TypeB(distribution, freeze(p), Distribution.StudentT.of(x, scale, nu), nu, basis);
+            }
+            case "exponential": {
+                double x = r.positive("estimate");
+                d = Distribution.Exponential.of(x);
+                basis = "exponential with mean " + fmt(x);
+                break;
+            }
+            default: {
+                double x = r.need("estimate");
+                r.forbid("dof", "relativeUncertaintyOfU");
+                r.only("estimate");
+                return new TypeB(distribution, freeze(p), Distribution.Constant.of(x), Double.POSITIVE_INFINITY,
+                        "exactly known");
+            }
+        }
+        double nu = Double.POSITIVE_INFINITY;
+        if (p.containsKey("dof") && p.containsKey("relativeUncertaintyOfU")) {
+            throw new InvalidParameterException("relativeUncertaintyOfU",
+                    "give either dof or relativeUncertaintyOfU, not both");
+        }
+        if (p.containsKey("dof")) {
+            nu = r.positive("dof");
+            basis += ", nu = " + fmt(nu);
+        } else if (p.containsKey("relativeUncertaintyOfU")) {
+            double rel = r.positive("relativeUncertaintyOfU");
+            nu = 0.5 / (rel * rel);
+            if (Math.abs(nu - Math.rint(nu)) < 1e-9 * nu) {
+                nu = Math.rint(nu);
+            }
+            basis += ", u reliable to " + fmt(100 * rel) + " % (nu = " + fmt(nu) + ")";
+        }
+        return new TypeB(distribution, freeze(p), d, nu, basis);
+    }
+
+    private static Map<String, Double> freeze(Map<String, Double> p) {
+        return Collections.unmodifiableMap(new LinkedHashMap<>(p));
+    }
+
+    static String fmt(double v) {
+        return TypeA.fmt(v);
+    }
+
+    /** Reads and checks the parameters of one distribution. */
+    private static final class Params {
+        private final String distribution;
+        private final Map<String, Double> p;
+
+        Params(String distribution, Map<String, Double> p) {
+            this.distribution = distribution;
+            this.p = p;
+        }
+
+        double need(String name) {
+            Double v = p.get(name);
+            if (v == null) {
+                throw new InvalidParameterException(name, "a " + distribution + " distribution needs '" + name + "'");
+            }
+            return v;
+        }
+
+        double positive(String name) {
+            double v = need(name);
+            if (!(v > 0)) {
+                throw new InvalidParameterException(name, name + " must be positive, not " + v);
+            }
+            return v;
+        }
+
+        void forbid(String... names) {
+            for (String n : names) {
+                if (p.containsKey(n)) {
+                    throw new InvalidParameterException(n, "'" + n + "' does not belong to a " + distribution
+                            + " distribution given this way");
+                }
+            }
+        }
+
+        void only(String... names) {
+            List<String> allowed = List.of(names);
+            for (String k : p.keySet()) {
+                if (!allowed.contains(k)) {
+                    throw new InvalidParameterException(k, "'" + k + "' does not belong to a " + distribution
+                            + " value");
+                }
+            }
+        }
+
+        double[] limits() {
+            forbid("standardUncertainty", "expandedUncertainty", "coverageFactor", "coverageProbability", "scale");
+            if (p.containsKey("halfWidth")) {
+                forbid("lower", "upper");
+                double x = need("estimate");
+                double a = positive("halfWidth");
+                return new double[] {x - a, x + a};
+            }
+            if (p.containsKey("lower") || p.containsKey("upper")) {
+                double lo = need("lower");
+                double hi = need("upper");
+                if (!(hi > lo)) {
+                    throw new InvalidParameterException("upper", "upper limit " + hi
+                            + " must be greater than lower limit " + lo);
+                }
+                Double x = p.get("estimate");
+                double mid = 0.5 * (lo + hi);
+                if (x != null && Math.abs(x - mid) > 1e-12 * Math.max(Math.abs(mid), hi - lo)) {
+                    throw new InvalidParameterException("estimate", "estimate " + x
+                            + " is not the midpoint " + mid + " of the limits; a symmetric " + distribution
+                            + " distribution has its estimate at the midpoint");
+                }
+                return new double[] {lo, hi};
+            }
+            throw new InvalidParameterException("halfWidth", "a " + distribution
+                    + " distribution needs 'estimate' with 'halfWidth', or 'lower' and 'upper'");
+        }
+    }
+
+    /** @return the distribution's name as written in budget files, e.g. {@code rectangular} */
+    public String distributionName() {
+        return distributionName;
+    }
+
+    /** @return the parameters as entered, in entry order */
+    public Map<String, Double> parameters() {
+        return given;
+    }
+
+    /**
+     * @return a copy with one parameter set (or removed, when {@code value} is null)
+     * @throws InvalidParameterException when the result is not a valid evaluation
+     */
+    public TypeB with(String parameter, Double value) {
+        Map<String, Double> p = new LinkedHashMap<>(given);
+        if (value == null) {
+            p.remove(parameter);
+        } else {
+            p.put(parameter, value);
+        }
+        return of(distributionName, p);
+    }
+
+    @Override public double estimate() { return distribution.mean(); }
+    @Override public double standardUncertainty() { return distribution.standardUncertainty(); }
+    @Override public double dof() { return dof; }
+    @Override public Distribution distribution() { return distribution; }
+    @Override public String type() { return "B"; }
+    @Override public String basis() { return basis; }
+
+    @Override
+    public boolean equals(Object o) {
+        return o instanceof TypeB && ((TypeB) o).distributionName.equals(distributionName)
+                && ((TypeB) o).given.equals(given);
+    }
+
+    @Override
+    public int hashCode() {
+        return distributionName.hashCode() * 31 + given.hashCode();
+    }
+
+    @Override
+    public String toString() {
+        return String.format(Locale.ROOT, "Type B %s %s", distributionName, given);
+    }
+}

@@ -1,0 +1,219 @@
+package org.quire.engine.gum;
+
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+import org.apache.commons.math3.analysis.differentiation.DerivativeStructure;
+import org.quire.engine.budget.Budget;
+import org.quire.engine.budget.CorrelationMatrix;
+import org.quire.engine.budget.EvaluationSettings;
+import org.quire.engine.budget.Evaluation;
+import org.quire.engine.budget.InputQuantity;
+import org.quire.engine.model.CompiledModel;
+import org.quire.engine.model.FunctionLibrary;
+import org.quire.engine.model.ModelException;
+import org.quire.engine.model.ModelProblem;
+
+/**
+ * The GUM evaluation of a budget: the law of propagation of uncertainty with exact sensitivity coefficients.
+ *
+ * <p>References:
+ * <ul>
+ * <li>JCGM 100:2008 5.1.2, eq. (10), and 5.2.2, eq. (16): u_c^2(y) = sum c_i^2 u^2(x_i)
+ *     + 2 sum_{i&lt;j} c_i c_j u(x_i) u(x_j) r(x_i, x_j), with c_i = df/dx_i (5.1.3).</li>
+ * <li>JCGM 100:2008 5.1.2 note: for uncorrelated inputs with symmetric distributions the higher-order terms
+ *     sum_i sum_j [ (1/2) (d2f/dx_i dx_j)^2 + (df/dx_i)(d3f/dx_i dx_j^2) ] u^2(x_i) u^2(x_j).</li>
+ * <li>JCGM 100:2008 G.4.1, eq. (G.2b): nu_eff = u_c^4(y) / sum (u_i^4(y) / nu_i); G.4.1 note 1 and G.6.4
+ *     (truncate to the next lower integer); G.3 and Table G.2 (k = t_p(nu_eff)).</li>
+ * <li>JCGM 102:2011 6.2.1.3: covariance of several outputs U_y = C U_x C^T.</li>
+ * </ul>
+ * Derivatives are exact, by forward-mode automatic differentiation through the whole model.
+ *
+ * <p>Stateless and thread-safe.
+ */
+public final class GumEvaluator {
+    private GumEvaluator() {
+    }
+
+    /**
+     * Compiles and evaluates a budget.
+     *
+     * @throws ModelException for a model that does not compile or leaves a function's domain at the estimates
+     * @throws IllegalArgumentException for a correlation that cannot be used (its message names the inputs)
+     */
+    public static GumResult evaluate(Budget budget, FunctionLibrary library) throws ModelException {
+        CompiledModel model = budget.compile(library);
+        return evaluate(budget, model, budget.correlationMatrix(), budget.settings());
+    }
+
+    /**
+     * Evaluates a budget whose model is compiled and whose correlation matrix is checked.
+     *
+     * @throws ModelException when a value leaves a function's domain at the estimates
+     */
+    public static GumResult evaluate(Budget budget, CompiledModel model, CorrelationMatrix r,
+            EvaluationSettings settings) throws ModelException {
+        List<InputQuantity> inputs = budget.inputs();
+        int n = inputs.size();
+        double[] x = new double[n];
+        double[] u = new double[n];
+        double[] nu = new double[n];
+        for (int i = 0; i < n; i++) {
+            Evaluation e = inputs.get(i).evaluation();
+            x[i] = e.estimate();
+            u[i] = e.standardUncertainty();
+            nu[i] = e.dof();
+        }
+        double[] quantities = model.evaluateQuantities(x);
+        double[] y = model.evaluate(x);
+        int[] active = java.util.stream.IntStream.range(0, n).filter(i -> u[i] > 0).toArray();
+        boolean correlated = !r.isIdentity();
+        boolean higher = settings.higherOrder() && !correlated;
+        List<String> globalWarnings = new ArrayList<>();
+        for (ModelProblem w : model.warnings()) {
+            globalWarnings.add(w.toString().replaceFirst("^warning: ", ""));
+        }
+        if (settings.higherOrder() && correlated) {
+            globalWarnings.add("higher-order terms were not added: JCGM 100 5.1.2 gives them for uncorrelated "
+                    + "inputs only");
+        }
+        DerivativeStructure[] ds = model.derivatives(x, active, higher ? 3 : 1);
+        int m = y.length;
+        double[][] c = new double[m][n];
+        for (int k = 0; k < m; k++) {
+            for (int a = 0; a < active.length; a++) {
+                c[k][active[a]] = partial(ds[k], active.length, a, -1, -1);
+                if (!Double.isFinite(c[k][active[a]])) {
+                    throw new ModelException(new ModelProblem(0, 0, 0, ModelProblem.Severity.ERROR,
+                            "the sensitivity coefficient of output '" + model.outputNames().get(k) + "' to input '"
+                                    + inputs.get(active[a]).name() + "' is not finite at the estimates; the model "
+                                    + "is not differentiable there"));
+                }
+            }
+        }
+        double[][] cov = new double[m][m];
+        for (int k = 0; k < m; k++) {
+            for (int l = 0; l < m; l++) {
+                double s = 0;
+                for (int i : active) {
+                    for (int j : active) {
+                        s += c[k][i] * c[l][j] * u[i] * u[j] * r.get(i, j);
+                    }
+                }
+                cov[k][l] = s;
+            }
+        }
+        List<OutputResult> outs = new ArrayList<>();
+        for (int k = 0; k < m; k++) {
+            String name = model.outputNames().get(k);
+            List<String> warnings = new ArrayList<>();
+            double higherVar = 0;
+            if (higher) {
+                higherVar = higherOrderVariance(ds[k], active, u);
+            }
+            double variance = cov[k][k] + higherVar;
+            double uc = Math.sqrt(Math.max(0, variance));
+            cov[k][k] = variance;
+            double corrVar = 0;
+            List<CorrelationTerm> terms = new ArrayList<>();
+            if (correlated) {
+                for (int ia = 0; ia < active.length; ia++) {
+                    for (int ja = ia + 1; ja < active.length; ja++) {
+                        int i = active[ia];
+                        int j = active[ja];
+                        if (r.get(i, j) != 0) {
+                            double t = 2 * c[k][i] * c[k][j] * u[i] * u[j] * r.get(i, j);
+                            corrVar += t;
+                            if (t != 0) {
+                                terms.add(new CorrelationTerm(inputs.get(i).name(), inputs.get(j).name(), r.get(i, j), t));
+                            }
+                        }
+                    }
+                }
+            }
+            List<Contribution> rows = new ArrayList<>();
+            double wsDenominator = 0;
+            for (int i = 0; i < n; i++) {
+                double ui = Math.abs(c[k][i]) * u[i];
+                double share = variance > 0 ? ui * ui / variance : 0;
+                InputQuantity q = inputs.get(i);
+                rows.add(new Contribution(q.name(), q.unit(), x[i], u[i], c[k][i], ui, nu[i], share,
+                        q.evaluation().type(), q.evaluation().distribution().shape()));
+                if (ui > 0 && !Double.isInfinite(nu[i])) {
+                    wsDenominator += Math.pow(ui, 4) / nu[i];
+                }
+            }
+            double nuEff = wsDenominator > 0 ? Math.pow(uc, 4) / wsDenominator : Double.POSITIVE_INFINITY;
+            if (correlated && !terms.isEmpty() && !Double.isInfinite(nuEff)) {
+                warnings.add("inputs are correlated; the Welch–Satterthwaite formula assumes independent inputs, "
+                        + "so nu_eff is approximate");
+            }
+            if (uc == 0) {
+                warnings.add("u_c(" + name + ") is zero: no input with an uncertainty affects this output");
+            }
+            double dofUsed = nuEff;
+            if (settings.dofRounding() == EvaluationSettings.DofRounding.TRUNCATE && !Double.isInfinite(nuEff)) {
+                dofUsed = Math.max(1, Math.floor(nuEff + 1e-9));
+            }
+            double kFactor;
+            double p;
+            if (settings.hasFixedCoverageFactor()) {
+                kFactor = settings.coverageFactor();
+                p = CoverageFactor.probability(kFactor, dofUsed);
+            } else {
+                p = settings.coverageProbability();
+                kFactor = CoverageFactor.of(p, dofUsed);
+            }
+            outs.add(new OutputResult(name, budget.outputs().get(k).unit(), y[k], uc, corrVar, higherVar, nuEff,
+                    dofUsed, kFactor, p, kFactor * uc, rows, terms, warnings));
+        }
+        double[][] corr = new double[m][m];
+        for (int k = 0; k < m; k++) {
+            for (int l = 0; l < m; l++) {
+                double d = Math.sqrt(cov[k][k] * cov[l][l]);
+                corr[k][l] = k == l ? 1 : d > 0 ? cov[k][l] / d : Double.NaN;
+            }
+        }
+        Map<String, Double> q = new LinkedHashMap<>();
+        for (int j = 0; j < quantities.length; j++) {
+            q.put(model.quantityNames().get(j), quantities[j]);
+        }
+        return new GumResult(outs, cov, corr, q, globalWarnings, settings);
+    }
+
+    /** Partial derivative of {@code f} with orders at the given active-parameter indices (-1 for none). */
+    private static double partial(DerivativeStructure f, int params, int a, int b, int c) {
+        int[] orders = new int[params];
+        orders[a]++;
+        if (b >= 0) {
+            orders[b]++;
+        }
+        if (c >= 0) {
+            orders[c]++;
+        }
+        return f.getPartialDerivative(orders);
+    }
+
+    /** JCGM 100:2008 5.1.2 note, the double sum over all i and j. */
+    private static double higherOrderVariance(DerivativeStructure f, int[] active, double[] u) {
+        int p = active.length;
+        double s = 0;
+        for (int a = 0; a < p; a++) {
+            double fi = partial(f, p, a, -1, -1);
+            for (int b = 0; b < p; b++) {
+                double fij = partial(f, p, a, b, -1);
+                double fijj = partial(f, p, a, b, b);
+                double ui2 = u[active[a]] * u[active[a]];
+                double uj2 = u[active[b]] * u[active[b]];
+                s += (0.5 * fij * fij + fi * fijj) * ui2 * uj2;
+            }
+        }
+        return s;
+    }
+
+    static String fmt(double v) {
+        return String.format(Locale.ROOT, "%.6g", v);
+    }
+}

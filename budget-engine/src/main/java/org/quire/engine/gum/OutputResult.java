@@ -1,0 +1,54 @@
+package org.quire.engine.gum;
+
+import java.util.List;
+
+/**
+ * The GUM result for one output: estimate, combined standard uncertainty, effective degrees of freedom,
+ * coverage factor and expanded uncertainty, with the budget rows behind them.
+ *
+ * @param name the output's name
+ * @param unit the output's unit as text
+ * @param estimate y = f(x_1, ..., x_N) (JCGM 100:2008 4.1.4)
+ * @param standardUncertainty u_c(y), including correlation and (when chosen) higher-order terms
+ * @param correlationVariance the sum of the correlation terms in u_c^2(y)
+ * @param higherOrderVariance the higher-order terms added to u_c^2(y) (JCGM 100:2008 5.1.2 note), 0 if none
+ * @param effectiveDof nu_eff by Welch–Satterthwaite (JCGM 100:2008 G.4.1, eq. G.2b); infinite when every nu_i is
+ * @param dofUsed the degrees of freedom used for k (nu_eff truncated to an integer unless settings say otherwise)
+ * @param coverageFactor k
+ * @param coverageProbability p (the chosen one, or the one a fixed k gives at dofUsed)
+ * @param expandedUncertainty U = k u_c(y) (JCGM 100:2008 6.2.1)
+ * @param contributions one row per input, in budget order
+ * @param correlationTerms one per correlated pair with a non-zero term
+ * @param warnings sentences about limits of the result (correlated inputs and Welch–Satterthwaite, ...)
+ */
+public record OutputResult(String name, String unit, double estimate, double standardUncertainty,
+        double correlationVariance, double higherOrderVariance, double effectiveDof, double dofUsed,
+        double coverageFactor, double coverageProbability, double expandedUncertainty,
+        List<Contribution> contributions, List<CorrelationTerm> correlationTerms, List<String> warnings) {
+
+    public OutputResult {
+        contributions = List.copyOf(contributions);
+        correlationTerms = List.copyOf(correlationTerms);
+        warnings = List.copyOf(warnings);
+    }
+
+    /** @return U / |y|, NaN when y = 0 */
+    public double relativeExpandedUncertainty() {
+        return estimate == 0 ? Double.NaN : expandedUncertainty / Math.abs(estimate);
+    }
+
+    /** @return u_c / |y|, NaN when y = 0 */
+    public double relativeStandardUncertainty() {
+        return estimate == 0 ? Double.NaN : standardUncertainty / Math.abs(estimate);
+    }
+
+    /** @return the row of the input named, or null */
+    public Contribution contribution(String input) {
+        for (Contribution c : contributions) {
+            if (c.input().equals(input)) {
+                return c;
+            }
+        }
+        return null;
+    }
+}

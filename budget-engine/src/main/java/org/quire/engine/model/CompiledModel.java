@@ -1,0 +1,180 @@
+package org.quire.engine.model;
+
+import java.util.Arrays;
+import java.util.List;
+import org.apache.commons.math3.analysis.differentiation.DerivativeStructure;
+
+/**
+ * A measurement model ready to evaluate: the equations in an order in which each quantity is computed after
+ * the quantities it uses.
+ *
+ * <p>Immutable and thread-safe; {@link #newSession(int)} gives each Monte Carlo thread its own scratch space.
+ */
+public final class CompiledModel implements BlockEvaluator {
+    private final List<String> inputs;
+    private final List<String> quantities;
+    private final List<String> equationTexts;
+    private final List<String> functionTexts;
+    private final Node[] roots;
+    private final int[] order;
+    private final int[] outputIndex;
+    private final List<String> outputs;
+    private final int nodeCount;
+    private final List<Node> constants;
+    private final List<ModelProblem> warnings;
+
+    CompiledModel(List<String> inputs, List<String> quantities, List<String> equationTexts,
+            List<String> functionTexts, Node[] roots, int[] order, int[] outputIndex, List<String> outputs,
+            int nodeCount, List<Node> constants, List<ModelProblem> warnings) {
+        this.inputs = inputs;
+        this.quantities = List.copyOf(quantities);
+        this.equationTexts = List.copyOf(equationTexts);
+        this.functionTexts = List.copyOf(functionTexts);
+        this.roots = roots;
+        this.order = order;
+        this.outputIndex = outputIndex;
+        this.outputs = outputs;
+        this.nodeCount = nodeCount;
+        this.constants = constants;
+        this.warnings = List.copyOf(warnings);
+    }
+
+    /** @return the input names, in the order the evaluation methods expect their values */
+    public List<String> inputNames() {
+        return inputs;
+    }
+
+    /** @return the names of all quantities the equations define, in the order they are written */
+    public List<String> quantityNames() {
+        return quantities;
+    }
+
+    /** @return each quantity's equation as written, parallel to {@link #quantityNames()} */
+    public List<String> equationTexts() {
+        return equationTexts;
+    }
+
+    /** @return the model's own function definitions as written */
+    public List<String> functionTexts() {
+        return functionTexts;
+    }
+
+    /** @return the output names, in declared order */
+    public List<String> outputNames() {
+        return outputs;
+    }
+
+    /** @return warnings found while compiling (unused inputs, for instance) */
+    public List<ModelProblem> warnings() {
+        return warnings;
+    }
+
+    @Override
+    public int inputCount() {
+        return inputs.size();
+    }
+
+    @Override
+    public int outputCount() {
+        return outputs.size();
+    }
+
+    /**
+     * Evaluates every quantity at the given input values, checking each operation's domain.
+     *
+     * @param x input values in {@link #inputNames()} order
+     * @return the value of each quantity, in {@link #quantityNames()} order
+     * @throws ModelException naming the operation, its place and the offending value when a value leaves a
+     *     function's domain (division by zero, square root of a negative number and so on)
+     */
+    public double[] evaluateQuantities(double[] x) throws ModelException {
+        checkLength(x.length);
+        double[] v = new double[roots.length];
+        Node.Scalar s = new Node.Scalar(x, v);
+        try {
+            for (int j : order) {
+                v[j] = roots[j].eval(s);
+            }
+        } catch (Node.DomainError e) {
+            throw new ModelException(e.problem);
+        }
+        return v;
+    }
+
+    /**
+     * @param x input values
+     * @return the outputs at {@code x}
+     * @throws ModelException when a value leaves a function's domain
+     */
+    public double[] evaluate(double[] x) throws ModelException {
+        double[] v = evaluateQuantities(x);
+        double[] y = new double[outputIndex.length];
+        for (int k = 0; k < y.length; k++) {
+            y[k] = v[outputIndex[k]];
+        }
+        return y;
+    }
+
+    /**
+     * Evaluates the outputs with their partial derivatives by forward-mode automatic differentiation.
+     *
+     * <p>References: Commons Math {@code DerivativeStructure} (Kalman's generalised derivative structures);
+     * the sensitivity coefficients of JCGM 100:2008 5.1.3, eq. (10), are the first-order partials.
+     *
+     * @param x input values (checked first with {@link #evaluate(double[])} by the caller)
+     * @param active indices of the inputs that are free variables; the others are held constant
+     * @param derivativeOrder 1 for sensitivity coefficients, 3 for the higher-order terms of JCGM 100 5.1.2
+     * @return one derivative structure per output, its free parameters in {@code active} order
+     */
+    public DerivativeStructure[] derivatives(double[] x, int[] active, int derivativeOrder) {
+        checkLength(x.length);
+        int params = active.length;
+        DerivativeStructure[] xs = new DerivativeStructure[x.length];
+        for (int i = 0; i < x.length; i++) {
+            xs[i] = new DerivativeStructure(params, derivativeOrder, x[i]);
+        }
+        for (int k = 0; k < params; k++) {
+            xs[active[k]] = new DerivativeStructure(params, derivativeOrder, k, x[active[k]]);
+        }
+        DerivativeStructure[] v = new DerivativeStructure[roots.length];
+        Node.Derivs d = new Node.Derivs(xs, v, params, derivativeOrder);
+        for (int j : order) {
+            v[j] = roots[j].ds(d);
+        }
+        DerivativeStructure[] y = new DerivativeStructure[outputIndex.length];
+        for (int k = 0; k < y.length; k++) {
+            y[k] = v[outputIndex[k]];
+        }
+        return y;
+    }
+
+    private void checkLength(int n) {
+        if (n != inputs.size()) {
+            throw new IllegalArgumentException("expected " + inputs.size() + " input values, got " + n);
+        }
+    }
+
+    @Override
+    public Session newSession(int maxBlock) {
+        if (maxBlock < 1) {
+            throw new IllegalArgumentException("maxBlock must be at least 1, not " + maxBlock);
+        }
+        Node.Block b = new Node.Block(nodeCount, roots.length, maxBlock);
+        for (Node c : constants) {
+            Arrays.fill(b.buf[c.id], ((Node.Const) c).value);
+        }
+        return (in, n, out) -> {
+            if (n > maxBlock) {
+                throw new IllegalArgumentException("block of " + n + " trials exceeds the session's " + maxBlock);
+            }
+            b.in = in;
+            for (int j : order) {
+                b.vars[j] = roots[j].block(b, n);
+            }
+            for (int k = 0; k < outputIndex.length; k++) {
+                System.arraycopy(b.vars[outputIndex[k]], 0, out[k], 0, n);
+            }
+            b.in = null;
+        };
+    }
+}

@@ -1,0 +1,321 @@
+package org.quire.engine.model;
+
+import java.util.ArrayDeque;
+import java.util.ArrayList;
+import java.util.Deque;
+import java.util.HashMap;
+import java.util.LinkedHashMap;
+import java.util.LinkedHashSet;
+import java.util.List;
+import java.util.Map;
+import java.util.Set;
+
+/**
+ * Compiles model text into a {@link CompiledModel}: parses it, resolves every name against the inputs, the
+ * quantities the equations define, the model's own functions and the function library, orders the equations
+ * so that each is computed after the quantities it uses, and reports every problem with its line and column
+ * (syntax errors, unknown names with the nearest known one, duplicate definitions, circular definitions,
+ * wrong numbers of arguments, outputs no equation defines).
+ *
+ * <p>The result is a tree of our own node objects: no scripting engine, no reflection, no code generated from
+ * user text. Stateless and thread-safe.
+ */
+public final class ModelCompiler {
+    private final String text;
+    private final List<String> inputs;
+    private final List<String> outputs;
+    private final FunctionLibrary library;
+    private final List<ModelProblem> problems = new ArrayList<>();
+    private final Set<String> reported = new LinkedHashSet<>();
+    private final Map<String, Integer> inputIndex = new HashMap<>();
+    private final Map<String, Integer> quantityIndex = new LinkedHashMap<>();
+    private final Map<String, Equation> functions = new LinkedHashMap<>();
+    private final List<Equation> quantities = new ArrayList<>();
+    private final Set<String> usedInputs = new LinkedHashSet<>();
+    private int nextId;
+    private List<Node> consts = new ArrayList<>();
+
+    private ModelCompiler(String text, List<String> inputs, List<String> outputs, FunctionLibrary library) {
+        this.text = text;
+        this.inputs = inputs;
+        this.outputs = outputs;
+        this.library = library;
+    }
+
+    /**
+     * @param text the model: one equation a line
+     * @param inputs the names of the input quantities, in budget order
+     * @param outputs the names of the quantities to report, each defined by an equation
+     * @param library the functions the model may call
+     * @return the compiled model
+     * @throws ModelException listing every error found
+     */
+    public static CompiledModel compile(String text, List<String> inputs, List<String> outputs,
+            FunctionLibrary library) throws ModelException {
+        return new ModelCompiler(text, inputs, outputs, library).run();
+    }
+
+    /**
+     * Checks a model without throwing, for live error marks in an editor.
+     *
+     * @return every problem found, errors and warnings, in text order
+     */
+    public static List<ModelProblem> check(String text, List<String> inputs, List<String> outputs,
+            FunctionLibrary library) {
+        ModelCompiler c = new ModelCompiler(text, inputs, outputs, library);
+        try {
+            CompiledModel m = c.run();
+            return m.warnings();
+        } catch (ModelException e) {
+            return e.problems();
+        }
+    }
+
+    private void error(SourcePosition at, String message) {
+        if (reported.add(at.line() + ":" + at.column() + ":" + message)) {
+            problems.add(ModelProblem.error(at, message));
+        }
+    }
+
+    private CompiledModel run() throws ModelException {
+        if (text == null || text.isBlank()) {
+            throw new ModelException(new ModelProblem(0, 0, 0, ModelProblem.Severity.ERROR,
+                    "the model is empty: write at least one equation such as 'y = x1 + x2'"));
+        }
+        for (int k = 0; k < inputs.size(); k++) {
+            inputIndex.put(inputs.get(k), k);
+        }
+        List<Equation> equations = Parser.parse(text, problems);
+        Map<String, Equation> seen = new HashMap<>();
+        for (Equation eq : equations) {
+            Equation before = seen.get(eq.name());
+            if (before != null) {
+                error(eq.at(), "'" + eq.name() + "' is already defined on line " + before.at().line());
+                continue;
+            }
+            if (inputIndex.containsKey(eq.name())) {
+                error(eq.at(), "'" + eq.name() + "' is an input quantity and cannot also be defined by an equation");
+                continue;
+            }
+            if (FunctionLibrary.isStandard(eq.name()) || library.function(eq.name()) != null) {
+                error(eq.at(), "'" + eq.name() + "' is the name of a built-in function or constant; choose another name");
+                continue;
+            }
+            seen.put(eq.name(), eq);
+            if (eq.isFunction()) {
+                functions.put(eq.name(), eq);
+            } else {
+                quantityIndex.put(eq.name(), quantities.size());
+                quantities.add(eq);
+            }
+        }
+        for (String out : outputs) {
+            if (!quantityIndex.containsKey(out)) {
+                String known = String.join(", ", quantityIndex.keySet());
+                problems.add(new ModelProblem(0, 0, 0, ModelProblem.Severity.ERROR,
+                        "output '" + out + "' is not defined by any equation"
+                                + (known.isEmpty() ? "" : " (the model defines: " + known + ")")
+                                + Suggest.hint(out, quantityIndex.keySet())));
+            }
+        }
+        Node[] roots = new Node[quantities.size()];
+        List<Set<Integer>> deps = new ArrayList<>();
+        for (int j = 0; j < quantities.size(); j++) {
+            Set<Integer> d = new LinkedHashSet<>();
+            roots[j] = node(quantities.get(j).expression(), Map.of(), new ArrayDeque<>(), d);
+            deps.add(d);
+        }
+        int[] order = order(deps);
+        boolean hasErrors = problems.stream().anyMatch(ModelProblem::isError);
+        if (hasErrors) {
+            problems.sort((a, b) -> a.line() != b.line() ? Integer.compare(a.line(), b.line())
+                    : Integer.compare(a.column(), b.column()));
+            throw new ModelException(problems);
+        }
+        List<ModelProblem> warnings = new ArrayList<>(problems);
+        for (String in : inputs) {
+            if (!usedInputs.contains(in)) {
+                warnings.add(new ModelProblem(0, 0, 0, ModelProblem.Severity.WARNING,
+                        "input '" + in + "' is not used by the model"));
+            }
+        }
+        int[] outIdx = outputs.stream().mapToInt(quantityIndex::get).toArray();
+        List<String> names = new ArrayList<>(quantityIndex.keySet());
+        List<String> texts = new ArrayList<>();
+        for (Equation q : quantities) {
+            texts.add(q.text());
+        }
+        List<String> functionTexts = new ArrayList<>();
+        for (Equation f : functions.values()) {
+            functionTexts.add(f.text());
+        }
+        return new CompiledModel(List.copyOf(inputs), names, texts, functionTexts, roots, order, outIdx,
+                List.copyOf(outputs), nextId, List.copyOf(consts), warnings);
+    }
+
+    /** Topological order of the quantities; reports each circular definition once. */
+    private int[] order(List<Set<Integer>> deps) {
+        int n = deps.size();
+        int[] state = new int[n];
+        List<Integer> out = new ArrayList<>();
+        Deque<Integer> path = new ArrayDeque<>();
+        for (int j = 0; j < n; j++) {
+            visit(j, deps, state, out, path);
+        }
+        return out.stream().mapToInt(Integer::intValue).toArray();
+    }
+
+    private void visit(int j, List<Set<Integer>> deps, int[] state, List<Integer> out, Deque<Integer> path) {
+        if (state[j] == 2) {
+            return;
+        }
+        if (state[j] == 1) {
+            List<String> cycle = new ArrayList<>();
+            boolean in = false;
+            for (java.util.Iterator<Integer> it = path.descendingIterator(); it.hasNext();) {
+                int k = it.next();
+                if (k == j) {
+                    in = true;
+                }
+                if (in) {
+                    cycle.add(quantities.get(k).name());
+                }
+            }
+            cycle.add(quantities.get(j).name());
+            error(quantities.get(j).at(), "circular definition: " + String.join(" -> ", cycle));
+            return;
+        }
+        state[j] = 1;
+        path.push(j);
+        for (int k : deps.get(j)) {
+            visit(k, deps, state, out, path);
+        }
+        path.pop();
+        state[j] = 2;
+        out.add(j);
+    }
+
+    private Node constant(SourcePosition at, String text, double v) {
+        Node c = new Node.Const(nextId++, at, text, v);
+        consts.add(c);
+        return c;
+    }
+
+    private Node node(Expr e, Map<String, Node> params, Deque<String> calling, Set<Integer> deps) {
+        String txt = ExprPrinter.print(e);
+        if (e instanceof Expr.Num) {
+            return constant(e.at(), txt, ((Expr.Num) e).value());
+        }
+        if (e instanceof Expr.Name) {
+            String name = ((Expr.Name) e).name();
+            Node p = params.get(name);
+            if (p != null) {
+                return p;
+            }
+            Integer in = inputIndex.get(name);
+            if (in != null) {
+                usedInputs.add(name);
+                return new Node.Input(nextId++, e.at(), txt, in);
+            }
+            Integer q = quantityIndex.get(name);
+            if (q != null) {
+                deps.add(q);
+                return new Node.Quantity(nextId++, e.at(), txt, q);
+            }
+            if (name.equals("pi")) {
+                return constant(e.at(), txt, Math.PI);
+            }
+            if (functions.containsKey(name) || Node.Fn.bySymbol(name) != null || library.function(name) != null) {
+                error(e.at(), "'" + name + "' is a function; call it with its arguments in parentheses");
+                return constant(e.at(), txt, Double.NaN);
+            }
+            List<String> known = new ArrayList<>(inputIndex.keySet());
+            known.addAll(quantityIndex.keySet());
+            known.addAll(params.keySet());
+            known.add("pi");
+            error(e.at(), "unknown name '" + name + "'" + Suggest.hint(name, known));
+            return constant(e.at(), txt, Double.NaN);
+        }
+        if (e instanceof Expr.Unary) {
+            Node a = node(((Expr.Unary) e).operand(), params, calling, deps);
+            if (a instanceof Node.Const) {
+                return constant(e.at(), txt, -((Node.Const) a).value);
+            }
+            return new Node.Neg(nextId++, e.at(), txt, a);
+        }
+        if (e instanceof Expr.Binary) {
+            Expr.Binary b = (Expr.Binary) e;
+            Node a = node(b.left(), params, calling, deps);
+            Node c = node(b.right(), params, calling, deps);
+            if (b.op() == '^') {
+                if (c instanceof Node.Const) {
+                    double k = ((Node.Const) c).value;
+                    if (k == Math.rint(k) && Math.abs(k) <= 64) {
+                        return new Node.PowInt(nextId++, e.at(), txt, a, (int) k);
+                    }
+                }
+                return new Node.Pow(nextId++, e.at(), txt, a, c);
+            }
+            return new Node.Arith(nextId++, e.at(), txt, b.op(), a, c);
+        }
+        Expr.Call call = (Expr.Call) e;
+        String name = call.name();
+        int argc = call.args().size();
+        Node[] args = new Node[argc];
+        for (int k = 0; k < argc; k++) {
+            args[k] = node(call.args().get(k), params, calling, deps);
+        }
+        Node.Fn fn = Node.Fn.bySymbol(name);
+        if (fn != null) {
+            if (argc != 1) {
+                error(call.at(), "function '" + name + "' takes 1 argument, not " + argc);
+                return constant(e.at(), txt, Double.NaN);
+            }
+            return new Node.Func1(nextId++, e.at(), txt, fn, args[0]);
+        }
+        if (name.equals("min") || name.equals("max")) {
+            if (argc < 2) {
+                error(call.at(), "function '" + name + "' takes 2 or more arguments, not " + argc);
+                return constant(e.at(), txt, Double.NaN);
+            }
+            return new Node.MinMax(nextId++, e.at(), txt, name.equals("max"), args);
+        }
+        Equation user = functions.get(name);
+        if (user != null) {
+            if (argc != user.parameters().size()) {
+                error(call.at(), "function '" + name + "' (line " + user.at().line() + ") takes "
+                        + user.parameters().size() + " argument" + (user.parameters().size() == 1 ? "" : "s")
+                        + ", not " + argc);
+                return constant(e.at(), txt, Double.NaN);
+            }
+            if (calling.contains(name)) {
+                error(call.at(), "function '" + name + "' calls itself (through " + String.join(" -> ", calling)
+                        + "); functions may not be recursive");
+                return constant(e.at(), txt, Double.NaN);
+            }
+            Map<String, Node> bound = new HashMap<>();
+            for (int k = 0; k < argc; k++) {
+                bound.put(user.parameters().get(k), args[k]);
+            }
+            calling.push(name);
+            Node body = node(user.expression(), bound, calling, deps);
+            calling.pop();
+            return body;
+        }
+        ModelFunction lib = library.function(name);
+        if (lib != null) {
+            if (argc < lib.minArity() || argc > lib.maxArity()) {
+                error(call.at(), "function '" + name + "(" + String.join(", ", lib.parameters()) + ")' takes "
+                        + (lib.minArity() == lib.maxArity() ? String.valueOf(lib.minArity())
+                                : lib.minArity() + " to " + lib.maxArity())
+                        + " argument" + (lib.maxArity() == 1 ? "" : "s") + ", not " + argc);
+                return constant(e.at(), txt, Double.NaN);
+            }
+            return new Node.External(nextId++, e.at(), txt, lib, args);
+        }
+        List<String> known = new ArrayList<>(library.allNames());
+        known.addAll(functions.keySet());
+        error(call.at(), "unknown function '" + name + "'" + Suggest.hint(name, known));
+        return constant(e.at(), txt, Double.NaN);
+    }
+}
