@@ -128,7 +128,8 @@ public final class ModelCompiler {
         int[] order = order(deps);
         boolean hasErrors = problems.stream().anyMatch(ModelProblem::isError);
         if (hasErrors) {
-            problems.sort((a, b) -> a.line() != b.line() ? Integer.compare(a.line(), b.line())
+            problems.sort((a, b) -> a.line() != b.line()
+                    ? Integer.compare(a.line() == 0 ? Integer.MAX_VALUE : a.line(), b.line() == 0 ? Integer.MAX_VALUE : b.line())
                     : Integer.compare(a.column(), b.column()));
             throw new ModelException(problems);
         }
