@@ -14,8 +14,8 @@ module org.quire.engine {
     exports org.quire.engine.budget;
     exports org.quire.engine.gum;
     // exports org.quire.engine.montecarlo;
-    // exports org.quire.engine.units;
-    // exports org.quire.engine.flow;
+    exports org.quire.engine.units;
+    exports org.quire.engine.flow;
     // exports org.quire.engine.line;
     // exports org.quire.engine.conformity;
     // exports org.quire.engine.document;
