@@ -283,14 +283,14 @@ public final class DecisionRule {
                         + " to " + riskText + " %.";
             case GUARDED_ACCEPTANCE:
                 return "Decision rule: guarded acceptance (ILAC G8:2019; JCGM 106:2012) with guard band w = "
-                        + num(guardFactor) + " U, where U is the expanded uncertainty with coverage factor k = "
+                        + guardText() + ", where U is the expanded uncertainty with coverage factor k = "
                         + num(coverageFactor) + ". A result is stated to conform when the measured error lies"
                         + " within the maximum permissible error narrowed by w at each limit, and not to conform"
                         + " otherwise. Assuming " + dist + " for the error, the specific risk of false acceptance"
                         + " is at most about " + riskText + " %.";
             case GUARDED_NON_BINARY:
                 return "Decision rule: guarded acceptance and rejection (ILAC G8:2019; JCGM 106:2012) with guard"
-                        + " band w = " + num(guardFactor) + " U, where U is the expanded uncertainty with coverage"
+                        + " band w = " + guardText() + ", where U is the expanded uncertainty with coverage"
                         + " factor k = " + num(coverageFactor) + ". A result is stated to conform when the"
                         + " measured error lies within the maximum permissible error narrowed by w at each limit,"
                         + " not to conform when it lies outside the maximum permissible error widened by w, and"
@@ -307,6 +307,10 @@ public final class DecisionRule {
             default:
                 throw new IllegalStateException(kind.name());
         }
+    }
+
+    private String guardText() {
+        return guardFactor == 1.0 ? "U" : num(guardFactor) + " U";
     }
 
     /** @return the statement for a normal distribution */

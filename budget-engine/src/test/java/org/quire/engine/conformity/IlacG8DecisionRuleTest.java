@@ -111,7 +111,8 @@ class IlacG8DecisionRuleTest {
         assertEquals(1 - 0.9772, guarded.maximumRiskOfFalseAcceptance(2.0, Double.POSITIVE_INFINITY), 0.00005);
         assertTrue(guarded.statement(2.0).endsWith("the specific risk of false acceptance is at most about 2.3 %."),
                 guarded.statement(2.0));
-        assertTrue(guarded.statement(2.0).contains("w = 1 U") && guarded.statement(2.0).contains("k = 2"));
+        assertTrue(guarded.statement(2.0).contains("w = U,") && guarded.statement(2.0).contains("k = 2"));
+        assertTrue(DecisionRule.guardedAcceptance(0.5).statement(2.0).contains("w = 0.5 U,"));
         // simple acceptance: up to 50 % at a limit
         assertTrue(DecisionRule.simpleAcceptance().statement(2.0).endsWith("up to 50 %."));
         // probability rule at 95 %: at most 5 %
