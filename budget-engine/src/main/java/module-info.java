@@ -13,7 +13,7 @@ module org.quire.engine {
     exports org.quire.engine.model;
     exports org.quire.engine.budget;
     // exports org.quire.engine.gum;
-    // exports org.quire.engine.montecarlo;
+    exports org.quire.engine.montecarlo;
     // exports org.quire.engine.units;
     // exports org.quire.engine.flow;
     // exports org.quire.engine.line;
