@@ -48,7 +48,12 @@ public final class GumComparison {
     }
 
     /**
-     * Compares with the Monte Carlo shortest coverage interval of {@code monteCarlo}.
+     * Compares with the Monte Carlo probabilistically symmetric coverage interval of {@code monteCarlo}: the GUM
+     * interval y +- U_p leaves probability (1 - p)/2 in each tail of the distribution the GUM assigns to Y, so
+     * like is compared with like. (For an output whose distribution is symmetric the shortest interval has the
+     * same expected ends, but its position is poorly determined, since its width hardly changes as it slides,
+     * and its ends scatter over several standard errors of a quantile.) Use
+     * {@link #of(CoverageInterval, double, double, double, int)} to compare with another interval.
      *
      * @param monteCarlo the output's Monte Carlo summary
      * @param gumEstimate the GUM estimate y
@@ -61,12 +66,12 @@ public final class GumComparison {
         if (monteCarlo == null) {
             throw new IllegalArgumentException(Messages.nullArgument("Monte Carlo summary"));
         }
-        return of(monteCarlo.shortestInterval(), gumEstimate, gumStandardUncertainty, gumExpandedUncertainty,
+        return of(monteCarlo.symmetricInterval(), gumEstimate, gumStandardUncertainty, gumExpandedUncertainty,
                 significantDigits);
     }
 
     /**
-     * Compares with a given Monte Carlo coverage interval (for instance the probabilistically symmetric one).
+     * Compares with a given Monte Carlo coverage interval (for instance the shortest one).
      */
     public static GumComparison of(CoverageInterval monteCarloInterval, double gumEstimate,
             double gumStandardUncertainty, double gumExpandedUncertainty, int significantDigits) {
