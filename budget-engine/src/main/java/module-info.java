@@ -13,12 +13,12 @@ module org.quire.engine {
     exports org.quire.engine.model;
     exports org.quire.engine.budget;
     exports org.quire.engine.gum;
+    exports org.quire.engine.montecarlo;
     exports org.quire.engine.units;
     exports org.quire.engine.flow;
     exports org.quire.engine.line;
     exports org.quire.engine.conformity;
     exports org.quire.engine.validate;
     exports org.quire.engine.io;
-    // exports org.quire.engine.montecarlo;
     // exports org.quire.engine.document;
 }

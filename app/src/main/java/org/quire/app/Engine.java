@@ -1,10 +1,11 @@
 package org.quire.app;
 
+import org.quire.engine.flow.FlowFunctions;
 import org.quire.engine.model.FunctionLibrary;
 
 /** The engine configuration the whole application shares: one function library, one place. */
 public final class Engine {
-    private static final FunctionLibrary LIBRARY = FunctionLibrary.standard();
+    private static final FunctionLibrary LIBRARY = FunctionLibrary.standard().with(FlowFunctions.all());
 
     private Engine() {
     }

@@ -49,7 +49,7 @@ class WorkedExamplesTest {
     /** The function library the examples are run with. */
     static final class TestLibrary {
         static FunctionLibrary get() {
-            return FunctionLibrary.standard();
+            return FunctionLibrary.standard().with(org.quire.engine.flow.FlowFunctions.all());
         }
     }
 }

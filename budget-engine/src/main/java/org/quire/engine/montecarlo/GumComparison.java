@@ -1,0 +1,181 @@
+package org.quire.engine.montecarlo;
+
+import java.math.BigDecimal;
+import java.math.MathContext;
+import java.math.RoundingMode;
+
+/**
+ * The comparison of a GUM uncertainty evaluation with the Monte Carlo method for one output: are the ends of
+ * the GUM coverage interval [y - U_p, y + U_p] within the numerical tolerance of the Monte Carlo interval?
+ *
+ * <p>The numerical tolerance delta is that of the GUM standard uncertainty u(y) at n_dig significant decimal
+ * digits: u(y) written as c x 10^l with c an n_dig-digit integer gives delta = 10^l / 2. With
+ * d_low = |y - U_p - y_low| and d_high = |y + U_p - y_high|, the GUM result is {@link Verdict#CONFIRMED} when
+ * both are at most delta, otherwise {@link Verdict#NOT_CONFIRMED}.
+ *
+ * <p>Immutable and thread-safe.
+ *
+ * <p>References: JCGM 101:2008 7.9.2 (numerical tolerance associated with a numerical value), 8.2 (comparison
+ * procedure, d_low and d_high).
+ */
+public final class GumComparison {
+    /** The outcome of the comparison. */
+    public enum Verdict {
+        /** Both interval ends agree within the numerical tolerance: the GUM result stands. */
+        CONFIRMED,
+        /** An interval end differs by more than the tolerance: use the Monte Carlo result. */
+        NOT_CONFIRMED
+    }
+
+    private final double gumEstimate;
+    private final double gumStandardUncertainty;
+    private final double gumExpandedUncertainty;
+    private final CoverageInterval monteCarloInterval;
+    private final int significantDigits;
+    private final double tolerance;
+    private final double lowerDifference;
+    private final double upperDifference;
+
+    private GumComparison(double y, double u, double expanded, CoverageInterval mc, int digits) {
+        this.gumEstimate = y;
+        this.gumStandardUncertainty = u;
+        this.gumExpandedUncertainty = expanded;
+        this.monteCarloInterval = mc;
+        this.significantDigits = digits;
+        this.tolerance = numericalTolerance(u, digits);
+        this.lowerDifference = Math.abs(y - expanded - mc.lower());
+        this.upperDifference = Math.abs(y + expanded - mc.upper());
+    }
+
+    /**
+     * Compares with the Monte Carlo probabilistically symmetric coverage interval of {@code monteCarlo}: the GUM
+     * interval y +- U_p leaves probability (1 - p)/2 in each tail of the distribution the GUM assigns to Y, so
+     * like is compared with like. (For an output whose distribution is symmetric the shortest interval has the
+     * same expected ends, but its position is poorly determined, since its width hardly changes as it slides,
+     * and its ends scatter over several standard errors of a quantile.) Use
+     * {@link #of(CoverageInterval, double, double, double, int)} to compare with another interval.
+     *
+     * @param monteCarlo the output's Monte Carlo summary
+     * @param gumEstimate the GUM estimate y
+     * @param gumStandardUncertainty the GUM standard uncertainty u(y), positive
+     * @param gumExpandedUncertainty the GUM expanded uncertainty U_p for the run's coverage probability
+     * @param significantDigits n_dig, 1 .. 15
+     */
+    public static GumComparison of(OutputSummary monteCarlo, double gumEstimate, double gumStandardUncertainty,
+            double gumExpandedUncertainty, int significantDigits) {
+        if (monteCarlo == null) {
+            throw new IllegalArgumentException(Messages.nullArgument("Monte Carlo summary"));
+        }
+        return of(monteCarlo.symmetricInterval(), gumEstimate, gumStandardUncertainty, gumExpandedUncertainty,
+                significantDigits);
+    }
+
+    /**
+     * Compares with a given Monte Carlo coverage interval (for instance the shortest one).
+     */
+    public static GumComparison of(CoverageInterval monteCarloInterval, double gumEstimate,
+            double gumStandardUncertainty, double gumExpandedUncertainty, int significantDigits) {
+        if (monteCarloInterval == null) {
+            throw new IllegalArgumentException(Messages.nullArgument("Monte Carlo coverage interval"));
+        }
+        if (!Double.isFinite(gumEstimate)) {
+            throw new IllegalArgumentException(Messages.notFinite("GUM estimate", gumEstimate));
+        }
+        if (!(gumStandardUncertainty > 0) || !Double.isFinite(gumStandardUncertainty)) {
+            throw new IllegalArgumentException(
+                    Messages.uncertaintyNotPositive("GUM standard uncertainty", gumStandardUncertainty));
+        }
+        if (!(gumExpandedUncertainty > 0) || !Double.isFinite(gumExpandedUncertainty)) {
+            throw new IllegalArgumentException(
+                    Messages.uncertaintyNotPositive("GUM expanded uncertainty", gumExpandedUncertainty));
+        }
+        if (significantDigits < 1 || significantDigits > 15) {
+            throw new IllegalArgumentException(Messages.significantDigitsOutside(significantDigits));
+        }
+        return new GumComparison(gumEstimate, gumStandardUncertainty, gumExpandedUncertainty, monteCarloInterval,
+                significantDigits);
+    }
+
+    /**
+     * The numerical tolerance of a positive value at n_dig significant decimal digits: with the value rounded to
+     * c x 10^l, c an n_dig-digit integer, delta = 10^l / 2. For example u = 0.0754 mg with n_dig = 2 gives
+     * 75 x 10^-3 and delta = 0.0005 mg; u = 2.0 with n_dig = 2 gives 20 x 10^-1 and delta = 0.05.
+     *
+     * <p>References: JCGM 101:2008 7.9.2.
+     */
+    public static double numericalTolerance(double value, int significantDigits) {
+        if (!(value > 0) || !Double.isFinite(value)) {
+            throw new IllegalArgumentException(Messages.uncertaintyNotPositive("value for the numerical tolerance",
+                    value));
+        }
+        if (significantDigits < 1 || significantDigits > 15) {
+            throw new IllegalArgumentException(Messages.significantDigitsOutside(significantDigits));
+        }
+        BigDecimal rounded = BigDecimal.valueOf(value).round(new MathContext(significantDigits, RoundingMode.HALF_UP));
+        int leading = rounded.precision() - rounded.scale() - 1; // exponent of the leading digit
+        int l = leading - (significantDigits - 1);
+        return 0.5 * Math.pow(10.0, l);
+    }
+
+    /** @return the verdict */
+    public Verdict verdict() {
+        return lowerDifference <= tolerance && upperDifference <= tolerance ? Verdict.CONFIRMED
+                : Verdict.NOT_CONFIRMED;
+    }
+
+    /** @return true when the verdict is {@link Verdict#CONFIRMED} */
+    public boolean confirmed() {
+        return verdict() == Verdict.CONFIRMED;
+    }
+
+    /** @return the numerical tolerance delta */
+    public double tolerance() {
+        return tolerance;
+    }
+
+    /** @return d_low = |y - U_p - y_low| */
+    public double lowerDifference() {
+        return lowerDifference;
+    }
+
+    /** @return d_high = |y + U_p - y_high| */
+    public double upperDifference() {
+        return upperDifference;
+    }
+
+    /** @return the GUM coverage interval [y - U_p, y + U_p] */
+    public double[] gumInterval() {
+        return new double[] {gumEstimate - gumExpandedUncertainty, gumEstimate + gumExpandedUncertainty};
+    }
+
+    /** @return the GUM estimate y */
+    public double gumEstimate() {
+        return gumEstimate;
+    }
+
+    /** @return the GUM standard uncertainty u(y) */
+    public double gumStandardUncertainty() {
+        return gumStandardUncertainty;
+    }
+
+    /** @return the GUM expanded uncertainty U_p */
+    public double gumExpandedUncertainty() {
+        return gumExpandedUncertainty;
+    }
+
+    /** @return the Monte Carlo coverage interval compared with */
+    public CoverageInterval monteCarloInterval() {
+        return monteCarloInterval;
+    }
+
+    /** @return n_dig */
+    public int significantDigits() {
+        return significantDigits;
+    }
+
+    @Override
+    public String toString() {
+        return "GumComparison[" + verdict() + ": d_low=" + lowerDifference + ", d_high=" + upperDifference
+                + ", delta=" + tolerance + " (n_dig=" + significantDigits + ")]";
+    }
+}

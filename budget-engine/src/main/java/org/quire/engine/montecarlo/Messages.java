@@ -1,0 +1,131 @@
+package org.quire.engine.montecarlo;
+
+import java.util.Locale;
+
+/**
+ * The error and information messages of the Monte Carlo package, kept in one place so that the same fault is
+ * always described in the same words.
+ *
+ * <p>Stateless and thread-safe.
+ */
+final class Messages {
+    private Messages() {
+    }
+
+    private static String fmt(String pattern, Object... args) {
+        return String.format(Locale.ROOT, pattern, args);
+    }
+
+    static String trialsNotPositive(long trials) {
+        return fmt("number of trials must be positive, not %d", trials);
+    }
+
+    static String trialsTooMany(long trials, long limit) {
+        return fmt("number of trials %d exceeds the limit of %d trials that can be held in memory", trials, limit);
+    }
+
+    static String maxTrialsTooSmall(long maxTrials, long runLength) {
+        return fmt("maximum number of trials for the adaptive procedure (%d) must be at least two runs of %d trials",
+                maxTrials, runLength);
+    }
+
+    static String coverageProbabilityOutside(double p) {
+        return fmt("coverage probability must lie strictly between 0 and 1, not %s", p);
+    }
+
+    static String threadsNotPositive(int threads) {
+        return fmt("number of threads must be at least 1, not %d", threads);
+    }
+
+    static String significantDigitsOutside(int digits) {
+        return fmt("number of significant decimal digits must lie between 1 and 15, not %d", digits);
+    }
+
+    static String notEnoughMemory(long trials, int outputs, long neededMiB, long availableMiB) {
+        return fmt("%d trials of %d output(s) need about %d MiB for the output values, but the Java heap allows "
+                + "at most %d MiB; use fewer trials or a larger heap (-Xmx)", trials, outputs, neededMiB,
+                availableMiB);
+    }
+
+    static String inputCountMismatch(int modelInputs, int sampledInputs) {
+        return fmt("the model has %d input(s) but %d distribution(s) were given", modelInputs, sampledInputs);
+    }
+
+    static String noOutputs() {
+        return "the model has no outputs";
+    }
+
+    static String nullArgument(String name) {
+        return name + " must not be null";
+    }
+
+    static String matrixNotSquare(int rows, int row, int length) {
+        return fmt("correlation matrix must be square: it has %d rows but row %d has %d entries", rows, row + 1, length);
+    }
+
+    static String matrixSizeMismatch(int matrixSize, int inputs) {
+        return fmt("correlation matrix is %d x %d but there are %d input(s)", matrixSize, matrixSize, inputs);
+    }
+
+    static String diagonalNotOne(int i, double v) {
+        return fmt("correlation matrix entry (%d, %d) on the diagonal must be 1, not %s", i + 1, i + 1, v);
+    }
+
+    static String coefficientOutside(int i, int j, double v) {
+        return fmt("correlation coefficient (%d, %d) must lie in [-1, 1], not %s", i + 1, j + 1, v);
+    }
+
+    static String notSymmetric(int i, int j, double a, double b) {
+        return fmt("correlation matrix is not symmetric: entry (%d, %d) is %s but entry (%d, %d) is %s",
+                i + 1, j + 1, a, j + 1, i + 1, b);
+    }
+
+    static String notPositiveSemiDefinite(double smallestEigenvalue) {
+        return fmt("correlation matrix is not positive semi-definite (smallest eigenvalue %.6g): no set of "
+                + "quantities can have these correlation coefficients together; check the coefficients for "
+                + "consistency (for example r12 = r23 = 0.9 forces r13 > 0.62)", smallestEigenvalue);
+    }
+
+    static String indexOutside(String what, int index, int size) {
+        return fmt("%s index %d is outside 0..%d", what, index, size - 1);
+    }
+
+    static String constantCorrelated(int input) {
+        return fmt("input %d is a constant and cannot be correlated with another input", input + 1);
+    }
+
+    static String probabilityOutside(String what, double p) {
+        return fmt("%s must lie in [0, 1], not %s", what, p);
+    }
+
+    static String notFinite(String what, double v) {
+        return fmt("%s must be a finite number, not %s", what, v);
+    }
+
+    static String uncertaintyNotPositive(String what, double v) {
+        return fmt("%s must be positive, not %s", what, v);
+    }
+
+    static String valuesNotKept() {
+        return "the trial values were not kept; run with MonteCarloSettings.withKeepValues(true)";
+    }
+
+    static String noValidTrials(int output, long trials) {
+        return fmt("output %d gave no finite value in any of the %d trials: every trial left the domain of a "
+                + "function in the model", output + 1, trials);
+    }
+
+    static String cancelled(long done, long planned) {
+        return fmt("Monte Carlo run cancelled after %d of %d trials", done, planned);
+    }
+
+    static String excluded(long excluded, long trials) {
+        return fmt("%d of %d trials gave no finite value (a function left its domain) and were excluded from "
+                + "this output's summary", excluded, trials);
+    }
+
+    static String adaptiveNotStabilized(long trials, int digits) {
+        return fmt("the adaptive procedure stopped at the maximum of %d trials before the results were stable "
+                + "to %d significant decimal digit(s)", trials, digits);
+    }
+}
