@@ -55,6 +55,18 @@ public final class Validator {
             Budget b = budget.withSettings(settings);
             return ResultJson.toJson(b.title(), GumEvaluator.evaluate(b, library));
         });
+        m.put("montecarlo", (budget, args, settings) -> {
+            if (budget == null) {
+                throw new IllegalArgumentException("the 'montecarlo' computation needs a budget in the file");
+            }
+            Budget b = budget.withSettings(settings);
+            org.quire.engine.model.CompiledModel model = b.compile(library);
+            org.quire.engine.gum.GumResult gum = GumEvaluator.evaluate(b, model, b.correlationMatrix(), settings);
+            org.quire.engine.montecarlo.BudgetSimulation.Outcome o = org.quire.engine.montecarlo.BudgetSimulation.run(
+                    b, model, gum, org.quire.engine.montecarlo.BudgetSimulation.settings(settings, gum),
+                    org.quire.engine.montecarlo.ProgressListener.NONE);
+            return org.quire.engine.io.MonteCarloJson.toJson(o, false);
+        });
         m.put("coverage-factor", (budget, args, settings) -> {
             double p = args.getJsonNumber("p").doubleValue();
             JsonValue nuV = args.get("dof");
