@@ -16,6 +16,10 @@ public final class CommandLine {
             "      the GUM budget table and results of every output",
             "  " + ValidateCommand.USAGE,
             "      check Quire against the published worked examples",
+            "  " + MonteCarloCommand.USAGE,
+            "      the Monte Carlo method (JCGM 101) and its comparison with the GUM result",
+            "  " + BenchCommand.USAGE,
+            "      Monte Carlo throughput on the Tarrow Vale benchmark budget",
             "  quire version",
             "  quire help",
             "");
@@ -35,6 +39,10 @@ public final class CommandLine {
                     return EvaluateCommand.run(args, out);
                 case "validate":
                     return ValidateCommand.run(args, out);
+                case "montecarlo":
+                    return MonteCarloCommand.run(args, out, err);
+                case "bench":
+                    return BenchCommand.run(args, out);
                 case "version":
                 case "--version":
                     out.println("quire " + EngineVersion.get());

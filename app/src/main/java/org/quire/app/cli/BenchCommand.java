@@ -1,0 +1,82 @@
+package org.quire.app.cli;
+
+import java.io.InputStream;
+import java.io.PrintStream;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Path;
+import java.util.Arrays;
+import java.util.Locale;
+import java.util.Set;
+import org.quire.app.Engine;
+import org.quire.engine.budget.Budget;
+import org.quire.engine.gum.GumEvaluator;
+import org.quire.engine.gum.GumResult;
+import org.quire.engine.io.BudgetJson;
+import org.quire.engine.model.CompiledModel;
+import org.quire.engine.montecarlo.BudgetSimulation;
+import org.quire.engine.montecarlo.MonteCarloSettings;
+import org.quire.engine.montecarlo.ProgressListener;
+
+/**
+ * {@code quire bench [--trials N] [--threads T] [--runs R]}: the Monte Carlo benchmark on the Tarrow Vale
+ * benchmark budget (13 inputs, 2 outputs). Warm-up runs first, then R timed runs; each timed run covers
+ * sampling, model evaluation and the summaries of both outputs (mean, standard deviation, both coverage
+ * intervals). The last line gives the median run.
+ */
+final class BenchCommand {
+    static final String USAGE = "quire bench [--trials N] [--threads T] [--runs R]";
+    static final String BUDGET = "tarrow-vale-benchmark.json";
+
+    private BenchCommand() {
+    }
+
+    static Budget benchmarkBudget() throws Exception {
+        Path local = Path.of("worked-examples", BUDGET);
+        if (java.nio.file.Files.isRegularFile(local)) {
+            return BudgetJson.read(local);
+        }
+        try (InputStream in = BenchCommand.class.getResourceAsStream("/worked-examples/" + BUDGET)) {
+            if (in == null) {
+                throw new UsageException("the benchmark budget " + BUDGET + " is missing from this build");
+            }
+            return BudgetJson.read(new String(in.readAllBytes(), StandardCharsets.UTF_8));
+        }
+    }
+
+    static int run(String[] argv, PrintStream out) throws Exception {
+        Args a = new Args(argv, 1, Set.of("trials", "threads", "runs"), Set.of());
+        a.expectPositional(0, USAGE);
+        long trials = a.integer("trials", 2_000_000);
+        if (trials < 1 || trials > MonteCarloSettings.TRIALS_LIMIT) {
+            throw new UsageException("--trials must be between 1 and " + MonteCarloSettings.TRIALS_LIMIT + ", not "
+                    + a.get("trials", ""));
+        }
+        int threads = MonteCarloCommand.threads(a);
+        long runs = a.integer("runs", 3);
+        if (runs < 1 || runs > 100) {
+            throw new UsageException("--runs must be between 1 and 100");
+        }
+        Budget b = benchmarkBudget();
+        CompiledModel model = b.compile(Engine.library());
+        GumResult gum = GumEvaluator.evaluate(b, model, b.correlationMatrix(), b.settings());
+        MonteCarloSettings base = BudgetSimulation.settings(b.settings(), gum).withThreads(threads).withTrials(trials);
+        long warm = Math.min(trials, 1_000_000);
+        for (int w = 0; w < 3; w++) {
+            BudgetSimulation.run(b, model, gum, base.withTrials(warm).withSeed(w + 1), ProgressListener.NONE);
+        }
+        double[] seconds = new double[(int) runs];
+        for (int r = 0; r < runs; r++) {
+            long t0 = System.nanoTime();
+            BudgetSimulation.Outcome o = BudgetSimulation.run(b, model, gum, base.withSeed(100 + r), ProgressListener.NONE);
+            seconds[r] = (System.nanoTime() - t0) / 1e9;
+            out.printf(Locale.ROOT, "run %d: %.3f s, u(E) = %.5g %%, u(q) = %.5g m^3/h%n", r + 1, seconds[r],
+                    o.result().output(0).standardUncertainty(), o.result().output(1).standardUncertainty());
+        }
+        double[] sorted = seconds.clone();
+        Arrays.sort(sorted);
+        double median = sorted[sorted.length / 2];
+        out.printf(Locale.ROOT, "trials_per_second=%.0f seconds=%.4f trials=%d threads=%d%n", trials / median, median,
+                trials, threads);
+        return 0;
+    }
+}
