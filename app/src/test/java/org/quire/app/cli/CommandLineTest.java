@@ -1,0 +1,167 @@
+package org.quire.app.cli;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.io.ByteArrayOutputStream;
+import java.io.IOException;
+import java.io.PrintStream;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+/** The command line as a user meets it: figures on success, clear messages and exit status on bad input. */
+class CommandLineTest {
+    @TempDir
+    Path tmp;
+
+    record Run(int status, String out, String err) { }
+
+    static Path root() {
+        Path p = Path.of(System.getProperty("quire.projectRoot", ".."));
+        return Files.isDirectory(p.resolve("worked-examples")) ? p : Path.of(".");
+    }
+
+    static Path example(String name) {
+        return root().resolve("worked-examples").resolve(name);
+    }
+
+    static Run run(String... args) {
+        ByteArrayOutputStream out = new ByteArrayOutputStream();
+        ByteArrayOutputStream err = new ByteArrayOutputStream();
+        int status = CommandLine.run(args, new PrintStream(out, true, StandardCharsets.UTF_8),
+                new PrintStream(err, true, StandardCharsets.UTF_8));
+        return new Run(status, out.toString(StandardCharsets.UTF_8), err.toString(StandardCharsets.UTF_8));
+    }
+
+    @Test
+    void evaluatePrintsTheBudgetTableOfJcgm100H1() {
+        Run r = run("evaluate", example("jcgm100-h1-end-gauge.json").toString());
+        assertEquals(0, r.status(), r.err());
+        // JCGM 100:2008 H.1: l = 50.000838 mm, k = t_99(16) = 2.92
+        assertTrue(r.out().contains("50.000838"), r.out());
+        assertTrue(r.out().contains("k = 2.921"), r.out());
+        assertTrue(r.out().contains("16.7 (16 used)"), r.out());
+        assertTrue(r.out().contains("do not replace"), "the cautions are printed");
+    }
+
+    @Test
+    void evaluateJsonAndCsvCarryTheSameFigures() {
+        Run j = run("evaluate", example("jcgm100-h2-resistance-reactance.json").toString(), "--format", "json");
+        assertEquals(0, j.status(), j.err());
+        assertTrue(j.out().contains("\"outputCorrelation\""));
+        // JCGM 100:2008 H.2: R = 127.732 ohm
+        assertTrue(j.out().contains("127.73"), j.out());
+        Run c = run("evaluate", example("jcgm100-h2-resistance-reactance.json").toString(), "--format=csv");
+        assertEquals(0, c.status(), c.err());
+        assertTrue(c.out().startsWith("output,input,type,distribution,estimate"));
+        assertTrue(c.out().contains("R,V,A,"));
+    }
+
+    @Test
+    void coverageAndFixedKOverrideTheFile() {
+        Run r = run("evaluate", example("jcgm101-9.2.2-additive-normal.json").toString(), "--k", "2");
+        assertEquals(0, r.status(), r.err());
+        assertTrue(r.out().contains("U = 4.0000"), r.out()); // JCGM 101:2008 9.2.2: u(y) = 2, so U = 2 x 2
+        assertEquals(2, run("evaluate", example("jcgm101-9.2.2-additive-normal.json").toString(), "--coverage", "1.5").status());
+        assertEquals(2, run("evaluate", example("jcgm101-9.2.2-additive-normal.json").toString(), "--k", "2", "--coverage", "0.95").status());
+    }
+
+    @Test
+    void validateRunsEveryWorkedExampleAndEndsWithTheCount() {
+        Run r = run("validate", "--dir", root().resolve("worked-examples").toString());
+        assertEquals(0, r.status(), r.out());
+        String[] lines = r.out().trim().split("\n");
+        assertTrue(lines[lines.length - 1].matches("\\d+ passed, 0 failed"), lines[lines.length - 1]);
+    }
+
+    @Test
+    void validateFailsWhenAPublishedFigureIsNotMatched() throws IOException {
+        String text = Files.readString(example("jcgm101-9.2.2-additive-normal.json"))
+                .replace("\"expected\": 3.92,", "\"expected\": 3.99,");
+        Files.writeString(tmp.resolve("altered.json"), text);
+        Run r = run("validate", "--dir", tmp.toString());
+        assertEquals(1, r.status());
+        assertTrue(r.out().contains("FAIL"));
+        assertTrue(r.out().trim().endsWith("failed") && !r.out().trim().endsWith(" 0 failed"), r.out());
+    }
+
+    @Test
+    void badInputGetsAClearMessageAndNoStackTrace() throws IOException {
+        Run missing = run("evaluate", tmp.resolve("nothing.json").toString());
+        assertEquals(2, missing.status());
+        assertTrue(missing.err().contains("no such file"), missing.err());
+
+        String good = Files.readString(example("jcgm101-9.3-mass-calibration.json"));
+        Files.writeString(tmp.resolve("cut.json"), good.substring(0, good.length() / 2));
+        Run cut = run("evaluate", tmp.resolve("cut.json").toString());
+        assertEquals(2, cut.status());
+        assertTrue(cut.err().contains("JSON"), cut.err());
+
+        Files.writeString(tmp.resolve("neg.json"), good.replace("\"standardUncertainty\": 0.05", "\"standardUncertainty\": -0.05"));
+        Run neg = run("evaluate", tmp.resolve("neg.json").toString());
+        assertEquals(2, neg.status());
+        assertTrue(neg.err().contains("$.inputs[0].evaluation.standardUncertainty"), neg.err());
+        assertTrue(neg.err().contains("positive"), neg.err());
+
+        Files.writeString(tmp.resolve("model.json"), good.replace("rho_a - rho_a0", "rho_air - rho_a0"));
+        Run model = run("evaluate", tmp.resolve("model.json").toString());
+        assertEquals(2, model.status());
+        assertTrue(model.err().contains("model line 1, column"), model.err());
+        assertTrue(model.err().contains("did you mean 'rho_a"), model.err());
+
+        Run opt = run("evaluate", "x.json", "--colour");
+        assertEquals(2, opt.status());
+        assertTrue(opt.err().contains("unknown option --colour"), opt.err());
+        for (Run r : new Run[] {missing, cut, neg, model, opt}) {
+            assertFalse(r.err().contains("Exception"), r.err());
+        }
+    }
+
+    @Test
+    void divisionByZeroAtTheEstimatesNamesTheDenominator() throws IOException {
+        String good = Files.readString(example("jcgm101-9.2.2-additive-normal.json"));
+        Files.writeString(tmp.resolve("div.json"), good.replace("\"Y = X1 + X2 + X3 + X4\"", "\"Y = X1 / (X2 + X3) + X4\""));
+        Run r = run("evaluate", tmp.resolve("div.json").toString());
+        assertEquals(2, r.status());
+        assertTrue(r.err().contains("division by zero"), r.err());
+        assertTrue(r.err().contains("X2 + X3"), r.err());
+    }
+
+    @Test
+    void monteCarloSettingsAreChecked() {
+        String f = example("jcgm101-9.2.2-additive-normal.json").toString();
+        Run zero = run("montecarlo", f, "--trials", "0");
+        assertEquals(2, zero.status());
+        assertTrue(zero.err().contains("--trials"), zero.err());
+        Run seed = run("montecarlo", f, "--seed", "abc");
+        assertEquals(2, seed.status());
+        assertTrue(seed.err().contains("--seed needs a whole number"), seed.err());
+        Run p = run("montecarlo", f, "--coverage", "0");
+        assertEquals(2, p.status());
+        assertTrue(p.err().contains("coverage probability"), p.err());
+    }
+
+    @Test
+    void monteCarloIsReproducibleFromItsSeedWhateverTheThreads() {
+        String f = example("jcgm101-9.3-mass-calibration.json").toString();
+        Run one = run("montecarlo", f, "--trials", "200000", "--seed", "7", "--threads", "1", "--format", "json");
+        Run two = run("montecarlo", f, "--trials", "200000", "--seed", "7", "--threads", "2", "--format", "json");
+        assertEquals(0, one.status(), one.err());
+        assertEquals(one.out().replaceAll("\"engineVersion\".*\n", ""), two.out().replaceAll("\"engineVersion\".*\n", ""));
+        Run other = run("montecarlo", f, "--trials", "200000", "--seed", "8", "--threads", "2", "--format", "json");
+        assertFalse(one.out().equals(other.out()));
+    }
+
+    @Test
+    void benchPrintsItsLastLineInTheAgreedForm() {
+        Run r = run("bench", "--trials", "100000", "--runs", "1", "--threads", "2");
+        assertEquals(0, r.status(), r.err());
+        String[] lines = r.out().trim().split("\n");
+        assertTrue(lines[lines.length - 1].matches("trials_per_second=\\d+ seconds=[0-9.]+ trials=100000 threads=2"),
+                lines[lines.length - 1]);
+    }
+}
