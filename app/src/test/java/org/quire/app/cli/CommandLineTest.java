@@ -66,7 +66,7 @@ class CommandLineTest {
         Run r = run("evaluate", example("jcgm101-9.2.2-additive-normal.json").toString(), "--k", "2");
         assertEquals(0, r.status(), r.err());
         assertTrue(r.out().contains("U = 4.0000"), r.out()); // JCGM 101:2008 9.2.2: u(y) = 2, so U = 2 x 2
-        assertEquals(2, run("evaluate", example("jcgm101-9.2.2-additive-normal.json").toString(), "--coverage", "1.5").status());
+        assertEquals(2, run("evaluate", example("jcgm101-9.2.2-additive-normal.json").toString(), "--coverage", "150").status());
         assertEquals(2, run("evaluate", example("jcgm101-9.2.2-additive-normal.json").toString(), "--k", "2", "--coverage", "0.95").status());
     }
 
