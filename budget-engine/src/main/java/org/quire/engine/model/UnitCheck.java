@@ -206,9 +206,21 @@ final class UnitCheck {
             error(at, UnitMessages.outputDimension(out, declared, q.unit()));
         } else if (q.scaleKnown() && !sameFactor(q.unit(), declared)) {
             error(at, UnitMessages.outputScale(out, declared, q.unit()));
-        } else if (q.scaleKnown() && q.unit().offset() != declared.offset()) {
+        } else if (q.scaleKnown() && pointsMayMix(q.unit(), declared)) {
             warning(at, UnitMessages.outputTemperature(out, declared, q.unit()));
         }
+    }
+
+    /**
+     * @return true when the units have different offsets (K and °C) and neither is a product or quotient built
+     *     from °C or °F, which measures differences only (°C·m/m, for instance)
+     */
+    private static boolean pointsMayMix(Unit a, Unit b) {
+        return a.offset() != b.offset() && !derivedDifference(a) && !derivedDifference(b);
+    }
+
+    private static boolean derivedDifference(Unit u) {
+        return !u.isAffine() && u.symbol().contains("°");
     }
 
     private static boolean sameFactor(Unit a, Unit b) {
@@ -307,7 +319,7 @@ final class UnitCheck {
         if (a.scaleKnown() && b.scaleKnown()) {
             if (!sameFactor(a.unit(), b.unit())) {
                 error(at.at, UnitMessages.scales(op, at.text, a.unit(), b.unit()));
-            } else if (a.unit().offset() != b.unit().offset()) {
+            } else if (pointsMayMix(a.unit(), b.unit())) {
                 warning(at.at, UnitMessages.temperatureScales(op, at.text, a.unit(), b.unit()));
             }
             return a;
@@ -446,7 +458,7 @@ final class UnitCheck {
                 warning(arg.at, UnitMessages.unconvertibleArgument(fn.name(), parameter, arg.text, d, a.unit()));
                 continue;
             }
-            if (shifts && !a.unit().isAffine() && a.unit().symbol().contains("°")) {
+            if (shifts && derivedDifference(a.unit())) {
                 warning(arg.at, UnitMessages.temperatureArgument(fn.name(), parameter, arg.text, d, a.unit()));
                 continue;
             }
