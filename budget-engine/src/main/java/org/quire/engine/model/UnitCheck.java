@@ -53,10 +53,10 @@ import org.quire.engine.units.Units;
  *
  * <p>Not thread-safe: one instance checks one model, inside one compilation.
  *
- * <p>References: ISO 80000-1:2009 clause 5 (quantity calculus: only quantities of the same kind are added;
- * dimensions of products and powers) and 6.5 (units of products and quotients); NIST SP 811 (2008) clause
- * 4.2.1.1 (Celsius temperature and temperature intervals) and 7.1 (quantity calculus); JCGM 200:2012 (VIM) 1.7
- * (quantity dimension).
+ * <p>References: ISO 80000-1:2009 (quantity calculus: only quantities of the same kind are added; dimensions
+ * of products and powers, clause 3.7; units of products and quotients, clause 6.5); NIST SP 811 (2008) clause
+ * 4.2.1.1 (Celsius temperature and temperature intervals) and clause 7 (values of quantities); JCGM 200:2012
+ * (VIM) 1.7 (quantity dimension). Clause numbers other than those the units package cites are from memory.
  */
 final class UnitCheck {
 
