@@ -11,6 +11,7 @@ import org.quire.engine.model.CompiledModel;
 import org.quire.engine.model.FunctionLibrary;
 import org.quire.engine.model.ModelCompiler;
 import org.quire.engine.model.ModelException;
+import org.quire.engine.model.ModelUnits;
 
 /**
  * An uncertainty budget: the measurement model, its input quantities and their correlations, the outputs to
@@ -141,8 +142,10 @@ public final class Budget {
 
     /**
      * @param library the functions the model may call
-     * @return the compiled model
-     * @throws ModelException listing every problem with its place
+     * @return the compiled model, its dimensions checked against the units stated for the inputs and outputs
+     *     (an input or output without unit is not checked; see {@link ModelCompiler#compile(String, List, List,
+     *     FunctionLibrary, ModelUnits)})
+     * @throws ModelException listing every problem with its place, unit and dimension errors included
      */
     public CompiledModel compile(FunctionLibrary library) throws ModelException {
         if (outputs.isEmpty()) {
@@ -150,7 +153,19 @@ public final class Budget {
                     org.quire.engine.model.ModelProblem.Severity.ERROR,
                     "the budget names no output: mark at least one quantity the model defines as an output"));
         }
-        return ModelCompiler.compile(model, inputNames(), outputNames(), library);
+        return ModelCompiler.compile(model, inputNames(), outputNames(), library, units());
+    }
+
+    /** @return the units stated for the inputs and outputs, and the outputs' display units */
+    public ModelUnits units() {
+        ModelUnits u = ModelUnits.none();
+        for (InputQuantity q : inputs) {
+            u = u.withInput(q.name(), q.unit());
+        }
+        for (OutputQuantity q : outputs) {
+            u = u.withOutput(q.name(), q.unit(), q.displayUnit());
+        }
+        return u;
     }
 
     /** @return the checked correlation matrix of the inputs */

@@ -11,10 +11,14 @@ import org.quire.engine.budget.CorrelationMatrix;
 import org.quire.engine.budget.EvaluationSettings;
 import org.quire.engine.budget.Evaluation;
 import org.quire.engine.budget.InputQuantity;
+import org.quire.engine.budget.OutputQuantity;
 import org.quire.engine.model.CompiledModel;
 import org.quire.engine.model.FunctionLibrary;
 import org.quire.engine.model.ModelException;
 import org.quire.engine.model.ModelProblem;
+import org.quire.engine.units.Conversion;
+import org.quire.engine.units.UnitException;
+import org.quire.engine.units.Units;
 
 /**
  * The GUM evaluation of a budget: the law of propagation of uncertainty with exact sensitivity coefficients.
@@ -29,7 +33,10 @@ import org.quire.engine.model.ModelProblem;
  *     (truncate to the next lower integer); G.3 and Table G.2 (k = t_p(nu_eff)).</li>
  * <li>JCGM 102:2011 6.2.1.3: covariance of several outputs U_y = C U_x C^T.</li>
  * </ul>
- * Derivatives are exact, by forward-mode automatic differentiation through the whole model.
+ * Derivatives are exact, by forward-mode automatic differentiation through the whole model. The model computes
+ * in the units stated for its inputs and outputs; an output with a display unit is then converted
+ * ({@link OutputResult#inUnit}), and so are the rows of its covariance ({@link GumResult#quantities()} stays in
+ * the model's units).
  *
  * <p>Stateless and thread-safe.
  */
@@ -81,6 +88,7 @@ public final class GumEvaluator {
         }
         DerivativeStructure[] ds = model.derivatives(x, active, higher ? 3 : 1);
         int m = y.length;
+        Conversion[] shown = displayConversions(budget, model);
         double[][] c = new double[m][n];
         for (int k = 0; k < m; k++) {
             for (int a = 0; a < active.length; a++) {
@@ -166,8 +174,9 @@ public final class GumEvaluator {
                 p = settings.coverageProbability();
                 kFactor = CoverageFactor.of(p, dofUsed);
             }
-            outs.add(new OutputResult(name, budget.outputs().get(k).unit(), y[k], uc, corrVar, higherVar, nuEff,
-                    dofUsed, kFactor, p, kFactor * uc, rows, terms, warnings));
+            OutputResult result = new OutputResult(name, unitOf(budget, name), y[k], uc, corrVar, higherVar, nuEff,
+                    dofUsed, kFactor, p, kFactor * uc, rows, terms, warnings);
+            outs.add(shown[k] == null ? result : result.inUnit(shown[k].to().symbol(), shown[k]));
         }
         double[][] corr = new double[m][m];
         for (int k = 0; k < m; k++) {
@@ -176,11 +185,53 @@ public final class GumEvaluator {
                 corr[k][l] = k == l ? 1 : d > 0 ? cov[k][l] / d : Double.NaN;
             }
         }
+        for (int k = 0; k < m; k++) {
+            for (int l = 0; l < m; l++) {
+                cov[k][l] *= (shown[k] == null ? 1 : shown[k].factor()) * (shown[l] == null ? 1 : shown[l].factor());
+            }
+        }
         Map<String, Double> q = new LinkedHashMap<>();
         for (int j = 0; j < quantities.length; j++) {
             q.put(model.quantityNames().get(j), quantities[j]);
         }
         return new GumResult(outs, cov, corr, q, globalWarnings, settings);
+    }
+
+    private static String unitOf(Budget budget, String output) {
+        for (OutputQuantity o : budget.outputs()) {
+            if (o.name().equals(output)) {
+                return o.unit();
+            }
+        }
+        return "";
+    }
+
+    /**
+     * @return per output, the conversion from its unit to its display unit, or null when it has none
+     * @throws ModelException naming the output and both units when a display unit cannot be used
+     */
+    private static Conversion[] displayConversions(Budget budget, CompiledModel model) throws ModelException {
+        List<String> names = model.outputNames();
+        Conversion[] c = new Conversion[names.size()];
+        for (int k = 0; k < c.length; k++) {
+            for (OutputQuantity o : budget.outputs()) {
+                if (!o.name().equals(names.get(k)) || o.displayUnit().isEmpty()) {
+                    continue;
+                }
+                try {
+                    if (o.unit().isEmpty()) {
+                        throw new UnitException("a display unit (" + o.displayUnit() + ") needs the unit the "
+                                + "equation computes in; state it");
+                    }
+                    c[k] = Conversion.of(Units.parse(o.unit()), Units.parse(o.displayUnit()));
+                } catch (UnitException e) {
+                    throw new ModelException(new ModelProblem(0, 0, 0, ModelProblem.Severity.ERROR,
+                            "output '" + o.name() + "' cannot be shown in " + o.displayUnit() + ": "
+                                    + e.getMessage()));
+                }
+            }
+        }
+        return c;
     }
 
     /** Partial derivative of {@code f} with orders at the given active-parameter indices (-1 for none). */

@@ -11,7 +11,8 @@ import org.quire.engine.budget.EvaluationSettings;
  * @param outputs per output, in declared order
  * @param covariance covariance matrix of the outputs
  * @param correlation correlation matrix of the outputs (NaN where an output has zero uncertainty)
- * @param quantities the estimate of every quantity the model defines, intermediate ones included
+ * @param quantities the estimate of every quantity the model defines, intermediate ones included, in the
+ *     units the model computes in (display units are not applied here)
  * @param warnings sentences about the budget as a whole (model warnings, unused inputs)
  * @param settings the settings used
  */

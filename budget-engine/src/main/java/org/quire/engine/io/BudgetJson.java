@@ -61,7 +61,7 @@ public final class BudgetJson {
             "evaluation");
     private static final Set<String> TYPE_A_FIELDS = Set.of("type", "readings", "mean", "s", "n", "pooledS",
             "pooledDof");
-    private static final Set<String> OUTPUT_FIELDS = Set.of("name", "unit", "description");
+    private static final Set<String> OUTPUT_FIELDS = Set.of("name", "unit", "description", "displayUnit");
     private static final Set<String> CORRELATION_FIELDS = Set.of("inputs", "r", "fromReadings", "justification");
     private static final Set<String> SETTINGS_FIELDS = Set.of("coverageProbability", "coverageFactor",
             "higherOrder", "dofRounding", "trials", "seed", "significantDigits", "adaptive");
@@ -208,7 +208,8 @@ public final class BudgetJson {
                 return OutputQuantity.of(o.string());
             }
             o.onlyFields(OUTPUT_FIELDS);
-            return new OutputQuantity(o.get("name").string(), o.string("unit", ""), o.string("description", ""));
+            return new OutputQuantity(o.get("name").string(), o.string("unit", ""), o.string("description", ""),
+                    o.string("displayUnit", ""));
         } catch (IllegalArgumentException e) {
             throw o.error(e.getMessage());
         }
@@ -430,6 +431,9 @@ public final class BudgetJson {
             }
             if (!q.description().isEmpty()) {
                 ob.add("description", q.description());
+            }
+            if (!q.displayUnit().isEmpty()) {
+                ob.add("displayUnit", q.displayUnit());
             }
             outs.add(ob);
         }

@@ -25,6 +25,7 @@ public final class ModelCompiler {
     private final List<String> inputs;
     private final List<String> outputs;
     private final FunctionLibrary library;
+    private final ModelUnits units;
     private final List<ModelProblem> problems = new ArrayList<>();
     private final Set<String> reported = new LinkedHashSet<>();
     private final Map<String, Integer> inputIndex = new HashMap<>();
@@ -35,11 +36,13 @@ public final class ModelCompiler {
     private int nextId;
     private List<Node> consts = new ArrayList<>();
 
-    private ModelCompiler(String text, List<String> inputs, List<String> outputs, FunctionLibrary library) {
+    private ModelCompiler(String text, List<String> inputs, List<String> outputs, FunctionLibrary library,
+            ModelUnits units) {
         this.text = text;
         this.inputs = inputs;
         this.outputs = outputs;
         this.library = library;
+        this.units = units;
     }
 
     /**
@@ -52,7 +55,21 @@ public final class ModelCompiler {
      */
     public static CompiledModel compile(String text, List<String> inputs, List<String> outputs,
             FunctionLibrary library) throws ModelException {
-        return new ModelCompiler(text, inputs, outputs, library).run();
+        return compile(text, inputs, outputs, library, ModelUnits.none());
+    }
+
+    /**
+     * Compiles a model and checks its dimensions against the units stated for its inputs and outputs (see
+     * {@link UnitCheck} for the rules and their limits). Where a library function's argument is in another unit
+     * of the declared dimension (K for °C, kPa for Pa) a conversion is compiled in, so evaluation works on plain
+     * doubles.
+     *
+     * @param units the units of the inputs and outputs, and the outputs' display units
+     * @throws ModelException listing every error found, unit errors with their line and column
+     */
+    public static CompiledModel compile(String text, List<String> inputs, List<String> outputs,
+            FunctionLibrary library, ModelUnits units) throws ModelException {
+        return new ModelCompiler(text, inputs, outputs, library, units).run();
     }
 
     /**
@@ -62,7 +79,17 @@ public final class ModelCompiler {
      */
     public static List<ModelProblem> check(String text, List<String> inputs, List<String> outputs,
             FunctionLibrary library) {
-        ModelCompiler c = new ModelCompiler(text, inputs, outputs, library);
+        return check(text, inputs, outputs, library, ModelUnits.none());
+    }
+
+    /**
+     * Checks a model and its dimensions without throwing, for live error marks in an editor.
+     *
+     * @return every problem found, errors and warnings, in text order
+     */
+    public static List<ModelProblem> check(String text, List<String> inputs, List<String> outputs,
+            FunctionLibrary library, ModelUnits units) {
+        ModelCompiler c = new ModelCompiler(text, inputs, outputs, library, units);
         try {
             CompiledModel m = c.run();
             return m.warnings();
@@ -126,6 +153,14 @@ public final class ModelCompiler {
             deps.add(d);
         }
         int[] order = order(deps);
+        if (problems.stream().noneMatch(ModelProblem::isError)) {
+            List<SourcePosition> at = new ArrayList<>();
+            for (Equation q : quantities) {
+                at.add(q.at());
+            }
+            problems.addAll(UnitCheck.run(roots, order, new ArrayList<>(quantityIndex.keySet()), at, inputs,
+                    outputs, units, () -> nextId++));
+        }
         boolean hasErrors = problems.stream().anyMatch(ModelProblem::isError);
         if (hasErrors) {
             problems.sort((a, b) -> a.line() != b.line()

@@ -500,4 +500,34 @@ abstract class Node {
         }
         @Override List<Node> children() { return List.of(args); }
     }
+
+    /**
+     * A unit conversion the dimension checker inserts in front of a library function's argument:
+     * {@code a × factor + shift} (a temperature point in K into a parameter in °C: factor 1, shift −273.15;
+     * kPa into Pa: factor 1000, shift 0).
+     */
+    static final class Convert extends Node {
+        final Node a;
+        final double factor;
+        final double shift;
+
+        Convert(int id, SourcePosition at, String text, Node a, double factor, double shift) {
+            super(id, at, text);
+            this.a = a;
+            this.factor = factor;
+            this.shift = shift;
+        }
+
+        @Override double eval(Scalar s) { return checked(this, a.eval(s) * factor + shift); }
+        @Override DerivativeStructure ds(Derivs d) { return a.ds(d).multiply(factor).add(shift); }
+        @Override double[] block(Block b, int n) {
+            double[] x = a.block(b, n);
+            double[] r = b.buf[id];
+            for (int t = 0; t < n; t++) {
+                r[t] = x[t] * factor + shift;
+            }
+            return r;
+        }
+        @Override List<Node> children() { return List.of(a); }
+    }
 }
