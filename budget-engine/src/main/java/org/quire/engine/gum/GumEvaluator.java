@@ -210,7 +210,7 @@ public final class GumEvaluator {
      * @return per output, the conversion from its unit to its display unit, or null when it has none
      * @throws ModelException naming the output and both units when a display unit cannot be used
      */
-    private static Conversion[] displayConversions(Budget budget, CompiledModel model) throws ModelException {
+    public static Conversion[] displayConversions(Budget budget, CompiledModel model) throws ModelException {
         List<String> names = model.outputNames();
         Conversion[] c = new Conversion[names.size()];
         for (int k = 0; k < c.length; k++) {

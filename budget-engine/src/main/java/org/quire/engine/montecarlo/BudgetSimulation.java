@@ -8,7 +8,9 @@ import org.quire.engine.budget.EvaluationSettings;
 import org.quire.engine.budget.InputQuantity;
 import org.quire.engine.gum.GumResult;
 import org.quire.engine.gum.OutputResult;
+import org.quire.engine.model.BlockEvaluator;
 import org.quire.engine.model.CompiledModel;
+import org.quire.engine.units.Conversion;
 
 /**
  * The Monte Carlo method applied to a budget: every input drawn from the distribution its evaluation states,
@@ -75,8 +77,9 @@ public final class BudgetSimulation {
      * @throws MonteCarloCancelledException when the listener asks to stop
      */
     public static Outcome run(Budget budget, CompiledModel model, GumResult gum, MonteCarloSettings settings,
-            ProgressListener listener) {
-        MonteCarloResult r = MonteCarlo.run(model, sampler(budget), settings, listener);
+            ProgressListener listener) throws org.quire.engine.model.ModelException {
+        Conversion[] shown = org.quire.engine.gum.GumEvaluator.displayConversions(budget, model);
+        MonteCarloResult r = MonteCarlo.run(displayed(model, shown), sampler(budget), settings, listener);
         List<GumComparison> cmp = new ArrayList<>();
         for (int k = 0; k < r.outputCount(); k++) {
             OutputResult g = gum.outputs().get(k);
@@ -84,5 +87,46 @@ public final class BudgetSimulation {
                     settings.significantDigits()));
         }
         return new Outcome(r, cmp, model.outputNames());
+    }
+
+    /**
+     * The model with each output converted, as a point, into its display unit, so that the Monte Carlo
+     * summaries are in the same units as the GUM result they are compared with.
+     */
+    static BlockEvaluator displayed(CompiledModel model, Conversion[] shown) {
+        boolean any = false;
+        for (Conversion c : shown) {
+            any |= c != null && !c.isIdentity();
+        }
+        if (!any) {
+            return model;
+        }
+        return new BlockEvaluator() {
+            @Override
+            public int inputCount() {
+                return model.inputCount();
+            }
+
+            @Override
+            public int outputCount() {
+                return model.outputCount();
+            }
+
+            @Override
+            public Session newSession(int maxBlock) {
+                Session s = model.newSession(maxBlock);
+                return (in, n, out) -> {
+                    s.evaluate(in, n, out);
+                    for (int k = 0; k < shown.length; k++) {
+                        if (shown[k] != null && !shown[k].isIdentity()) {
+                            double[] o = out[k];
+                            for (int t = 0; t < n; t++) {
+                                o[t] = shown[k].point(o[t]);
+                            }
+                        }
+                    }
+                };
+            }
+        };
     }
 }
