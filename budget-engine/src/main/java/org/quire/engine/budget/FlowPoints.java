@@ -56,15 +56,17 @@ public final class FlowPoints {
     private final List<Row> rows;
     private final MpeEnvelope envelope;
     private final DecisionRule rule;
+    private final double temperature;
 
     private FlowPoints(String flowUnit, String output, List<String> columns, List<Row> rows, MpeEnvelope envelope,
-            DecisionRule rule) {
+            DecisionRule rule, double temperature) {
         this.flowUnit = flowUnit;
         this.output = output;
         this.columns = columns;
         this.rows = rows;
         this.envelope = envelope;
         this.rule = rule;
+        this.temperature = temperature;
     }
 
     /**
@@ -123,25 +125,29 @@ public final class FlowPoints {
             }
             copy.add(r);
         }
-        return new FlowPoints(flowUnit.strip(), "", List.copyOf(columns), List.copyOf(copy), null, null);
+        return new FlowPoints(flowUnit.strip(), "", List.copyOf(columns), List.copyOf(copy), null, null, Double.NaN);
     }
 
     /** @return a copy tabulating the output named (empty: the budget's first output) */
     public FlowPoints withOutput(String name) {
-        return new FlowPoints(flowUnit, name == null ? "" : name.strip(), columns, rows, envelope, rule);
+        return new FlowPoints(flowUnit, name == null ? "" : name.strip(), columns, rows, envelope, rule, temperature);
     }
 
     /**
      * @param mpe the maximum permissible errors over the flow range (in the table's flow unit)
      * @param decisionRule the rule for the statement of conformity
+     * @param celsius the liquid's temperature, °C, for limits that depend on it; NaN when not stated
      * @return a copy that decides conformity at each point; the tabulated output must be an error in percent
      */
-    public FlowPoints withConformity(MpeEnvelope mpe, DecisionRule decisionRule) {
+    public FlowPoints withConformity(MpeEnvelope mpe, DecisionRule decisionRule, double celsius) {
+        if (Double.isInfinite(celsius)) {
+            throw new IllegalArgumentException("the liquid's temperature must be a finite number, not " + celsius);
+        }
         if ((mpe == null) != (decisionRule == null)) {
             throw new IllegalArgumentException("a conformity decision needs both the maximum permissible errors and "
                     + "the decision rule");
         }
-        return new FlowPoints(flowUnit, output, columns, rows, mpe, decisionRule);
+        return new FlowPoints(flowUnit, output, columns, rows, mpe, decisionRule, celsius);
     }
 
     /**
@@ -205,6 +211,11 @@ public final class FlowPoints {
     /** @return the envelope of maximum permissible errors, or null when no conformity decision is asked for */
     public MpeEnvelope envelope() {
         return envelope;
+    }
+
+    /** @return the liquid's temperature for the conformity decisions, °C; NaN when not stated */
+    public double temperature() {
+        return temperature;
     }
 
     /** @return the decision rule, or null when no conformity decision is asked for */

@@ -165,7 +165,7 @@ public final class FlowRange {
                     throw new IllegalArgumentException("flow " + pt.flow() + ": the error has zero uncertainty; "
                             + "no conformity decision can be made");
                 }
-                errors.add(new MeasuredError(pt.flow(), Double.NaN, o.estimate(), o.standardUncertainty(),
+                errors.add(new MeasuredError(pt.flow(), points.temperature(), o.estimate(), o.standardUncertainty(),
                         o.coverageFactor(), o.dofUsed()));
             }
             assessment = ConformityAssessment.of(points.envelope(), points.rule(), errors);

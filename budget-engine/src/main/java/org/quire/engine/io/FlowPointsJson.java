@@ -19,7 +19,8 @@ import org.quire.engine.gum.FlowRangeResult;
  *   "output": "E",                               optional; default the first output
  *   "columns": ["q_ind", "u(d_rep)"],            an input's estimate, or u(input) its standard uncertainty
  *   "points": [ {"flow": 2.5, "values": [2.512, 0.04]}, ... ],
- *   "conformity": {"mpe": {...}, "rule": {...}}  optional; see {@link ConformityJson}
+ *   "conformity": {"mpe": {...}, "rule": {...}, "temperature": 20.5}   optional; see {@link ConformityJson};
+ *                                               temperature in °C, for limits that depend on it
  * }
  * </pre>
  * Stateless and thread-safe.
@@ -27,7 +28,7 @@ import org.quire.engine.gum.FlowRangeResult;
 public final class FlowPointsJson {
     private static final Set<String> FIELDS = Set.of("flowUnit", "output", "columns", "points", "conformity");
     private static final Set<String> POINT_FIELDS = Set.of("flow", "values");
-    private static final Set<String> CONFORMITY_FIELDS = Set.of("mpe", "rule");
+    private static final Set<String> CONFORMITY_FIELDS = Set.of("mpe", "rule", "temperature");
 
     private FlowPointsJson() {
     }
@@ -64,7 +65,8 @@ public final class FlowPointsJson {
         if (f.has("conformity")) {
             JsonCursor c = f.get("conformity");
             c.onlyFields(CONFORMITY_FIELDS);
-            fp = fp.withConformity(ConformityJson.readEnvelope(c.get("mpe"), unit), ConformityJson.readRule(c.get("rule")));
+            fp = fp.withConformity(ConformityJson.readEnvelope(c.get("mpe"), unit), ConformityJson.readRule(c.get("rule")),
+                    c.has("temperature") ? c.get("temperature").number(false) : Double.NaN);
         }
         return fp;
     }
@@ -88,8 +90,12 @@ public final class FlowPointsJson {
         }
         o.add("points", pts);
         if (fp.envelope() != null) {
-            o.add("conformity", Json.createObjectBuilder().add("mpe", ConformityJson.envelopeJson(fp.envelope()))
-                    .add("rule", ConformityJson.ruleJson(fp.rule())));
+            JsonObjectBuilder c = Json.createObjectBuilder().add("mpe", ConformityJson.envelopeJson(fp.envelope()))
+                    .add("rule", ConformityJson.ruleJson(fp.rule()));
+            if (!Double.isNaN(fp.temperature())) {
+                c.add("temperature", fp.temperature());
+            }
+            o.add("conformity", c);
         }
         return o.build();
     }
