@@ -73,6 +73,9 @@ class Jcgm100H3FitParameterInputsTest {
         GumResult r = GumEvaluator.evaluate(b, FunctionLibrary.standard());
         assertEquals(-0.1494, r.output("b").estimate(), 0.00005); // JCGM 100:2008 H.3, b(30 °C)
         assertEquals(0.0041, r.output("b").standardUncertainty(), 0.00005); // JCGM 100:2008 H.3, u(b(30 °C))
+        // JCGM 100:2008 H.3: y1 and y2 share one s with nu = n - 2 = 9, so b(30 °C) has nu = 9 (not the 1.3 the
+        // Welch-Satterthwaite formula would give treating them as independent components)
+        assertEquals(9.0, r.output("b").effectiveDof(), 1e-9);
     }
 
     @Test
