@@ -14,6 +14,12 @@ public final class CommandLine {
             "usage:",
             "  " + EvaluateCommand.USAGE,
             "      the GUM budget table and results of every output",
+            "  " + FitCommand.USAGE,
+            "      fit a straight line to a calibration CSV (columns x, y, u_x, u_y): parameters, chi-squared",
+            "      check, standardized residuals; x for a new indication, y at a given x",
+            "  " + RangeCommand.USAGE,
+            "      the budget at each of its flow points: y, u, U, relative U, the correlation of the point",
+            "      results and, with maximum permissible errors in the file, the conformity decisions",
             "  " + ValidateCommand.USAGE,
             "      check Quire against the published worked examples",
             "  " + MonteCarloCommand.USAGE,
@@ -37,6 +43,10 @@ public final class CommandLine {
             switch (args[0]) {
                 case "evaluate":
                     return EvaluateCommand.run(args, out);
+                case "fit":
+                    return FitCommand.run(args, out);
+                case "range":
+                    return RangeCommand.run(args, out);
                 case "validate":
                     return ValidateCommand.run(args, out);
                 case "montecarlo":

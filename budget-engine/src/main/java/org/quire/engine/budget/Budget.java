@@ -7,6 +7,7 @@ import java.util.HashSet;
 import java.util.List;
 import java.util.Objects;
 import java.util.Set;
+import org.quire.engine.line.CalibrationLine;
 import org.quire.engine.model.CompiledModel;
 import org.quire.engine.model.FunctionLibrary;
 import org.quire.engine.model.ModelCompiler;
@@ -28,10 +29,12 @@ public final class Budget {
     private final List<Correlation> correlations;
     private final EvaluationSettings settings;
     private final JsonObject extensions;
+    private final List<CalibrationLine> dataSets;
+    private final FlowPoints flowPoints;
 
     private Budget(String title, String notes, String model, List<OutputQuantity> outputs,
             List<InputQuantity> inputs, List<Correlation> correlations, EvaluationSettings settings,
-            JsonObject extensions) {
+            JsonObject extensions, List<CalibrationLine> dataSets, FlowPoints flowPoints) {
         this.title = title;
         this.notes = notes;
         this.model = model;
@@ -40,6 +43,8 @@ public final class Budget {
         this.correlations = List.copyOf(correlations);
         this.settings = settings;
         this.extensions = extensions;
+        this.dataSets = List.copyOf(dataSets);
+        this.flowPoints = flowPoints;
     }
 
     /**
@@ -50,7 +55,7 @@ public final class Budget {
      */
     public static Budget of(String model, List<OutputQuantity> outputs, List<InputQuantity> inputs) {
         Budget b = new Budget("", "", Objects.requireNonNull(model, "model"), outputs, inputs, List.of(),
-                EvaluationSettings.defaults(), JsonObject.EMPTY_JSON_OBJECT);
+                EvaluationSettings.defaults(), JsonObject.EMPTY_JSON_OBJECT, List.of(), null);
         b.checkNames();
         return b;
     }
@@ -71,17 +76,65 @@ public final class Budget {
                 throw new IllegalArgumentException("'" + o.name() + "' is an input and cannot also be an output");
             }
         }
+        checkCalibration();
     }
 
-    public Budget withTitle(String v) { return copy(v == null ? "" : v, notes, model, outputs, inputs, correlations, settings, extensions); }
-    public Budget withNotes(String v) { return copy(title, v == null ? "" : v, model, outputs, inputs, correlations, settings, extensions); }
-    public Budget withModel(String v) { return copy(title, notes, Objects.requireNonNull(v, "model"), outputs, inputs, correlations, settings, extensions); }
-    public Budget withOutputs(List<OutputQuantity> v) { return copy(title, notes, model, v, inputs, correlations, settings, extensions); }
-    public Budget withInputs(List<InputQuantity> v) { return copy(title, notes, model, outputs, v, correlations, settings, extensions); }
-    public Budget withCorrelations(List<Correlation> v) { return copy(title, notes, model, outputs, inputs, v, settings, extensions); }
-    public Budget withSettings(EvaluationSettings v) { return copy(title, notes, model, outputs, inputs, correlations, Objects.requireNonNull(v), extensions); }
+    /** Data set names are unique, fit inputs use this budget's data sets, flow-point columns name inputs. */
+    private void checkCalibration() {
+        Set<String> names = new HashSet<>();
+        for (CalibrationLine d : dataSets) {
+            if (!names.add(d.name())) {
+                throw new IllegalArgumentException("data set '" + d.name() + "' is listed twice");
+            }
+        }
+        for (InputQuantity q : inputs) {
+            if (q.evaluation() instanceof FitParameter && !dataSets.contains(((FitParameter) q.evaluation()).line())) {
+                throw new IllegalArgumentException("input '" + q.name() + "' is a parameter of data set '"
+                        + ((FitParameter) q.evaluation()).dataSet() + "', which this budget does not hold");
+            }
+        }
+        if (flowPoints != null) {
+            flowPoints.checkAgainst(inputNames());
+        }
+    }
+
+    public Budget withTitle(String v) { return copy(v == null ? "" : v, notes, model, outputs, inputs, correlations, settings, extensions, dataSets, flowPoints); }
+    public Budget withNotes(String v) { return copy(title, v == null ? "" : v, model, outputs, inputs, correlations, settings, extensions, dataSets, flowPoints); }
+    public Budget withModel(String v) { return copy(title, notes, Objects.requireNonNull(v, "model"), outputs, inputs, correlations, settings, extensions, dataSets, flowPoints); }
+    public Budget withOutputs(List<OutputQuantity> v) { return copy(title, notes, model, v, inputs, correlations, settings, extensions, dataSets, flowPoints); }
+    public Budget withInputs(List<InputQuantity> v) { return copy(title, notes, model, outputs, v, correlations, settings, extensions, dataSets, flowPoints); }
+    public Budget withCorrelations(List<Correlation> v) { return copy(title, notes, model, outputs, inputs, v, settings, extensions, dataSets, flowPoints); }
+    public Budget withSettings(EvaluationSettings v) { return copy(title, notes, model, outputs, inputs, correlations, Objects.requireNonNull(v), extensions, dataSets, flowPoints); }
     /** @param v fields of the budget file this version of Quire does not interpret, kept on save */
-    public Budget withExtensions(JsonObject v) { return copy(title, notes, model, outputs, inputs, correlations, settings, v == null ? JsonObject.EMPTY_JSON_OBJECT : v); }
+    public Budget withExtensions(JsonObject v) { return copy(title, notes, model, outputs, inputs, correlations, settings, v == null ? JsonObject.EMPTY_JSON_OBJECT : v, dataSets, flowPoints); }
+
+    /**
+     * @param v the calibration data sets, names unique; inputs that are parameters of a data set of the same
+     *     name are refitted to the new one
+     * @throws IllegalArgumentException for a duplicate name, a data set that cannot be fitted, or a fit input
+     *     whose data set is no longer there
+     */
+    public Budget withDataSets(List<CalibrationLine> v) {
+        if (v == null) {
+            throw new IllegalArgumentException("the list of data sets is missing");
+        }
+        List<InputQuantity> refitted = new ArrayList<>();
+        for (InputQuantity q : inputs) {
+            if (q.evaluation() instanceof FitParameter) {
+                FitParameter f = (FitParameter) q.evaluation();
+                for (CalibrationLine d : v) {
+                    if (d.name().equals(f.dataSet()) && !d.equals(f.line())) {
+                        q = q.withEvaluation(FitParameter.of(d, f.parameter()));
+                    }
+                }
+            }
+            refitted.add(q);
+        }
+        return copy(title, notes, model, outputs, refitted, correlations, settings, extensions, v, flowPoints);
+    }
+
+    /** @param v the flow points for an evaluation across the flow range, or null for none */
+    public Budget withFlowPoints(FlowPoints v) { return copy(title, notes, model, outputs, inputs, correlations, settings, extensions, dataSets, v); }
 
     /** @return a copy with one input replaced (matched by position of the input named {@code name}) */
     public Budget withInput(String name, InputQuantity replacement) {
@@ -97,8 +150,9 @@ public final class Budget {
 
     private static Budget copy(String title, String notes, String model, List<OutputQuantity> outputs,
             List<InputQuantity> inputs, List<Correlation> correlations, EvaluationSettings settings,
-            JsonObject extensions) {
-        Budget b = new Budget(title, notes, model, outputs, inputs, correlations, settings, extensions);
+            JsonObject extensions, List<CalibrationLine> dataSets, FlowPoints flowPoints) {
+        Budget b = new Budget(title, notes, model, outputs, inputs, correlations, settings, extensions, dataSets,
+                flowPoints);
         b.checkNames();
         return b;
     }
@@ -111,6 +165,20 @@ public final class Budget {
     public List<Correlation> correlations() { return correlations; }
     public EvaluationSettings settings() { return settings; }
     public JsonObject extensions() { return extensions; }
+    /** @return the calibration data sets, each with its fitting method */
+    public List<CalibrationLine> dataSets() { return dataSets; }
+    /** @return the flow points for an evaluation across the flow range, or null */
+    public FlowPoints flowPoints() { return flowPoints; }
+
+    /** @return the data set of that name, or null */
+    public CalibrationLine dataSet(String name) {
+        for (CalibrationLine d : dataSets) {
+            if (d.name().equals(name)) {
+                return d;
+            }
+        }
+        return null;
+    }
 
     /** @return the input of that name, or null */
     public InputQuantity input(String name) {
@@ -186,7 +254,8 @@ public final class Budget {
         Budget b = (Budget) o;
         return title.equals(b.title) && notes.equals(b.notes) && model.equals(b.model) && outputs.equals(b.outputs)
                 && inputs.equals(b.inputs) && correlations.equals(b.correlations) && settings.equals(b.settings)
-                && extensions.equals(b.extensions);
+                && extensions.equals(b.extensions) && dataSets.equals(b.dataSets)
+                && Objects.equals(flowPoints, b.flowPoints);
     }
 
     @Override

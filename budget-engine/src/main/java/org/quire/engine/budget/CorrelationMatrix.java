@@ -75,9 +75,53 @@ public final class CorrelationMatrix {
             set[a][b] = true;
             set[b][a] = true;
         }
-        CorrelationMatrix m = new CorrelationMatrix(List.copyOf(names), r, correlations.isEmpty());
+        boolean fitPairs = addFitCorrelations(inputs, r, set);
+        CorrelationMatrix m = new CorrelationMatrix(List.copyOf(names), r, correlations.isEmpty() && !fitPairs);
         m.checkPositiveSemiDefinite();
         return m;
+    }
+
+    /**
+     * Joins the intercept and slope of one fitted line with the fit's r(a, b) (JCGM 100:2008 H.3.4, where r(y1,
+     * y2) enters eq. H.16). A stated coefficient for such a pair is refused: the fit fixes it. Two inputs that are
+     * the same parameter of the same fit are refused: they are one quantity.
+     *
+     * @return whether any pair was joined
+     */
+    private static boolean addFitCorrelations(List<InputQuantity> inputs, double[][] r, boolean[][] set) {
+        boolean any = false;
+        for (int a = 0; a < inputs.size(); a++) {
+            if (!(inputs.get(a).evaluation() instanceof FitParameter)) {
+                continue;
+            }
+            FitParameter pa = (FitParameter) inputs.get(a).evaluation();
+            for (int b = a + 1; b < inputs.size(); b++) {
+                if (!(inputs.get(b).evaluation() instanceof FitParameter)) {
+                    continue;
+                }
+                FitParameter pb = (FitParameter) inputs.get(b).evaluation();
+                if (!pa.line().equals(pb.line())) {
+                    continue;
+                }
+                String pair = "'" + inputs.get(a).name() + "' and '" + inputs.get(b).name() + "'";
+                if (pa.parameter() == pb.parameter()) {
+                    throw new IllegalArgumentException("inputs " + pair + " are both the " + pa.parameter().label()
+                            + " of data set '" + pa.dataSet() + "'; use one input for one quantity");
+                }
+                double v = pa.correlationWith(pb);
+                if (set[a][b]) {
+                    throw new IllegalArgumentException(String.format(Locale.ROOT, "the correlation between %s is "
+                            + "fixed by the fit of data set '%s' (r = %.6f); remove the stated correlation", pair,
+                            pa.dataSet(), v));
+                }
+                r[a][b] = v;
+                r[b][a] = v;
+                set[a][b] = true;
+                set[b][a] = true;
+                any = true;
+            }
+        }
+        return any;
     }
 
     /**

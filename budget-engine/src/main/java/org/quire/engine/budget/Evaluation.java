@@ -2,11 +2,12 @@ package org.quire.engine.budget;
 
 /**
  * How an input quantity's estimate and standard uncertainty were obtained: a Type A evaluation from
- * observations or a Type B evaluation from other information (JCGM 100:2008 4.2 and 4.3).
+ * observations or a Type B evaluation from other information (JCGM 100:2008 4.2 and 4.3), or a fitted
+ * parameter of a calibration line ({@link FitParameter}, Type A or B according to the fitting method).
  *
  * <p>Implementations are immutable and thread-safe.
  */
-public sealed interface Evaluation permits TypeA, TypeB {
+public sealed interface Evaluation permits TypeA, TypeB, FitParameter {
 
     /** @return the estimate x_i */
     double estimate();

@@ -10,6 +10,7 @@ import org.quire.engine.budget.Budget;
 import org.quire.engine.budget.CorrelationMatrix;
 import org.quire.engine.budget.EvaluationSettings;
 import org.quire.engine.budget.Evaluation;
+import org.quire.engine.budget.FitParameter;
 import org.quire.engine.budget.InputQuantity;
 import org.quire.engine.budget.OutputQuantity;
 import org.quire.engine.model.CompiledModel;
@@ -32,6 +33,8 @@ import org.quire.engine.units.Units;
  * <li>JCGM 100:2008 G.4.1, eq. (G.2b): nu_eff = u_c^4(y) / sum (u_i^4(y) / nu_i); G.4.1 note 1 and G.6.4
  *     (truncate to the next lower integer); G.3 and Table G.2 (k = t_p(nu_eff)).</li>
  * <li>JCGM 102:2011 6.2.1.3: covariance of several outputs U_y = C U_x C^T.</li>
+ * <li>JCGM 100:2008 H.3.4: the intercept and slope of one line fitted by least squares share the residual
+ *     scatter, so in nu_eff their joint contribution is one component with nu = n - 2.</li>
  * </ul>
  * Derivatives are exact, by forward-mode automatic differentiation through the whole model. The model computes
  * in the units stated for its inputs and outputs; an output with a display unit is then converted
@@ -149,10 +152,11 @@ public final class GumEvaluator {
                 InputQuantity q = inputs.get(i);
                 rows.add(new Contribution(q.name(), q.unit(), x[i], u[i], c[k][i], ui, nu[i], share,
                         q.evaluation().type(), q.evaluation().distribution().shape()));
-                if (ui > 0 && !Double.isInfinite(nu[i])) {
+                if (ui > 0 && !Double.isInfinite(nu[i]) && !(q.evaluation() instanceof FitParameter)) {
                     wsDenominator += Math.pow(ui, 4) / nu[i];
                 }
             }
+            wsDenominator += fittedLineTerms(inputs, c[k], u, nu, r);
             double nuEff = wsDenominator > 0 ? Math.pow(uc, 4) / wsDenominator : Double.POSITIVE_INFINITY;
             if (correlated && !terms.isEmpty() && !Double.isInfinite(nuEff)) {
                 warnings.add("inputs are correlated; the Welch–Satterthwaite formula assumes independent inputs, "
@@ -232,6 +236,39 @@ public final class GumEvaluator {
             }
         }
         return c;
+    }
+
+    /**
+     * The Welch-Satterthwaite terms of fitted-line parameters: the intercept and slope of one line share one
+     * residual scatter s, so their joint contribution u_L^2(y) = sum_ij c_i c_j u_i u_j r_ij is one component
+     * with nu = n - 2 (JCGM 100:2008 H.3.4: b(t) from y1 and y2 has nu = n - 2; G.4.1, eq. G.2b).
+     */
+    private static double fittedLineTerms(List<InputQuantity> inputs, double[] c, double[] u, double[] nu,
+            CorrelationMatrix r) {
+        double sum = 0;
+        boolean[] done = new boolean[inputs.size()];
+        for (int i = 0; i < inputs.size(); i++) {
+            if (done[i] || !(inputs.get(i).evaluation() instanceof FitParameter) || Double.isInfinite(nu[i])) {
+                continue;
+            }
+            Object line = ((FitParameter) inputs.get(i).evaluation()).line();
+            List<Integer> group = new ArrayList<>();
+            for (int j = i; j < inputs.size(); j++) {
+                if (inputs.get(j).evaluation() instanceof FitParameter
+                        && ((FitParameter) inputs.get(j).evaluation()).line().equals(line)) {
+                    group.add(j);
+                    done[j] = true;
+                }
+            }
+            double v = 0;
+            for (int a : group) {
+                for (int b : group) {
+                    v += c[a] * c[b] * u[a] * u[b] * r.get(a, b);
+                }
+            }
+            sum += v * v / nu[i];
+        }
+        return sum;
     }
 
     /** Partial derivative of {@code f} with orders at the given active-parameter indices (-1 for none). */

@@ -28,12 +28,15 @@ import java.util.Set;
 import org.quire.engine.budget.Budget;
 import org.quire.engine.budget.Correlation;
 import org.quire.engine.budget.EvaluationSettings;
+import org.quire.engine.budget.FitParameter;
+import org.quire.engine.budget.FlowPoints;
 import org.quire.engine.budget.Evaluation;
 import org.quire.engine.budget.InputQuantity;
 import org.quire.engine.budget.InvalidParameterException;
 import org.quire.engine.budget.OutputQuantity;
 import org.quire.engine.budget.TypeA;
 import org.quire.engine.budget.TypeB;
+import org.quire.engine.line.CalibrationLine;
 
 /**
  * Reads and writes budget files: our own JSON layout, described in {@code budget-engine/doc/budget-format.md}.
@@ -56,7 +59,7 @@ public final class BudgetJson {
     public static final int MAX_DEPTH = 32;
 
     static final Set<String> TOP_FIELDS = Set.of("format", "formatVersion", "title", "notes", "model", "outputs",
-            "inputs", "correlations", "settings");
+            "inputs", "correlations", "settings", "dataSets", "flowPoints");
     private static final Set<String> INPUT_FIELDS = Set.of("name", "description", "unit", "source", "notes",
             "evaluation");
     private static final Set<String> TYPE_A_FIELDS = Set.of("type", "readings", "mean", "s", "n", "pooledS",
@@ -158,10 +161,11 @@ public final class BudgetJson {
         if (outputs.isEmpty()) {
             throw new BudgetFormatException(root.path() + ".outputs", "name at least one output");
         }
+        List<CalibrationLine> dataSets = root.has("dataSets") ? DataSetJson.readAll(root.get("dataSets")) : List.of();
         List<InputQuantity> inputs = new ArrayList<>();
         List<String> seen = new ArrayList<>();
         for (JsonCursor in : root.get("inputs").elements()) {
-            InputQuantity q = readInput(in);
+            InputQuantity q = readInput(in, dataSets);
             if (seen.contains(q.name())) {
                 throw new BudgetFormatException(in.path() + ".name", "input '" + q.name() + "' is listed twice");
             }
@@ -183,7 +187,9 @@ public final class BudgetJson {
             }
         }
         try {
-            return Budget.of(model, outputs, inputs).withTitle(root.string("title", ""))
+            FlowPoints flow = root.has("flowPoints") ? FlowPointsJson.read(root.get("flowPoints")) : null;
+            return Budget.of(model, outputs, List.of()).withDataSets(dataSets).withInputs(inputs).withFlowPoints(flow)
+                    .withTitle(root.string("title", ""))
                     .withNotes(root.string("notes", "")).withCorrelations(correlations).withSettings(settings)
                     .withExtensions(ext.build());
         } catch (IllegalArgumentException e) {
@@ -215,7 +221,8 @@ public final class BudgetJson {
         }
     }
 
-    private static InputQuantity readInput(JsonCursor in) throws BudgetFormatException {
+    private static InputQuantity readInput(JsonCursor in, List<CalibrationLine> dataSets)
+            throws BudgetFormatException {
         in.onlyFields(INPUT_FIELDS);
         String name = in.get("name").string();
         try {
@@ -223,7 +230,7 @@ public final class BudgetJson {
         } catch (IllegalArgumentException e) {
             throw new BudgetFormatException(in.path() + ".name", e.getMessage());
         }
-        Evaluation ev = readEvaluation(in.get("evaluation"));
+        Evaluation ev = readEvaluation(in.get("evaluation"), dataSets);
         try {
             return InputQuantity.of(name, ev).withDescription(in.string("description", ""))
                     .withUnit(in.string("unit", "")).withSource(in.string("source", ""))
@@ -235,7 +242,16 @@ public final class BudgetJson {
 
     /** Reads one evaluation object ({@code type} A or B). */
     public static Evaluation readEvaluation(JsonCursor e) throws BudgetFormatException {
+        return readEvaluation(e, List.of());
+    }
+
+    /** Reads one evaluation object ({@code type} A, B, or fit: a parameter of one of {@code dataSets}). */
+    public static Evaluation readEvaluation(JsonCursor e, List<CalibrationLine> dataSets)
+            throws BudgetFormatException {
         String type = e.get("type").string();
+        if (type.equals("fit")) {
+            return FitEvaluationJson.read(e, dataSets);
+        }
         if (type.equals("A")) {
             e.onlyFields(TYPE_A_FIELDS);
             TypeA a;
@@ -317,7 +333,7 @@ public final class BudgetJson {
                 throw e.error(x.getMessage());
             }
         }
-        throw new BudgetFormatException(e.path() + ".type", "type must be \"A\" or \"B\", not \"" + type + "\"");
+        throw new BudgetFormatException(e.path() + ".type", "type must be \"A\", \"B\" or \"fit\", not \"" + type + "\"");
     }
 
     private static Correlation readCorrelation(JsonCursor c) throws BudgetFormatException {
@@ -464,6 +480,12 @@ public final class BudgetJson {
             }
             o.add("correlations", cs);
         }
+        if (!b.dataSets().isEmpty()) {
+            o.add("dataSets", DataSetJson.toJson(b.dataSets()));
+        }
+        if (b.flowPoints() != null) {
+            o.add("flowPoints", FlowPointsJson.toJson(b.flowPoints()));
+        }
         o.add("settings", settingsJson(b.settings()));
         for (Map.Entry<String, JsonValue> e : b.extensions().entrySet()) {
             if (!TOP_FIELDS.contains(e.getKey())) {
@@ -482,6 +504,9 @@ public final class BudgetJson {
     /** @return an evaluation as JSON, with the parameters as entered */
     public static JsonObject evaluationJson(Evaluation e) {
         JsonObjectBuilder b = Json.createObjectBuilder();
+        if (e instanceof FitParameter) {
+            return FitEvaluationJson.toJson((FitParameter) e);
+        }
         if (e instanceof TypeA) {
             TypeA a = (TypeA) e;
             b.add("type", "A");

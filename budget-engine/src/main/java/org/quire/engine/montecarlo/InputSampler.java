@@ -112,6 +112,23 @@ public final class InputSampler {
     }
 
     /**
+     * The inputs of a budget: each input's distribution, correlated by the budget's checked correlation matrix,
+     * which holds the stated coefficients and, for the intercept and slope of one fitted calibration line, the
+     * fit's r(a, b) (so such a pair is drawn from a bivariate normal distribution, JCGM 101:2008 6.4.8).
+     *
+     * @param budget the budget, inputs in its order (the order of its compiled model)
+     * @return the sampler
+     * @throws IllegalArgumentException when the correlations cannot be used (the message names the inputs)
+     */
+    public static InputSampler of(org.quire.engine.budget.Budget budget) {
+        List<Distribution> d = new ArrayList<>();
+        for (org.quire.engine.budget.InputQuantity q : budget.inputs()) {
+            d.add(q.evaluation().distribution());
+        }
+        return of(d, CorrelationMatrix.of(budget.correlationMatrix().toArray()));
+    }
+
+    /**
      * @param distributions one per input, in the model's input order
      * @param correlation correlation coefficients between the inputs, same order
      * @return correlated inputs

@@ -45,7 +45,11 @@ public final class Validator {
         this.library = library;
     }
 
-    /** @return a validator with the GUM evaluation ("gum") and coverage factors ("coverage-factor") */
+    /**
+     * @return a validator with the GUM evaluation ("gum"), coverage factors ("coverage-factor"), calibration
+     *     lines ("line"), conformity ("conformity") and flow ranges ("flow-range", see
+     *     {@link CalibrationComputations})
+     */
     public static Validator standard(FunctionLibrary library) {
         Map<String, Computation> m = new LinkedHashMap<>();
         m.put("gum", (budget, args, settings) -> {
@@ -73,6 +77,10 @@ public final class Validator {
             double nu = nuV instanceof JsonString ? Double.POSITIVE_INFINITY : ((JsonNumber) nuV).doubleValue();
             return Json.createObjectBuilder().add("k", CoverageFactor.of(p, nu)).build();
         });
+        m.put("line", (budget, args, settings) -> CalibrationComputations.line(budget, args));
+        m.put("conformity", (budget, args, settings) -> CalibrationComputations.conformity(args));
+        m.put("flow-range", (budget, args, settings) ->
+                CalibrationComputations.flowRange(budget == null ? null : budget.withSettings(settings), library));
         return new Validator(m, library);
     }
 
