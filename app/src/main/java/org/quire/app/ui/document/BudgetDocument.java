@@ -142,6 +142,17 @@ public final class BudgetDocument {
         history.markSaved();
     }
 
+    /**
+     * Writes the unsaved budget beside its file as {@code NAME.autosave} (the file itself is left alone and the
+     * budget stays marked as changed).
+     */
+    public void autosave() throws IOException {
+        if (file == null) {
+            return;
+        }
+        SafeFileWriter.write(file.resolveSibling(file.getFileName() + ".autosave"), BudgetJson.write(budget));
+    }
+
     private void fireChanged(Budget before, Budget after, String cause) {
         for (Listener l : listeners) {
             l.budgetChanged(this, before, after, cause);

@@ -31,14 +31,14 @@ import org.quire.engine.budget.InputQuantity;
  */
 final class CorrelationsSection implements Section {
     private static final Pattern PAIR = Pattern.compile("r\\(([^,()]+), ([^,()]+)\\)");
+    private List<String> names = List.of();
+    private List<Correlation> correlations = List.of();
+    private final Set<String> offending = new HashSet<>();
     private final EditorContext ctx;
     private final JPanel body = new JPanel(new BorderLayout(4, 4));
     private final Matrix matrix = new Matrix();
     private final JTable table = new JTable(matrix);
     private final JLabel verdict = new JLabel(" ");
-    private List<String> names = List.of();
-    private List<Correlation> correlations = List.of();
-    private final Set<String> offending = new HashSet<>();
 
     CorrelationsSection(EditorContext ctx) {
         this.ctx = ctx;
