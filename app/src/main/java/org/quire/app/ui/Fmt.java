@@ -7,7 +7,10 @@ public final class Fmt {
     private Fmt() {
     }
 
-    /** @return {@code v} with 6 significant digits, "∞" for infinity, "" for NaN */
+    /**
+     * @return {@code v} as entered when it has at most 10 significant digits (1000.212 stays 1000.212), else
+     *     with 6 significant digits; "∞" for infinity, "" for NaN
+     */
     public static String num(double v) {
         if (Double.isNaN(v)) {
             return "";
@@ -18,7 +21,14 @@ public final class Fmt {
         if (v == 0) {
             return "0";
         }
+        java.math.BigDecimal b = new java.math.BigDecimal(Double.toString(v)).stripTrailingZeros();
         double a = Math.abs(v);
+        if (b.precision() <= 10 && a >= 1e-5 && a < 1e10) {
+            return b.toPlainString();
+        }
+        if (b.precision() <= 10) {
+            return Double.toString(v).replace("E", "e");
+        }
         if (a >= 1e-4 && a < 1e7) {
             String s = String.format(Locale.ROOT, "%.6g", v);
             if (s.contains(".") && !s.contains("e")) {

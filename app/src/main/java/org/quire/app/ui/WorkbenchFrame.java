@@ -115,7 +115,9 @@ public final class WorkbenchFrame extends JFrame {
             setExtendedState(MAXIMIZED_BOTH);
         }
         setVisible(true);
+        validate();
         panes.restore();
+        java.awt.EventQueue.invokeLater(panes::restore);
     }
 
     /** @return the editor of the selected tab */

@@ -46,10 +46,10 @@ abstract class GuiTestSupport {
     void buildFrame() throws Exception {
         node = Preferences.userRoot().node("org/quire/test/workbench-" + System.nanoTime());
         node.putInt("autosaveMinutes", 0);
+        node.put("windowBounds", "0,0,1440,900");
         frame = onEdt(() -> {
             WorkbenchFrame f = new WorkbenchFrame(new WorkbenchPrefs(node), Engine.library(), runner());
-            f.setSize(1440, 900);
-            f.setVisible(true);
+            f.showRestored();
             return f;
         });
     }

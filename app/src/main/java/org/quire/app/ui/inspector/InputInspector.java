@@ -147,7 +147,7 @@ final class InputInspector extends JPanel {
             shown = q;
             heading.setText("Input " + q.name());
             plot.show(q.evaluation().distribution());
-            basis.setText("<html>" + q.evaluation().basis().replace("<", "&lt;") + "</html>");
+            basis.setText(q.evaluation().basis());
             name.setText(q.name());
             description.setText(q.description());
             unit.setText(q.unit());

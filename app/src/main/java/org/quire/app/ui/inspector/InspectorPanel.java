@@ -51,7 +51,7 @@ public final class InspectorPanel extends JPanel {
         InputQuantity q = name == null ? null : b.input(name);
         if (q == null) {
             EvaluationSettings s = b.settings();
-            overview.setText("<html><b>" + esc(b.title().isEmpty() ? editor.document().name() : b.title()) + "</b><br><br>"
+            String text = ("<html><b>" + esc(b.title().isEmpty() ? editor.document().name() : b.title()) + "</b><br><br>"
                     + (editor.document().file() == null ? "Not saved to a file yet." : esc(String.valueOf(editor.document().file())))
                     + "<br><br>" + b.inputs().size() + " inputs, " + b.outputs().size() + " outputs, "
                     + b.correlations().size() + " correlations<br>"
@@ -60,6 +60,9 @@ public final class InspectorPanel extends JPanel {
                     + ", " + s.significantDigits() + " significant digits<br>Monte Carlo: " + s.trials()
                     + " trials, seed " + s.seed()
                     + "<br><br>Select an input in the Inputs table to see and change all of its options here.</html>");
+            if (!text.equals(overview.getText())) {
+                overview.setText(text);
+            }
             cards.show(this, "overview");
         } else {
             input.show(q);

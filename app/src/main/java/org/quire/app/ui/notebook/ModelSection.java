@@ -48,7 +48,7 @@ final class ModelSection implements Section {
         editor.setFont(new Font(Font.MONOSPACED, Font.PLAIN, editor.getFont().getSize()));
         editor.setToolTipText("");
         JScrollPane sp = new JScrollPane(editor);
-        sp.setPreferredSize(new Dimension(600, 190));
+        sp.setPreferredSize(new Dimension(600, 16 * editor.getFontMetrics(editor.getFont()).getHeight() + 8));
         JLabel hint = new JLabel("One equation a line: name = expression, or name(args) = expression for a "
                 + "function. # starts a comment.");
         hint.setForeground(Colors.get("Label.disabledForeground"));

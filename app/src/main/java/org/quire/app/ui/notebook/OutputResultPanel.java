@@ -18,7 +18,8 @@ import org.quire.engine.gum.Rounding;
 
 /** The GUM result of one output: the figures in a summary line and the sortable budget table. */
 final class OutputResultPanel extends JPanel {
-    private final JLabel summary = new JLabel();
+    private final JLabel headline = new JLabel();
+    private final JLabel figures = new JLabel();
     private final ContributionTableModel model = new ContributionTableModel();
     private final JTable table = new JTable(model);
 
@@ -37,6 +38,13 @@ final class OutputResultPanel extends JPanel {
             }
         };
         table.setDefaultRenderer(Double.class, numbers);
+        table.getColumnModel().getColumn(3).setCellRenderer(new DefaultTableCellRenderer() {
+            @Override
+            protected void setValue(Object v) {
+                setHorizontalAlignment(RIGHT);
+                setText(Fmt.num((Double) v));
+            }
+        });
         table.getColumnModel().getColumn(7).setCellRenderer(new DefaultTableCellRenderer() {
             @Override
             protected void setValue(Object v) {
@@ -46,8 +54,13 @@ final class OutputResultPanel extends JPanel {
         });
         table.getColumnModel().getColumn(ContributionTableModel.SHARE).setCellRenderer(new ShareBarRenderer());
         table.getColumnModel().getColumn(ContributionTableModel.SHARE).setPreferredWidth(170);
-        summary.setBorder(javax.swing.BorderFactory.createEmptyBorder(2, 0, 4, 0));
-        add(summary, BorderLayout.NORTH);
+        headline.setFont(headline.getFont().deriveFont(java.awt.Font.BOLD, headline.getFont().getSize2D() + 1));
+        headline.setForeground(Colors.get("Quire.result.emphasis"));
+        JPanel top = new JPanel(new java.awt.GridLayout(2, 1));
+        top.add(headline);
+        top.add(figures);
+        top.setBorder(javax.swing.BorderFactory.createEmptyBorder(2, 0, 4, 0));
+        add(top, BorderLayout.NORTH);
         JScrollPane sp = new JScrollPane(table);
         add(sp, BorderLayout.CENTER);
         setBorder(javax.swing.BorderFactory.createEmptyBorder(4, 0, 10, 0));
@@ -58,18 +71,16 @@ final class OutputResultPanel extends JPanel {
         String rounded = Rounding.format(o.estimate(), o.expandedUncertainty(), digits);
         String dofNote = Double.isInfinite(o.effectiveDof()) ? "\u221e"
                 : Fmt.dof(o.effectiveDof()) + (o.dofUsed() != o.effectiveDof() ? " (" + Fmt.dof(o.dofUsed()) + " used)" : "");
-        String emphasis = String.format("#%06x", Colors.get("Quire.result.emphasis").getRGB() & 0xffffff);
-        summary.setText("<html><b style='font-size:110%'>" + o.name() + unit + "</b> &nbsp; "
-                + "<span style='color:" + emphasis + "'><b>" + o.name() + " = (" + rounded + ")" + unit + "</b></span>"
-                + "<br>y = " + Fmt.num(o.estimate()) + unit
-                + " &nbsp;&nbsp; u<sub>c</sub>(y) = " + Rounding.uncertainty(o.standardUncertainty(), digits).toPlainString() + unit
-                + " &nbsp;&nbsp; \u03bd<sub>eff</sub> = " + dofNote
-                + " &nbsp;&nbsp; k = " + String.format(java.util.Locale.ROOT, "%.3f", o.coverageFactor())
-                + " (p = " + Fmt.probability(o.coverageProbability()) + ")"
-                + " &nbsp;&nbsp; U = " + Rounding.uncertainty(o.expandedUncertainty(), digits).toPlainString() + unit
-                + " &nbsp;&nbsp; U/|y| = " + (Double.isNaN(o.relativeExpandedUncertainty()) ? "n/a"
-                        : Rounding.uncertainty(100 * o.relativeExpandedUncertainty(), digits).toPlainString() + " %")
-                + "</html>");
+        set(headline, o.name() + " = (" + rounded + ")" + unit + ",  k = "
+                + String.format(java.util.Locale.ROOT, "%.2f", o.coverageFactor()) + ",  p = "
+                + Fmt.probability(o.coverageProbability()));
+        set(figures, "y = " + Fmt.num(o.estimate()) + unit
+                + "     u_c(y) = " + Rounding.uncertainty(o.standardUncertainty(), digits).toPlainString() + unit
+                + "     \u03bd_eff = " + dofNote
+                + "     k = " + String.format(java.util.Locale.ROOT, "%.3f", o.coverageFactor())
+                + "     U = " + Rounding.uncertainty(o.expandedUncertainty(), digits).toPlainString() + unit
+                + "     U/|y| = " + (Double.isNaN(o.relativeExpandedUncertainty()) ? "n/a"
+                        : Rounding.uncertainty(100 * o.relativeExpandedUncertainty(), digits).toPlainString() + " %"));
         model.set(o.contributions());
         int h = table.getRowHeight() * Math.max(3, o.contributions().size()) + table.getTableHeader().getPreferredSize().height + 4;
         table.getParent().getParent().setPreferredSize(new Dimension(700, h));
@@ -77,5 +88,12 @@ final class OutputResultPanel extends JPanel {
 
     JTable table() { return table; }
 
-    String summaryText() { return summary.getText(); }
+    String summaryText() { return headline.getText() + "\n" + figures.getText(); }
+
+    /** Sets a label's text only when it differs: layout of text is the costly part of an update. */
+    private static void set(JLabel l, String text) {
+        if (!text.equals(l.getText())) {
+            l.setText(text);
+        }
+    }
 }
