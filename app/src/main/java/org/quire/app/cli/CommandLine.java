@@ -16,6 +16,8 @@ public final class CommandLine {
             "      the GUM budget table and results of every output",
             "  " + ValidateCommand.USAGE,
             "      check Quire against the published worked examples",
+            "  quire open [--review] FILE",
+            "      open a budget in the workbench (read-only with --review); no arguments opens the demo",
             "  quire version",
             "  quire help",
             "");

@@ -33,7 +33,7 @@ public final class InspectorPanel extends JPanel {
         ov.add(overview, BorderLayout.NORTH);
         ov.setBorder(BorderFactory.createEmptyBorder(8, 8, 8, 8));
         add(ov, "overview");
-        JPanel wrap = new JPanel(new BorderLayout());
+        JPanel wrap = new WidthTracking();
         wrap.add(input, BorderLayout.NORTH);
         wrap.setBorder(BorderFactory.createEmptyBorder(8, 8, 8, 8));
         JScrollPane sp = new JScrollPane(wrap, ScrollPaneConstants.VERTICAL_SCROLLBAR_AS_NEEDED,
@@ -68,6 +68,19 @@ public final class InspectorPanel extends JPanel {
             input.show(q);
             cards.show(this, "input");
         }
+    }
+
+    /** A panel that takes the width of the scroll pane's viewport, so the inspector never clips on the right. */
+    private static final class WidthTracking extends JPanel implements javax.swing.Scrollable {
+        WidthTracking() {
+            super(new BorderLayout());
+        }
+
+        @Override public java.awt.Dimension getPreferredScrollableViewportSize() { return getPreferredSize(); }
+        @Override public int getScrollableUnitIncrement(java.awt.Rectangle r, int o, int d) { return 20; }
+        @Override public int getScrollableBlockIncrement(java.awt.Rectangle r, int o, int d) { return r.height; }
+        @Override public boolean getScrollableTracksViewportWidth() { return true; }
+        @Override public boolean getScrollableTracksViewportHeight() { return false; }
     }
 
     private static String esc(String s) {

@@ -20,10 +20,10 @@ import org.quire.engine.budget.TypeA;
 final class TypeAForm extends JPanel {
     private final ReadingsGrid grid = new ReadingsGrid();
     private final JLabel stats = new JLabel(" ");
-    private final JTextField mean = new JTextField(8);
-    private final JTextField s = new JTextField(8);
+    private final JTextField mean = new JTextField(6);
+    private final JTextField s = new JTextField(6);
     private final JTextField n = new JTextField(4);
-    private final JTextField pooledS = new JTextField(8);
+    private final JTextField pooledS = new JTextField(6);
     private final JTextField pooledDof = new JTextField(4);
     private final JButton useReadings = new JButton("Use readings");
     private final JButton useSummary = new JButton("Use summary");

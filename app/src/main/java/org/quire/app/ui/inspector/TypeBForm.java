@@ -62,7 +62,7 @@ final class TypeBForm extends JPanel {
             c.weightx = 0;
             c.fill = GridBagConstraints.NONE;
             add(new JLabel(e.getValue()), c);
-            JTextField f = new JTextField(10);
+            JTextField f = new JTextField(6);
             f.setName("param:" + e.getKey());
             f.setToolTipText("'" + e.getKey() + "' in the budget file; leave blank when not given");
             f.addActionListener(x -> commit());
