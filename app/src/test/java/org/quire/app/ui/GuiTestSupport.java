@@ -32,9 +32,9 @@ abstract class GuiTestSupport {
             System.out.println("SKIPPED: workbench GUI tests need a display; run them with "
                     + "'xvfb-run -a mvn -B -o test -pl app -am'");
         }
-        Assumptions.assumeFalse(GraphicsEnvironment.isHeadless(),
-                "SKIPPED: no display (GraphicsEnvironment.isHeadless()); run the GUI tests under xvfb-run");
-        Workbench.installLookAndFeel(WorkbenchPrefs.Theme.LIGHT);
+        if (!GraphicsEnvironment.isHeadless()) {
+            Workbench.installLookAndFeel(WorkbenchPrefs.Theme.LIGHT);
+        }
     }
 
     /** @return the Monte Carlo runner the workbench gets; none unless a test says otherwise */
@@ -44,6 +44,8 @@ abstract class GuiTestSupport {
 
     @BeforeEach
     void buildFrame() throws Exception {
+        Assumptions.assumeFalse(GraphicsEnvironment.isHeadless(),
+                "SKIPPED: no display (GraphicsEnvironment.isHeadless()); run the GUI tests under xvfb-run");
         node = Preferences.userRoot().node("org/quire/test/workbench-" + System.nanoTime());
         node.putInt("autosaveMinutes", 0);
         node.put("windowBounds", "0,0,1440,900");
@@ -56,6 +58,9 @@ abstract class GuiTestSupport {
 
     @AfterEach
     void disposeFrame() throws Exception {
+        if (frame == null) {
+            return;
+        }
         onEdt(() -> {
             for (BudgetEditor e : frame.editors()) {
                 frame.forceClose(e);
