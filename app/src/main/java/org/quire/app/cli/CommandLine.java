@@ -26,6 +26,8 @@ public final class CommandLine {
             "      the Monte Carlo method (JCGM 101) and its comparison with the GUM result",
             "  " + BenchCommand.USAGE,
             "      Monte Carlo throughput on the Tarrow Vale benchmark budget",
+            "  quire open [--review] FILE",
+            "      open a budget in the workbench (read-only with --review); no arguments opens the demo",
             "  quire version",
             "  quire help",
             "");

@@ -1,0 +1,93 @@
+package org.quire.app.ui;
+
+import java.awt.Component;
+import javax.swing.JSplitPane;
+
+/**
+ * The three hideable panes (navigator, inspector, problems) and their divider positions, remembered in the
+ * preferences as "navigatorWidth,inspectorWidth,problemsHeight,navigatorShown,inspectorShown,problemsShown".
+ */
+final class PaneLayout {
+    /** A pane that can be hidden. */
+    enum Pane { NAVIGATOR, INSPECTOR, PROBLEMS }
+
+    private final JSplitPane main;
+    private final JSplitPane centre;
+    private final JSplitPane vertical;
+    private final WorkbenchPrefs prefs;
+    private int navigatorWidth = 230;
+    private int inspectorWidth = 340;
+    private int problemsHeight = 130;
+
+    PaneLayout(JSplitPane main, JSplitPane centre, JSplitPane vertical, WorkbenchPrefs prefs) {
+        this.main = main;
+        this.centre = centre;
+        this.vertical = vertical;
+        this.prefs = prefs;
+        for (JSplitPane s : new JSplitPane[] {main, centre, vertical}) {
+            s.setContinuousLayout(true);
+            s.setOneTouchExpandable(false);
+        }
+    }
+
+    boolean isShown(Pane p) {
+        return component(p).isVisible();
+    }
+
+    void setShown(Pane p, boolean on) {
+        remember();
+        component(p).setVisible(on);
+        apply();
+    }
+
+    private Component component(Pane p) {
+        switch (p) {
+            case NAVIGATOR: return main.getLeftComponent();
+            case INSPECTOR: return centre.getRightComponent();
+            default: return vertical.getBottomComponent();
+        }
+    }
+
+    private void remember() {
+        if (isShown(Pane.NAVIGATOR) && main.getDividerLocation() > 0) {
+            navigatorWidth = main.getDividerLocation();
+        }
+        if (isShown(Pane.INSPECTOR) && centre.getWidth() > 0) {
+            inspectorWidth = centre.getWidth() - centre.getDividerLocation();
+        }
+        if (isShown(Pane.PROBLEMS) && vertical.getHeight() > 0) {
+            problemsHeight = vertical.getHeight() - vertical.getDividerLocation();
+        }
+    }
+
+    private void apply() {
+        main.setDividerLocation(navigatorWidth);
+        centre.setDividerLocation(Math.max(200, centre.getWidth() - inspectorWidth));
+        vertical.setDividerLocation(Math.max(200, vertical.getHeight() - problemsHeight));
+        main.revalidate();
+    }
+
+    void restore() {
+        String[] v = prefs.paneLayout().split(",");
+        if (v.length == 6) {
+            try {
+                navigatorWidth = Integer.parseInt(v[0]);
+                inspectorWidth = Integer.parseInt(v[1]);
+                problemsHeight = Integer.parseInt(v[2]);
+                main.getLeftComponent().setVisible(Boolean.parseBoolean(v[3]));
+                centre.getRightComponent().setVisible(Boolean.parseBoolean(v[4]));
+                vertical.getBottomComponent().setVisible(Boolean.parseBoolean(v[5]));
+            } catch (NumberFormatException e) {
+                // a damaged entry: the default layout is used
+            }
+        }
+        main.validate();
+        apply();
+    }
+
+    void save() {
+        remember();
+        prefs.setPaneLayout(navigatorWidth + "," + inspectorWidth + "," + problemsHeight + "," + isShown(Pane.NAVIGATOR)
+                + "," + isShown(Pane.INSPECTOR) + "," + isShown(Pane.PROBLEMS));
+    }
+}

@@ -1,0 +1,166 @@
+package org.quire.app.ui.inspector;
+
+import java.awt.BasicStroke;
+import java.awt.Dimension;
+import java.awt.Graphics;
+import java.awt.Graphics2D;
+import java.awt.RenderingHints;
+import java.awt.geom.Path2D;
+import javax.swing.JComponent;
+import org.quire.app.ui.Colors;
+import org.quire.app.ui.Fmt;
+import org.quire.engine.budget.Distribution;
+
+/**
+ * A small picture of an input's distribution: its shape drawn over estimate ± 4 u (or a little beyond its
+ * limits), with the estimate marked. A drawing of the shape only; no figure of the budget comes from here.
+ */
+final class DistributionPlot extends JComponent {
+    private Distribution d;
+
+    DistributionPlot() {
+        setPreferredSize(new Dimension(280, 110));
+        setName("distributionPlot");
+    }
+
+    void show(Distribution d) {
+        this.d = d;
+        repaint();
+    }
+
+    @Override
+    protected void paintComponent(Graphics g0) {
+        Graphics2D g = (Graphics2D) g0.create();
+        g.setRenderingHint(RenderingHints.KEY_ANTIALIASING, RenderingHints.VALUE_ANTIALIAS_ON);
+        g.setColor(Colors.get("Quire.plot.background"));
+        g.fillRect(0, 0, getWidth(), getHeight());
+        if (d == null) {
+            g.dispose();
+            return;
+        }
+        int left = 8;
+        int right = getWidth() - 8;
+        int top = 8;
+        int bottom = getHeight() - 20;
+        double mean = d.mean();
+        double u = d.standardUncertainty();
+        double lo;
+        double hi;
+        double[] lim = limits(d);
+        if (lim != null) {
+            double pad = 0.15 * (lim[1] - lim[0]);
+            lo = lim[0] - pad;
+            hi = lim[1] + pad;
+        } else if (d instanceof Distribution.Exponential) {
+            lo = -0.2 * mean;
+            hi = 5 * mean;
+        } else if (u > 0) {
+            lo = mean - 4 * u;
+            hi = mean + 4 * u;
+        } else {
+            lo = mean - 1;
+            hi = mean + 1;
+        }
+        Path2D.Double path = new Path2D.Double();
+        int n = 240;
+        double[] ys = new double[n + 1];
+        double max = 0;
+        for (int i = 0; i <= n; i++) {
+            ys[i] = shape(d, lo + (hi - lo) * i / n);
+            max = Math.max(max, ys[i]);
+        }
+        g.setColor(Colors.get("Quire.plot.axis"));
+        g.drawLine(left, bottom, right, bottom);
+        if (d instanceof Distribution.Constant || max == 0) {
+            int x = (left + right) / 2;
+            g.setColor(Colors.get("Quire.plot.line"));
+            g.setStroke(new BasicStroke(2f));
+            g.drawLine(x, top, x, bottom);
+        } else {
+            path.moveTo(left, bottom);
+            for (int i = 0; i <= n; i++) {
+                path.lineTo(left + (right - left) * (double) i / n, bottom - (bottom - top) * ys[i] / max);
+            }
+            path.lineTo(right, bottom);
+            path.closePath();
+            g.setColor(Colors.get("Quire.plot.fill"));
+            g.fill(path);
+            g.setColor(Colors.get("Quire.plot.line"));
+            g.setStroke(new BasicStroke(1.5f));
+            g.draw(path);
+            int xm = left + (int) Math.round((right - left) * (mean - lo) / (hi - lo));
+            g.setStroke(new BasicStroke(1f, BasicStroke.CAP_BUTT, BasicStroke.JOIN_MITER, 10, new float[] {3, 3}, 0));
+            g.drawLine(xm, top, xm, bottom);
+        }
+        g.setColor(Colors.get("Label.disabledForeground"));
+        String label = d.shape() + "   x = " + Fmt.num(mean) + "   u = " + Fmt.num(u);
+        g.drawString(label, left, getHeight() - 5);
+        g.dispose();
+    }
+
+    private static double[] limits(Distribution d) {
+        if (d instanceof Distribution.Rectangular) {
+            return new double[] {((Distribution.Rectangular) d).lower(), ((Distribution.Rectangular) d).upper()};
+        }
+        if (d instanceof Distribution.Triangular) {
+            return new double[] {((Distribution.Triangular) d).lower(), ((Distribution.Triangular) d).upper()};
+        }
+        if (d instanceof Distribution.Arcsine) {
+            return new double[] {((Distribution.Arcsine) d).lower(), ((Distribution.Arcsine) d).upper()};
+        }
+        if (d instanceof Distribution.Trapezoidal) {
+            return new double[] {((Distribution.Trapezoidal) d).lower(), ((Distribution.Trapezoidal) d).upper()};
+        }
+        if (d instanceof Distribution.CurvilinearTrapezoid) {
+            Distribution.CurvilinearTrapezoid c = (Distribution.CurvilinearTrapezoid) d;
+            return new double[] {c.lower() - c.d(), c.upper() + c.d()};
+        }
+        return null;
+    }
+
+    /** The height of the shape at x, up to a constant factor: for drawing only. */
+    private static double shape(Distribution d, double x) {
+        if (d instanceof Distribution.Normal) {
+            Distribution.Normal n = (Distribution.Normal) d;
+            double z = (x - n.mean()) / n.sd();
+            return Math.exp(-0.5 * z * z);
+        }
+        if (d instanceof Distribution.StudentT) {
+            Distribution.StudentT t = (Distribution.StudentT) d;
+            double z = (x - t.location()) / t.scale();
+            return Math.pow(1 + z * z / t.dof(), -(t.dof() + 1) / 2);
+        }
+        if (d instanceof Distribution.Exponential) {
+            return x < 0 ? 0 : Math.exp(-x / d.mean());
+        }
+        if (d instanceof Distribution.Rectangular) {
+            Distribution.Rectangular r = (Distribution.Rectangular) d;
+            return x >= r.lower() && x <= r.upper() ? 1 : 0;
+        }
+        if (d instanceof Distribution.Triangular) {
+            Distribution.Triangular t = (Distribution.Triangular) d;
+            double h = 0.5 * (t.upper() - t.lower());
+            return Math.max(0, 1 - Math.abs(x - t.mean()) / h);
+        }
+        if (d instanceof Distribution.Arcsine) {
+            Distribution.Arcsine a = (Distribution.Arcsine) d;
+            double h = 0.5 * (a.upper() - a.lower());
+            double z = (x - a.mean()) / h;
+            return Math.abs(z) >= 0.995 ? (Math.abs(z) <= 1 ? 10 : 0) : 1 / Math.sqrt(1 - z * z);
+        }
+        if (d instanceof Distribution.Trapezoidal) {
+            Distribution.Trapezoidal t = (Distribution.Trapezoidal) d;
+            double h = 0.5 * (t.upper() - t.lower());
+            double top = t.beta() * h;
+            double z = Math.abs(x - t.mean());
+            return z <= top ? 1 : z >= h ? 0 : (h - z) / (h - top);
+        }
+        if (d instanceof Distribution.CurvilinearTrapezoid) {
+            Distribution.CurvilinearTrapezoid c = (Distribution.CurvilinearTrapezoid) d;
+            double h = 0.5 * (c.upper() - c.lower());
+            double z = Math.abs(x - c.mean());
+            return z <= h - c.d() ? 1 : z >= h + c.d() ? 0 : Math.log((h + c.d()) / z) / Math.log((h + c.d()) / (h - c.d()));
+        }
+        return 0;
+    }
+}

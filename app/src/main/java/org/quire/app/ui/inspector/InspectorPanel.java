@@ -1,0 +1,89 @@
+package org.quire.app.ui.inspector;
+
+import java.awt.BorderLayout;
+import java.awt.CardLayout;
+import javax.swing.BorderFactory;
+import javax.swing.JLabel;
+import javax.swing.JPanel;
+import javax.swing.JScrollPane;
+import javax.swing.ScrollPaneConstants;
+import org.quire.app.ui.Fmt;
+import org.quire.app.ui.notebook.BudgetEditor;
+import org.quire.engine.budget.Budget;
+import org.quire.engine.budget.EvaluationSettings;
+import org.quire.engine.budget.InputQuantity;
+
+/**
+ * The pane on the right: every option of the item selected in the active editor (an input), or an overview of
+ * the budget when nothing is selected. One inspector per editor, shown when the editor is active.
+ */
+public final class InspectorPanel extends JPanel {
+    private final BudgetEditor editor;
+    private final CardLayout cards = new CardLayout();
+    private final JLabel overview = new JLabel();
+    private final InputInspector input;
+
+    public InspectorPanel(BudgetEditor editor) {
+        this.editor = editor;
+        setLayout(cards);
+        setName("inspector");
+        input = new InputInspector(editor);
+        JPanel ov = new JPanel(new BorderLayout());
+        overview.setVerticalAlignment(JLabel.TOP);
+        ov.add(overview, BorderLayout.NORTH);
+        ov.setBorder(BorderFactory.createEmptyBorder(8, 8, 8, 8));
+        add(ov, "overview");
+        JPanel wrap = new WidthTracking();
+        wrap.add(input, BorderLayout.NORTH);
+        wrap.setBorder(BorderFactory.createEmptyBorder(8, 8, 8, 8));
+        JScrollPane sp = new JScrollPane(wrap, ScrollPaneConstants.VERTICAL_SCROLLBAR_AS_NEEDED,
+                ScrollPaneConstants.HORIZONTAL_SCROLLBAR_NEVER);
+        sp.setBorder(BorderFactory.createEmptyBorder());
+        sp.getVerticalScrollBar().setUnitIncrement(20);
+        add(sp, "input");
+        editor.addSelectionListener(this::selectionChanged);
+        editor.document().addListener((doc, before, after, cause) -> selectionChanged(editor.selectedInput()));
+        selectionChanged(null);
+    }
+
+    private void selectionChanged(String name) {
+        Budget b = editor.document().budget();
+        InputQuantity q = name == null ? null : b.input(name);
+        if (q == null) {
+            EvaluationSettings s = b.settings();
+            String text = ("<html><b>" + esc(b.title().isEmpty() ? editor.document().name() : b.title()) + "</b><br><br>"
+                    + (editor.document().file() == null ? "Not saved to a file yet." : esc(String.valueOf(editor.document().file())))
+                    + "<br><br>" + b.inputs().size() + " inputs, " + b.outputs().size() + " outputs, "
+                    + b.correlations().size() + " correlations<br>"
+                    + (s.hasFixedCoverageFactor() ? "k = " + Fmt.num(s.coverageFactor())
+                            : "p = " + Fmt.probability(s.coverageProbability()))
+                    + ", " + s.significantDigits() + " significant digits<br>Monte Carlo: " + s.trials()
+                    + " trials, seed " + s.seed()
+                    + "<br><br>Select an input in the Inputs table to see and change all of its options here.</html>");
+            if (!text.equals(overview.getText())) {
+                overview.setText(text);
+            }
+            cards.show(this, "overview");
+        } else {
+            input.show(q);
+            cards.show(this, "input");
+        }
+    }
+
+    /** A panel that takes the width of the scroll pane's viewport, so the inspector never clips on the right. */
+    private static final class WidthTracking extends JPanel implements javax.swing.Scrollable {
+        WidthTracking() {
+            super(new BorderLayout());
+        }
+
+        @Override public java.awt.Dimension getPreferredScrollableViewportSize() { return getPreferredSize(); }
+        @Override public int getScrollableUnitIncrement(java.awt.Rectangle r, int o, int d) { return 20; }
+        @Override public int getScrollableBlockIncrement(java.awt.Rectangle r, int o, int d) { return r.height; }
+        @Override public boolean getScrollableTracksViewportWidth() { return true; }
+        @Override public boolean getScrollableTracksViewportHeight() { return false; }
+    }
+
+    private static String esc(String s) {
+        return s.replace("&", "&amp;").replace("<", "&lt;");
+    }
+}

@@ -1,0 +1,122 @@
+package org.quire.app.ui.inspector;
+
+import java.awt.BorderLayout;
+import java.awt.Dimension;
+import java.awt.FlowLayout;
+import java.awt.GridLayout;
+import java.util.function.Consumer;
+import javax.swing.JButton;
+import javax.swing.JLabel;
+import javax.swing.JPanel;
+import javax.swing.JScrollPane;
+import javax.swing.JTextField;
+import org.quire.app.ui.Fmt;
+import org.quire.engine.budget.TypeA;
+
+/**
+ * A Type A evaluation: the readings grid (paste from a spreadsheet) with the engine's statistics of them, or a
+ * summary (mean, s, n), optionally with a pooled standard deviation from an earlier study.
+ */
+final class TypeAForm extends JPanel {
+    private final ReadingsGrid grid = new ReadingsGrid();
+    private final JLabel stats = new JLabel(" ");
+    private final JTextField mean = new JTextField(6);
+    private final JTextField s = new JTextField(6);
+    private final JTextField n = new JTextField(4);
+    private final JTextField pooledS = new JTextField(6);
+    private final JTextField pooledDof = new JTextField(4);
+    private final JButton useReadings = new JButton("Use readings");
+    private final JButton useSummary = new JButton("Use summary");
+
+    TypeAForm(Consumer<TypeA> apply, Consumer<String> problem) {
+        super(new BorderLayout(4, 4));
+        JScrollPane sp = new JScrollPane(grid);
+        sp.setPreferredSize(new Dimension(200, 150));
+        JPanel top = new JPanel(new BorderLayout(2, 2));
+        top.add(new JLabel("Readings (paste a column from a spreadsheet with Ctrl+V)"), BorderLayout.NORTH);
+        top.add(sp, BorderLayout.CENTER);
+        top.add(stats, BorderLayout.SOUTH);
+        add(top, BorderLayout.NORTH);
+        JPanel summary = new JPanel(new GridLayout(0, 2, 4, 2));
+        summary.setBorder(javax.swing.BorderFactory.createTitledBorder("Or a summary of the observations"));
+        summary.add(new JLabel("Mean"));
+        summary.add(mean);
+        summary.add(new JLabel("s of one observation"));
+        summary.add(s);
+        summary.add(new JLabel("Observations n"));
+        summary.add(n);
+        summary.add(new JLabel("Pooled s (optional)"));
+        summary.add(pooledS);
+        summary.add(new JLabel("\u03bd of pooled s"));
+        summary.add(pooledDof);
+        add(summary, BorderLayout.CENTER);
+        JPanel buttons = new JPanel(new FlowLayout(FlowLayout.LEFT, 4, 0));
+        buttons.add(useReadings);
+        buttons.add(useSummary);
+        add(buttons, BorderLayout.SOUTH);
+        grid.addPropertyChangeListener("pasteProblem", e -> problem.accept((String) e.getNewValue()));
+        useReadings.addActionListener(e -> {
+            try {
+                TypeA a = TypeA.ofReadings(grid.readings());
+                a = withPooled(a);
+                problem.accept(null);
+                apply.accept(a);
+            } catch (IllegalArgumentException x) {
+                problem.accept(x.getMessage());
+            }
+        });
+        useSummary.addActionListener(e -> {
+            try {
+                double m = Fmt.parse(mean.getText());
+                int count = (int) Fmt.parse(n.getText());
+                TypeA a = s.getText().isBlank() ? TypeA.ofMean(m, count)
+                        : TypeA.ofSummary(m, Fmt.parse(s.getText()), count);
+                a = withPooled(a);
+                problem.accept(null);
+                apply.accept(a);
+            } catch (IllegalArgumentException x) {
+                problem.accept(x.getMessage());
+            }
+        });
+    }
+
+    private TypeA withPooled(TypeA a) {
+        if (pooledS.getText().isBlank() && pooledDof.getText().isBlank()) {
+            return a;
+        }
+        return a.withPooled(Fmt.parse(pooledS.getText()), Fmt.parse(pooledDof.getText()));
+    }
+
+    /** Shows an evaluation; null for an empty form (switching from Type B). */
+    void show(TypeA a, double estimate) {
+        if (a == null) {
+            grid.setReadings(null);
+            stats.setText("Enter readings or a summary, then press Use readings or Use summary.");
+            mean.setText(Fmt.num(estimate));
+            s.setText("");
+            n.setText("");
+            pooledS.setText("");
+            pooledDof.setText("");
+            return;
+        }
+        grid.setReadings(a.readings());
+        stats.setText("<html>n = " + a.count() + ", mean = " + Fmt.num(a.estimate()) + ", s = "
+                + Fmt.num(a.standardDeviation()) + "<br>u = s/\u221an = " + Fmt.num(a.standardUncertainty())
+                + ", \u03bd = " + Fmt.dof(a.dof()) + (a.isPooled() ? " (pooled s = " + Fmt.num(a.pooledStandardDeviation())
+                + ")" : "") + "</html>");
+        mean.setText(Fmt.num(a.estimate()));
+        s.setText(Fmt.num(a.standardDeviation()));
+        n.setText(String.valueOf(a.count()));
+        pooledS.setText(a.isPooled() ? Fmt.num(a.pooledStandardDeviation()) : "");
+        pooledDof.setText(a.isPooled() ? Fmt.dof(a.dof()) : "");
+    }
+
+    void setEditable(boolean on) {
+        grid.setEditableGrid(on);
+        for (JTextField f : new JTextField[] {mean, s, n, pooledS, pooledDof}) {
+            f.setEditable(on);
+        }
+        useReadings.setEnabled(on);
+        useSummary.setEnabled(on);
+    }
+}

@@ -1,0 +1,83 @@
+package org.quire.app.ui.montecarlo;
+
+import java.awt.BasicStroke;
+import java.awt.Dimension;
+import java.awt.Graphics;
+import java.awt.Graphics2D;
+import java.awt.RenderingHints;
+import javax.swing.JComponent;
+import org.quire.app.ui.Colors;
+import org.quire.app.ui.Fmt;
+
+/**
+ * Draws the engine's histogram of an output's model values, with the Monte Carlo coverage interval and the GUM
+ * interval y ± U marked. Drawing only: bins and intervals come from the engine.
+ */
+final class HistogramPlot extends JComponent {
+    private MonteCarloOutcome.OutputOutcome outcome;
+    private double gumLow = Double.NaN;
+    private double gumHigh = Double.NaN;
+
+    HistogramPlot() {
+        setPreferredSize(new Dimension(420, 170));
+    }
+
+    void show(MonteCarloOutcome.OutputOutcome o, double gumLow, double gumHigh) {
+        this.outcome = o;
+        this.gumLow = gumLow;
+        this.gumHigh = gumHigh;
+        repaint();
+    }
+
+    @Override
+    protected void paintComponent(Graphics g0) {
+        Graphics2D g = (Graphics2D) g0.create();
+        g.setRenderingHint(RenderingHints.KEY_ANTIALIASING, RenderingHints.VALUE_ANTIALIAS_ON);
+        g.setColor(Colors.get("Quire.plot.background"));
+        g.fillRect(0, 0, getWidth(), getHeight());
+        if (outcome == null) {
+            g.dispose();
+            return;
+        }
+        MonteCarloOutcome.Histogram h = outcome.histogram();
+        long[] counts = h.counts();
+        long max = 1;
+        for (long c : counts) {
+            max = Math.max(max, c);
+        }
+        int left = 10;
+        int right = getWidth() - 10;
+        int top = 10;
+        int bottom = getHeight() - 22;
+        double span = h.upper() - h.lower();
+        g.setColor(Colors.get("Quire.plot.fill"));
+        for (int i = 0; i < counts.length; i++) {
+            int x0 = left + (int) Math.round((right - left) * (double) i / counts.length);
+            int x1 = left + (int) Math.round((right - left) * (double) (i + 1) / counts.length);
+            int y = bottom - (int) Math.round((bottom - top) * (double) counts[i] / max);
+            g.fillRect(x0, y, Math.max(1, x1 - x0), bottom - y);
+        }
+        g.setColor(Colors.get("Quire.plot.axis"));
+        g.drawLine(left, bottom, right, bottom);
+        g.drawString(Fmt.short4(h.lower()), left, bottom + 15);
+        String hi = Fmt.short4(h.upper());
+        g.drawString(hi, right - g.getFontMetrics().stringWidth(hi), bottom + 15);
+        mark(g, outcome.lower(), h.lower(), span, left, right, top, bottom, "Quire.plot.mcInterval", false);
+        mark(g, outcome.upper(), h.lower(), span, left, right, top, bottom, "Quire.plot.mcInterval", false);
+        mark(g, gumLow, h.lower(), span, left, right, top, bottom, "Quire.plot.gumInterval", true);
+        mark(g, gumHigh, h.lower(), span, left, right, top, bottom, "Quire.plot.gumInterval", true);
+        g.dispose();
+    }
+
+    private void mark(Graphics2D g, double v, double lo, double span, int left, int right, int top, int bottom,
+            String colour, boolean dashed) {
+        if (Double.isNaN(v)) {
+            return;
+        }
+        int x = left + (int) Math.round((right - left) * (v - lo) / span);
+        g.setColor(Colors.get(colour));
+        g.setStroke(dashed ? new BasicStroke(1.5f, BasicStroke.CAP_BUTT, BasicStroke.JOIN_MITER, 10,
+                new float[] {5, 4}, 0) : new BasicStroke(1.5f));
+        g.drawLine(x, top, x, bottom);
+    }
+}

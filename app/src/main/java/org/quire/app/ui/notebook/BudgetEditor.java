@@ -1,0 +1,269 @@
+package org.quire.app.ui.notebook;
+
+import java.awt.BorderLayout;
+import java.awt.EventQueue;
+import java.awt.FlowLayout;
+import java.awt.Rectangle;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Optional;
+import java.util.concurrent.CopyOnWriteArrayList;
+import java.util.function.Consumer;
+import java.util.function.UnaryOperator;
+import javax.swing.BorderFactory;
+import javax.swing.Box;
+import javax.swing.BoxLayout;
+import javax.swing.JButton;
+import javax.swing.JLabel;
+import javax.swing.JPanel;
+import javax.swing.JScrollPane;
+import javax.swing.Scrollable;
+import javax.swing.SwingConstants;
+import org.quire.app.ui.Colors;
+import org.quire.app.ui.document.BudgetDocument;
+import org.quire.app.ui.document.Problem;
+import org.quire.app.ui.document.Recalculation;
+import org.quire.app.ui.document.Recalculator;
+import org.quire.app.ui.montecarlo.MonteCarloRunner;
+import org.quire.app.ui.montecarlo.MonteCarloSection;
+import org.quire.engine.budget.Budget;
+import org.quire.engine.model.FunctionLibrary;
+
+/**
+ * The editor of one open budget: a notebook of collapsible sections with an outline to jump between them, a
+ * banner when the budget is a review copy, and the background recalculation that keeps the results current.
+ */
+public final class BudgetEditor extends JPanel implements EditorContext {
+    private final BudgetDocument doc;
+    private final FunctionLibrary library;
+    private final Recalculator recalculator;
+    private final List<NotebookSection> sections = new ArrayList<>();
+    private final PurposeSection purpose;
+    private final ModelSection model;
+    private final InputsSection inputs;
+    private final CorrelationsSection correlations;
+    private final ResultsSection results;
+    private final MonteCarloSection monteCarlo;
+    private final JLabel banner = new JLabel();
+    private final Page page = new Page();
+    private final JScrollPane scroll = new JScrollPane(page);
+    private final List<Consumer<Recalculation>> recalcListeners = new CopyOnWriteArrayList<>();
+    private final List<Consumer<String>> selectionListeners = new CopyOnWriteArrayList<>();
+    private final List<StatusListener> statusListeners = new CopyOnWriteArrayList<>();
+    private Recalculation latest;
+    private String selectedInput;
+
+    /** Hears of status messages (refused values and the like). */
+    public interface StatusListener {
+        void status(String message, boolean error);
+    }
+
+    public BudgetEditor(BudgetDocument doc, FunctionLibrary library, Optional<MonteCarloRunner> runner) {
+        super(new BorderLayout());
+        this.doc = doc;
+        this.library = library;
+        setName("editor:" + doc.name());
+        purpose = new PurposeSection(this);
+        model = new ModelSection(this);
+        inputs = new InputsSection(this);
+        correlations = new CorrelationsSection(this);
+        results = new ResultsSection(this);
+        monteCarlo = new MonteCarloSection(runner);
+        page.setLayout(new BoxLayout(page, BoxLayout.Y_AXIS));
+        JPanel outline = new JPanel(new FlowLayout(FlowLayout.LEFT, 2, 2));
+        outline.add(new JLabel("Go to:"));
+        for (Section s : List.of(purpose, model, inputs, correlations, results, monteCarlo)) {
+            NotebookSection ns = new NotebookSection(s);
+            sections.add(ns);
+            page.add(ns);
+            JButton jump = new JButton(s.title());
+            jump.putClientProperty("JButton.buttonType", "borderless");
+            jump.setForeground(Colors.get("Quire.outline.foreground"));
+            jump.addActionListener(e -> reveal(ns));
+            outline.add(jump);
+        }
+        page.add(Box.createVerticalGlue());
+        scroll.getVerticalScrollBar().setUnitIncrement(24);
+        scroll.setBorder(BorderFactory.createEmptyBorder());
+        banner.setName("reviewBanner");
+        banner.setOpaque(true);
+        banner.setHorizontalAlignment(SwingConstants.CENTER);
+        banner.setBackground(Colors.get("Quire.banner.background"));
+        banner.setForeground(Colors.get("Quire.banner.foreground"));
+        banner.setBorder(BorderFactory.createEmptyBorder(6, 8, 6, 8));
+        banner.setText("Review copy: this budget is open read-only. Nothing in it can be changed.");
+        JPanel north = new JPanel(new BorderLayout());
+        north.add(banner, BorderLayout.NORTH);
+        north.add(outline, BorderLayout.SOUTH);
+        outline.setBorder(BorderFactory.createMatteBorder(0, 0, 1, 0, Colors.get("Quire.section.rule")));
+        add(north, BorderLayout.NORTH);
+        add(scroll, BorderLayout.CENTER);
+        recalculator = new Recalculator(library, EventQueue::invokeLater, this::recalculated);
+        doc.addListener(new BudgetDocument.Listener() {
+            @Override
+            public void budgetChanged(BudgetDocument d, Budget before, Budget after, String cause) {
+                showBudget(after);
+                recalculator.request(after);
+            }
+
+            @Override
+            public void documentStateChanged(BudgetDocument d) {
+                applyReadOnly();
+            }
+        });
+        showBudget(doc.budget());
+        applyReadOnly();
+        recalculator.requestNow(doc.budget());
+    }
+
+    private void showBudget(Budget b) {
+        for (NotebookSection s : sections) {
+            s.section().budgetChanged(b);
+        }
+        if (selectedInput != null && b.input(selectedInput) == null) {
+            selectInput(null);
+        } else if (selectedInput != null) {
+            selectionListeners.forEach(l -> l.accept(selectedInput));
+        }
+    }
+
+    private void applyReadOnly() {
+        boolean ro = doc.isReadOnly();
+        banner.setVisible(ro);
+        for (NotebookSection s : sections) {
+            s.section().readOnlyChanged(ro);
+        }
+    }
+
+    private void recalculated(Recalculation r) {
+        if (!r.budget().equals(doc.budget())) {
+            return;
+        }
+        latest = r;
+        for (NotebookSection s : sections) {
+            s.section().recalculated(r);
+            long errors = r.problems().stream().filter(p -> p.severity() == Problem.Severity.ERROR
+                    && belongs(p, s.section())).count();
+            s.setNote(errors == 0 ? "" : errors + (errors == 1 ? " error" : " errors"), errors > 0);
+        }
+        recalcListeners.forEach(l -> l.accept(r));
+    }
+
+    private boolean belongs(Problem p, Section s) {
+        switch (p.area()) {
+            case MODEL: return s == model;
+            case INPUTS: return s == inputs;
+            case CORRELATIONS: return s == correlations;
+            default: return s == results;
+        }
+    }
+
+    /** Scrolls to a section and unfolds it. */
+    private void reveal(NotebookSection ns) {
+        ns.setOpen(true);
+        page.revalidate();
+        EventQueue.invokeLater(() -> page.scrollRectToVisible(new Rectangle(0, ns.getY(), 10, scroll.getViewport().getHeight())));
+    }
+
+    /** Scrolls to the place of a problem (the model line, the inputs, the correlations or the results). */
+    public void reveal(Problem p) {
+        Section target;
+        switch (p.area()) {
+            case MODEL: target = model; break;
+            case INPUTS: target = inputs; break;
+            case CORRELATIONS: target = correlations; break;
+            default: target = results;
+        }
+        for (NotebookSection ns : sections) {
+            if (ns.section() == target) {
+                reveal(ns);
+            }
+        }
+        if (p.area() == Problem.Area.MODEL) {
+            model.reveal(p);
+        }
+    }
+
+    /** Folds or unfolds every section. */
+    public void setAllOpen(boolean open) {
+        sections.forEach(s -> s.setOpen(open));
+        page.revalidate();
+    }
+
+    @Override public BudgetDocument document() { return doc; }
+    @Override public FunctionLibrary library() { return library; }
+
+    @Override
+    public boolean edit(String name, String mergeKey, UnaryOperator<Budget> change) {
+        try {
+            return doc.apply(name, mergeKey, change);
+        } catch (IllegalArgumentException | IllegalStateException e) {
+            status(e.getMessage(), true);
+            return false;
+        }
+    }
+
+    @Override
+    public void status(String message, boolean error) {
+        statusListeners.forEach(l -> l.status(message, error));
+        if (error) {
+            java.awt.Toolkit.getDefaultToolkit().beep();
+        }
+    }
+
+    @Override
+    public void selectInput(String name) {
+        selectedInput = name;
+        if (name != null) {
+            inputs.select(name);
+        }
+        selectionListeners.forEach(l -> l.accept(name));
+    }
+
+    public String selectedInput() { return selectedInput; }
+
+    public void addRecalculationListener(Consumer<Recalculation> l) { recalcListeners.add(l); }
+    public void addSelectionListener(Consumer<String> l) { selectionListeners.add(l); }
+    public void addStatusListener(StatusListener l) { statusListeners.add(l); }
+
+    /** @return the engine's latest answer for the present budget, or null before the first */
+    public Recalculation latest() { return latest; }
+
+    /** Starts a Monte Carlo run, when one can start. */
+    public void runMonteCarlo() { monteCarlo.start(); }
+
+    /** Stops the background work of this editor. */
+    public void dispose() {
+        monteCarlo.stop();
+        recalculator.close();
+    }
+
+    // views for tests and screenshots
+    public javax.swing.JTable inputsTable() { return inputs.table(); }
+    public javax.swing.JTextPane modelEditor() { return model.editor(); }
+    public javax.swing.JComponent resultsPanel() { return results.body(); }
+    public javax.swing.JComponent correlationsPanel() { return correlations.body(); }
+    /** @return the summary text of an output's result, or null when none is shown */
+    public String resultSummary(String output) {
+        OutputResultPanel p = results.panel(output);
+        return p == null ? null : p.summaryText();
+    }
+
+    /** Scrolls to the section titled {@code title}. */
+    public void revealSection(String title) {
+        for (NotebookSection ns : sections) {
+            if (ns.section().title().equals(title)) {
+                reveal(ns);
+            }
+        }
+    }
+
+    /** The scrolling page: tracks the viewport width so the sections reflow. */
+    private static final class Page extends JPanel implements Scrollable {
+        @Override public java.awt.Dimension getPreferredScrollableViewportSize() { return getPreferredSize(); }
+        @Override public int getScrollableUnitIncrement(Rectangle r, int o, int d) { return 24; }
+        @Override public int getScrollableBlockIncrement(Rectangle r, int o, int d) { return r.height - 24; }
+        @Override public boolean getScrollableTracksViewportWidth() { return true; }
+        @Override public boolean getScrollableTracksViewportHeight() { return false; }
+    }
+}

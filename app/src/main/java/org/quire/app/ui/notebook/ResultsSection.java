@@ -1,0 +1,168 @@
+package org.quire.app.ui.notebook;
+
+import java.awt.BorderLayout;
+import java.awt.FlowLayout;
+import java.util.LinkedHashMap;
+import java.util.Map;
+import javax.swing.BoxLayout;
+import javax.swing.ButtonGroup;
+import javax.swing.JCheckBox;
+import javax.swing.JComponent;
+import javax.swing.JLabel;
+import javax.swing.JPanel;
+import javax.swing.JRadioButton;
+import javax.swing.JSpinner;
+import javax.swing.JTextField;
+import javax.swing.SpinnerNumberModel;
+import org.quire.app.ui.Colors;
+import org.quire.app.ui.Fmt;
+import org.quire.app.ui.document.Recalculation;
+import org.quire.engine.budget.Budget;
+import org.quire.engine.budget.EvaluationSettings;
+import org.quire.engine.gum.GumResult;
+import org.quire.engine.gum.OutputResult;
+
+/** The GUM results of every output, recalculated as the budget changes, with the budget's coverage settings. */
+final class ResultsSection implements Section {
+    private final EditorContext ctx;
+    private final JPanel body = new JPanel(new BorderLayout(4, 4));
+    private final JPanel outputs = new JPanel();
+    private final Map<String, OutputResultPanel> panels = new LinkedHashMap<>();
+    private final JLabel state = new JLabel(" ");
+    private final JRadioButton byP = new JRadioButton("Coverage probability");
+    private final JRadioButton byK = new JRadioButton("Fixed coverage factor k");
+    private final JTextField p = new JTextField(6);
+    private final JTextField k = new JTextField(4);
+    private final JSpinner digits = new JSpinner(new SpinnerNumberModel(2, 1, 4, 1));
+    private final JCheckBox higher = new JCheckBox("Higher-order terms");
+    private final JCheckBox truncate = new JCheckBox("Truncate \u03bd_eff");
+    private boolean updating;
+    private GumResult last;
+
+    ResultsSection(EditorContext ctx) {
+        this.ctx = ctx;
+        p.setName("coverageProbability");
+        digits.setName("significantDigits");
+        JPanel settings = new JPanel(new FlowLayout(FlowLayout.LEFT, 6, 0));
+        ButtonGroup g = new ButtonGroup();
+        g.add(byP);
+        g.add(byK);
+        settings.add(byP);
+        settings.add(p);
+        settings.add(new JLabel("%"));
+        settings.add(byK);
+        settings.add(k);
+        settings.add(new JLabel("   Significant digits"));
+        settings.add(digits);
+        settings.add(higher);
+        settings.add(truncate);
+        higher.setToolTipText("Add the higher-order terms of JCGM 100:2008 5.1.2 note (uncorrelated inputs only)");
+        truncate.setToolTipText("Truncate the effective degrees of freedom to an integer before looking up k "
+                + "(JCGM 100:2008 G.4.1 note 1)");
+        body.add(settings, BorderLayout.NORTH);
+        outputs.setLayout(new BoxLayout(outputs, BoxLayout.Y_AXIS));
+        body.add(outputs, BorderLayout.CENTER);
+        body.add(state, BorderLayout.SOUTH);
+        p.addActionListener(e -> commitSettings());
+        k.addActionListener(e -> commitSettings());
+        p.addFocusListener(new java.awt.event.FocusAdapter() {
+            @Override public void focusLost(java.awt.event.FocusEvent e) { commitSettings(); }
+        });
+        k.addFocusListener(new java.awt.event.FocusAdapter() {
+            @Override public void focusLost(java.awt.event.FocusEvent e) { commitSettings(); }
+        });
+        byP.addActionListener(e -> commitSettings());
+        byK.addActionListener(e -> commitSettings());
+        digits.addChangeListener(e -> commitSettings());
+        higher.addActionListener(e -> commitSettings());
+        truncate.addActionListener(e -> commitSettings());
+    }
+
+    private void commitSettings() {
+        if (updating || ctx.readOnly()) {
+            return;
+        }
+        EvaluationSettings s = ctx.document().budget().settings();
+        try {
+            if (byK.isSelected()) {
+                s = s.withCoverageFactor(Fmt.parse(k.getText()));
+            } else {
+                s = s.withCoverageProbability(Fmt.parse(p.getText()) / 100);
+            }
+        } catch (IllegalArgumentException e) {
+            ctx.status(e.getMessage(), true);
+            return;
+        }
+        EvaluationSettings ns = s.withSignificantDigits((Integer) digits.getValue()).withHigherOrder(higher.isSelected())
+                .withDofRounding(truncate.isSelected() ? EvaluationSettings.DofRounding.TRUNCATE
+                        : EvaluationSettings.DofRounding.EXACT);
+        ctx.edit("Change evaluation settings", "settings", b -> b.withSettings(ns));
+    }
+
+    @Override public String title() { return "Results (GUM)"; }
+    @Override public JComponent body() { return body; }
+
+    @Override
+    public void budgetChanged(Budget b) {
+        updating = true;
+        try {
+            EvaluationSettings s = b.settings();
+            byK.setSelected(s.hasFixedCoverageFactor());
+            byP.setSelected(!s.hasFixedCoverageFactor());
+            String pText = Fmt.probability(s.coverageProbability()).replace(" %", "");
+            if (!p.isFocusOwner()) {
+                p.setText(pText);
+            }
+            if (!k.isFocusOwner()) {
+                k.setText(s.hasFixedCoverageFactor() ? Fmt.num(s.coverageFactor()) : "");
+            }
+            digits.setValue(s.significantDigits());
+            higher.setSelected(s.higherOrder());
+            truncate.setSelected(s.dofRounding() == EvaluationSettings.DofRounding.TRUNCATE);
+        } finally {
+            updating = false;
+        }
+    }
+
+    @Override
+    public void recalculated(Recalculation r) {
+        if (r.result() == null) {
+            state.setText(last == null ? "No results: the budget has errors (see the problems list)."
+                    : "The budget has errors (see the problems list); the results shown are from the last budget "
+                            + "that could be evaluated.");
+            state.setForeground(Colors.get("Quire.error"));
+            return;
+        }
+        last = r.result();
+        state.setText("Evaluated in " + r.millis() + " ms.");
+        state.setForeground(Colors.get("Label.disabledForeground"));
+        if (!panels.keySet().equals(r.result().outputs().stream().map(OutputResult::name)
+                .collect(java.util.stream.Collectors.toCollection(java.util.LinkedHashSet::new)))) {
+            panels.clear();
+            outputs.removeAll();
+            for (OutputResult o : r.result().outputs()) {
+                OutputResultPanel panel = new OutputResultPanel(o.name());
+                panels.put(o.name(), panel);
+                outputs.add(panel);
+            }
+        }
+        int d = r.budget().settings().significantDigits();
+        for (OutputResult o : r.result().outputs()) {
+            panels.get(o.name()).show(o, d);
+        }
+        outputs.revalidate();
+        outputs.repaint();
+    }
+
+    @Override
+    public void readOnlyChanged(boolean ro) {
+        for (JComponent c : new JComponent[] {byP, byK, p, k, digits, higher, truncate}) {
+            c.setEnabled(!ro);
+        }
+    }
+
+    /** @return the result panel of an output, for tests and reports */
+    OutputResultPanel panel(String output) {
+        return panels.get(output);
+    }
+}
