@@ -16,6 +16,12 @@ public final class CommandLine {
             "      the GUM budget table and results of every output",
             "  " + ValidateCommand.USAGE,
             "      check Quire against the published worked examples",
+            "  " + ReportCommand.USAGE,
+            "      the report of a budget as PDF or HTML, and every table of it as CSV files in DIR",
+            "  " + ReviewCommand.USAGE,
+            "      the assessor's automatic checklist; exit 1 when an item is not met",
+            "  " + DiffCommand.USAGE,
+            "      what changed from budget A to budget B and the effect on each U; exit 1 when they differ",
             "  quire version",
             "  quire help",
             "");
@@ -35,6 +41,12 @@ public final class CommandLine {
                     return EvaluateCommand.run(args, out);
                 case "validate":
                     return ValidateCommand.run(args, out);
+                case "report":
+                    return ReportCommand.run(args, out);
+                case "review":
+                    return ReviewCommand.run(args, out);
+                case "diff":
+                    return DiffCommand.run(args, out);
                 case "version":
                 case "--version":
                     out.println("quire " + EngineVersion.get());
