@@ -64,7 +64,7 @@ public final class ComparisonText {
             s.append(String.format(Locale.ROOT, "  %-12s %-16s %-16s %-10s %-16s %-16s%n", e.name(),
                     Figures.sig(e.expandedA(), 4) + unit, Figures.sig(e.expandedB(), 4) + unit,
                     Double.isNaN(pct) ? "–" : String.format(Locale.ROOT, "%+.2f %%", pct),
-                    Figures.sig(e.estimateA(), 10), Figures.sig(e.estimateB(), 10)));
+                    Figures.compact(e.estimateA(), 10), Figures.compact(e.estimateB(), 10)));
         }
         return s.toString();
     }

@@ -38,6 +38,15 @@ public final class Figures {
         return minus(mantissa.toPlainString()) + " × 10" + superscript(exponent);
     }
 
+    /** @return {@code v} to at most {@code digits} significant digits, trailing zeros dropped, e.g. {@code 50.000838} */
+    public static String compact(double v, int digits) {
+        if (!Double.isFinite(v) || v == 0) {
+            return sig(v, digits);
+        }
+        BigDecimal b = new BigDecimal(v).round(new MathContext(digits, RoundingMode.HALF_EVEN)).stripTrailingZeros();
+        return estimate(b.doubleValue());
+    }
+
     /** @return an estimate as its shortest exact decimal when that is short, else to 10 significant digits */
     public static String estimate(double v) {
         if (!Double.isFinite(v)) {
@@ -48,7 +57,12 @@ public final class Figures {
         if (exponent >= -4 && exponent < 9 && b.precision() <= 12) {
             return minus(b.scale() < 0 ? b.setScale(0).toPlainString() : b.toPlainString());
         }
-        return sig(v, Math.min(10, b.precision()));
+        BigDecimal r = b.round(new MathContext(10, RoundingMode.HALF_EVEN)).stripTrailingZeros();
+        int e = r.precision() - r.scale() - 1;
+        if (e >= -4 && e < 9) {
+            return minus(r.scale() < 0 ? r.setScale(0).toPlainString() : r.toPlainString());
+        }
+        return sig(v, Math.min(10, r.precision()));
     }
 
     /** @return degrees of freedom: ∞, a whole number, or one decimal */
@@ -67,9 +81,9 @@ public final class Figures {
         return String.format(Locale.ROOT, "%.1f", 100 * fraction);
     }
 
-    /** @return a coverage probability as a percentage without trailing zeros, e.g. {@code 95.45} or {@code 99} */
+    /** @return a coverage probability as a percentage without trailing zeros, to four significant digits, e.g. {@code 95.45} or {@code 99} */
     public static String probability(double p) {
-        return new BigDecimal(100 * p).round(new MathContext(6)).stripTrailingZeros().toPlainString();
+        return new BigDecimal(100 * p).round(new MathContext(4)).stripTrailingZeros().toPlainString();
     }
 
     static String superscript(int exponent) {

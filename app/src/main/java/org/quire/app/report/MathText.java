@@ -71,13 +71,24 @@ public final class MathText {
      */
     public String plain() {
         StringBuilder s = new StringBuilder();
-        for (Run r : runs) {
+        int i = 0;
+        while (i < runs.size()) {
+            Run r = runs.get(i);
             if (r.shift() == Shift.BASE) {
                 s.append(r.text());
-            } else {
-                s.append(r.shift() == Shift.SUB ? '_' : '^');
-                s.append(r.text().codePointCount(0, r.text().length()) == 1 ? r.text() : "{" + r.text() + "}");
+                i++;
+                continue;
             }
+            StringBuilder group = new StringBuilder();
+            int j = i;
+            while (j < runs.size() && runs.get(j).shift() == r.shift()) {
+                group.append(runs.get(j).text());
+                j++;
+            }
+            String g = group.toString();
+            s.append(r.shift() == Shift.SUB ? '_' : '^');
+            s.append(g.codePointCount(0, g.length()) == 1 ? g : "{" + g + "}");
+            i = j;
         }
         return s.toString();
     }

@@ -39,7 +39,7 @@ import org.quire.app.report.ReportModel.TableBlock;
  * <p>The fonts are read from the application's own resources (DejaVu Sans, whose licence beside them permits
  * redistribution), so the report looks the same on every machine.
  *
- * <p>Stateless and thread-safe: each call builds its own fonts and document.
+ * <p>Thread-safe: each call builds its own document; the parsed fonts are shared.
  */
 public final class PdfReport {
     private static final String FONT_DIR = "/org/quire/app/report/fonts/";
@@ -57,9 +57,29 @@ public final class PdfReport {
     private final BaseFont italic;
 
     private PdfReport() throws IOException {
-        regular = font("DejaVuSans.ttf");
-        bold = font("DejaVuSans-Bold.ttf");
-        italic = font("DejaVuSans-Oblique.ttf");
+        regular = Fonts.get("DejaVuSans.ttf");
+        bold = Fonts.get("DejaVuSans-Bold.ttf");
+        italic = Fonts.get("DejaVuSans-Oblique.ttf");
+    }
+
+    /**
+     * The parsed fonts, loaded once: parsing a TrueType file takes longer than laying out a report. OpenPDF
+     * keeps the glyphs each document uses in that document's writer, so one font object serves many documents.
+     */
+    private static final class Fonts {
+        private static final java.util.Map<String, BaseFont> LOADED = new java.util.concurrent.ConcurrentHashMap<>();
+
+        static BaseFont get(String file) throws IOException {
+            BaseFont f = LOADED.get(file);
+            if (f == null) {
+                f = font(file);
+                BaseFont earlier = LOADED.putIfAbsent(file, f);
+                if (earlier != null) {
+                    f = earlier;
+                }
+            }
+            return f;
+        }
     }
 
     private static BaseFont font(String file) throws IOException {
@@ -99,6 +119,7 @@ public final class PdfReport {
         Document doc = new Document(PageSize.A4, 50, 50, 48, 56);
         PdfWriter w = PdfWriter.getInstance(doc, new NonClosing(out));
         w.setPageEvent(new Footer(m));
+        w.setStrictImageSequence(true);
         doc.addTitle(d.title());
         doc.addAuthor(d.author());
         doc.addSubject("Measurement-uncertainty budget");

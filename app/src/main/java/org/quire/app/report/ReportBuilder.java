@@ -241,7 +241,8 @@ public final class ReportBuilder {
                 });
         if (!labels.isEmpty()) {
             blocks.add(new ChartBlock(new Chart.Bars("Share of each input in the combined variance of "
-                    + y.plain() + (o.correlationTerms().isEmpty() ? "" : "; the correlation terms are not shown"),
+                    + y.plain() + (o.correlationTerms().isEmpty() ? "" : "; the correlation terms are not shown"
+                    + (o.correlationVariance() < 0 ? ", and as they are negative the shares add up to more than 100 %" : "")),
                     "share of u_c^2 (%)", labels, values)));
         }
         double big = o.expandedUncertainty();

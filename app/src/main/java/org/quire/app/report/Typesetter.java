@@ -343,15 +343,9 @@ public final class Typesetter {
             int p = precedence();
             if (op == '^') {
                 left.wrapped(out, shift, p + 1);
+                // A raised exponent is grouped by its position, so it needs no parentheses of its own.
                 Shift up = shift == Shift.BASE ? Shift.SUP : shift;
-                boolean simple = right instanceof Num || right instanceof Name;
-                if (!simple) {
-                    out.add(new Run("(", false, up));
-                }
                 right.set(out, up, 0);
-                if (!simple) {
-                    out.add(new Run(")", false, up));
-                }
             } else {
                 left.wrapped(out, shift, p);
                 String sign = op == '+' ? " + " : op == '-' ? " − " : op == '*' ? " · " : " / ";
