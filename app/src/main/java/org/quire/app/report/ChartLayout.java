@@ -129,8 +129,8 @@ final class ChartLayout {
             s.add(new Line(x, top - 6f, x, bottom, MARK, 1f, true));
         }
         if (!c.markerLegend().isEmpty() && c.markers().length > 0) {
-            s.add(new Line(right - 150f, top - 6f, right - 136f, top - 6f, MARK, 1f, true));
-            s.add(new Label(right - 132f, top - 3.5f, MathText.upright(c.markerLegend()), FONT, Anchor.START, TEXT));
+            s.add(new Line(left, bottom + 23f, left + 14f, bottom + 23f, MARK, 1f, true));
+            s.add(new Label(left + 18f, bottom + 25.5f, MathText.upright(c.markerLegend()), FONT, Anchor.START, TEXT));
         }
         s.add(new Label((left + right) / 2, bottom + 26f, Typesetter.label(c.axisLabel()), FONT + 0.5f, Anchor.MIDDLE, AXIS));
         return new Layout(WIDTH, bottom + 32f, s);

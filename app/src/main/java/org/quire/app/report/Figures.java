@@ -30,6 +30,9 @@ public final class Figures {
             return "0";
         }
         BigDecimal b = new BigDecimal(v).round(new MathContext(digits, RoundingMode.HALF_EVEN));
+        if (b.precision() < digits) {
+            b = b.setScale(b.scale() + digits - b.precision());
+        }
         int exponent = b.precision() - b.scale() - 1;
         if (exponent >= -3 && exponent < 6) {
             return minus(b.setScale(Math.max(0, b.scale()), RoundingMode.HALF_EVEN).toPlainString());

@@ -260,7 +260,7 @@ public final class ReportBuilder {
                 Cell.number(Double.isInfinite(o.effectiveDof()) ? "∞" : Figures.sig(o.effectiveDof(), 3) + used,
                         o.effectiveDof()), Cell.text("")));
         res.add(List.of(Cell.text("coverage factor"), Cell.math(Typesetter.label("k")),
-                Cell.number(Figures.sig(o.coverageFactor(), 3), o.coverageFactor()), Cell.text("")));
+                Cell.number(Figures.compact(o.coverageFactor(), 3), o.coverageFactor()), Cell.text("")));
         res.add(List.of(Cell.text("coverage probability"), Cell.math(Typesetter.label("p")),
                 Cell.number(Figures.probability(o.coverageProbability()), 100 * o.coverageProbability()),
                 Cell.text("%")));
@@ -293,7 +293,7 @@ public final class ReportBuilder {
         runs.add(new MathText.Run(text.replace("(-", "(−"), false, MathText.Shift.BASE));
         runs.add(new MathText.Run(", ", false, MathText.Shift.BASE));
         runs.add(new MathText.Run("k", true, MathText.Shift.BASE));
-        runs.add(new MathText.Run(" = " + Figures.sig(o.coverageFactor(), 3) + ", ", false, MathText.Shift.BASE));
+        runs.add(new MathText.Run(" = " + Figures.compact(o.coverageFactor(), 3) + ", ", false, MathText.Shift.BASE));
         runs.add(new MathText.Run("p", true, MathText.Shift.BASE));
         runs.add(new MathText.Run(" = " + Figures.probability(o.coverageProbability()) + " %", false, MathText.Shift.BASE));
         return MathText.of(runs);
@@ -331,9 +331,9 @@ public final class ReportBuilder {
                 + ", seed " + mc.seed() + "."));
         List<List<Cell>> rows = new ArrayList<>();
         for (MonteCarloSummary.Output o : mc.outputs()) {
-            rows.add(List.of(Cell.math(Typesetter.name(o.name())), Cell.number(Figures.sig(o.estimate(), 8), o.estimate()),
+            rows.add(List.of(Cell.math(Typesetter.name(o.name())), Cell.number(Figures.compact(o.estimate(), 8), o.estimate()),
                     Cell.number(Figures.sig(o.standardUncertainty(), 3), o.standardUncertainty()),
-                    Cell.number(Figures.sig(o.low(), 6), o.low()), Cell.number(Figures.sig(o.high(), 6), o.high()),
+                    Cell.number(Figures.compact(o.low(), 6), o.low()), Cell.number(Figures.compact(o.high(), 6), o.high()),
                     Cell.number(Figures.probability(o.coverageProbability()), 100 * o.coverageProbability()),
                     Cell.text(o.shortest() ? "shortest" : "symmetric"),
                     Cell.text((o.agreesWithGum() ? "yes" : "no") + (o.comparison().isEmpty() ? "" : ": " + o.comparison()))));
