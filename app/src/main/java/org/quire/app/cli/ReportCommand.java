@@ -11,6 +11,9 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Set;
 import org.quire.app.Engine;
+import org.quire.app.compare.BudgetComparison;
+import org.quire.app.compare.Comparison;
+import org.quire.app.compare.ComparisonSection;
 import org.quire.app.report.AtomicFile;
 import org.quire.app.report.CanonicalSha256;
 import org.quire.app.report.CsvTables;
@@ -26,18 +29,18 @@ import org.quire.engine.gum.GumResult;
 
 /**
  * {@code quire report FILE [-o OUT.pdf|OUT.html] [--csv DIR] [--laboratory T] [--author T] [--device T]
- * [--date YYYY-MM-DD]}: the report of a budget as PDF or HTML (by the output's extension) and/or every table of
+ * [--date YYYY-MM-DD] [--against EARLIER]}: the report of a budget as PDF or HTML (by the output's extension) and/or every table of
  * it as CSV files in a folder. Files are written whole or not at all.
  */
 final class ReportCommand {
     static final String USAGE = "quire report FILE [-o OUT.pdf|OUT.html] [--csv DIR] [--laboratory TEXT] "
-            + "[--author TEXT] [--device TEXT] [--date YYYY-MM-DD]";
+            + "[--author TEXT] [--device TEXT] [--date YYYY-MM-DD] [--against EARLIER.json]";
 
     private ReportCommand() {
     }
 
     static int run(String[] argv, PrintStream out) throws Exception {
-        Args a = new Args(argv, 1, Set.of("output", "csv", "laboratory", "author", "device", "date"), Set.of());
+        Args a = new Args(argv, 1, Set.of("output", "csv", "laboratory", "author", "device", "date", "against"), Set.of());
         a.expectPositional(1, USAGE);
         if (!a.has("output") && !a.has("csv")) {
             throw new UsageException("say where the report goes: -o OUT.pdf, -o OUT.html or --csv DIR\nusage: " + USAGE);
@@ -81,7 +84,13 @@ final class ReportCommand {
         DocumentInfo doc = DocumentInfo.forPlainBudget(b, CanonicalSha256.INSTANCE, date)
                 .withLaboratory(a.get("laboratory", "")).withAuthor(a.get("author", ""))
                 .withDeviceUnderTest(a.get("device", ""));
-        ReportModel m = ReportBuilder.build(ReportInput.of(b, r, doc));
+        ReportInput input = ReportInput.of(b, r, doc);
+        if (a.has("against")) {
+            String earlier = a.get("against", "");
+            Comparison c = BudgetComparison.compare(Files.loadBudget(earlier), b, Engine.library());
+            input = input.withSection(ComparisonSection.of(c, shortName(earlier), shortName(file)));
+        }
+        ReportModel m = ReportBuilder.build(input);
         if (target != null) {
             byte[] bytes;
             if (format.equals("pdf")) {
@@ -104,6 +113,11 @@ final class ReportCommand {
             out.println("wrote " + files.size() + " CSV tables to " + csvDir);
         }
         return 0;
+    }
+
+    private static String shortName(String file) {
+        Path p = Path.of(file).getFileName();
+        return p == null ? file : p.toString();
     }
 
     private static void write(Path target, byte[] bytes) throws IOException {

@@ -53,6 +53,17 @@ class ReportReviewDiffCommandsTest {
     }
 
     @Test
+    void reportAgainstAnEarlierBudgetHasTheChanges(@TempDir Path dir) throws Exception {
+        // JCGM 101:2008 9.2.3 to 9.2.4: X4 widened from u = 1 to u = 10
+        assertEquals(0, run("report", Examples.file("jcgm101-9.2.4-additive-dominant.json").toString(), "-o",
+                dir.resolve("r.html").toString(), "--against",
+                Examples.file("jcgm101-9.2.3-additive-rectangular.json").toString()));
+        String html = Files.readString(dir.resolve("r.html"));
+        assertTrue(html.contains("id=\"changes\"") && html.contains("id=\"change-effect\""), "comparison tables");
+        assertTrue(html.contains("standard uncertainty"));
+    }
+
+    @Test
     void missingBudgetFileIsAClearErrorAndWritesNothing(@TempDir Path dir) throws Exception {
         assertEquals(2, run("report", dir.resolve("absent.json").toString(), "-o", dir.resolve("r.pdf").toString()));
         assertTrue(err().contains("no such file"), err());
