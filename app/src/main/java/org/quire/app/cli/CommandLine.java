@@ -28,6 +28,13 @@ public final class CommandLine {
             "      Monte Carlo throughput on the Tarrow Vale benchmark budget",
             "  quire open [--review] FILE",
             "      open a budget in the workbench (read-only with --review); no arguments opens the demo",
+            "  " + ReportCommand.USAGE,
+            "      the report of a budget as PDF or HTML (by the extension), and/or every table of it as one",
+            "      CSV file each in the folder DIR; --against adds the changes from an earlier budget",
+            "  " + ReviewCommand.USAGE,
+            "      the assessor's automatic checklist; exit 1 when an item is not met",
+            "  " + DiffCommand.USAGE,
+            "      what changed from budget A to budget B and the effect on each U; exit 1 when they differ",
             "  quire version",
             "  quire help",
             "");
@@ -55,6 +62,12 @@ public final class CommandLine {
                     return MonteCarloCommand.run(args, out, err);
                 case "bench":
                     return BenchCommand.run(args, out);
+                case "report":
+                    return ReportCommand.run(args, out);
+                case "review":
+                    return ReviewCommand.run(args, out);
+                case "diff":
+                    return DiffCommand.run(args, out);
                 case "version":
                 case "--version":
                     out.println("quire " + EngineVersion.get());

@@ -1,0 +1,126 @@
+package org.quire.app.cli;
+
+import java.io.ByteArrayOutputStream;
+import java.io.IOException;
+import java.io.PrintStream;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Path;
+import java.time.LocalDate;
+import java.time.format.DateTimeParseException;
+import java.util.List;
+import java.util.Locale;
+import java.util.Set;
+import org.quire.app.Engine;
+import org.quire.app.compare.BudgetComparison;
+import org.quire.app.compare.Comparison;
+import org.quire.app.compare.ComparisonSection;
+import org.quire.app.report.AtomicFile;
+import org.quire.app.report.CanonicalSha256;
+import org.quire.app.report.CsvTables;
+import org.quire.app.report.DocumentInfo;
+import org.quire.app.report.HtmlReport;
+import org.quire.app.report.PdfReport;
+import org.quire.app.report.ReportBuilder;
+import org.quire.app.report.ReportInput;
+import org.quire.app.report.ReportModel;
+import org.quire.engine.budget.Budget;
+import org.quire.engine.gum.GumEvaluator;
+import org.quire.engine.gum.GumResult;
+
+/**
+ * {@code quire report FILE [-o OUT.pdf|OUT.html] [--csv DIR] [--laboratory T] [--author T] [--device T]
+ * [--date YYYY-MM-DD] [--against EARLIER]}: the report of a budget as PDF or HTML (by the output's extension) and/or every table of
+ * it as CSV files in a folder. Files are written whole or not at all.
+ */
+final class ReportCommand {
+    static final String USAGE = "quire report FILE [-o OUT.pdf|OUT.html] [--csv DIR] [--laboratory TEXT] "
+            + "[--author TEXT] [--device TEXT] [--date YYYY-MM-DD] [--against EARLIER.json]";
+
+    private ReportCommand() {
+    }
+
+    static int run(String[] argv, PrintStream out) throws Exception {
+        Args a = new Args(argv, 1, Set.of("output", "csv", "laboratory", "author", "device", "date", "against"), Set.of());
+        a.expectPositional(1, USAGE);
+        if (!a.has("output") && !a.has("csv")) {
+            throw new UsageException("say where the report goes: -o OUT.pdf, -o OUT.html or --csv DIR\nusage: " + USAGE);
+        }
+        String format = null;
+        Path target = null;
+        if (a.has("output")) {
+            target = Files.path(a.get("output", ""));
+            String name = target.getFileName() == null ? "" : target.getFileName().toString().toLowerCase(Locale.ROOT);
+            if (name.endsWith(".pdf")) {
+                format = "pdf";
+            } else if (name.endsWith(".html") || name.endsWith(".htm")) {
+                format = "html";
+            } else {
+                throw new UsageException("the report's file name must end in .pdf or .html, not '" + target
+                        + "' (for CSV tables use --csv DIR)");
+            }
+        }
+        Path csvDir = a.has("csv") ? Files.path(a.get("csv", "")) : null;
+        if (csvDir != null && !java.nio.file.Files.isDirectory(csvDir)) {
+            throw new UsageException("--csv needs an existing folder; " + csvDir + " is not one");
+        }
+        LocalDate date = LocalDate.now();
+        if (a.has("date")) {
+            try {
+                date = LocalDate.parse(a.get("date", ""));
+            } catch (DateTimeParseException e) {
+                throw new UsageException("--date needs a date written YYYY-MM-DD, not '" + a.get("date", "") + "'");
+            }
+        }
+        String file = a.positional().get(0);
+        Budget b = Files.loadBudget(file);
+        GumResult r;
+        try {
+            r = GumEvaluator.evaluate(b, Engine.library());
+        } catch (org.quire.engine.model.ModelException e) {
+            throw Files.modelProblem(file, e);
+        } catch (IllegalArgumentException e) {
+            throw new Files.FileProblem(file, e.getMessage());
+        }
+        DocumentInfo doc = DocumentInfo.forPlainBudget(b, CanonicalSha256.INSTANCE, date)
+                .withLaboratory(a.get("laboratory", "")).withAuthor(a.get("author", ""))
+                .withDeviceUnderTest(a.get("device", ""));
+        ReportInput input = ReportInput.of(b, r, doc);
+        if (a.has("against")) {
+            String earlier = a.get("against", "");
+            Comparison c = BudgetComparison.compare(Files.loadBudget(earlier), b, Engine.library());
+            input = input.withSection(ComparisonSection.of(c, shortName(earlier), shortName(file)));
+        }
+        ReportModel m = ReportBuilder.build(input);
+        if (target != null) {
+            byte[] bytes;
+            if (format.equals("pdf")) {
+                ByteArrayOutputStream buf = new ByteArrayOutputStream(64 * 1024);
+                PdfReport.render(m, buf);
+                bytes = buf.toByteArray();
+            } else {
+                bytes = HtmlReport.render(m).getBytes(StandardCharsets.UTF_8);
+            }
+            write(target, bytes);
+            out.println("wrote " + target);
+        }
+        if (csvDir != null) {
+            List<Path> files;
+            try {
+                files = CsvTables.write(m, csvDir);
+            } catch (IOException e) {
+                throw new IOException(e.getMessage(), e);
+            }
+            out.println("wrote " + files.size() + " CSV tables to " + csvDir);
+        }
+        return 0;
+    }
+
+    private static String shortName(String file) {
+        Path p = Path.of(file).getFileName();
+        return p == null ? file : p.toString();
+    }
+
+    private static void write(Path target, byte[] bytes) throws IOException {
+        AtomicFile.write(target, o -> o.write(bytes));
+    }
+}

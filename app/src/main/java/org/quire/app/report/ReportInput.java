@@ -1,0 +1,49 @@
+package org.quire.app.report;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Objects;
+import org.quire.engine.budget.Budget;
+import org.quire.engine.gum.GumResult;
+
+/**
+ * Everything a report is built from: the budget, its GUM evaluation, the document facts, and what other parts
+ * of Quire contribute when they have run: the Monte Carlo summary and further sections (calibration line and
+ * conformity, flow-range table, comparison with another budget).
+ *
+ * @param budget the budget
+ * @param gum its GUM evaluation
+ * @param document header facts and revision history
+ * @param monteCarlo the Monte Carlo summary, or null when the method was not run
+ * @param sections further sections, in the order they are to appear
+ *
+ * <p>Immutable and thread-safe.
+ */
+public record ReportInput(Budget budget, GumResult gum, DocumentInfo document, MonteCarloSummary monteCarlo,
+        List<ReportSection> sections) {
+    public ReportInput {
+        Objects.requireNonNull(budget, "budget");
+        Objects.requireNonNull(gum, "gum");
+        Objects.requireNonNull(document, "document");
+        sections = List.copyOf(sections);
+    }
+
+    public static ReportInput of(Budget budget, GumResult gum, DocumentInfo document) {
+        return new ReportInput(budget, gum, document, null, List.of());
+    }
+
+    public ReportInput withMonteCarlo(MonteCarloSummary mc) {
+        return new ReportInput(budget, gum, document, mc, sections);
+    }
+
+    public ReportInput withDocument(DocumentInfo d) {
+        return new ReportInput(budget, gum, d, monteCarlo, sections);
+    }
+
+    /** @return a copy with {@code section} added at the end */
+    public ReportInput withSection(ReportSection section) {
+        List<ReportSection> s = new ArrayList<>(sections);
+        s.add(Objects.requireNonNull(section, "section"));
+        return new ReportInput(budget, gum, document, monteCarlo, s);
+    }
+}

@@ -1,0 +1,84 @@
+package org.quire.app.report;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Objects;
+
+/**
+ * A report laid out as parts, each a heading and blocks (paragraphs, equations, tables, charts, result
+ * statements, notices), between a header of document facts and the closing cautions. Renderers draw it as HTML,
+ * PDF or CSV; the workbench may show it too.
+ *
+ * @param document the header facts
+ * @param engineVersion the version of the engine that computed the figures
+ * @param parts the report's parts in order
+ * @param cautions the cautions every report ends with
+ *
+ * <p>Immutable and thread-safe.
+ */
+public record ReportModel(DocumentInfo document, String engineVersion, List<Part> parts, String cautions) {
+
+    public ReportModel {
+        Objects.requireNonNull(document, "document");
+        Objects.requireNonNull(engineVersion, "engineVersion");
+        parts = List.copyOf(parts);
+        if (cautions == null || cautions.isBlank()) {
+            throw new IllegalArgumentException("a report must state the cautions");
+        }
+    }
+
+    /** A numbered part of the report. */
+    public record Part(String heading, List<Block> blocks) {
+        public Part {
+            Objects.requireNonNull(heading, "heading");
+            blocks = List.copyOf(blocks);
+        }
+    }
+
+    /** One block of a part. */
+    public sealed interface Block permits Paragraph, Equations, TableBlock, ChartBlock, Statement, Notices {
+    }
+
+    /** @param text one paragraph of plain text */
+    public record Paragraph(String text) implements Block {
+        public Paragraph { Objects.requireNonNull(text, "text"); }
+    }
+
+    /** @param lines equations, one a line */
+    public record Equations(List<MathText> lines) implements Block {
+        public Equations { lines = List.copyOf(lines); }
+    }
+
+    /** @param table a table */
+    public record TableBlock(Table table) implements Block {
+        public TableBlock { Objects.requireNonNull(table, "table"); }
+    }
+
+    /** @param chart a chart */
+    public record ChartBlock(Chart chart) implements Block {
+        public ChartBlock { Objects.requireNonNull(chart, "chart"); }
+    }
+
+    /** @param text a result stated in full, set apart */
+    public record Statement(MathText text) implements Block {
+        public Statement { Objects.requireNonNull(text, "text"); }
+    }
+
+    /** @param items warnings or findings, one sentence each */
+    public record Notices(List<String> items) implements Block {
+        public Notices { items = List.copyOf(items); }
+    }
+
+    /** @return every table of the report, in order */
+    public List<Table> tables() {
+        List<Table> t = new ArrayList<>();
+        for (Part p : parts) {
+            for (Block b : p.blocks()) {
+                if (b instanceof TableBlock) {
+                    t.add(((TableBlock) b).table());
+                }
+            }
+        }
+        return t;
+    }
+}
