@@ -70,7 +70,7 @@ class WorkbenchEditingTest extends GuiTestSupport {
                 .findFirst().orElseThrow());
         assertEquals(Problem.Severity.ERROR, p.severity());
         assertEquals(Problem.Area.MODEL, p.area());
-        assertEquals(12, p.line(), "the E equation is line 12 of the demo model");
+        assertEquals(11, p.line(), "the E equation is line 11 of the demo model");
         assertTrue(onEdt(() -> ed.modelEditor().getHighlighter().getHighlights().length) > 0, "the error is marked");
     }
 
