@@ -319,7 +319,13 @@ public final class WorkbenchFrame extends JFrame {
             open.add(new WorkspaceNavigator.OpenItem(e.document().name(), e));
         }
         Path examples = Path.of("worked-examples");
-        navigator.refresh(open, prefs.budgetFolders(), prefs.templateFolders(),
+        List<Path> templateFolders = new ArrayList<>();
+        Path shipped = Path.of("templates");
+        if (Files.isDirectory(shipped)) {
+            templateFolders.add(shipped.toAbsolutePath());
+        }
+        templateFolders.addAll(prefs.templateFolders());
+        navigator.refresh(open, prefs.budgetFolders(), templateFolders,
                 Files.isDirectory(examples) ? examples.toAbsolutePath() : null);
     }
 

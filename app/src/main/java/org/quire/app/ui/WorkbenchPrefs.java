@@ -86,7 +86,7 @@ public final class WorkbenchPrefs {
     public void setTemplateFolders(List<Path> p) { putPaths(TEMPLATE_FOLDERS, p); }
 
     /** @return minutes between autosaves of changed budgets that have a file; 0 for never */
-    public int autosaveMinutes() { return node.getInt(AUTOSAVE_MINUTES, 5); }
+    public int autosaveMinutes() { return node.getInt(AUTOSAVE_MINUTES, 1); }
 
     public void setAutosaveMinutes(int m) {
         if (m < 0 || m > 120) {

@@ -182,8 +182,17 @@ public final class TypeA implements Evaluation {
         return "mean of " + n + " observations, " + sigma + ", u = s/sqrt(n)";
     }
 
+    /** @return {@code v} with at most 6 significant digits and no trailing zeros, e.g. 7.5E-5 or 3 */
     static String fmt(double v) {
-        return Double.isInfinite(v) ? "inf" : String.format(java.util.Locale.ROOT, "%.6g", v);
+        if (Double.isInfinite(v)) {
+            return "inf";
+        }
+        if (Double.isNaN(v) || v == 0) {
+            return Double.isNaN(v) ? "NaN" : "0";
+        }
+        java.math.BigDecimal b = new java.math.BigDecimal(v).round(new java.math.MathContext(6)).stripTrailingZeros();
+        int exponent = b.precision() - b.scale() - 1;
+        return exponent < -4 || exponent >= 9 ? b.toString() : b.toPlainString();
     }
 
     @Override
