@@ -48,8 +48,13 @@ import org.quire.engine.budget.TypeB;
 public final class BudgetJson {
     /** The layout's identifier, the value of the {@code format} field. */
     public static final String FORMAT = "quire-budget";
-    /** The format version this engine writes. */
-    public static final int FORMAT_VERSION = 1;
+    /**
+     * The format version this engine writes. Version 2 adds the document fields ({@code document},
+     * {@code dataSets}, {@code results}, {@code history}, {@code templateOrigin}, {@code template}), read by
+     * {@code org.quire.engine.document.DocumentJson}; here they are kept, like any other field this class does
+     * not interpret, in {@link Budget#extensions()}. Version 1 files are read as they are.
+     */
+    public static final int FORMAT_VERSION = 2;
     /** Largest budget file read, in bytes. */
     public static final long MAX_BYTES = 16L * 1024 * 1024;
     /** Deepest nesting of objects and arrays accepted. */
@@ -453,7 +458,7 @@ public final class BudgetJson {
                 if (c.fromReadings()) {
                     cb.add("fromReadings", true);
                 } else {
-                    cb.add("r", c.r());
+                    cb.add("r", decimal(c.r()));
                 }
                 addText(cb, "justification", c.justification());
                 cs.add(cb);
@@ -485,18 +490,18 @@ public final class BudgetJson {
             if (r != null) {
                 JsonArrayBuilder rb = Json.createArrayBuilder();
                 for (double v : r) {
-                    rb.add(v);
+                    rb.add(decimal(v));
                 }
                 b.add("readings", rb);
             } else {
-                b.add("mean", a.estimate());
+                b.add("mean", decimal(a.estimate()));
                 if (!Double.isNaN(a.standardDeviation())) {
-                    b.add("s", a.standardDeviation());
+                    b.add("s", decimal(a.standardDeviation()));
                 }
                 b.add("n", a.count());
             }
             if (a.isPooled()) {
-                b.add("pooledS", a.pooledStandardDeviation());
+                b.add("pooledS", decimal(a.pooledStandardDeviation()));
                 addNumber(b, "pooledDof", a.dof());
             }
             return b.build();
@@ -516,17 +521,46 @@ public final class BudgetJson {
         } else if (Double.isNaN(v)) {
             b.addNull(key);
         } else {
-            b.add(key, v);
+            b.add(key, decimal(v));
         }
+    }
+
+    /**
+     * The shortest decimal that reads back as exactly {@code v}: the exact binary value rounded (half-even) to
+     * 1, 2, ... 17 significant digits, the first that converts back to {@code v}. Unlike
+     * {@link Double#toString(double)}, whose digits changed between Java releases, the result depends on the
+     * value alone, so files and content hashes do not change with the Java version.
+     *
+     * <p>References: IEEE 754-2019 clause 5.12.2 (17 significant digits always suffice for binary64);
+     * D. W. Matula, "In-and-out conversions", Commun. ACM 11 (1968) 47-50.
+     *
+     * @param v a finite number
+     * @return the decimal, trailing zeros removed; zero for both signed zeros
+     */
+    public static java.math.BigDecimal decimal(double v) {
+        if (!Double.isFinite(v)) {
+            throw new IllegalArgumentException("only finite numbers have a decimal form, not " + v);
+        }
+        if (v == 0) {
+            return java.math.BigDecimal.ZERO;
+        }
+        java.math.BigDecimal exact = new java.math.BigDecimal(v);
+        for (int p = 1; p < 17; p++) {
+            java.math.BigDecimal r = exact.round(new java.math.MathContext(p, java.math.RoundingMode.HALF_EVEN));
+            if (r.doubleValue() == v) {
+                return r.stripTrailingZeros();
+            }
+        }
+        return exact.round(new java.math.MathContext(17, java.math.RoundingMode.HALF_EVEN)).stripTrailingZeros();
     }
 
     /** @return the settings as JSON */
     public static JsonObject settingsJson(EvaluationSettings s) {
         JsonObjectBuilder b = Json.createObjectBuilder();
         if (s.hasFixedCoverageFactor()) {
-            b.add("coverageFactor", s.coverageFactor());
+            b.add("coverageFactor", decimal(s.coverageFactor()));
         } else {
-            b.add("coverageProbability", s.coverageProbability());
+            b.add("coverageProbability", decimal(s.coverageProbability()));
         }
         b.add("higherOrder", s.higherOrder());
         b.add("dofRounding", s.dofRounding() == EvaluationSettings.DofRounding.TRUNCATE ? "truncate" : "exact");
