@@ -139,7 +139,7 @@ public final class CanonicalJson {
             return t.toBigIntegerExact().toString();
         }
         double d = v.doubleValue();
-        BigDecimal shortest = Double.isFinite(d) ? BudgetJson.decimal(d) : t;
+        BigDecimal shortest = Double.isFinite(d) ? BudgetJson.decimal(d).stripTrailingZeros() : t;
         if (shortest.signum() == 0) {
             return "0";
         }

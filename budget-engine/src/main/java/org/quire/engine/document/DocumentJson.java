@@ -216,11 +216,15 @@ public final class DocumentJson {
         String comment = h.string("comment", "");
         String hash = h.string("contentHash", "");
         JsonObject content = h.has("content") ? h.get("content").object() : null;
+        String field;
+        if (st == DocumentStatus.APPROVED) {
+            field = !hash.matches("[0-9a-f]{64}") ? ".contentHash" : content == null ? "" : ".content";
+        } else {
+            field = !hash.isEmpty() ? ".contentHash" : ".content";
+        }
         try {
             return new RevisionEntry(rev, st, by, at, comment, hash, content);
         } catch (IllegalArgumentException e) {
-            String field = st == DocumentStatus.APPROVED ? (hash.isEmpty() ? ".contentHash"
-                    : content == null ? "" : ".content") : (hash.isEmpty() ? ".content" : ".contentHash");
             throw new BudgetFormatException(h.path() + field, e.getMessage());
         }
     }

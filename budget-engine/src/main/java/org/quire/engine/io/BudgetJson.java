@@ -545,13 +545,28 @@ public final class BudgetJson {
             return java.math.BigDecimal.ZERO;
         }
         java.math.BigDecimal exact = new java.math.BigDecimal(v);
+        // A binary64 value can have hundreds of decimal digits. Cut it to 20 digits and, when digits were cut,
+        // append a nonzero "sticky" digit: rounding that to 17 or fewer digits gives the same result as
+        // rounding the exact value, and is much faster.
+        java.math.BigDecimal cut = exact.round(new java.math.MathContext(20, java.math.RoundingMode.DOWN));
+        if (cut.compareTo(exact) != 0) {
+            java.math.BigInteger u = cut.unscaledValue().multiply(java.math.BigInteger.TEN)
+                    .add(java.math.BigInteger.valueOf(cut.signum()));
+            cut = new java.math.BigDecimal(u, cut.scale() + 1);
+        }
         for (int p = 1; p < 17; p++) {
-            java.math.BigDecimal r = exact.round(new java.math.MathContext(p, java.math.RoundingMode.HALF_EVEN));
+            java.math.BigDecimal r = cut.round(new java.math.MathContext(p, java.math.RoundingMode.HALF_EVEN));
             if (r.doubleValue() == v) {
-                return r.stripTrailingZeros();
+                return plain(r);
             }
         }
-        return exact.round(new java.math.MathContext(17, java.math.RoundingMode.HALF_EVEN)).stripTrailingZeros();
+        return plain(cut.round(new java.math.MathContext(17, java.math.RoundingMode.HALF_EVEN)));
+    }
+
+    /** Strips trailing zeros but writes whole numbers of up to 21 digits without an exponent (100, not 1E+2). */
+    private static java.math.BigDecimal plain(java.math.BigDecimal r) {
+        java.math.BigDecimal s = r.stripTrailingZeros();
+        return s.scale() < 0 && s.precision() - s.scale() <= 21 ? s.setScale(0) : s;
     }
 
     /** @return the settings as JSON */
