@@ -1,6 +1,6 @@
 package org.quire.engine.document;
 
-import jakarta.json.Json;
+import jakarta.json.spi.JsonProvider;
 import jakarta.json.JsonArrayBuilder;
 import jakarta.json.JsonObject;
 import jakarta.json.JsonObjectBuilder;
@@ -50,6 +50,8 @@ import org.quire.engine.io.ResultJson;
  * <p>Stateless and thread-safe.
  */
 public final class DocumentJson {
+    /** One JSON-P provider for the class: {@code Json.create...} looks the provider up on every call, which is slow. */
+    private static final JsonProvider JSON = JsonProvider.provider();
     /** The top-level fields version 2 adds. */
     public static final Set<String> DOCUMENT_FIELDS = Set.of("document", "dataSets", "results", "history",
             "templateOrigin", "template");
@@ -100,7 +102,7 @@ public final class DocumentJson {
             return new BudgetDocument(b, "", "", "", fallbackTime, fallbackTime, 1, DocumentStatus.DRAFT, null,
                     null, List.of(), null, null, 1);
         }
-        JsonObjectBuilder rest = Json.createObjectBuilder();
+        JsonObjectBuilder rest = JSON.createObjectBuilder();
         for (Map.Entry<String, JsonValue> e : ext.entrySet()) {
             if (!DOCUMENT_FIELDS.contains(e.getKey())) {
                 rest.add(e.getKey(), e.getValue());
@@ -293,8 +295,8 @@ public final class DocumentJson {
     /** @return the document as a JSON object of format version 2 */
     public static JsonObject toJson(BudgetDocument d) {
         JsonObject base = BudgetJson.toJson(d.budget().withExtensions(JsonValue.EMPTY_JSON_OBJECT));
-        JsonObjectBuilder o = Json.createObjectBuilder(base);
-        o.add("document", Json.createObjectBuilder()
+        JsonObjectBuilder o = JSON.createObjectBuilder(base);
+        o.add("document", JSON.createObjectBuilder()
                 .add("laboratory", d.laboratory())
                 .add("deviceUnderTest", d.deviceUnderTest())
                 .add("author", d.author())
@@ -307,7 +309,7 @@ public final class DocumentJson {
         }
         if (d.templateOrigin() != null) {
             TemplateOrigin t = d.templateOrigin();
-            o.add("templateOrigin", Json.createObjectBuilder().add("id", t.id()).add("version", t.version())
+            o.add("templateOrigin", JSON.createObjectBuilder().add("id", t.id()).add("version", t.version())
                     .add("contentHash", t.contentHash()));
         }
         if (d.template() != null) {
@@ -315,7 +317,7 @@ public final class DocumentJson {
         }
         if (d.results() != null) {
             ResultSnapshot r = d.results();
-            JsonObjectBuilder rb = Json.createObjectBuilder().add("engineVersion", r.engineVersion())
+            JsonObjectBuilder rb = JSON.createObjectBuilder().add("engineVersion", r.engineVersion())
                     .add("computed", r.computed().toString()).add("gum", r.gum());
             if (r.monteCarlo() != null) {
                 rb.add("monteCarlo", r.monteCarlo());
@@ -323,9 +325,9 @@ public final class DocumentJson {
             o.add("results", rb);
         }
         if (!d.history().isEmpty()) {
-            JsonArrayBuilder h = Json.createArrayBuilder();
+            JsonArrayBuilder h = JSON.createArrayBuilder();
             for (RevisionEntry e : d.history()) {
-                JsonObjectBuilder eb = Json.createObjectBuilder().add("revision", e.revision())
+                JsonObjectBuilder eb = JSON.createObjectBuilder().add("revision", e.revision())
                         .add("status", e.status().label()).add("by", e.by()).add("at", e.at().toString());
                 if (!e.comment().isEmpty()) {
                     eb.add("comment", e.comment());
@@ -346,13 +348,13 @@ public final class DocumentJson {
     }
 
     private static JsonObject templateJson(TemplateSpec t) {
-        JsonObjectBuilder b = Json.createObjectBuilder().add("id", t.id()).add("version", t.version());
+        JsonObjectBuilder b = JSON.createObjectBuilder().add("id", t.id()).add("version", t.version());
         if (!t.description().isEmpty()) {
             b.add("description", t.description());
         }
-        JsonArrayBuilder ps = Json.createArrayBuilder();
+        JsonArrayBuilder ps = JSON.createArrayBuilder();
         for (TemplateParameter p : t.parameters()) {
-            JsonObjectBuilder pb = Json.createObjectBuilder().add("name", p.name());
+            JsonObjectBuilder pb = JSON.createObjectBuilder().add("name", p.name());
             if (!p.description().isEmpty()) {
                 pb.add("description", p.description());
             }
@@ -372,10 +374,10 @@ public final class DocumentJson {
             ps.add(pb);
         }
         b.add("parameters", ps);
-        JsonArrayBuilder l = Json.createArrayBuilder();
+        JsonArrayBuilder l = JSON.createArrayBuilder();
         t.locked().forEach(l::add);
         b.add("locked", l);
-        JsonObjectBuilder g = Json.createObjectBuilder();
+        JsonObjectBuilder g = JSON.createObjectBuilder();
         t.guidance().forEach(g::add);
         b.add("guidance", g);
         return b.build();
@@ -389,7 +391,7 @@ public final class DocumentJson {
     /** The content a hash covers; see {@link BudgetDocument#contentJson()}. */
     static JsonObject content(BudgetDocument d) {
         JsonObject full = toJson(d);
-        JsonObjectBuilder o = Json.createObjectBuilder();
+        JsonObjectBuilder o = JSON.createObjectBuilder();
         for (Map.Entry<String, JsonValue> e : full.entrySet()) {
             switch (e.getKey()) {
                 case "formatVersion":
@@ -397,7 +399,7 @@ public final class DocumentJson {
                 case "history":
                     break;
                 case "document": {
-                    JsonObjectBuilder m = Json.createObjectBuilder();
+                    JsonObjectBuilder m = JSON.createObjectBuilder();
                     for (Map.Entry<String, JsonValue> f : e.getValue().asJsonObject().entrySet()) {
                         if (!Set.of("modified", "revision", "status").contains(f.getKey())) {
                             m.add(f.getKey(), f.getValue());
@@ -415,9 +417,9 @@ public final class DocumentJson {
 
     /** Reads back an approved revision from the content its history entry recorded. */
     static BudgetDocument fromContent(RevisionEntry e) {
-        JsonObjectBuilder o = Json.createObjectBuilder(e.content());
+        JsonObjectBuilder o = JSON.createObjectBuilder(e.content());
         o.add("formatVersion", BudgetJson.FORMAT_VERSION);
-        JsonObjectBuilder m = Json.createObjectBuilder(e.content().getJsonObject("document"));
+        JsonObjectBuilder m = JSON.createObjectBuilder(e.content().getJsonObject("document"));
         m.add("modified", e.at().toString()).add("revision", e.revision()).add("status", "approved");
         o.add("document", m);
         try {

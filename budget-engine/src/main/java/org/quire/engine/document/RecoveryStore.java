@@ -1,6 +1,6 @@
 package org.quire.engine.document;
 
-import jakarta.json.Json;
+import jakarta.json.spi.JsonProvider;
 import jakarta.json.JsonObject;
 import java.io.IOException;
 import java.nio.charset.StandardCharsets;
@@ -30,6 +30,8 @@ import org.quire.engine.io.JsonCursor;
  * <p>Immutable and thread-safe for different ids.
  */
 public final class RecoveryStore {
+    /** One JSON-P provider for the class: {@code Json.create...} looks the provider up on every call, which is slow. */
+    private static final JsonProvider JSON = JsonProvider.provider();
     /** The identifier of the recovery file layout. */
     public static final String FORMAT = "quire-recovery";
     private static final String SUFFIX = ".recovery.json";
@@ -77,7 +79,7 @@ public final class RecoveryStore {
             throw new DocumentSaveException(folder.resolve(id + SUFFIX), "the recovery folder cannot be created: "
                     + e.getMessage(), e);
         }
-        JsonObject o = Json.createObjectBuilder().add("format", FORMAT).add("formatVersion", 1).add("id", id)
+        JsonObject o = JSON.createObjectBuilder().add("format", FORMAT).add("formatVersion", 1).add("id", id)
                 .add("originalPath", originalPath == null ? "" : originalPath.toAbsolutePath().toString())
                 .add("saved", now.toString()).add("document", DocumentJson.toJson(doc)).build();
         DocumentStore.writeAtomically(folder.resolve(id + SUFFIX), BudgetJson.pretty(o)

@@ -1,6 +1,6 @@
 package org.quire.engine.document;
 
-import jakarta.json.Json;
+import jakarta.json.spi.JsonProvider;
 import jakarta.json.JsonObject;
 import jakarta.json.JsonObjectBuilder;
 import jakarta.json.JsonValue;
@@ -32,6 +32,8 @@ import org.quire.engine.io.BudgetJson;
  * <p>Immutable and thread-safe; every listing reads the folders afresh.
  */
 public final class TemplateLibrary {
+    /** One JSON-P provider for the class: {@code Json.create...} looks the provider up on every call, which is slow. */
+    private static final JsonProvider JSON = JsonProvider.provider();
     /** Where a template was found. */
     public enum Folder { SHIPPED, PERSONAL, TEAM }
 
@@ -211,7 +213,7 @@ public final class TemplateLibrary {
     }
 
     private static JsonObject withoutEstimate(InputQuantity q) {
-        JsonObjectBuilder b = Json.createObjectBuilder();
+        JsonObjectBuilder b = JSON.createObjectBuilder();
         for (Map.Entry<String, JsonValue> e : BudgetJson.evaluationJson(q.evaluation()).entrySet()) {
             if (!e.getKey().equals("estimate") && !e.getKey().equals("mean")) {
                 b.add(e.getKey(), e.getValue());

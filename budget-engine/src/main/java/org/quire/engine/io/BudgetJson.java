@@ -1,6 +1,6 @@
 package org.quire.engine.io;
 
-import jakarta.json.Json;
+import jakarta.json.spi.JsonProvider;
 import jakarta.json.JsonArrayBuilder;
 import jakarta.json.JsonException;
 import jakarta.json.JsonObject;
@@ -46,6 +46,8 @@ import org.quire.engine.budget.TypeB;
  * <p>Stateless and thread-safe.
  */
 public final class BudgetJson {
+    /** One JSON-P provider for the class: {@code Json.create...} looks the provider up on every call, which is slow. */
+    private static final JsonProvider JSON = JsonProvider.provider();
     /** The layout's identifier, the value of the {@code format} field. */
     public static final String FORMAT = "quire-budget";
     /**
@@ -108,7 +110,7 @@ public final class BudgetJson {
             throw new BudgetFormatException("", "the file is empty");
         }
         JsonValue v;
-        try (JsonReader r = Json.createReader(new StringReader(text))) {
+        try (JsonReader r = JSON.createReader(new StringReader(text))) {
             v = r.readValue();
         } catch (JsonParsingException e) {
             JsonLocation l = e.getLocation();
@@ -181,7 +183,7 @@ public final class BudgetJson {
         }
         EvaluationSettings settings = root.has("settings") ? readSettings(root.get("settings"))
                 : EvaluationSettings.defaults();
-        JsonObjectBuilder ext = Json.createObjectBuilder();
+        JsonObjectBuilder ext = JSON.createObjectBuilder();
         for (Map.Entry<String, JsonValue> e : root.object().entrySet()) {
             if (!TOP_FIELDS.contains(e.getKey())) {
                 ext.add(e.getKey(), e.getValue());
@@ -415,21 +417,21 @@ public final class BudgetJson {
 
     /** @return the budget as a JSON object in the current format version */
     public static JsonObject toJson(Budget b) {
-        JsonObjectBuilder o = Json.createObjectBuilder();
+        JsonObjectBuilder o = JSON.createObjectBuilder();
         o.add("format", FORMAT);
         o.add("formatVersion", FORMAT_VERSION);
         o.add("title", b.title());
         if (!b.notes().isEmpty()) {
             o.add("notes", b.notes());
         }
-        JsonArrayBuilder model = Json.createArrayBuilder();
+        JsonArrayBuilder model = JSON.createArrayBuilder();
         for (String line : b.model().split("\n", -1)) {
             model.add(line);
         }
         o.add("model", model);
-        JsonArrayBuilder outs = Json.createArrayBuilder();
+        JsonArrayBuilder outs = JSON.createArrayBuilder();
         for (OutputQuantity q : b.outputs()) {
-            JsonObjectBuilder ob = Json.createObjectBuilder().add("name", q.name());
+            JsonObjectBuilder ob = JSON.createObjectBuilder().add("name", q.name());
             if (!q.unit().isEmpty()) {
                 ob.add("unit", q.unit());
             }
@@ -439,9 +441,9 @@ public final class BudgetJson {
             outs.add(ob);
         }
         o.add("outputs", outs);
-        JsonArrayBuilder ins = Json.createArrayBuilder();
+        JsonArrayBuilder ins = JSON.createArrayBuilder();
         for (InputQuantity q : b.inputs()) {
-            JsonObjectBuilder ib = Json.createObjectBuilder().add("name", q.name());
+            JsonObjectBuilder ib = JSON.createObjectBuilder().add("name", q.name());
             addText(ib, "description", q.description());
             addText(ib, "unit", q.unit());
             addText(ib, "source", q.source());
@@ -451,10 +453,10 @@ public final class BudgetJson {
         }
         o.add("inputs", ins);
         if (!b.correlations().isEmpty()) {
-            JsonArrayBuilder cs = Json.createArrayBuilder();
+            JsonArrayBuilder cs = JSON.createArrayBuilder();
             for (Correlation c : b.correlations()) {
-                JsonObjectBuilder cb = Json.createObjectBuilder()
-                        .add("inputs", Json.createArrayBuilder().add(c.first()).add(c.second()));
+                JsonObjectBuilder cb = JSON.createObjectBuilder()
+                        .add("inputs", JSON.createArrayBuilder().add(c.first()).add(c.second()));
                 if (c.fromReadings()) {
                     cb.add("fromReadings", true);
                 } else {
@@ -482,13 +484,13 @@ public final class BudgetJson {
 
     /** @return an evaluation as JSON, with the parameters as entered */
     public static JsonObject evaluationJson(Evaluation e) {
-        JsonObjectBuilder b = Json.createObjectBuilder();
+        JsonObjectBuilder b = JSON.createObjectBuilder();
         if (e instanceof TypeA) {
             TypeA a = (TypeA) e;
             b.add("type", "A");
             double[] r = a.readings();
             if (r != null) {
-                JsonArrayBuilder rb = Json.createArrayBuilder();
+                JsonArrayBuilder rb = JSON.createArrayBuilder();
                 for (double v : r) {
                     rb.add(decimal(v));
                 }
@@ -571,7 +573,7 @@ public final class BudgetJson {
 
     /** @return the settings as JSON */
     public static JsonObject settingsJson(EvaluationSettings s) {
-        JsonObjectBuilder b = Json.createObjectBuilder();
+        JsonObjectBuilder b = JSON.createObjectBuilder();
         if (s.hasFixedCoverageFactor()) {
             b.add("coverageFactor", decimal(s.coverageFactor()));
         } else {
@@ -593,7 +595,7 @@ public final class BudgetJson {
 
     /** @return any JSON value as pretty-printed text ending in a newline */
     public static String pretty(JsonValue v) {
-        JsonWriterFactory f = Json.createWriterFactory(Map.of(JsonGenerator.PRETTY_PRINTING, true));
+        JsonWriterFactory f = JSON.createWriterFactory(Map.of(JsonGenerator.PRETTY_PRINTING, true));
         StringWriter w = new StringWriter();
         try (JsonWriter jw = f.createWriter(w)) {
             jw.write(v);
