@@ -16,6 +16,8 @@ public final class CommandLine {
             "      the GUM budget table and results of every output",
             "  " + ValidateCommand.USAGE,
             "      check Quire against the published worked examples",
+            "  " + BatchCommand.USAGE,
+            "      evaluate a template for every row of a CSV file of parameter values",
             "  quire version",
             "  quire help",
             "");
@@ -35,6 +37,8 @@ public final class CommandLine {
                     return EvaluateCommand.run(args, out);
                 case "validate":
                     return ValidateCommand.run(args, out);
+                case "batch":
+                    return BatchCommand.run(args, err);
                 case "version":
                 case "--version":
                     out.println("quire " + EngineVersion.get());
