@@ -63,8 +63,8 @@ class CanonicalJsonTest {
 
     @Test
     void shortestDecimalReadsBackExactlyAndDoesNotDependOnDoubleToString() {
-        // 2.82879384806159E17 is printed with extra digits by Double.toString before Java 19 (JDK-4511638,
-        // from memory); the shortest decimal has 15 digits
+        // Double.toString(2.82879384806159E17) gives 2.82879384806159008E17 on Java 17 (seen here; fixed in
+        // Java 19, JDK-4511638 from memory); the shortest decimal that reads back has 15 digits
         BigDecimal d = BudgetJson.decimal(2.82879384806159E17);
         assertEquals(0, d.compareTo(new BigDecimal("2.82879384806159E17")));
         assertEquals(0, BudgetJson.decimal(0.1).compareTo(new BigDecimal("0.1")));
