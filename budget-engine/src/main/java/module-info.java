@@ -18,7 +18,7 @@ module org.quire.engine {
     exports org.quire.engine.flow;
     exports org.quire.engine.line;
     exports org.quire.engine.conformity;
+    exports org.quire.engine.document;
     exports org.quire.engine.validate;
     exports org.quire.engine.io;
-    // exports org.quire.engine.document;
 }

@@ -35,6 +35,8 @@ public final class CommandLine {
             "      the assessor's automatic checklist; exit 1 when an item is not met",
             "  " + DiffCommand.USAGE,
             "      what changed from budget A to budget B and the effect on each U; exit 1 when they differ",
+            "  " + BatchCommand.USAGE,
+            "      evaluate a template for every row of a CSV file of parameter values",
             "  quire version",
             "  quire help",
             "");
@@ -68,6 +70,8 @@ public final class CommandLine {
                     return ReviewCommand.run(args, out);
                 case "diff":
                     return DiffCommand.run(args, out);
+                case "batch":
+                    return BatchCommand.run(args, err);
                 case "version":
                 case "--version":
                     out.println("quire " + EngineVersion.get());

@@ -1,6 +1,6 @@
 package org.quire.engine.io;
 
-import jakarta.json.Json;
+import jakarta.json.spi.JsonProvider;
 import jakarta.json.JsonArrayBuilder;
 import jakarta.json.JsonException;
 import jakarta.json.JsonObject;
@@ -49,10 +49,17 @@ import org.quire.engine.line.CalibrationLine;
  * <p>Stateless and thread-safe.
  */
 public final class BudgetJson {
+    /** One JSON-P provider for the class: {@code Json.create...} looks the provider up on every call, which is slow. */
+    private static final JsonProvider JSON = JsonProvider.provider();
     /** The layout's identifier, the value of the {@code format} field. */
     public static final String FORMAT = "quire-budget";
-    /** The format version this engine writes. */
-    public static final int FORMAT_VERSION = 1;
+    /**
+     * The format version this engine writes. Version 2 adds the document fields ({@code document},
+     * {@code dataSets}, {@code results}, {@code history}, {@code templateOrigin}, {@code template}), read by
+     * {@code org.quire.engine.document.DocumentJson}; here they are kept, like any other field this class does
+     * not interpret, in {@link Budget#extensions()}. Version 1 files are read as they are.
+     */
+    public static final int FORMAT_VERSION = 2;
     /** Largest budget file read, in bytes. */
     public static final long MAX_BYTES = 16L * 1024 * 1024;
     /** Deepest nesting of objects and arrays accepted. */
@@ -106,7 +113,7 @@ public final class BudgetJson {
             throw new BudgetFormatException("", "the file is empty");
         }
         JsonValue v;
-        try (JsonReader r = Json.createReader(new StringReader(text))) {
+        try (JsonReader r = JSON.createReader(new StringReader(text))) {
             v = r.readValue();
         } catch (JsonParsingException e) {
             JsonLocation l = e.getLocation();
@@ -180,7 +187,7 @@ public final class BudgetJson {
         }
         EvaluationSettings settings = root.has("settings") ? readSettings(root.get("settings"))
                 : EvaluationSettings.defaults();
-        JsonObjectBuilder ext = Json.createObjectBuilder();
+        JsonObjectBuilder ext = JSON.createObjectBuilder();
         for (Map.Entry<String, JsonValue> e : root.object().entrySet()) {
             if (!TOP_FIELDS.contains(e.getKey())) {
                 ext.add(e.getKey(), e.getValue());
@@ -427,21 +434,21 @@ public final class BudgetJson {
 
     /** @return the budget as a JSON object in the current format version */
     public static JsonObject toJson(Budget b) {
-        JsonObjectBuilder o = Json.createObjectBuilder();
+        JsonObjectBuilder o = JSON.createObjectBuilder();
         o.add("format", FORMAT);
         o.add("formatVersion", FORMAT_VERSION);
         o.add("title", b.title());
         if (!b.notes().isEmpty()) {
             o.add("notes", b.notes());
         }
-        JsonArrayBuilder model = Json.createArrayBuilder();
+        JsonArrayBuilder model = JSON.createArrayBuilder();
         for (String line : b.model().split("\n", -1)) {
             model.add(line);
         }
         o.add("model", model);
-        JsonArrayBuilder outs = Json.createArrayBuilder();
+        JsonArrayBuilder outs = JSON.createArrayBuilder();
         for (OutputQuantity q : b.outputs()) {
-            JsonObjectBuilder ob = Json.createObjectBuilder().add("name", q.name());
+            JsonObjectBuilder ob = JSON.createObjectBuilder().add("name", q.name());
             if (!q.unit().isEmpty()) {
                 ob.add("unit", q.unit());
             }
@@ -454,9 +461,9 @@ public final class BudgetJson {
             outs.add(ob);
         }
         o.add("outputs", outs);
-        JsonArrayBuilder ins = Json.createArrayBuilder();
+        JsonArrayBuilder ins = JSON.createArrayBuilder();
         for (InputQuantity q : b.inputs()) {
-            JsonObjectBuilder ib = Json.createObjectBuilder().add("name", q.name());
+            JsonObjectBuilder ib = JSON.createObjectBuilder().add("name", q.name());
             addText(ib, "description", q.description());
             addText(ib, "unit", q.unit());
             addText(ib, "source", q.source());
@@ -466,14 +473,14 @@ public final class BudgetJson {
         }
         o.add("inputs", ins);
         if (!b.correlations().isEmpty()) {
-            JsonArrayBuilder cs = Json.createArrayBuilder();
+            JsonArrayBuilder cs = JSON.createArrayBuilder();
             for (Correlation c : b.correlations()) {
-                JsonObjectBuilder cb = Json.createObjectBuilder()
-                        .add("inputs", Json.createArrayBuilder().add(c.first()).add(c.second()));
+                JsonObjectBuilder cb = JSON.createObjectBuilder()
+                        .add("inputs", JSON.createArrayBuilder().add(c.first()).add(c.second()));
                 if (c.fromReadings()) {
                     cb.add("fromReadings", true);
                 } else {
-                    cb.add("r", c.r());
+                    cb.add("r", decimal(c.r()));
                 }
                 addText(cb, "justification", c.justification());
                 cs.add(cb);
@@ -503,7 +510,7 @@ public final class BudgetJson {
 
     /** @return an evaluation as JSON, with the parameters as entered */
     public static JsonObject evaluationJson(Evaluation e) {
-        JsonObjectBuilder b = Json.createObjectBuilder();
+        JsonObjectBuilder b = JSON.createObjectBuilder();
         if (e instanceof FitParameter) {
             return FitEvaluationJson.toJson((FitParameter) e);
         }
@@ -512,20 +519,20 @@ public final class BudgetJson {
             b.add("type", "A");
             double[] r = a.readings();
             if (r != null) {
-                JsonArrayBuilder rb = Json.createArrayBuilder();
+                JsonArrayBuilder rb = JSON.createArrayBuilder();
                 for (double v : r) {
-                    rb.add(v);
+                    rb.add(decimal(v));
                 }
                 b.add("readings", rb);
             } else {
-                b.add("mean", a.estimate());
+                b.add("mean", decimal(a.estimate()));
                 if (!Double.isNaN(a.standardDeviation())) {
-                    b.add("s", a.standardDeviation());
+                    b.add("s", decimal(a.standardDeviation()));
                 }
                 b.add("n", a.count());
             }
             if (a.isPooled()) {
-                b.add("pooledS", a.pooledStandardDeviation());
+                b.add("pooledS", decimal(a.pooledStandardDeviation()));
                 addNumber(b, "pooledDof", a.dof());
             }
             return b.build();
@@ -545,17 +552,61 @@ public final class BudgetJson {
         } else if (Double.isNaN(v)) {
             b.addNull(key);
         } else {
-            b.add(key, v);
+            b.add(key, decimal(v));
         }
+    }
+
+    /**
+     * The shortest decimal that reads back as exactly {@code v}: the exact binary value rounded (half-even) to
+     * 1, 2, ... 17 significant digits, the first that converts back to {@code v}. Unlike
+     * {@link Double#toString(double)}, whose digits changed between Java releases, the result depends on the
+     * value alone, so files and content hashes do not change with the Java version.
+     *
+     * <p>References: IEEE 754-2019 clause 5.12.2 (17 significant digits always suffice for binary64);
+     * D. W. Matula, "In-and-out conversions", Commun. ACM 11 (1968) 47-50.
+     *
+     * @param v a finite number
+     * @return the decimal, trailing zeros removed; zero for both signed zeros
+     */
+    public static java.math.BigDecimal decimal(double v) {
+        if (!Double.isFinite(v)) {
+            throw new IllegalArgumentException("only finite numbers have a decimal form, not " + v);
+        }
+        if (v == 0) {
+            return java.math.BigDecimal.ZERO;
+        }
+        java.math.BigDecimal exact = new java.math.BigDecimal(v);
+        // A binary64 value can have hundreds of decimal digits. Cut it to 20 digits and, when digits were cut,
+        // append a nonzero "sticky" digit: rounding that to 17 or fewer digits gives the same result as
+        // rounding the exact value, and is much faster.
+        java.math.BigDecimal cut = exact.round(new java.math.MathContext(20, java.math.RoundingMode.DOWN));
+        if (cut.compareTo(exact) != 0) {
+            java.math.BigInteger u = cut.unscaledValue().multiply(java.math.BigInteger.TEN)
+                    .add(java.math.BigInteger.valueOf(cut.signum()));
+            cut = new java.math.BigDecimal(u, cut.scale() + 1);
+        }
+        for (int p = 1; p < 17; p++) {
+            java.math.BigDecimal r = cut.round(new java.math.MathContext(p, java.math.RoundingMode.HALF_EVEN));
+            if (r.doubleValue() == v) {
+                return plain(r);
+            }
+        }
+        return plain(cut.round(new java.math.MathContext(17, java.math.RoundingMode.HALF_EVEN)));
+    }
+
+    /** Strips trailing zeros but writes whole numbers of up to 21 digits without an exponent (100, not 1E+2). */
+    private static java.math.BigDecimal plain(java.math.BigDecimal r) {
+        java.math.BigDecimal s = r.stripTrailingZeros();
+        return s.scale() < 0 && s.precision() - s.scale() <= 21 ? s.setScale(0) : s;
     }
 
     /** @return the settings as JSON */
     public static JsonObject settingsJson(EvaluationSettings s) {
-        JsonObjectBuilder b = Json.createObjectBuilder();
+        JsonObjectBuilder b = JSON.createObjectBuilder();
         if (s.hasFixedCoverageFactor()) {
-            b.add("coverageFactor", s.coverageFactor());
+            b.add("coverageFactor", decimal(s.coverageFactor()));
         } else {
-            b.add("coverageProbability", s.coverageProbability());
+            b.add("coverageProbability", decimal(s.coverageProbability()));
         }
         b.add("higherOrder", s.higherOrder());
         b.add("dofRounding", s.dofRounding() == EvaluationSettings.DofRounding.TRUNCATE ? "truncate" : "exact");
@@ -573,7 +624,7 @@ public final class BudgetJson {
 
     /** @return any JSON value as pretty-printed text ending in a newline */
     public static String pretty(JsonValue v) {
-        JsonWriterFactory f = Json.createWriterFactory(Map.of(JsonGenerator.PRETTY_PRINTING, true));
+        JsonWriterFactory f = JSON.createWriterFactory(Map.of(JsonGenerator.PRETTY_PRINTING, true));
         StringWriter w = new StringWriter();
         try (JsonWriter jw = f.createWriter(w)) {
             jw.write(v);

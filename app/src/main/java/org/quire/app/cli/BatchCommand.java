@@ -1,0 +1,271 @@
+package org.quire.app.cli;
+
+import java.io.IOException;
+import java.io.PrintStream;
+import java.io.StringReader;
+import java.io.StringWriter;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.NoSuchFileException;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.HashMap;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.Set;
+import java.util.concurrent.atomic.AtomicInteger;
+import java.util.regex.Pattern;
+import java.util.stream.IntStream;
+import org.apache.commons.csv.CSVFormat;
+import org.apache.commons.csv.CSVParser;
+import org.apache.commons.csv.CSVPrinter;
+import org.apache.commons.csv.CSVRecord;
+import org.quire.app.Engine;
+import org.quire.engine.budget.Budget;
+import org.quire.engine.document.BudgetDocument;
+import org.quire.engine.document.DocumentStore;
+import org.quire.engine.document.Template;
+import org.quire.engine.document.TemplateParameter;
+import org.quire.engine.gum.GumEvaluator;
+import org.quire.engine.gum.GumResult;
+import org.quire.engine.gum.OutputResult;
+import org.quire.engine.io.BudgetFormatException;
+import org.quire.engine.model.CompiledModel;
+import org.quire.engine.model.ModelException;
+
+/**
+ * {@code quire batch TEMPLATE DATA.csv -o RESULTS.csv}: evaluates a template (GUM) for every row of a CSV
+ * file whose columns are named after the template's parameters (an optional {@code id} column is copied
+ * through), on all processor cores, and writes per row the estimate, u, k and U of every output and an
+ * {@code error} column. A bad row is reported on stderr with its line number and does not stop the others.
+ * Exit status 0 when every row was evaluated, 1 when some failed, 2 for unusable files or arguments.
+ */
+final class BatchCommand {
+    static final String USAGE = "quire batch TEMPLATE DATA.csv -o RESULTS.csv";
+    /** Largest data file read. */
+    static final long MAX_CSV_BYTES = 256L * 1024 * 1024;
+    private static final Pattern NUMBER = Pattern.compile("[-+]?(\\d+\\.?\\d*|\\.\\d+)([eE][-+]?\\d+)?");
+
+    private BatchCommand() {
+    }
+
+    /** One data row: where it is, its id and its cells by column. */
+    private record Row(long line, String id, Map<String, String> cells, String problem) {
+    }
+
+    /** One row's result: the output cells, or the error. */
+    private record Outcome(List<String> cells, String error) {
+    }
+
+    static int run(String[] argv, PrintStream err) throws Exception {
+        Args a = new Args(argv, 1, Set.of("output"), Set.of());
+        a.expectPositional(2, USAGE);
+        if (!a.has("output")) {
+            throw new UsageException("give the results file with -o RESULTS.csv\nusage: " + USAGE);
+        }
+        String templateName = a.positional().get(0);
+        String dataName = a.positional().get(1);
+        Path out = Files.path(a.get("output", ""));
+        Template template = loadTemplate(templateName);
+        Budget base = template.document().budget();
+        CompiledModel model;
+        try {
+            model = base.compile(Engine.library());
+        } catch (ModelException e) {
+            throw Files.modelProblem(templateName, e);
+        }
+        List<Row> rows = readRows(dataName, template);
+        int n = rows.size();
+        AtomicInteger done = new AtomicInteger();
+        int step = Math.max(1, n / 10);
+        err.println("quire batch: " + n + " rows of " + dataName + " with template " + template.id() + " version "
+                + template.version() + " on " + Runtime.getRuntime().availableProcessors() + " cores");
+        Outcome[] outcomes = IntStream.range(0, n).parallel().mapToObj(i -> {
+            Outcome o = evaluate(template, model, rows.get(i));
+            synchronized (err) {
+                int d = done.incrementAndGet();
+                if (o.error() != null) {
+                    err.println(dataName + " line " + rows.get(i).line() + ": " + o.error());
+                }
+                if (d % step == 0 && d < n) {
+                    err.println("quire batch: " + d + " of " + n + " rows");
+                }
+            }
+            return o;
+        }).toArray(Outcome[]::new);
+        List<String> header = new ArrayList<>();
+        header.add("id");
+        for (String o : base.outputNames()) {
+            header.addAll(List.of(o + "_estimate", o + "_u", o + "_k", o + "_U"));
+        }
+        header.add("error");
+        StringWriter text = new StringWriter();
+        int failed = 0;
+        try (CSVPrinter p = new CSVPrinter(text, CSVFormat.DEFAULT.builder().setRecordSeparator("\n").get())) {
+            p.printRecord(header);
+            for (int i = 0; i < n; i++) {
+                List<String> record = new ArrayList<>();
+                record.add(rows.get(i).id());
+                Outcome o = outcomes[i];
+                if (o.error() == null) {
+                    record.addAll(o.cells());
+                    record.add("");
+                } else {
+                    failed++;
+                    for (int k = 0; k < 4 * base.outputs().size(); k++) {
+                        record.add("");
+                    }
+                    record.add(o.error());
+                }
+                p.printRecord(record);
+            }
+        }
+        DocumentStore.writeAtomically(out, text.toString().getBytes(StandardCharsets.UTF_8), false);
+        err.println("quire batch: " + (n - failed) + " rows evaluated, " + failed + " failed; results in " + out);
+        return failed == 0 ? 0 : 1;
+    }
+
+    private static Template loadTemplate(String name) throws UsageException, Files.FileProblem {
+        Path p = Files.path(name);
+        if (java.nio.file.Files.isDirectory(p)) {
+            throw new UsageException("'" + name + "' is a folder, not a template file");
+        }
+        BudgetDocument d;
+        try {
+            d = DocumentStore.open(p);
+        } catch (NoSuchFileException e) {
+            throw new UsageException("no such file: " + name);
+        } catch (IOException e) {
+            throw new Files.FileProblem(name, "cannot read the file: " + e.getMessage());
+        } catch (BudgetFormatException e) {
+            throw new Files.FileProblem(name, e.getMessage());
+        }
+        try {
+            return Template.of(d);
+        } catch (IllegalArgumentException e) {
+            throw new Files.FileProblem(name, e.getMessage());
+        }
+    }
+
+    private static List<Row> readRows(String name, Template template) throws UsageException, Files.FileProblem {
+        Path p = Files.path(name);
+        String text;
+        try {
+            if (java.nio.file.Files.size(p) > MAX_CSV_BYTES) {
+                throw new Files.FileProblem(name, "the file is larger than " + MAX_CSV_BYTES + " bytes");
+            }
+            text = java.nio.file.Files.readString(p, StandardCharsets.UTF_8);
+        } catch (NoSuchFileException e) {
+            throw new UsageException("no such file: " + name);
+        } catch (java.nio.charset.MalformedInputException e) {
+            throw new Files.FileProblem(name, "the file is not UTF-8 text");
+        } catch (IOException e) {
+            throw new Files.FileProblem(name, "cannot read the file: " + e.getMessage());
+        }
+        if (text.startsWith("\ufeff")) {
+            text = text.substring(1);
+        }
+        int[] lineStarts = lineStarts(text);
+        CSVFormat format = CSVFormat.DEFAULT.builder().setHeader().setSkipHeaderRecord(true).setTrim(true)
+                .setIgnoreEmptyLines(true).get();
+        List<Row> rows = new ArrayList<>();
+        try (CSVParser parser = CSVParser.builder().setReader(new StringReader(text)).setFormat(format).get()) {
+            List<String> columns = parser.getHeaderNames();
+            checkColumns(name, columns, template);
+            for (CSVRecord r : parser) {
+                long line = lineOf(lineStarts, r.getCharacterPosition());
+                String id = r.isMapped("id") && r.isSet("id") ? r.get("id") : Long.toString(r.getRecordNumber());
+                if (!r.isConsistent()) {
+                    rows.add(new Row(line, id, Map.of(), "the row has " + r.size() + " cells, the header "
+                            + columns.size()));
+                    continue;
+                }
+                Map<String, String> cells = new HashMap<>();
+                for (String c : columns) {
+                    if (!c.equals("id")) {
+                        cells.put(c, r.get(c));
+                    }
+                }
+                rows.add(new Row(line, id, cells, null));
+            }
+        } catch (IOException | java.io.UncheckedIOException | IllegalArgumentException | IllegalStateException e) {
+            throw new Files.FileProblem(name, "not a readable CSV file: " + e.getMessage());
+        }
+        return rows;
+    }
+
+    private static void checkColumns(String name, List<String> columns, Template template)
+            throws Files.FileProblem {
+        List<String> params = template.parameterNames();
+        for (String c : columns) {
+            if (!c.equals("id") && !params.contains(c)) {
+                throw new Files.FileProblem(name, "column '" + c + "' is not a parameter of template "
+                        + template.id() + "; its parameters are " + String.join(", ", params) + " (and 'id')");
+            }
+        }
+        for (TemplateParameter tp : template.spec().parameters()) {
+            if (!tp.hasDefault() && !columns.contains(tp.name())) {
+                throw new Files.FileProblem(name, "parameter '" + tp.name() + "' has no default, so the file needs "
+                        + "a column '" + tp.name() + "'");
+            }
+        }
+    }
+
+    private static int[] lineStarts(String text) {
+        int count = 1;
+        for (int i = 0; i < text.length(); i++) {
+            if (text.charAt(i) == '\n') {
+                count++;
+            }
+        }
+        int[] starts = new int[count];
+        int k = 1;
+        for (int i = 0; i < text.length(); i++) {
+            if (text.charAt(i) == '\n') {
+                starts[k++] = i + 1;
+            }
+        }
+        return starts;
+    }
+
+    private static long lineOf(int[] lineStarts, long position) {
+        int i = Arrays.binarySearch(lineStarts, (int) position);
+        return (i >= 0 ? i : -i - 2) + 1;
+    }
+
+    private static Outcome evaluate(Template template, CompiledModel model, Row row) {
+        if (row.problem() != null) {
+            return new Outcome(null, row.problem());
+        }
+        Map<String, Double> values = new LinkedHashMap<>();
+        for (Map.Entry<String, String> c : row.cells().entrySet()) {
+            String v = c.getValue();
+            if (v.isEmpty()) {
+                continue;
+            }
+            if (!NUMBER.matcher(v).matches()) {
+                return new Outcome(null, "parameter '" + c.getKey() + "': '" + v + "' is not a number"
+                        + (v.matches("[-+]?\\d+,\\d+") ? " (use a point as the decimal separator)" : ""));
+            }
+            values.put(c.getKey(), Double.parseDouble(v));
+        }
+        try {
+            Budget b = template.budgetFor(values);
+            GumResult r = GumEvaluator.evaluate(b, model, b.correlationMatrix(), b.settings());
+            List<String> cells = new ArrayList<>();
+            for (OutputResult o : r.outputs()) {
+                cells.add(EvaluateCommand.num(o.estimate()));
+                cells.add(EvaluateCommand.num(o.standardUncertainty()));
+                cells.add(EvaluateCommand.num(o.coverageFactor()));
+                cells.add(EvaluateCommand.num(o.expandedUncertainty()));
+            }
+            return new Outcome(cells, null);
+        } catch (ModelException e) {
+            return new Outcome(null, e.problems().isEmpty() ? String.valueOf(e.getMessage())
+                    : e.problems().get(0).message());
+        } catch (IllegalArgumentException e) {
+            return new Outcome(null, e.getMessage());
+        }
+    }
+}

@@ -1,0 +1,79 @@
+package org.quire.app.cli;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.io.ByteArrayOutputStream;
+import java.io.PrintStream;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.List;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+/** {@code quire batch}: one result line per data row, in order, with bad rows reported and kept. */
+class BatchCommandTest {
+    private static final Path TEMPLATE = Path.of(System.getProperty("quire.projectRoot", ".."), "budget-engine",
+            "src", "test", "resources", "org", "quire", "engine", "document", "tvfl-gravimetric-water-v1.json");
+
+    private static int run(ByteArrayOutputStream err, String... args) {
+        return CommandLine.run(args, new PrintStream(new ByteArrayOutputStream(), true, StandardCharsets.UTF_8),
+                new PrintStream(err, true, StandardCharsets.UTF_8));
+    }
+
+    /** The template's model at the estimates, written out here (TVFL procedure FP-03 as in the template). */
+    private static double[] model(double m, double t, double v) {
+        double rho = 998.2 * (1 - 2.1e-4 * (t - 20));
+        double vref = 1000 * m * 1.00106 / rho;
+        return new double[] {vref, 100 * (v - vref) / vref};
+    }
+
+    @Test
+    void everyRowGivesOneLineInOrderAndBadRowsAreReportedWithTheirLineNumber(@TempDir Path dir) throws Exception {
+        Path data = dir.resolve("runs.csv");
+        StringBuilder s = new StringBuilder("id,m_net,T_tank,V_meter\n");
+        for (int i = 1; i <= 200; i++) {
+            s.append("run-").append(i).append(',').append(10 + i).append(',').append(i == 57 ? "60" : "20.5")
+                    .append(',').append(10.02 + i).append('\n');
+        }
+        s.append("run-201,abc,20,30\n");
+        Files.writeString(data, s);
+        Path out = dir.resolve("results.csv");
+        ByteArrayOutputStream err = new ByteArrayOutputStream();
+        assertEquals(1, run(err, "batch", TEMPLATE.toString(), data.toString(), "-o", out.toString()));
+        String messages = err.toString(StandardCharsets.UTF_8);
+        assertTrue(messages.contains("runs.csv line 58: parameter 'T_tank' = 60.0 lies outside"), messages);
+        assertTrue(messages.contains("runs.csv line 202: parameter 'm_net': 'abc' is not a number"), messages);
+        assertTrue(messages.contains("199 rows evaluated, 2 failed"), messages);
+        List<String> lines = Files.readAllLines(out);
+        assertEquals(202, lines.size());
+        assertEquals("id,V_ref_estimate,V_ref_u,V_ref_k,V_ref_U,E_estimate,E_u,E_k,E_U,error", lines.get(0));
+        for (int i = 1; i <= 200; i++) {
+            String[] c = lines.get(i).split(",", -1);
+            assertEquals("run-" + i, c[0]);
+            if (i == 57) {
+                assertTrue(c[1].isEmpty() && c[9].contains("outside its allowed range"), lines.get(i));
+                continue;
+            }
+            double[] y = model(10 + i, 20.5, 10.02 + i);
+            // printed with 10 significant digits: half a unit in the 10th digit
+            assertEquals(y[0], Double.parseDouble(c[1]), 5e-10 * Math.abs(y[0]), lines.get(i));
+            assertEquals(y[1], Double.parseDouble(c[5]), 5e-10 * Math.abs(y[1]) + 1e-12, lines.get(i));
+            assertEquals(Double.parseDouble(c[3]) * Double.parseDouble(c[2]), Double.parseDouble(c[4]),
+                    1e-9 * Double.parseDouble(c[4]));
+            assertEquals("", c[9]);
+        }
+    }
+
+    @Test
+    void aColumnThatIsNoParameterStopsTheRunBeforeAnyRow(@TempDir Path dir) throws Exception {
+        Path data = dir.resolve("runs.csv");
+        Files.writeString(data, "id,m_net,T_tnak,V_meter\nrun-1,10,20,10\n");
+        ByteArrayOutputStream err = new ByteArrayOutputStream();
+        assertEquals(2, run(err, "batch", TEMPLATE.toString(), data.toString(), "-o",
+                dir.resolve("r.csv").toString()));
+        assertTrue(err.toString(StandardCharsets.UTF_8).contains("column 'T_tnak' is not a parameter"));
+        assertTrue(Files.notExists(dir.resolve("r.csv")));
+    }
+}
