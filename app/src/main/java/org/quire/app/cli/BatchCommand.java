@@ -23,6 +23,10 @@ import org.apache.commons.csv.CSVPrinter;
 import org.apache.commons.csv.CSVRecord;
 import org.quire.app.Engine;
 import org.quire.engine.budget.Budget;
+import org.quire.engine.budget.EvaluationSettings;
+import org.quire.engine.montecarlo.BudgetSimulation;
+import org.quire.engine.montecarlo.CoverageInterval;
+import org.quire.engine.montecarlo.ProgressListener;
 import org.quire.engine.document.BudgetDocument;
 import org.quire.engine.document.DocumentStore;
 import org.quire.engine.document.Template;
@@ -42,7 +46,7 @@ import org.quire.engine.model.ModelException;
  * Exit status 0 when every row was evaluated, 1 when some failed, 2 for unusable files or arguments.
  */
 final class BatchCommand {
-    static final String USAGE = "quire batch TEMPLATE DATA.csv -o RESULTS.csv";
+    static final String USAGE = "quire batch TEMPLATE DATA.csv -o RESULTS.csv [--mc [--trials N] [--seed S]]";
     /** Largest data file read. */
     static final long MAX_CSV_BYTES = 256L * 1024 * 1024;
     private static final Pattern NUMBER = Pattern.compile("[-+]?(\\d+\\.?\\d*|\\.\\d+)([eE][-+]?\\d+)?");
@@ -59,7 +63,11 @@ final class BatchCommand {
     }
 
     static int run(String[] argv, PrintStream err) throws Exception {
-        Args a = new Args(argv, 1, Set.of("output"), Set.of());
+        Args a = new Args(argv, 1, Set.of("output", "trials", "seed"), Set.of("mc"));
+        boolean mc = a.has("mc");
+        if (!mc && (a.has("trials") || a.has("seed"))) {
+            throw new UsageException("--trials and --seed go with --mc");
+        }
         a.expectPositional(2, USAGE);
         if (!a.has("output")) {
             throw new UsageException("give the results file with -o RESULTS.csv\nusage: " + USAGE);
@@ -69,6 +77,10 @@ final class BatchCommand {
         Path out = Files.path(a.get("output", ""));
         Template template = loadTemplate(templateName);
         Budget base = template.document().budget();
+        if (mc) {
+            base = base.withSettings(MonteCarloCommand.settings(a, base.settings()));
+        }
+        EvaluationSettings settings = base.settings();
         CompiledModel model;
         try {
             model = base.compile(Engine.library());
@@ -77,12 +89,13 @@ final class BatchCommand {
         }
         List<Row> rows = readRows(dataName, template);
         int n = rows.size();
+        long started = System.nanoTime();
         AtomicInteger done = new AtomicInteger();
         int step = Math.max(1, n / 10);
         err.println("quire batch: " + n + " rows of " + dataName + " with template " + template.id() + " version "
                 + template.version() + " on " + Runtime.getRuntime().availableProcessors() + " cores");
         Outcome[] outcomes = IntStream.range(0, n).parallel().mapToObj(i -> {
-            Outcome o = evaluate(template, model, rows.get(i));
+            Outcome o = evaluate(template, model, rows.get(i), mc ? settings : null);
             synchronized (err) {
                 int d = done.incrementAndGet();
                 if (o.error() != null) {
@@ -98,6 +111,9 @@ final class BatchCommand {
         header.add("id");
         for (String o : base.outputNames()) {
             header.addAll(List.of(o + "_estimate", o + "_u", o + "_k", o + "_U"));
+            if (mc) {
+                header.addAll(List.of(o + "_mc_low", o + "_mc_high", o + "_gum_check"));
+            }
         }
         header.add("error");
         StringWriter text = new StringWriter();
@@ -113,7 +129,7 @@ final class BatchCommand {
                     record.add("");
                 } else {
                     failed++;
-                    for (int k = 0; k < 4 * base.outputs().size(); k++) {
+                    for (int k = 0; k < (mc ? 7 : 4) * base.outputs().size(); k++) {
                         record.add("");
                     }
                     record.add(o.error());
@@ -122,7 +138,10 @@ final class BatchCommand {
             }
         }
         DocumentStore.writeAtomically(out, text.toString().getBytes(StandardCharsets.UTF_8), false);
+        double seconds = (System.nanoTime() - started) / 1e9;
         err.println("quire batch: " + (n - failed) + " rows evaluated, " + failed + " failed; results in " + out);
+        err.println(String.format(java.util.Locale.ROOT, "quire batch: %.2f s, %.0f rows per second", seconds,
+                n / Math.max(seconds, 1e-9)));
         return failed == 0 ? 0 : 1;
     }
 
@@ -234,7 +253,11 @@ final class BatchCommand {
         return (i >= 0 ? i : -i - 2) + 1;
     }
 
-    private static Outcome evaluate(Template template, CompiledModel model, Row row) {
+    /**
+     * @param mc the settings for the Monte Carlo method (one thread per row, the rows run in parallel), or null
+     *     for the GUM only
+     */
+    private static Outcome evaluate(Template template, CompiledModel model, Row row, EvaluationSettings mc) {
         if (row.problem() != null) {
             return new Outcome(null, row.problem());
         }
@@ -259,6 +282,20 @@ final class BatchCommand {
                 cells.add(EvaluateCommand.num(o.standardUncertainty()));
                 cells.add(EvaluateCommand.num(o.coverageFactor()));
                 cells.add(EvaluateCommand.num(o.expandedUncertainty()));
+                if (mc != null) {
+                    cells.addAll(List.of("", "", ""));
+                }
+            }
+            if (mc != null) {
+                BudgetSimulation.Outcome m = BudgetSimulation.run(b, model, r,
+                        BudgetSimulation.settings(mc, r).withThreads(1), ProgressListener.NONE);
+                int per = 7;
+                for (int k = 0; k < r.outputs().size(); k++) {
+                    CoverageInterval ci = m.result().output(k).shortestInterval();
+                    cells.set(k * per + 4, EvaluateCommand.num(ci.lower()));
+                    cells.set(k * per + 5, EvaluateCommand.num(ci.upper()));
+                    cells.set(k * per + 6, m.comparisons().get(k).confirmed() ? "confirmed" : "not confirmed");
+                }
             }
             return new Outcome(cells, null);
         } catch (ModelException e) {

@@ -76,4 +76,31 @@ class BatchCommandTest {
         assertTrue(err.toString(StandardCharsets.UTF_8).contains("column 'T_tnak' is not a parameter"));
         assertTrue(Files.notExists(dir.resolve("r.csv")));
     }
+
+    @Test
+    void withTheMonteCarloMethodEveryRowGetsItsIntervalAndTheGumCheck(@TempDir Path dir) throws Exception {
+        Path data = dir.resolve("runs.csv");
+        Files.writeString(data, "id,m_net,T_tank,V_meter\nrun-1,1000,20.5,1002.6\nrun-2,500,20.5,501.2\n");
+        Path out = dir.resolve("results.csv");
+        ByteArrayOutputStream err = new ByteArrayOutputStream();
+        assertEquals(0, run(err, "batch", TEMPLATE.toString(), data.toString(), "-o", out.toString(), "--mc",
+                "--trials", "20000", "--seed", "5"), err.toString(StandardCharsets.UTF_8));
+        List<String> lines = Files.readAllLines(out);
+        assertEquals("id,V_ref_estimate,V_ref_u,V_ref_k,V_ref_U,V_ref_mc_low,V_ref_mc_high,V_ref_gum_check,"
+                + "E_estimate,E_u,E_k,E_U,E_mc_low,E_mc_high,E_gum_check,error", lines.get(0));
+        for (int i = 1; i <= 2; i++) {
+            String[] c = lines.get(i).split(",", -1);
+            double y = Double.parseDouble(c[1]);
+            double bigU = Double.parseDouble(c[4]);
+            double low = Double.parseDouble(c[5]);
+            double high = Double.parseDouble(c[6]);
+            // the Monte Carlo interval surrounds the estimate and is about as wide as the GUM interval
+            assertTrue(low < y && y < high, lines.get(i));
+            assertEquals(2 * bigU, high - low, 0.3 * bigU, lines.get(i));
+            assertTrue(c[7].equals("confirmed") || c[7].equals("not confirmed"), c[7]);
+        }
+        ByteArrayOutputStream err2 = new ByteArrayOutputStream();
+        assertEquals(2, run(err2, "batch", TEMPLATE.toString(), data.toString(), "-o", out.toString(), "--trials", "5"));
+        assertTrue(err2.toString(StandardCharsets.UTF_8).contains("go with --mc"));
+    }
 }
