@@ -24,7 +24,7 @@ import org.quire.engine.montecarlo.ProgressListener;
  * intervals). The last line gives the median run.
  */
 final class BenchCommand {
-    static final String USAGE = "quire bench [--trials N] [--threads T] [--runs R]";
+    static final String USAGE = "quire bench [--trials N] [--threads T] [--runs R] | quire bench --budget-inputs N [--runs R]";
     static final String BUDGET = "tarrow-vale-benchmark.json";
 
     private BenchCommand() {
@@ -44,8 +44,11 @@ final class BenchCommand {
     }
 
     static int run(String[] argv, PrintStream out) throws Exception {
-        Args a = new Args(argv, 1, Set.of("trials", "threads", "runs"), Set.of());
+        Args a = new Args(argv, 1, Set.of("trials", "threads", "runs", "budget-inputs"), Set.of());
         a.expectPositional(0, USAGE);
+        if (a.has("budget-inputs")) {
+            return documentBench(a, out);
+        }
         long trials = a.integer("trials", 2_000_000);
         if (trials < 1 || trials > MonteCarloSettings.TRIALS_LIMIT) {
             throw new UsageException("--trials must be between 1 and " + MonteCarloSettings.TRIALS_LIMIT + ", not "
@@ -78,5 +81,59 @@ final class BenchCommand {
         out.printf(Locale.ROOT, "trials_per_second=%.0f seconds=%.4f trials=%d threads=%d%n", trials / median, median,
                 trials, threads);
         return 0;
+    }
+
+    /**
+     * Opens, evaluates (GUM) and saves a generated budget of N inputs, R times after two warm-up rounds; prints
+     * the median of each step and, last, {@code open_ms=.. evaluate_ms=.. save_ms=.. inputs=N}.
+     */
+    static int documentBench(Args a, PrintStream out) throws Exception {
+        long n = a.integer("budget-inputs", 500);
+        if (n < 1 || n > 5000) {
+            throw new UsageException("--budget-inputs must be between 1 and 5000");
+        }
+        long runs = a.integer("runs", 5);
+        if (runs < 1 || runs > 100) {
+            throw new UsageException("--runs must be between 1 and 100");
+        }
+        Path dir = java.nio.file.Files.createTempDirectory("quire-bench");
+        Path file = dir.resolve("large.json");
+        try {
+            org.quire.engine.document.BudgetDocument doc = org.quire.engine.document.BudgetDocument.newDraft(
+                    LargeBudget.of((int) n), "bench", java.time.Instant.now());
+            org.quire.engine.document.DocumentStore.save(doc, file);
+            double[][] ms = new double[3][(int) runs];
+            for (int r = -2; r < runs; r++) {
+                long t0 = System.nanoTime();
+                org.quire.engine.document.BudgetDocument d = org.quire.engine.document.DocumentStore.open(file);
+                long t1 = System.nanoTime();
+                GumResult g = GumEvaluator.evaluate(d.budget(), Engine.library());
+                long t2 = System.nanoTime();
+                org.quire.engine.document.DocumentStore.save(d.withResults(org.quire.engine.document.ResultSnapshot.of(
+                        org.quire.engine.io.ResultJson.toJson(d.budget().title(), g), java.time.Instant.now())), file);
+                long t3 = System.nanoTime();
+                if (r >= 0) {
+                    ms[0][r] = (t1 - t0) / 1e6;
+                    ms[1][r] = (t2 - t1) / 1e6;
+                    ms[2][r] = (t3 - t2) / 1e6;
+                    out.printf(Locale.ROOT, "run %d: open %.1f ms, evaluate %.1f ms, save %.1f ms (u_c(E) = %.4g %%)%n",
+                            r + 1, ms[0][r], ms[1][r], ms[2][r], g.outputs().get(0).standardUncertainty());
+                }
+            }
+            double[] median = new double[3];
+            for (int k = 0; k < 3; k++) {
+                double[] s = ms[k].clone();
+                Arrays.sort(s);
+                median[k] = s[s.length / 2];
+            }
+            out.printf(Locale.ROOT, "open_ms=%.1f evaluate_ms=%.1f save_ms=%.1f inputs=%d%n", median[0], median[1],
+                    median[2], n);
+            return 0;
+        } finally {
+            for (Path p : java.nio.file.Files.list(dir).toArray(Path[]::new)) {
+                java.nio.file.Files.deleteIfExists(p);
+            }
+            java.nio.file.Files.deleteIfExists(dir);
+        }
     }
 }

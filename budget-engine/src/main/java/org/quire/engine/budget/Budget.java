@@ -1,6 +1,6 @@
 package org.quire.engine.budget;
 
-import jakarta.json.Json;
+import org.quire.engine.io.JsonSupport;
 import jakarta.json.JsonObject;
 import java.util.ArrayList;
 import java.util.HashSet;
@@ -243,7 +243,7 @@ public final class Budget {
 
     /** @return an empty JSON object, for callers that build extensions */
     public static JsonObject noExtensions() {
-        return Json.createObjectBuilder().build();
+        return JsonSupport.JSON.createObjectBuilder().build();
     }
 
     @Override

@@ -1,5 +1,6 @@
 package org.quire.engine.document;
 
+import org.quire.engine.io.JsonSupport;
 import jakarta.json.spi.JsonProvider;
 import jakarta.json.JsonArrayBuilder;
 import jakarta.json.JsonObject;
@@ -49,7 +50,7 @@ import org.quire.engine.io.ResultJson;
  * <p>Stateless and thread-safe.
  */
 public final class DocumentJson {
-    /** One JSON-P provider for the class: {@code Json.create...} looks the provider up on every call, which is slow. */
+    /** One JSON-P provider for the class: {@code JsonSupport.JSON.create...} looks the provider up on every call, which is slow. */
     private static final JsonProvider JSON = JsonProvider.provider();
     /** The top-level fields version 2 adds. */
     public static final Set<String> DOCUMENT_FIELDS = Set.of("document", "results", "history",

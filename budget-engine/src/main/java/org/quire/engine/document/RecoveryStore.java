@@ -1,5 +1,6 @@
 package org.quire.engine.document;
 
+import org.quire.engine.io.JsonSupport;
 import jakarta.json.spi.JsonProvider;
 import jakarta.json.JsonObject;
 import java.io.IOException;
@@ -30,7 +31,7 @@ import org.quire.engine.io.JsonCursor;
  * <p>Immutable and thread-safe for different ids.
  */
 public final class RecoveryStore {
-    /** One JSON-P provider for the class: {@code Json.create...} looks the provider up on every call, which is slow. */
+    /** One JSON-P provider for the class: {@code JsonSupport.JSON.create...} looks the provider up on every call, which is slow. */
     private static final JsonProvider JSON = JsonProvider.provider();
     /** The identifier of the recovery file layout. */
     public static final String FORMAT = "quire-recovery";

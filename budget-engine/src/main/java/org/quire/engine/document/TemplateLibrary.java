@@ -1,5 +1,6 @@
 package org.quire.engine.document;
 
+import org.quire.engine.io.JsonSupport;
 import jakarta.json.spi.JsonProvider;
 import jakarta.json.JsonObject;
 import jakarta.json.JsonObjectBuilder;
@@ -32,7 +33,7 @@ import org.quire.engine.io.BudgetJson;
  * <p>Immutable and thread-safe; every listing reads the folders afresh.
  */
 public final class TemplateLibrary {
-    /** One JSON-P provider for the class: {@code Json.create...} looks the provider up on every call, which is slow. */
+    /** One JSON-P provider for the class: {@code JsonSupport.JSON.create...} looks the provider up on every call, which is slow. */
     private static final JsonProvider JSON = JsonProvider.provider();
     /** Where a template was found. */
     public enum Folder { SHIPPED, PERSONAL, TEAM }

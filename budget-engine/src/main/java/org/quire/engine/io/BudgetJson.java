@@ -49,7 +49,7 @@ import org.quire.engine.line.CalibrationLine;
  * <p>Stateless and thread-safe.
  */
 public final class BudgetJson {
-    /** One JSON-P provider for the class: {@code Json.create...} looks the provider up on every call, which is slow. */
+    /** One JSON-P provider for the class: {@code JsonSupport.JSON.create...} looks the provider up on every call, which is slow. */
     private static final JsonProvider JSON = JsonProvider.provider();
     /** The layout's identifier, the value of the {@code format} field. */
     public static final String FORMAT = "quire-budget";

@@ -1,6 +1,5 @@
 package org.quire.engine.io;
 
-import jakarta.json.Json;
 import jakarta.json.JsonArrayBuilder;
 import jakarta.json.JsonObject;
 import jakarta.json.JsonObjectBuilder;
@@ -198,17 +197,17 @@ public final class ConformityJson {
 
     /** @return an envelope as explicit zones */
     public static JsonObject envelopeJson(MpeEnvelope e) {
-        JsonArrayBuilder zones = Json.createArrayBuilder();
+        JsonArrayBuilder zones = JsonSupport.JSON.createArrayBuilder();
         for (MpeZone z : e.zones()) {
-            JsonObjectBuilder zb = Json.createObjectBuilder().add("name", z.name()).add("from", z.flowFrom())
+            JsonObjectBuilder zb = JsonSupport.JSON.createObjectBuilder().add("name", z.name()).add("from", z.flowFrom())
                     .add("to", z.flowTo());
             if (!z.dependsOnTemperature()) {
                 MpeLimits l = z.limits();
                 zb.add("lower", l.lowerPercent()).add("upper", l.upperPercent());
             } else {
-                JsonArrayBuilder bands = Json.createArrayBuilder();
+                JsonArrayBuilder bands = JsonSupport.JSON.createArrayBuilder();
                 for (TemperatureBand b : z.bands()) {
-                    bands.add(Json.createObjectBuilder().add("fromCelsius", b.fromCelsius())
+                    bands.add(JsonSupport.JSON.createObjectBuilder().add("fromCelsius", b.fromCelsius())
                             .add("toCelsius", b.toCelsius()).add("lower", b.limits().lowerPercent())
                             .add("upper", b.limits().upperPercent()));
                 }
@@ -216,12 +215,12 @@ public final class ConformityJson {
             }
             zones.add(zb);
         }
-        return Json.createObjectBuilder().add("name", e.name()).add("source", e.source()).add("zones", zones).build();
+        return JsonSupport.JSON.createObjectBuilder().add("name", e.name()).add("source", e.source()).add("zones", zones).build();
     }
 
     /** @return a decision rule as JSON */
     public static JsonObject ruleJson(DecisionRule r) {
-        JsonObjectBuilder b = Json.createObjectBuilder();
+        JsonObjectBuilder b = JsonSupport.JSON.createObjectBuilder();
         switch (r.kind()) {
             case SIMPLE_ACCEPTANCE:
                 b.add("kind", "simple-acceptance");
@@ -241,9 +240,9 @@ public final class ConformityJson {
 
     /** @return the decisions, the overall decision and the certificate statement */
     public static JsonObject assessmentJson(ConformityAssessment a) {
-        JsonArrayBuilder pts = Json.createArrayBuilder();
+        JsonArrayBuilder pts = JsonSupport.JSON.createArrayBuilder();
         for (PointDecision d : a.decisions()) {
-            JsonObjectBuilder b = Json.createObjectBuilder();
+            JsonObjectBuilder b = JsonSupport.JSON.createObjectBuilder();
             b.add("flow", d.point().flow());
             b.add("zone", d.zone());
             b.add("error", d.point().errorPercent());
@@ -259,7 +258,7 @@ public final class ConformityJson {
             BudgetJson.addNumber(b, "specificRisk", d.specificRisk());
             pts.add(b);
         }
-        return Json.createObjectBuilder().add("mpe", a.envelope().name()).add("rule", a.rule().kind().title())
+        return JsonSupport.JSON.createObjectBuilder().add("mpe", a.envelope().name()).add("rule", a.rule().kind().title())
                 .add("decisions", pts).add("overall", a.overall().label()).add("statement", a.statement()).build();
     }
 }

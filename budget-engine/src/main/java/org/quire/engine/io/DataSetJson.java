@@ -1,6 +1,5 @@
 package org.quire.engine.io;
 
-import jakarta.json.Json;
 import jakarta.json.JsonArray;
 import jakarta.json.JsonArrayBuilder;
 import jakarta.json.JsonObject;
@@ -128,7 +127,7 @@ public final class DataSetJson {
 
     /** @return the data sets as a JSON array in the layout {@link #readAll} reads */
     public static JsonArray toJson(List<CalibrationLine> lines) {
-        JsonArrayBuilder a = Json.createArrayBuilder();
+        JsonArrayBuilder a = JsonSupport.JSON.createArrayBuilder();
         for (CalibrationLine l : lines) {
             a.add(toJson(l));
         }
@@ -138,7 +137,7 @@ public final class DataSetJson {
     /** @return one data set as JSON */
     public static JsonObject toJson(CalibrationLine l) {
         CalibrationData data = l.data();
-        JsonObjectBuilder o = Json.createObjectBuilder().add("name", data.name());
+        JsonObjectBuilder o = JsonSupport.JSON.createObjectBuilder().add("name", data.name());
         if (!data.xUnit().isEmpty()) {
             o.add("xUnit", data.xUnit());
         }
@@ -151,9 +150,9 @@ public final class DataSetJson {
         } else if (l.referenceX() != 0) {
             o.add("referenceX", l.referenceX());
         }
-        JsonArrayBuilder pts = Json.createArrayBuilder();
+        JsonArrayBuilder pts = JsonSupport.JSON.createArrayBuilder();
         for (CalibrationPoint p : data.points()) {
-            JsonObjectBuilder pb = Json.createObjectBuilder().add("x", p.x()).add("y", p.y());
+            JsonObjectBuilder pb = JsonSupport.JSON.createObjectBuilder().add("x", p.x()).add("y", p.y());
             if (p.ux() != 0) {
                 pb.add("u_x", p.ux());
             }

@@ -1,6 +1,5 @@
 package org.quire.engine.io;
 
-import jakarta.json.Json;
 import jakarta.json.JsonObject;
 import java.util.ArrayList;
 import java.util.List;
@@ -46,7 +45,7 @@ final class FitEvaluationJson {
     }
 
     static JsonObject toJson(FitParameter f) {
-        return Json.createObjectBuilder().add("type", "fit").add("dataSet", f.dataSet())
+        return JsonSupport.JSON.createObjectBuilder().add("type", "fit").add("dataSet", f.dataSet())
                 .add("parameter", f.parameter().label()).build();
     }
 }

@@ -1,6 +1,5 @@
 package org.quire.engine.io;
 
-import jakarta.json.Json;
 import jakarta.json.JsonArrayBuilder;
 import jakarta.json.JsonObject;
 import jakarta.json.JsonObjectBuilder;
@@ -73,24 +72,24 @@ public final class FlowPointsJson {
 
     /** @return the flow points as JSON, in the layout {@link #read} reads */
     public static JsonObject toJson(FlowPoints fp) {
-        JsonObjectBuilder o = Json.createObjectBuilder().add("flowUnit", fp.flowUnit());
+        JsonObjectBuilder o = JsonSupport.JSON.createObjectBuilder().add("flowUnit", fp.flowUnit());
         if (!fp.output().isEmpty()) {
             o.add("output", fp.output());
         }
-        JsonArrayBuilder cols = Json.createArrayBuilder();
+        JsonArrayBuilder cols = JsonSupport.JSON.createArrayBuilder();
         fp.columns().forEach(cols::add);
         o.add("columns", cols);
-        JsonArrayBuilder pts = Json.createArrayBuilder();
+        JsonArrayBuilder pts = JsonSupport.JSON.createArrayBuilder();
         for (FlowPoints.Row r : fp.rows()) {
-            JsonArrayBuilder v = Json.createArrayBuilder();
+            JsonArrayBuilder v = JsonSupport.JSON.createArrayBuilder();
             for (double d : r.values()) {
                 v.add(d);
             }
-            pts.add(Json.createObjectBuilder().add("flow", r.flow()).add("values", v));
+            pts.add(JsonSupport.JSON.createObjectBuilder().add("flow", r.flow()).add("values", v));
         }
         o.add("points", pts);
         if (fp.envelope() != null) {
-            JsonObjectBuilder c = Json.createObjectBuilder().add("mpe", ConformityJson.envelopeJson(fp.envelope()))
+            JsonObjectBuilder c = JsonSupport.JSON.createObjectBuilder().add("mpe", ConformityJson.envelopeJson(fp.envelope()))
                     .add("rule", ConformityJson.ruleJson(fp.rule()));
             if (!Double.isNaN(fp.temperature())) {
                 c.add("temperature", fp.temperature());
@@ -106,9 +105,9 @@ public final class FlowPointsJson {
      *     {@code correlation} and, when limits were given, {@code conformity}
      */
     public static JsonObject resultJson(FlowRangeResult r) {
-        JsonArrayBuilder pts = Json.createArrayBuilder();
+        JsonArrayBuilder pts = JsonSupport.JSON.createArrayBuilder();
         for (FlowRangeResult.Point p : r.points()) {
-            JsonObjectBuilder b = Json.createObjectBuilder();
+            JsonObjectBuilder b = JsonSupport.JSON.createObjectBuilder();
             b.add("flow", p.flow());
             b.add("estimate", p.estimate());
             b.add("standardUncertainty", p.standardUncertainty());
@@ -118,7 +117,7 @@ public final class FlowPointsJson {
             BudgetJson.addNumber(b, "relativeExpandedUncertainty", p.relativeExpandedUncertainty());
             pts.add(b);
         }
-        JsonObjectBuilder o = Json.createObjectBuilder().add("output", r.output()).add("unit", r.unit())
+        JsonObjectBuilder o = JsonSupport.JSON.createObjectBuilder().add("output", r.output()).add("unit", r.unit())
                 .add("flowUnit", r.flowUnit()).add("points", pts)
                 .add("covariance", ResultJson.matrix(r.covariance()))
                 .add("correlation", ResultJson.matrix(r.correlation()));

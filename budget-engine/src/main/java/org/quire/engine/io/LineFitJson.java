@@ -1,6 +1,5 @@
 package org.quire.engine.io;
 
-import jakarta.json.Json;
 import jakarta.json.JsonArrayBuilder;
 import jakarta.json.JsonObject;
 import jakarta.json.JsonObjectBuilder;
@@ -29,7 +28,7 @@ public final class LineFitJson {
      * @return the JSON
      */
     public static JsonObject toJson(LineFit fit, List<Double> forward, List<double[]> inverse) {
-        JsonObjectBuilder o = Json.createObjectBuilder();
+        JsonObjectBuilder o = JsonSupport.JSON.createObjectBuilder();
         o.add("dataSet", fit.data().name());
         o.add("method", fit.method().abbreviation());
         o.add("referenceX", fit.referenceX());
@@ -49,20 +48,20 @@ public final class LineFitJson {
         o.add("consistency", fit.consistency().label());
         o.add("residuals", array(fit.residuals()));
         o.add("standardizedResiduals", array(fit.standardizedResiduals()));
-        JsonArrayBuilder notes = Json.createArrayBuilder();
+        JsonArrayBuilder notes = JsonSupport.JSON.createArrayBuilder();
         fit.notes().forEach(notes::add);
         o.add("notes", notes);
-        JsonArrayBuilder pred = Json.createArrayBuilder();
+        JsonArrayBuilder pred = JsonSupport.JSON.createArrayBuilder();
         for (double x : forward) {
             LineEstimate e = fit.valueAt(x);
-            JsonObjectBuilder b = Json.createObjectBuilder().add("x", x).add("y", e.value())
+            JsonObjectBuilder b = JsonSupport.JSON.createObjectBuilder().add("x", x).add("y", e.value())
                     .add("u", e.standardUncertainty());
             BudgetJson.addNumber(b, "dof", e.dof());
             pred.add(b);
         }
         for (double[] yu : inverse) {
             LineEstimate e = fit.inverse(yu[0], yu[1]);
-            JsonObjectBuilder b = Json.createObjectBuilder().add("y", yu[0]).add("u_y", yu[1]).add("x", e.value())
+            JsonObjectBuilder b = JsonSupport.JSON.createObjectBuilder().add("y", yu[0]).add("u_y", yu[1]).add("x", e.value())
                     .add("u", e.standardUncertainty());
             BudgetJson.addNumber(b, "dof", e.dof());
             pred.add(b);
@@ -72,7 +71,7 @@ public final class LineFitJson {
     }
 
     private static JsonArrayBuilder array(double[] v) {
-        JsonArrayBuilder a = Json.createArrayBuilder();
+        JsonArrayBuilder a = JsonSupport.JSON.createArrayBuilder();
         for (double d : v) {
             a.add(d);
         }

@@ -1,6 +1,5 @@
 package org.quire.engine.io;
 
-import jakarta.json.Json;
 import jakarta.json.JsonArrayBuilder;
 import jakarta.json.JsonObject;
 import jakarta.json.JsonObjectBuilder;
@@ -30,7 +29,7 @@ public final class MonteCarloJson {
      */
     public static JsonObject toJson(BudgetSimulation.Outcome o, boolean withHistogram) {
         MonteCarloResult r = o.result();
-        JsonObjectBuilder b = Json.createObjectBuilder();
+        JsonObjectBuilder b = JsonSupport.JSON.createObjectBuilder();
         b.add("format", "quire-montecarlo");
         b.add("formatVersion", 1);
         b.add("engineVersion", EngineVersion.get());
@@ -40,11 +39,11 @@ public final class MonteCarloJson {
         b.add("usesCopula", r.usesCopula());
         b.add("adaptiveRuns", r.adaptiveRuns());
         b.add("stabilized", r.stabilized());
-        JsonArrayBuilder outs = Json.createArrayBuilder();
+        JsonArrayBuilder outs = JsonSupport.JSON.createArrayBuilder();
         for (int k = 0; k < r.outputCount(); k++) {
             OutputSummary s = r.output(k);
             GumComparison c = o.comparisons().get(k);
-            JsonObjectBuilder ob = Json.createObjectBuilder();
+            JsonObjectBuilder ob = JsonSupport.JSON.createObjectBuilder();
             ob.add("name", o.outputNames().get(k));
             ob.add("mean", s.mean());
             ob.add("standardUncertainty", s.standardUncertainty());
@@ -53,7 +52,7 @@ public final class MonteCarloJson {
             s.exclusionNote().ifPresent(n -> ob.add("exclusionNote", n));
             ob.add("symmetricInterval", interval(s.symmetricInterval()));
             ob.add("shortestInterval", interval(s.shortestInterval()));
-            ob.add("comparison", Json.createObjectBuilder()
+            ob.add("comparison", JsonSupport.JSON.createObjectBuilder()
                     .add("tolerance", c.tolerance())
                     .add("lowerDifference", c.lowerDifference())
                     .add("upperDifference", c.upperDifference())
@@ -61,15 +60,15 @@ public final class MonteCarloJson {
                     .add("verdict", verdict(c)));
             if (withHistogram) {
                 Histogram h = s.histogram();
-                JsonArrayBuilder edges = Json.createArrayBuilder();
+                JsonArrayBuilder edges = JsonSupport.JSON.createArrayBuilder();
                 for (double e : h.edges()) {
                     edges.add(e);
                 }
-                JsonArrayBuilder counts = Json.createArrayBuilder();
+                JsonArrayBuilder counts = JsonSupport.JSON.createArrayBuilder();
                 for (long n : h.counts()) {
                     counts.add(n);
                 }
-                ob.add("histogram", Json.createObjectBuilder().add("edges", edges).add("counts", counts));
+                ob.add("histogram", JsonSupport.JSON.createObjectBuilder().add("edges", edges).add("counts", counts));
             }
             outs.add(ob);
         }
@@ -77,14 +76,14 @@ public final class MonteCarloJson {
         if (r.outputCount() > 1) {
             b.add("outputCorrelation", ResultJson.matrix(r.outputCorrelation()));
         }
-        JsonArrayBuilder notes = Json.createArrayBuilder();
+        JsonArrayBuilder notes = JsonSupport.JSON.createArrayBuilder();
         r.notes().forEach(notes::add);
         b.add("notes", notes);
         return b.build();
     }
 
     private static JsonObject interval(CoverageInterval i) {
-        return Json.createObjectBuilder().add("lower", i.lower()).add("upper", i.upper())
+        return JsonSupport.JSON.createObjectBuilder().add("lower", i.lower()).add("upper", i.upper())
                 .add("halfWidth", 0.5 * (i.upper() - i.lower())).build();
     }
 }

@@ -1,6 +1,5 @@
 package org.quire.engine.io;
 
-import jakarta.json.Json;
 import jakarta.json.JsonArrayBuilder;
 import jakarta.json.JsonObject;
 import jakarta.json.JsonObjectBuilder;
@@ -25,13 +24,13 @@ public final class ResultJson {
 
     /** @return the result as JSON */
     public static JsonObject toJson(String title, GumResult r) {
-        JsonObjectBuilder o = Json.createObjectBuilder();
+        JsonObjectBuilder o = JsonSupport.JSON.createObjectBuilder();
         o.add("format", FORMAT);
         o.add("formatVersion", 1);
         o.add("engineVersion", EngineVersion.get());
         o.add("title", title);
         o.add("settings", BudgetJson.settingsJson(r.settings()));
-        JsonArrayBuilder outs = Json.createArrayBuilder();
+        JsonArrayBuilder outs = JsonSupport.JSON.createArrayBuilder();
         int digits = r.settings().significantDigits();
         for (OutputResult out : r.outputs()) {
             outs.add(output(out, digits));
@@ -41,19 +40,19 @@ public final class ResultJson {
             o.add("outputCovariance", matrix(r.covariance()));
             o.add("outputCorrelation", matrix(r.correlation()));
         }
-        JsonObjectBuilder q = Json.createObjectBuilder();
+        JsonObjectBuilder q = JsonSupport.JSON.createObjectBuilder();
         for (Map.Entry<String, Double> e : r.quantities().entrySet()) {
             BudgetJson.addNumber(q, e.getKey(), e.getValue());
         }
         o.add("quantities", q);
-        JsonArrayBuilder w = Json.createArrayBuilder();
+        JsonArrayBuilder w = JsonSupport.JSON.createArrayBuilder();
         r.warnings().forEach(w::add);
         o.add("warnings", w);
         return o.build();
     }
 
     private static JsonObject output(OutputResult out, int digits) {
-        JsonObjectBuilder b = Json.createObjectBuilder();
+        JsonObjectBuilder b = JsonSupport.JSON.createObjectBuilder();
         b.add("name", out.name());
         b.add("unit", out.unit());
         b.add("estimate", out.estimate());
@@ -66,13 +65,13 @@ public final class ResultJson {
         BudgetJson.addNumber(b, "relativeExpandedUncertainty", out.relativeExpandedUncertainty());
         b.add("correlationVariance", out.correlationVariance());
         b.add("higherOrderVariance", out.higherOrderVariance());
-        b.add("rounded", Json.createObjectBuilder()
+        b.add("rounded", JsonSupport.JSON.createObjectBuilder()
                 .add("estimate", Rounding.estimate(out.estimate(), out.expandedUncertainty(), digits).toPlainString())
                 .add("expandedUncertainty", Rounding.uncertainty(out.expandedUncertainty(), digits).toPlainString())
                 .add("standardUncertainty", Rounding.uncertainty(out.standardUncertainty(), digits).toPlainString()));
-        JsonArrayBuilder rows = Json.createArrayBuilder();
+        JsonArrayBuilder rows = JsonSupport.JSON.createArrayBuilder();
         for (Contribution c : out.contributions()) {
-            JsonObjectBuilder rb = Json.createObjectBuilder();
+            JsonObjectBuilder rb = JsonSupport.JSON.createObjectBuilder();
             rb.add("input", c.input());
             rb.add("unit", c.unit());
             rb.add("type", c.type());
@@ -86,22 +85,22 @@ public final class ResultJson {
             rows.add(rb);
         }
         b.add("contributions", rows);
-        JsonArrayBuilder terms = Json.createArrayBuilder();
+        JsonArrayBuilder terms = JsonSupport.JSON.createArrayBuilder();
         for (CorrelationTerm t : out.correlationTerms()) {
-            terms.add(Json.createObjectBuilder().add("inputs", Json.createArrayBuilder().add(t.first()).add(t.second()))
+            terms.add(JsonSupport.JSON.createObjectBuilder().add("inputs", JsonSupport.JSON.createArrayBuilder().add(t.first()).add(t.second()))
                     .add("r", t.r()).add("variance", t.variance()));
         }
         b.add("correlationTerms", terms);
-        JsonArrayBuilder w = Json.createArrayBuilder();
+        JsonArrayBuilder w = JsonSupport.JSON.createArrayBuilder();
         out.warnings().forEach(w::add);
         b.add("warnings", w);
         return b.build();
     }
 
     static JsonArrayBuilder matrix(double[][] m) {
-        JsonArrayBuilder a = Json.createArrayBuilder();
+        JsonArrayBuilder a = JsonSupport.JSON.createArrayBuilder();
         for (double[] row : m) {
-            JsonArrayBuilder r = Json.createArrayBuilder();
+            JsonArrayBuilder r = JsonSupport.JSON.createArrayBuilder();
             for (double v : row) {
                 if (Double.isFinite(v)) {
                     r.add(v);

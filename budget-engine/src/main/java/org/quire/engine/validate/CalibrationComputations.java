@@ -1,6 +1,6 @@
 package org.quire.engine.validate;
 
-import jakarta.json.Json;
+import org.quire.engine.io.JsonSupport;
 import jakarta.json.JsonObject;
 import jakarta.json.JsonValue;
 import java.util.ArrayList;
@@ -114,7 +114,7 @@ final class CalibrationComputations {
         double lo = a.has("lower") ? a.get("lower").number(false) : Double.NEGATIVE_INFINITY;
         double hi = a.has("upper") ? a.get("upper").number(false) : Double.POSITIVE_INFINITY;
         double dof = a.has("dof") ? a.get("dof").number(true) : Double.POSITIVE_INFINITY;
-        return Json.createObjectBuilder()
+        return JsonSupport.JSON.createObjectBuilder()
                 .add("probabilityOfConformity", ConformityProbability.scaledT(y, u, dof, lo, hi)).build();
     }
 

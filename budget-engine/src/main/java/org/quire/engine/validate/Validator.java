@@ -1,6 +1,6 @@
 package org.quire.engine.validate;
 
-import jakarta.json.Json;
+import org.quire.engine.io.JsonSupport;
 import jakarta.json.JsonNumber;
 import jakarta.json.JsonObject;
 import jakarta.json.JsonString;
@@ -75,7 +75,7 @@ public final class Validator {
             double p = args.getJsonNumber("p").doubleValue();
             JsonValue nuV = args.get("dof");
             double nu = nuV instanceof JsonString ? Double.POSITIVE_INFINITY : ((JsonNumber) nuV).doubleValue();
-            return Json.createObjectBuilder().add("k", CoverageFactor.of(p, nu)).build();
+            return JsonSupport.JSON.createObjectBuilder().add("k", CoverageFactor.of(p, nu)).build();
         });
         m.put("line", (budget, args, settings) -> CalibrationComputations.line(budget, args));
         m.put("conformity", (budget, args, settings) -> CalibrationComputations.conformity(args));
