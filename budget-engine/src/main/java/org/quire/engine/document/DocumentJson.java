@@ -51,7 +51,7 @@ import org.quire.engine.io.ResultJson;
  */
 public final class DocumentJson {
     /** One JSON-P provider for the class: {@code JsonSupport.JSON.create...} looks the provider up on every call, which is slow. */
-    private static final JsonProvider JSON = JsonProvider.provider();
+    private static final JsonProvider JSON = JsonSupport.JSON;
     /** The top-level fields version 2 adds. */
     public static final Set<String> DOCUMENT_FIELDS = Set.of("document", "results", "history",
             "templateOrigin", "template");

@@ -32,7 +32,7 @@ import org.quire.engine.io.JsonCursor;
  */
 public final class RecoveryStore {
     /** One JSON-P provider for the class: {@code JsonSupport.JSON.create...} looks the provider up on every call, which is slow. */
-    private static final JsonProvider JSON = JsonProvider.provider();
+    private static final JsonProvider JSON = JsonSupport.JSON;
     /** The identifier of the recovery file layout. */
     public static final String FORMAT = "quire-recovery";
     private static final String SUFFIX = ".recovery.json";

@@ -34,7 +34,7 @@ import org.quire.engine.io.BudgetJson;
  */
 public final class TemplateLibrary {
     /** One JSON-P provider for the class: {@code JsonSupport.JSON.create...} looks the provider up on every call, which is slow. */
-    private static final JsonProvider JSON = JsonProvider.provider();
+    private static final JsonProvider JSON = JsonSupport.JSON;
     /** Where a template was found. */
     public enum Folder { SHIPPED, PERSONAL, TEAM }
 

@@ -50,7 +50,7 @@ import org.quire.engine.line.CalibrationLine;
  */
 public final class BudgetJson {
     /** One JSON-P provider for the class: {@code JsonSupport.JSON.create...} looks the provider up on every call, which is slow. */
-    private static final JsonProvider JSON = JsonProvider.provider();
+    private static final JsonProvider JSON = JsonSupport.JSON;
     /** The layout's identifier, the value of the {@code format} field. */
     public static final String FORMAT = "quire-budget";
     /**
