@@ -63,7 +63,7 @@ class CrashSafetyTest {
                 Thread.sleep(2);
             }
             assertTrue(lastSaved.get() >= 0, "the saving process did not start: " + other);
-            Thread.sleep(random.nextInt(1, 60));
+            Thread.sleep(random.nextInt(1, 400));
             long before = lastSaved.get();
             p.destroyForcibly();
             assertTrue(p.waitFor(10, TimeUnit.SECONDS));
