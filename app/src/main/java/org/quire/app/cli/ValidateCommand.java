@@ -36,7 +36,10 @@ final class ValidateCommand {
             }
             outcomes = v.runAll(dir);
         } else if (java.nio.file.Files.isDirectory(Path.of("worked-examples"))) {
-            outcomes = v.runAll(Path.of("worked-examples"));
+            outcomes = new java.util.ArrayList<>(v.runAll(Path.of("worked-examples")));
+            if (java.nio.file.Files.isDirectory(Path.of("templates"))) {
+                outcomes.addAll(templates(Path.of("templates")));
+            }
         } else {
             outcomes = bundled(v);
         }
@@ -53,13 +56,46 @@ final class ValidateCommand {
             URI uri = url.toURI();
             if (uri.getScheme().equals("jar")) {
                 try (FileSystem fs = FileSystems.newFileSystem(uri, Map.of())) {
-                    return v.runAll(fs.getPath("/worked-examples"));
+                    List<CheckOutcome> all = new java.util.ArrayList<>(v.runAll(fs.getPath("/worked-examples")));
+                    if (java.nio.file.Files.isDirectory(fs.getPath("/templates"))) {
+                        all.addAll(templates(fs.getPath("/templates")));
+                    }
+                    return all;
                 }
             }
             return v.runAll(Path.of(uri));
         } catch (URISyntaxException e) {
             throw new IOException(e);
         }
+    }
+
+    /**
+     * Every shipped template must evaluate without errors and without warnings (model, unit and result
+     * warnings); one outcome per template.
+     */
+    static List<CheckOutcome> templates(Path dir) throws IOException {
+        List<Path> files;
+        try (java.util.stream.Stream<Path> st = java.nio.file.Files.list(dir)) {
+            files = st.filter(p -> p.getFileName().toString().endsWith(".json")).sorted()
+                    .collect(java.util.stream.Collectors.toList());
+        }
+        List<CheckOutcome> out = new java.util.ArrayList<>();
+        for (Path f : files) {
+            String name = f.getFileName().toString();
+            List<String> problems = new java.util.ArrayList<>();
+            try {
+                org.quire.engine.budget.Budget b = org.quire.engine.io.BudgetJson.read(f);
+                org.quire.engine.gum.GumResult r = org.quire.engine.gum.GumEvaluator.evaluate(b, Engine.library());
+                problems.addAll(r.warnings());
+                r.outputs().forEach(o -> problems.addAll(o.warnings()));
+            } catch (org.quire.engine.io.BudgetFormatException | org.quire.engine.model.ModelException
+                    | IllegalArgumentException e) {
+                problems.add(e.getMessage());
+            }
+            out.add(new CheckOutcome(name, "shipped template", "evaluates without errors or warnings", "none",
+                    problems.isEmpty() ? "none" : String.join("; ", problems), "exact", problems.isEmpty(), ""));
+        }
+        return out;
     }
 
     static int print(List<CheckOutcome> outcomes, PrintStream out) {
