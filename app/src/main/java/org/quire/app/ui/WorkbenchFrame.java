@@ -525,15 +525,18 @@ public final class WorkbenchFrame extends JFrame {
         }
     }
 
-    /** Compares the editor's budget (A) with the budget in {@code other} (B), off the event thread. */
+    /**
+     * Compares the budget in {@code other} (A, usually an earlier version) with the editor's budget (B), off the
+     * event thread, and shows the two side by side.
+     */
     public void compareWith(BudgetEditor ed, Path other) {
-        Budget a = ed.document().budget();
-        String nameA = ed.document().name();
+        Budget b = ed.document().budget();
+        String nameB = ed.document().name() + " (open)";
         status("Comparing with " + other + "\u2026", false);
         new SwingWorker<Comparison, Void>() {
             @Override
             protected Comparison doInBackground() throws Exception {
-                Budget b = DocumentStore.open(other).budget();
+                Budget a = DocumentStore.open(other).budget();
                 return BudgetComparison.compare(a, b, library);
             }
 
@@ -542,7 +545,7 @@ public final class WorkbenchFrame extends JFrame {
                 try {
                     Comparison c = get();
                     status("Compared with " + other, false);
-                    new CompareWindow(WorkbenchFrame.this, c, nameA, String.valueOf(other.getFileName()))
+                    new CompareWindow(WorkbenchFrame.this, c, String.valueOf(other.getFileName()), nameB)
                             .setVisible(true);
                 } catch (InterruptedException e) {
                     Thread.currentThread().interrupt();

@@ -28,14 +28,14 @@ class WorkbenchCompareTest extends GuiTestSupport {
             JTable changes = w.changesTable();
             boolean listed = onEdt(() -> {
                 for (int r = 0; r < changes.getRowCount(); r++) {
-                    if ("input changed".equals(changes.getValueAt(r, 0)) && "I_net".equals(changes.getValueAt(r, 1))
-                            && "TVFL balance B2, certificate 2026-02".equals(changes.getValueAt(r, 3))) {
+                    if ("input".equals(changes.getValueAt(r, 0)) && "I_net".equals(changes.getValueAt(r, 1))
+                            && "TVFL balance B2, certificate 2026-02".equals(changes.getValueAt(r, 4))) {
                         return true;
                     }
                 }
                 return false;
             });
-            assertTrue(listed, "I_net is listed as changed, with its new source on the side of A (this budget)");
+            assertTrue(listed, "I_net is listed as changed, with its new source on the side of B (the open budget)");
             JTable effects = w.effectsTable();
             assertEquals(2, (int) onEdt(effects::getRowCount), "one row per output: E and q");
             assertEquals("E", onEdt(() -> effects.getValueAt(0, 0)));

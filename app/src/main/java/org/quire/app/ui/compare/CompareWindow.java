@@ -24,6 +24,7 @@ import org.quire.app.compare.OutputEffect;
 import org.quire.app.compare.QuantityChange;
 import org.quire.app.report.Figures;
 import org.quire.app.ui.Colors;
+import org.quire.engine.gum.Rounding;
 import org.quire.engine.budget.InputQuantity;
 
 /**
@@ -42,8 +43,8 @@ public final class CompareWindow extends JDialog {
     /**
      * @param owner the workbench window
      * @param c the comparison of A with B
-     * @param nameA what A is called (the open budget's name)
-     * @param nameB what B is called (the other file's name)
+     * @param nameA what A is called (the file chosen, usually the earlier budget)
+     * @param nameB what B is called (the open budget)
      */
     public CompareWindow(Window owner, Comparison c, String nameA, String nameB) {
         super(owner, "Compare " + nameA + " with " + nameB, ModalityType.MODELESS);
@@ -60,11 +61,13 @@ public final class CompareWindow extends JDialog {
         effects.setName("effects");
         changes = new JTable(new Rows(new String[] {"What", "Name", "Field", "A", "B"}, changeRows(c)));
         changes.setName("changes");
-        changes.getColumnModel().getColumn(0).setPreferredWidth(90);
-        changes.getColumnModel().getColumn(1).setPreferredWidth(90);
-        changes.getColumnModel().getColumn(2).setPreferredWidth(130);
-        changes.getColumnModel().getColumn(3).setPreferredWidth(220);
-        changes.getColumnModel().getColumn(4).setPreferredWidth(220);
+        changes.getColumnModel().getColumn(0).setPreferredWidth(80);
+        changes.getColumnModel().getColumn(1).setPreferredWidth(80);
+        changes.getColumnModel().getColumn(2).setPreferredWidth(110);
+        changes.getColumnModel().getColumn(3).setPreferredWidth(200);
+        changes.getColumnModel().getColumn(4).setPreferredWidth(200);
+        changes.setDefaultRenderer(Object.class, new TipRenderer());
+        effects.setDefaultRenderer(Object.class, new TipRenderer());
         model = new JTable(new Rows(new String[] {"A", "Model in A", "B", "Model in B"}, modelRows(c.model())));
         model.setName("modelSideBySide");
         model.getColumnModel().getColumn(0).setMaxWidth(36);
@@ -103,8 +106,15 @@ public final class CompareWindow extends JDialog {
         return s.replace("&", "&amp;").replace("<", "&lt;").replace(">", "&gt;");
     }
 
-    private static String num(double v) {
-        return Double.isNaN(v) ? "\u2014" : Figures.estimate(v);
+    /** @return y to the last digit of U shown with three significant digits */
+    private static String est(double y, double u) {
+        if (Double.isNaN(y)) {
+            return "\u2014";
+        }
+        if (u > 0 && Double.isFinite(u) && Double.isFinite(y)) {
+            return Rounding.estimate(y, u, 3).toPlainString().replace('-', '\u2212');
+        }
+        return Figures.estimate(y);
     }
 
     private static String unc(double v) {
@@ -115,8 +125,8 @@ public final class CompareWindow extends JDialog {
         List<Object[]> rows = new ArrayList<>();
         for (OutputEffect e : c.effects()) {
             double p = e.changePercent();
-            rows.add(new Object[] {e.name(), e.unit(), num(e.estimateA()), unc(e.expandedA()), num(e.coverageFactorA()),
-                num(e.estimateB()), unc(e.expandedB()), num(e.coverageFactorB()),
+            rows.add(new Object[] {e.name(), e.unit(), est(e.estimateA(), e.expandedA()), unc(e.expandedA()),
+                unc(e.coverageFactorA()), est(e.estimateB(), e.expandedB()), unc(e.expandedB()), unc(e.coverageFactorB()),
                 Double.isNaN(p) ? "\u2014" : String.format(Locale.ROOT, "%+.1f %%", p)});
         }
         return rows;
@@ -128,17 +138,17 @@ public final class CompareWindow extends JDialog {
             rows.add(new Object[] {"budget", "", f.field(), f.before(), f.after()});
         }
         for (InputQuantity q : c.inputsRemoved()) {
-            rows.add(new Object[] {"input removed", q.name(), "", q.evaluation().basis(), ""});
+            rows.add(new Object[] {"input", q.name(), "(removed)", q.evaluation().basis(), ""});
         }
         for (InputQuantity q : c.inputsAdded()) {
-            rows.add(new Object[] {"input added", q.name(), "", "", q.evaluation().basis()});
+            rows.add(new Object[] {"input", q.name(), "(added)", "", q.evaluation().basis()});
         }
         quantities(rows, "input", c.inputsChanged());
         for (String n : c.outputsRemoved()) {
-            rows.add(new Object[] {"output removed", n, "", n, ""});
+            rows.add(new Object[] {"output", n, "(removed)", n, ""});
         }
         for (String n : c.outputsAdded()) {
-            rows.add(new Object[] {"output added", n, "", "", n});
+            rows.add(new Object[] {"output", n, "(added)", "", n});
         }
         quantities(rows, "output", c.outputsChanged());
         for (FieldChange f : c.correlations()) {
@@ -148,7 +158,7 @@ public final class CompareWindow extends JDialog {
             rows.add(new Object[] {"setting", "", f.field(), f.before(), f.after()});
         }
         for (FieldChange f : c.otherFields()) {
-            rows.add(new Object[] {"other field", "", f.field(), f.before(), f.after()});
+            rows.add(new Object[] {"other", "", f.field(), f.before(), f.after()});
         }
         if (c.modelChanged()) {
             long removed = c.model().stream().filter(e -> e.kind() == LineEdit.Kind.REMOVED).count();
@@ -161,7 +171,7 @@ public final class CompareWindow extends JDialog {
     private static void quantities(List<Object[]> rows, String what, List<QuantityChange> list) {
         for (QuantityChange q : list) {
             for (FieldChange f : q.changes()) {
-                rows.add(new Object[] {what + " changed", q.name(), f.field(), f.before(), f.after()});
+                rows.add(new Object[] {what, q.name(), f.field(), f.before(), f.after()});
             }
         }
     }
@@ -217,6 +227,18 @@ public final class CompareWindow extends JDialog {
         @Override public Object getValueAt(int r, int c) { return rows.get(r)[c]; }
     }
 
+    /** Shows a cell's full text as its tooltip. */
+    private static final class TipRenderer extends DefaultTableCellRenderer {
+        private static final long serialVersionUID = 1L;
+
+        @Override
+        public Component getTableCellRendererComponent(JTable t, Object v, boolean sel, boolean focus, int r, int c) {
+            super.getTableCellRendererComponent(t, v, sel, focus, r, c);
+            setToolTipText(v == null || v.toString().isEmpty() ? null : v.toString());
+            return this;
+        }
+    }
+
     /** Marks removed text in A and added text in B; keeps model text in a fixed-width font. */
     private static final class ModelRenderer extends DefaultTableCellRenderer {
         private static final long serialVersionUID = 1L;
@@ -228,6 +250,7 @@ public final class CompareWindow extends JDialog {
             boolean kept = m.hidden(r) == LineEdit.Kind.KEPT;
             Font f = t.getFont();
             setFont(c % 2 == 1 ? new Font(Font.MONOSPACED, Font.PLAIN, f.getSize()) : f);
+            setToolTipText(c % 2 == 1 && v != null && !v.toString().isEmpty() ? v.toString() : null);
             if (!sel) {
                 Color bg = t.getBackground();
                 if (!kept && c <= 1 && !"".equals(m.getValueAt(r, 1))) {

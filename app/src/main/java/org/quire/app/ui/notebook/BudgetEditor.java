@@ -79,7 +79,7 @@ public final class BudgetEditor extends JPanel implements EditorContext {
         monteCarlo = new MonteCarloSection(runner);
         review = new ReviewPanel(this, java.time.Clock.systemUTC());
         page.setLayout(new BoxLayout(page, BoxLayout.Y_AXIS));
-        JPanel outline = new JPanel(new FlowLayout(FlowLayout.LEFT, 2, 2));
+        JPanel outline = new JPanel(new org.quire.app.ui.WrapLayout(FlowLayout.LEFT, 2, 2));
         outline.add(new JLabel("Go to:"));
         for (Section s : List.of(purpose, model, inputs, correlations, results, monteCarlo, review)) {
             NotebookSection ns = new NotebookSection(s);

@@ -34,6 +34,7 @@ import org.quire.app.review.Review;
 import org.quire.app.review.ReviewContext;
 import org.quire.app.review.Verdict;
 import org.quire.app.ui.Colors;
+import org.quire.app.ui.WrapLayout;
 import org.quire.app.ui.document.Recalculation;
 import org.quire.app.ui.notebook.EditorContext;
 import org.quire.app.ui.notebook.Section;
@@ -91,11 +92,12 @@ public final class ReviewPanel implements Section {
         head.setName("reviewHead");
 
         checklist.setSelectionMode(ListSelectionModel.SINGLE_SELECTION);
-        checklist.getColumnModel().getColumn(0).setPreferredWidth(330);
-        checklist.getColumnModel().getColumn(1).setPreferredWidth(130);
-        checklist.getColumnModel().getColumn(2).setPreferredWidth(85);
-        checklist.getColumnModel().getColumn(3).setPreferredWidth(75);
-        checklist.getColumnModel().getColumn(4).setPreferredWidth(280);
+        checklist.getColumnModel().getColumn(0).setPreferredWidth(360);
+        checklist.getColumnModel().getColumn(1).setPreferredWidth(120);
+        checklist.getColumnModel().getColumn(2).setPreferredWidth(110);
+        checklist.getColumnModel().getColumn(3).setPreferredWidth(70);
+        checklist.getColumnModel().getColumn(4).setPreferredWidth(220);
+        checklist.setDefaultRenderer(Object.class, new ItemRenderer());
         JComboBox<String> marks = new JComboBox<>(new String[] {NO_MARK, Mark.AGREED.label(), Mark.FINDING.label(),
             Mark.REMARK.label()});
         checklist.getColumnModel().getColumn(3).setCellEditor(new DefaultCellEditor(marks));
@@ -108,7 +110,7 @@ public final class ReviewPanel implements Section {
         JScrollPane detailScroll = new JScrollPane(details);
         detailScroll.setBorder(BorderFactory.createTitledBorder("What the check found"));
 
-        JPanel commentRow = new JPanel(new FlowLayout(FlowLayout.LEFT, 4, 0));
+        JPanel commentRow = new JPanel(new WrapLayout(FlowLayout.LEFT, 4, 2));
         commentRow.add(new JLabel("Comment on input"));
         commentRow.add(commentInput);
         commentRow.add(commentText);
@@ -127,17 +129,29 @@ public final class ReviewPanel implements Section {
         g.add(endorse);
         g.add(sendBack);
         endorse.setSelected(true);
-        JPanel decision = new JPanel(new FlowLayout(FlowLayout.LEFT, 6, 0));
-        decision.add(new JLabel("Decision"));
-        decision.add(endorse);
-        decision.add(sendBack);
-        decision.add(new JLabel("  reason"));
-        decision.add(reason);
-        decision.add(new JLabel("  assessor"));
-        decision.add(assessor);
-        decision.add(new JLabel("  date"));
-        decision.add(date);
-        decision.add(record);
+        JPanel verdictRow = new JPanel(new java.awt.GridBagLayout());
+        java.awt.GridBagConstraints c = new java.awt.GridBagConstraints();
+        c.insets = new java.awt.Insets(2, 2, 2, 6);
+        verdictRow.add(endorse, c);
+        verdictRow.add(sendBack, c);
+        verdictRow.add(new JLabel("Reason"), c);
+        c.weightx = 1;
+        c.fill = java.awt.GridBagConstraints.HORIZONTAL;
+        verdictRow.add(reason, c);
+        JPanel signRow = new JPanel(new BorderLayout());
+        JPanel who = new JPanel(new FlowLayout(FlowLayout.LEFT, 6, 2));
+        who.add(new JLabel("Assessor"));
+        who.add(assessor);
+        who.add(new JLabel("Date"));
+        who.add(date);
+        assessor.setMinimumSize(assessor.getPreferredSize());
+        date.setMinimumSize(date.getPreferredSize());
+        signRow.add(who, BorderLayout.CENTER);
+        signRow.add(record, BorderLayout.EAST);
+        JPanel decision = new JPanel(new BorderLayout(0, 2));
+        decision.setBorder(BorderFactory.createTitledBorder("Decision"));
+        decision.add(verdictRow, BorderLayout.NORTH);
+        decision.add(signRow, BorderLayout.SOUTH);
         record.addActionListener(e -> recordDecision());
         outcome.setBorder(BorderFactory.createEmptyBorder(2, 4, 2, 4));
 
@@ -206,7 +220,8 @@ public final class ReviewPanel implements Section {
             return;
         }
         CheckItem i = items.rows.get(r);
-        details.setText(i.details().isEmpty() ? "nothing to report" : String.join("\n", i.details()));
+        details.setText(i.title() + " (" + i.reference() + "): " + i.outcome().label() + "\n"
+                + (i.details().isEmpty() ? "nothing to report" : String.join("\n", i.details())));
         details.setCaretPosition(0);
     }
 
@@ -280,6 +295,32 @@ public final class ReviewPanel implements Section {
             outcome.setForeground(Colors.get("Quire.error"));
             outcome.setText("<html>" + e.getMessage().replace("&", "&amp;").replace("<", "&lt;") + "</html>");
             ctx.status(e.getMessage(), true);
+        }
+    }
+
+    /** Shows the full text as a tooltip and the outcome in the theme's colour for its weight. */
+    private final class ItemRenderer extends javax.swing.table.DefaultTableCellRenderer {
+        private static final long serialVersionUID = 1L;
+
+        @Override
+        public java.awt.Component getTableCellRendererComponent(JTable t, Object v, boolean sel, boolean focus,
+                int r, int c) {
+            super.getTableCellRendererComponent(t, v, sel, focus, r, c);
+            setToolTipText(v == null || v.toString().isEmpty() ? null : v.toString());
+            if (!sel) {
+                setForeground(t.getForeground());
+                if (c == 2 && r < items.rows.size()) {
+                    org.quire.app.review.Outcome o = items.rows.get(r).outcome();
+                    if (o == org.quire.app.review.Outcome.NOT_MET) {
+                        setForeground(Colors.get("Quire.error"));
+                    } else if (o == org.quire.app.review.Outcome.TO_CONFIRM) {
+                        setForeground(Colors.get("Quire.warning"));
+                    } else if (o == org.quire.app.review.Outcome.MET) {
+                        setForeground(Colors.get("Quire.ok"));
+                    }
+                }
+            }
+            return this;
         }
     }
 
