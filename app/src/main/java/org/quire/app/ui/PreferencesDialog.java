@@ -18,7 +18,8 @@ import org.quire.engine.budget.EvaluationSettings;
 
 /**
  * The preferences: coverage probability or k, significant digits, Monte Carlo trials and seed for new budgets;
- * theme; budget and template folders; autosave interval. Values are checked by the engine's settings before
+ * theme; budget folders, personal and team template folders; your name; how often copies of changed
+ * budgets go to the recovery folder, and where it is. Values are checked by the engine's settings before
  * they are stored; a refused value is named and nothing is stored.
  */
 final class PreferencesDialog {
@@ -36,8 +37,11 @@ final class PreferencesDialog {
         JComboBox<String> theme = new JComboBox<>(new String[] {"Light", "Dark"});
         theme.setSelectedIndex(prefs.theme() == WorkbenchPrefs.Theme.DARK ? 1 : 0);
         JTextArea budgets = folders(prefs.budgetFolders());
-        JTextArea templates = folders(prefs.templateFolders());
+        JTextField personal = new JTextField(text(prefs.personalTemplates()), 30);
+        JTextField team = new JTextField(text(prefs.teamTemplates()), 30);
         JTextField autosave = new JTextField(String.valueOf(prefs.autosaveMinutes()), 4);
+        JTextField recovery = new JTextField(prefs.recoveryFolder().toString(), 30);
+        JTextField user = new JTextField(prefs.userName(), 20);
         JPanel form = new JPanel(new GridBagLayout());
         GridBagConstraints c = new GridBagConstraints();
         c.insets = new Insets(3, 3, 3, 8);
@@ -50,8 +54,11 @@ final class PreferencesDialog {
         row(form, c, "Monte Carlo seed", seed);
         row(form, c, "Theme (applies on the next start)", theme);
         row(form, c, "Budget folders (one a line)", new JScrollPane(budgets));
-        row(form, c, "Template folders (one a line)", new JScrollPane(templates));
-        row(form, c, "Autosave every (minutes, 0 = never)", autosave);
+        row(form, c, "Personal template folder", personal);
+        row(form, c, "Team template folder", team);
+        row(form, c, "Your name (recorded in revision histories)", user);
+        row(form, c, "Keep copies of changed budgets every (minutes, 0 = never)", autosave);
+        row(form, c, "Recovery folder (applies on the next start)", recovery);
         while (true) {
             int a = JOptionPane.showConfirmDialog(frame, form, "Preferences", JOptionPane.OK_CANCEL_OPTION,
                     JOptionPane.PLAIN_MESSAGE);
@@ -69,12 +76,21 @@ final class PreferencesDialog {
                 }
                 int minutes = integer("autosave interval", autosave.getText());
                 List<Path> b = paths(budgets.getText());
-                List<Path> t = paths(templates.getText());
+                Path pt = folder("personal template folder", personal.getText(), false);
+                Path tt = folder("team template folder", team.getText(), false);
+                Path rf = folder("recovery folder", recovery.getText(), true);
+                if (user.getText().isBlank()) {
+                    throw new IllegalArgumentException("your name must not be blank: it is recorded in revision "
+                            + "histories");
+                }
                 prefs.setAutosaveMinutes(minutes);
                 prefs.setNewBudgetSettings(n);
                 prefs.setTheme(theme.getSelectedIndex() == 1 ? WorkbenchPrefs.Theme.DARK : WorkbenchPrefs.Theme.LIGHT);
                 prefs.setBudgetFolders(b);
-                prefs.setTemplateFolders(t);
+                prefs.setPersonalTemplates(pt);
+                prefs.setTeamTemplates(tt);
+                prefs.setRecoveryFolder(rf);
+                prefs.setUserName(user.getText());
                 frame.applyAutosave();
                 frame.refreshNavigator();
                 return;
@@ -105,6 +121,30 @@ final class PreferencesDialog {
             }
         }
         return out;
+    }
+
+    private static String text(Path p) {
+        return p == null ? "" : p.toString();
+    }
+
+    /** @return the folder typed, null when blank; an existing folder unless {@code mayBeCreated} */
+    private static Path folder(String what, String text, boolean mayBeCreated) {
+        if (text.isBlank()) {
+            if (mayBeCreated) {
+                throw new IllegalArgumentException(what + " must be given");
+            }
+            return null;
+        }
+        Path p;
+        try {
+            p = Path.of(text.trim());
+        } catch (java.nio.file.InvalidPathException e) {
+            throw new IllegalArgumentException(what + ": '" + text.trim() + "' is not a path: " + e.getReason());
+        }
+        if (java.nio.file.Files.exists(p) ? !java.nio.file.Files.isDirectory(p) : !mayBeCreated) {
+            throw new IllegalArgumentException(what + ": '" + text.trim() + "' is not a folder");
+        }
+        return p;
     }
 
     private static JTextArea folders(List<Path> paths) {

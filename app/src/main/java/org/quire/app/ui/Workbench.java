@@ -34,6 +34,7 @@ public final class Workbench {
             } else {
                 frame.open(file).ifPresent(ed -> ed.document().setReadOnly(review));
             }
+            EventQueue.invokeLater(frame::offerRecovery);
         });
     }
 

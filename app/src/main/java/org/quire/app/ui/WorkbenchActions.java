@@ -35,6 +35,9 @@ final class WorkbenchActions {
     final Action redo;
     final Action runMonteCarlo;
     final Action preferences;
+    final Action newFromTemplate;
+    final Action exportReport;
+    final Action compareWith;
 
     WorkbenchActions(WorkbenchFrame frame) {
         this.frame = frame;
@@ -58,6 +61,12 @@ final class WorkbenchActions {
         undo = action("Undo", KeyEvent.VK_Z, 0, e -> active().ifPresent(ed -> ed.document().undo()));
         redo = action("Redo", KeyEvent.VK_Y, 0, e -> active().ifPresent(ed -> ed.document().redo()));
         runMonteCarlo = action("Run Monte Carlo", KeyEvent.VK_M, 0, e -> active().ifPresent(BudgetEditor::runMonteCarlo));
+        newFromTemplate = action("New from template\u2026", KeyEvent.VK_N, InputEvent.SHIFT_DOWN_MASK,
+                e -> frame.newFromTemplate(null));
+        exportReport = action("Export report\u2026", KeyEvent.VK_E, InputEvent.SHIFT_DOWN_MASK,
+                e -> active().ifPresent(frame::exportReport));
+        compareWith = action("Compare with\u2026", KeyEvent.VK_D, InputEvent.SHIFT_DOWN_MASK,
+                e -> active().ifPresent(frame::compareWith));
         preferences = action("Preferences\u2026", KeyEvent.VK_COMMA, 0, e -> PreferencesDialog.show(frame));
         update();
     }
@@ -88,6 +97,8 @@ final class WorkbenchActions {
         saveAs.setEnabled(d != null);
         close.setEnabled(d != null);
         runMonteCarlo.setEnabled(d != null);
+        exportReport.setEnabled(d != null);
+        compareWith.setEnabled(d != null);
         undo.setEnabled(editable && d.history().canUndo());
         redo.setEnabled(editable && d.history().canRedo());
         undo.putValue(Action.NAME, undo.isEnabled() ? "Undo " + d.history().undoName() : "Undo");
@@ -108,6 +119,7 @@ final class WorkbenchActions {
         JMenuBar bar = new JMenuBar();
         JMenu file = menu("File", KeyEvent.VK_F);
         file.add(newBudget);
+        file.add(newFromTemplate);
         file.add(action("Open the demo budget", 0, 0, e -> frame.openDemo()));
         file.add(open);
         file.add(openReview);
@@ -140,6 +152,9 @@ final class WorkbenchActions {
         bar.add(view);
         JMenu budget = menu("Budget", KeyEvent.VK_B);
         budget.add(runMonteCarlo);
+        budget.addSeparator();
+        budget.add(exportReport);
+        budget.add(compareWith);
         bar.add(budget);
         JMenu help = menu("Help", KeyEvent.VK_H);
         help.add(action("About Quire", 0, 0, e -> AboutDialog.show(frame)));

@@ -3,6 +3,11 @@ package org.quire.app.ui;
 import java.awt.BorderLayout;
 import java.awt.CardLayout;
 import java.awt.Dimension;
+import java.awt.EventQueue;
+import java.time.Duration;
+import java.time.Instant;
+import java.time.LocalDate;
+import java.util.concurrent.ExecutionException;
 import java.awt.event.WindowAdapter;
 import java.awt.event.WindowEvent;
 import java.io.IOException;
@@ -23,8 +28,22 @@ import javax.swing.JOptionPane;
 import javax.swing.JPanel;
 import javax.swing.JSplitPane;
 import javax.swing.JTabbedPane;
-import javax.swing.Timer;
+import javax.swing.SwingWorker;
+import org.quire.app.compare.BudgetComparison;
+import org.quire.app.compare.Comparison;
+import org.quire.app.ui.compare.CompareWindow;
 import org.quire.app.ui.document.BudgetDocument;
+import org.quire.app.ui.document.RecoveryKeeper;
+import org.quire.app.ui.export.ReportExport;
+import org.quire.app.ui.templates.NewFromTemplateDialog;
+import org.quire.app.ui.templates.TemplateCatalog;
+import org.quire.app.ui.templates.TemplateUpdateDialog;
+import org.quire.engine.document.DocumentStore;
+import org.quire.engine.document.RecoveryStore;
+import org.quire.engine.document.Template;
+import org.quire.engine.document.TemplateChange;
+import org.quire.engine.document.TemplateLibrary;
+import org.quire.engine.gum.GumResult;
 import org.quire.app.ui.inspector.InspectorPanel;
 import org.quire.app.ui.montecarlo.MonteCarloRunner;
 import org.quire.app.ui.notebook.BudgetEditor;
@@ -54,7 +73,7 @@ public final class WorkbenchFrame extends JFrame {
     private final PaneLayout panes;
     private final Map<BudgetEditor, InspectorPanel> editors = new LinkedHashMap<>();
     private final WorkbenchActions actions;
-    private final Timer autosave;
+    private final RecoveryKeeper recovery;
     private BiConsumer<String, Boolean> statusHook = (m, e) -> { };
 
     public WorkbenchFrame(WorkbenchPrefs prefs, FunctionLibrary library, Optional<MonteCarloRunner> runner) {
@@ -92,9 +111,8 @@ public final class WorkbenchFrame extends JFrame {
                 quit();
             }
         });
-        autosave = new Timer(60_000, e -> autosaveAll());
-        autosave.setRepeats(true);
-        applyAutosave();
+        recovery = new RecoveryKeeper(RecoveryStore.of(prefs.recoveryFolder()), autosavePeriod(),
+                (id, e) -> EventQueue.invokeLater(() -> status("Recovery copy not written: " + e.getMessage(), true)));
         refreshNavigator();
         setMinimumSize(new Dimension(800, 520));
     }
@@ -155,9 +173,11 @@ public final class WorkbenchFrame extends JFrame {
                 actions.update();
             }
         });
+        recovery.track(doc);
         tabs.setSelectedComponent(ed);
         updateTitle(ed);
         refreshNavigator();
+        checkTemplate(ed);
         return ed;
     }
 
@@ -170,13 +190,16 @@ public final class WorkbenchFrame extends JFrame {
             }
         }
         try {
-            BudgetDocument doc = BudgetDocument.open(file);
+            BudgetDocument doc = BudgetDocument.open(file, prefs.userName());
             prefs.addRecent(file.toAbsolutePath());
             actions.updateRecent();
-            return Optional.of(open(doc));
+            BudgetEditor ed = open(doc);
+            if (doc.content().migratedFrom() == 1) {
+                status(file.getFileName() + " is a format version 1 file; it will be saved as version 2", false);
+            }
+            return Optional.of(ed);
         } catch (IOException | BudgetFormatException e) {
-            JOptionPane.showMessageDialog(this, file + ":\n" + e.getMessage(), "Cannot open the budget",
-                    JOptionPane.ERROR_MESSAGE);
+            showError("Cannot open the budget", file + ":\n" + e.getMessage());
             return Optional.empty();
         }
     }
@@ -188,7 +211,11 @@ public final class WorkbenchFrame extends JFrame {
                 throw new IllegalStateException("the demo budget " + DEMO + " is missing from the application");
             }
             Budget b = BudgetJson.read(new String(in.readAllBytes(), StandardCharsets.UTF_8));
-            return open(new BudgetDocument(b, null, "Tarrow Vale demo"));
+            String user = prefs.userName();
+            Instant now = Instant.now();
+            org.quire.engine.document.BudgetDocument d = org.quire.engine.document.BudgetDocument
+                    .newDraft(b, user, now).withDetails("Tarrow Vale Flow Laboratory", "", user, user, now);
+            return open(new BudgetDocument(d, null, "Tarrow Vale demo", user));
         } catch (IOException | BudgetFormatException e) {
             throw new IllegalStateException("the demo budget cannot be read: " + e.getMessage(), e);
         }
@@ -198,20 +225,99 @@ public final class WorkbenchFrame extends JFrame {
     public BudgetEditor newBudget() {
         Budget b = Budget.of("", List.of(), List.of()).withTitle("New budget")
                 .withSettings(prefs.newBudgetSettings());
-        return open(new BudgetDocument(b, null, "new budget"));
+        return open(BudgetDocument.ofBudget(b, "new budget", prefs.userName()));
+    }
+
+    /** @return the templates of the shipped folder and the personal and team folders of the preferences */
+    public TemplateCatalog templates() {
+        return TemplateCatalog.of(null, prefs.personalTemplates(), prefs.teamTemplates());
+    }
+
+    /**
+     * File &gt; New from template: offers the catalogue, asks for the parameters, opens the new budget.
+     *
+     * @param preselect the file to select in the list, or null
+     */
+    public Optional<BudgetEditor> newFromTemplate(Path preselect) {
+        TemplateCatalog.Listing listing;
+        try {
+            listing = templates().list();
+        } catch (IOException e) {
+            showError("Cannot list the templates", e.getMessage());
+            return Optional.empty();
+        }
+        NewFromTemplateDialog dlg = new NewFromTemplateDialog(this, listing, prefs.userName());
+        if (preselect != null) {
+            dlg.select(preselect);
+        }
+        dlg.setVisible(true);
+        if (dlg.created() == null) {
+            return Optional.empty();
+        }
+        BudgetEditor ed = open(new BudgetDocument(dlg.created(), null, "new from " + shortName(dlg.createdFrom()),
+                prefs.userName()));
+        status("New budget from " + dlg.createdFrom().file().getFileName()
+                + (dlg.createdFrom().isTemplate() ? "" : " (a plain budget: copied, no template origin recorded)"),
+                false);
+        return Optional.of(ed);
+    }
+
+    private static String shortName(TemplateCatalog.Entry e) {
+        String n = String.valueOf(e.file().getFileName());
+        return n.endsWith(".json") ? n.substring(0, n.length() - 5) : n;
+    }
+
+    /** Looks, off the event thread, for a newer version of the template the budget follows, and offers it. */
+    private void checkTemplate(BudgetEditor ed) {
+        org.quire.engine.document.BudgetDocument content = ed.document().content();
+        if (content.templateOrigin() == null) {
+            return;
+        }
+        TemplateCatalog catalog = templates();
+        new SwingWorker<Optional<Template>, Void>() {
+            @Override
+            protected Optional<Template> doInBackground() throws Exception {
+                return catalog.newerTemplate(content);
+            }
+
+            @Override
+            protected void done() {
+                try {
+                    Optional<Template> newer = get();
+                    if (newer.isPresent() && editors.containsKey(ed)) {
+                        Template t = newer.get();
+                        ed.showNotice("This budget follows template " + t.id() + " version "
+                                + content.templateOrigin().version() + "; version " + t.version()
+                                + " is in the library.", "Review the changes\u2026", () -> offerTemplateChanges(ed, t));
+                    }
+                } catch (InterruptedException e) {
+                    Thread.currentThread().interrupt();
+                } catch (ExecutionException e) {
+                    status("Cannot look for a newer template: " + e.getCause().getMessage(), true);
+                }
+            }
+        }.execute();
+    }
+
+    /** Shows the changes a newer template brings, field by field, and takes the checked ones over. */
+    void offerTemplateChanges(BudgetEditor ed, Template newer) {
+        BudgetDocument doc = ed.document();
+        List<TemplateChange> changes = TemplateLibrary.compare(doc.content(), newer);
+        TemplateUpdateDialog dlg = new TemplateUpdateDialog(this, newer, doc.content().templateOrigin().version(),
+                changes);
+        dlg.setVisible(true);
+        List<TemplateChange> chosen = dlg.chosen();
+        if (!chosen.isEmpty()) {
+            ed.editDocument("Take over " + chosen.size() + " change(s) of template " + newer.id(), "",
+                    d -> TemplateLibrary.adopt(d, newer, chosen, doc.user(), doc.now()));
+        }
     }
 
     private void openEntry(WorkspaceNavigator.Entry e) {
         if (!e.template()) {
             open(e.file());
-            return;
-        }
-        try {
-            Budget b = BudgetJson.read(e.file());
-            open(new BudgetDocument(b, null, "new from " + e));
-        } catch (IOException | BudgetFormatException x) {
-            JOptionPane.showMessageDialog(this, e.file() + ":\n" + x.getMessage(), "Cannot open the template",
-                    JOptionPane.ERROR_MESSAGE);
+        } else {
+            newFromTemplate(e.file());
         }
     }
 
@@ -225,15 +331,28 @@ public final class WorkbenchFrame extends JFrame {
                 return false;
             }
         }
+        return saveTo(ed, target);
+    }
+
+    /**
+     * Saves a budget to {@code target}; a failure (read-only folder, full disk, a file in the way) is shown in a
+     * message and the document stays open, changed, with its file as it was.
+     *
+     * @return whether it was saved
+     */
+    boolean saveTo(BudgetEditor ed, Path target) {
+        BudgetDocument doc = ed.document();
         try {
             doc.saveTo(target);
-            prefs.addRecent(target);
+            prefs.addRecent(target.toAbsolutePath());
             actions.updateRecent();
             status("Saved " + target, false);
+            updateTitle(ed);
             refreshNavigator();
             return true;
         } catch (IOException e) {
-            JOptionPane.showMessageDialog(this, e.getMessage(), "The budget was not saved", JOptionPane.ERROR_MESSAGE);
+            showError("The budget was not saved", e.getMessage() + "\n\nThe budget is still open with its changes; "
+                    + "save it somewhere else with Save as.");
             return false;
         }
     }
@@ -253,9 +372,10 @@ public final class WorkbenchFrame extends JFrame {
         return true;
     }
 
-    /** Closes an editor without asking (the caller has dealt with unsaved changes). */
+    /** Closes an editor without asking (the caller has dealt with unsaved changes); its recovery copy goes. */
     public void forceClose(BudgetEditor ed) {
         ed.dispose();
+        recovery.forget(ed.document());
         inspectors.remove(editors.remove(ed));
         tabs.remove(ed);
         refreshNavigator();
@@ -268,11 +388,172 @@ public final class WorkbenchFrame extends JFrame {
                 return;
             }
         }
-        prefs.setWindowBounds(getExtendedState() == MAXIMIZED_BOTH ? getBounds() : getBounds(),
-                getExtendedState() == MAXIMIZED_BOTH);
+        prefs.setWindowBounds(getBounds(), getExtendedState() == MAXIMIZED_BOTH);
         panes.save();
-        autosave.stop();
         dispose();
+    }
+
+    /** Closes the window; copies of changed budgets still open are written to the recovery folder first. */
+    @Override
+    public void dispose() {
+        recovery.close();
+        super.dispose();
+    }
+
+    /** Shows an error in a message box (and in the status line). */
+    void showError(String title, String message) {
+        status(title + ": " + message.lines().findFirst().orElse(""), true);
+        JOptionPane.showMessageDialog(this, message, title, JOptionPane.ERROR_MESSAGE);
+    }
+
+    // ----- recovery -------------------------------------------------------------------------------------------
+
+    private Duration autosavePeriod() {
+        int m = prefs.autosaveMinutes();
+        return m > 0 ? Duration.ofMinutes(m) : null;
+    }
+
+    /** @return the keeper of recovery copies, for tests */
+    public RecoveryKeeper recovery() {
+        return recovery;
+    }
+
+    void applyAutosave() {
+        recovery.setPeriod(autosavePeriod());
+    }
+
+    /**
+     * Offers the recovery copies left by an earlier session (a crash, a power cut): a dialog lists each with its
+     * file and time; the checked ones are opened as changed budgets, the others discarded.
+     */
+    public void offerRecovery() {
+        List<String> unreadable = new ArrayList<>();
+        List<RecoveryStore.Pending> pending;
+        try {
+            pending = recovery.pending(unreadable);
+        } catch (IOException e) {
+            status("Cannot read the recovery folder " + recovery.store().folder() + ": " + e.getMessage(), true);
+            return;
+        }
+        if (!unreadable.isEmpty()) {
+            status("Unreadable recovery copies in " + recovery.store().folder() + ": " + String.join("; ", unreadable),
+                    true);
+        }
+        if (pending.isEmpty()) {
+            return;
+        }
+        RecoveryDialog dlg = new RecoveryDialog(this, pending);
+        dlg.setVisible(true);
+        if (dlg.cancelled()) {
+            return;
+        }
+        for (RecoveryStore.Pending p : pending) {
+            if (dlg.restore().contains(p)) {
+                restore(p);
+            } else {
+                try {
+                    recovery.store().discard(p.id());
+                } catch (IOException e) {
+                    status("Cannot discard the recovery copy " + p.file() + ": " + e.getMessage(), true);
+                }
+            }
+        }
+    }
+
+    /** Opens a recovery copy as a changed budget belonging to its original file. */
+    Optional<BudgetEditor> restore(RecoveryStore.Pending p) {
+        try {
+            org.quire.engine.document.BudgetDocument content = p.load();
+            BudgetDocument doc = new BudgetDocument(content, p.originalPath(), "recovered " + content.title(),
+                    prefs.userName());
+            doc.markRecovered(p.id());
+            BudgetEditor ed = open(doc);
+            status("Restored the copy of " + doc.name() + " kept at " + p.saved() + "; save it to keep it", false);
+            return Optional.of(ed);
+        } catch (IOException | BudgetFormatException e) {
+            showError("Cannot restore the recovery copy", p.file() + ":\n" + e.getMessage());
+            return Optional.empty();
+        }
+    }
+
+    // ----- report and comparison ------------------------------------------------------------------------------
+
+    /** Budget &gt; Export report: asks for a .pdf or .html file and writes the report off the event thread. */
+    void exportReport(BudgetEditor ed) {
+        Path target = FileChooser.reportTarget(this, ed.document().name());
+        if (target != null) {
+            exportReport(ed, target);
+        }
+    }
+
+    /** Writes the report of the editor's budget to {@code target} off the event thread. */
+    public void exportReport(BudgetEditor ed, Path target) {
+        org.quire.engine.document.BudgetDocument content = ed.document().content();
+        if (ed.latest() == null || !ed.latest().budget().equals(content.budget()) || ed.latest().result() == null) {
+            showError("No report", "The budget has no current GUM result (see the problems list); a report needs "
+                    + "one.");
+            return;
+        }
+        GumResult gum = ed.latest().result();
+        status("Writing the report to " + target + "\u2026", false);
+        new SwingWorker<Void, Void>() {
+            @Override
+            protected Void doInBackground() throws Exception {
+                ReportExport.write(content, gum, target, LocalDate.now());
+                return null;
+            }
+
+            @Override
+            protected void done() {
+                try {
+                    get();
+                    status("Report written to " + target, false);
+                } catch (InterruptedException e) {
+                    Thread.currentThread().interrupt();
+                } catch (ExecutionException e) {
+                    showError("The report was not written", target + ":\n" + e.getCause().getMessage());
+                }
+            }
+        }.execute();
+    }
+
+    /** Budget &gt; Compare with: asks for a second budget file and shows both side by side. */
+    void compareWith(BudgetEditor ed) {
+        Path other = FileChooser.openTarget(this, "Compare " + ed.document().name() + " with");
+        if (other != null) {
+            compareWith(ed, other);
+        }
+    }
+
+    /**
+     * Compares the budget in {@code other} (A, usually an earlier version) with the editor's budget (B), off the
+     * event thread, and shows the two side by side.
+     */
+    public void compareWith(BudgetEditor ed, Path other) {
+        Budget b = ed.document().budget();
+        String nameB = ed.document().name() + " (open)";
+        status("Comparing with " + other + "\u2026", false);
+        new SwingWorker<Comparison, Void>() {
+            @Override
+            protected Comparison doInBackground() throws Exception {
+                Budget a = DocumentStore.open(other).budget();
+                return BudgetComparison.compare(a, b, library);
+            }
+
+            @Override
+            protected void done() {
+                try {
+                    Comparison c = get();
+                    status("Compared with " + other, false);
+                    new CompareWindow(WorkbenchFrame.this, c, String.valueOf(other.getFileName()), nameB)
+                            .setVisible(true);
+                } catch (InterruptedException e) {
+                    Thread.currentThread().interrupt();
+                } catch (ExecutionException e) {
+                    showError("Cannot compare", other + ":\n" + e.getCause().getMessage());
+                }
+            }
+        }.execute();
     }
 
     void status(String message, boolean error) {
@@ -320,36 +601,13 @@ public final class WorkbenchFrame extends JFrame {
         }
         Path examples = Path.of("worked-examples");
         List<Path> templateFolders = new ArrayList<>();
-        Path shipped = Path.of("templates");
-        if (Files.isDirectory(shipped)) {
-            templateFolders.add(shipped.toAbsolutePath());
-        }
-        templateFolders.addAll(prefs.templateFolders());
-        navigator.refresh(open, prefs.budgetFolders(), templateFolders,
-                Files.isDirectory(examples) ? examples.toAbsolutePath() : null);
-    }
-
-    void applyAutosave() {
-        int m = prefs.autosaveMinutes();
-        autosave.stop();
-        if (m > 0) {
-            autosave.setDelay(m * 60_000);
-            autosave.setInitialDelay(m * 60_000);
-            autosave.start();
-        }
-    }
-
-    private void autosaveAll() {
-        for (BudgetEditor e : editors.keySet()) {
-            BudgetDocument d = e.document();
-            if (d.isDirty() && d.file() != null && !d.isReadOnly()) {
-                try {
-                    d.autosave();
-                } catch (IOException x) {
-                    status("Autosave of " + d.name() + " failed: " + x.getMessage(), true);
-                }
+        for (Path p : new Path[] {TemplateCatalog.shippedFolder(), prefs.personalTemplates(), prefs.teamTemplates()}) {
+            if (p != null && Files.isDirectory(p)) {
+                templateFolders.add(p);
             }
         }
+        navigator.refresh(open, prefs.budgetFolders(), templateFolders,
+                Files.isDirectory(examples) ? examples.toAbsolutePath() : null);
     }
 
     ProblemsPanel problemsPanel() { return problems; }

@@ -25,7 +25,10 @@ public final class WorkbenchPrefs {
     static final String TRIALS = "trials";
     static final String SEED = "seed";
     static final String BUDGET_FOLDERS = "budgetFolders";
-    static final String TEMPLATE_FOLDERS = "templateFolders";
+    static final String PERSONAL_TEMPLATES = "personalTemplateFolder";
+    static final String TEAM_TEMPLATES = "teamTemplateFolder";
+    static final String RECOVERY_FOLDER = "recoveryFolder";
+    static final String USER_NAME = "userName";
     static final String AUTOSAVE_MINUTES = "autosaveMinutes";
     static final String RECENT = "recentFiles";
     static final String BOUNDS = "windowBounds";
@@ -82,10 +85,36 @@ public final class WorkbenchPrefs {
 
     public List<Path> budgetFolders() { return paths(BUDGET_FOLDERS); }
     public void setBudgetFolders(List<Path> p) { putPaths(BUDGET_FOLDERS, p); }
-    public List<Path> templateFolders() { return paths(TEMPLATE_FOLDERS); }
-    public void setTemplateFolders(List<Path> p) { putPaths(TEMPLATE_FOLDERS, p); }
+    /** @return the user's own template folder, or null when none is set */
+    public Path personalTemplates() { return path(PERSONAL_TEMPLATES); }
+    /** @return the team's shared (possibly read-only) template folder, or null when none is set */
+    public Path teamTemplates() { return path(TEAM_TEMPLATES); }
+    public void setPersonalTemplates(Path p) { putPath(PERSONAL_TEMPLATES, p); }
+    public void setTeamTemplates(Path p) { putPath(TEAM_TEMPLATES, p); }
 
-    /** @return minutes between autosaves of changed budgets that have a file; 0 for never */
+    /** @return where copies of changed budgets are kept until they are saved: {@code ~/.quire/recovery} by default */
+    public Path recoveryFolder() {
+        Path p = path(RECOVERY_FOLDER);
+        return p != null ? p : Path.of(System.getProperty("user.home"), ".quire", "recovery");
+    }
+
+    public void setRecoveryFolder(Path p) { putPath(RECOVERY_FOLDER, p); }
+
+    /** @return the name recorded in revision histories and review decisions: the login name unless set */
+    public String userName() {
+        String n = node.get(USER_NAME, "").strip();
+        return n.isEmpty() ? System.getProperty("user.name", "unknown user") : n;
+    }
+
+    public void setUserName(String n) {
+        if (n == null || n.isBlank()) {
+            node.remove(USER_NAME);
+        } else {
+            node.put(USER_NAME, n.strip());
+        }
+    }
+
+    /** @return minutes between copies of changed budgets into the recovery folder; 0 for never */
     public int autosaveMinutes() { return node.getInt(AUTOSAVE_MINUTES, 1); }
 
     public void setAutosaveMinutes(int m) {
@@ -139,6 +168,26 @@ public final class WorkbenchPrefs {
     /** @return the remembered pane layout (see {@code PaneLayout}), or "" */
     public String paneLayout() { return node.get(LAYOUT, ""); }
     public void setPaneLayout(String s) { node.put(LAYOUT, s); }
+
+    private Path path(String key) {
+        String s = node.get(key, "").strip();
+        if (s.isEmpty()) {
+            return null;
+        }
+        try {
+            return Path.of(s);
+        } catch (java.nio.file.InvalidPathException e) {
+            return null;
+        }
+    }
+
+    private void putPath(String key, Path p) {
+        if (p == null) {
+            node.remove(key);
+        } else {
+            node.put(key, p.toAbsolutePath().toString());
+        }
+    }
 
     private List<Path> paths(String key) {
         List<Path> out = new ArrayList<>();

@@ -4,6 +4,9 @@ import static org.junit.jupiter.api.Assertions.fail;
 
 import java.awt.EventQueue;
 import java.awt.GraphicsEnvironment;
+import java.awt.Window;
+import java.nio.file.Files;
+import java.nio.file.Path;
 import java.util.Optional;
 import java.util.concurrent.Callable;
 import java.util.concurrent.atomic.AtomicReference;
@@ -24,7 +27,9 @@ import org.quire.app.ui.notebook.BudgetEditor;
 abstract class GuiTestSupport {
     static final long WAIT_MILLIS = 10_000;
     protected WorkbenchFrame frame;
-    private Preferences node;
+    protected Preferences node;
+    /** The recovery folder of this test's preferences (never the user's own). */
+    protected Path recoveryDir;
 
     @BeforeAll
     static void needsDisplay() {
@@ -48,6 +53,9 @@ abstract class GuiTestSupport {
                 "SKIPPED: no display (GraphicsEnvironment.isHeadless()); run the GUI tests under xvfb-run");
         node = Preferences.userRoot().node("org/quire/test/workbench-" + System.nanoTime());
         node.putInt("autosaveMinutes", 0);
+        recoveryDir = Files.createTempDirectory("quire-recovery-test");
+        node.put("recoveryFolder", recoveryDir.toString());
+        node.put("userName", "Test Engineer");
         node.put("windowBounds", "0,0,1440,900");
         frame = onEdt(() -> {
             WorkbenchFrame f = new WorkbenchFrame(new WorkbenchPrefs(node), Engine.library(), runner());
@@ -69,6 +77,86 @@ abstract class GuiTestSupport {
             return null;
         });
         node.removeNode();
+        deleteTree(recoveryDir);
+    }
+
+    static void deleteTree(Path dir) throws java.io.IOException {
+        if (dir == null || !Files.exists(dir)) {
+            return;
+        }
+        try (java.util.stream.Stream<Path> s = Files.walk(dir)) {
+            for (Path p : s.sorted(java.util.Comparator.reverseOrder()).toList()) {
+                Files.deleteIfExists(p);
+            }
+        }
+    }
+
+    /** @return a frame on the same preferences (a restart of the workbench), shown */
+    WorkbenchFrame newFrameOnSamePreferences() throws Exception {
+        return onEdt(() -> {
+            WorkbenchFrame f = new WorkbenchFrame(new WorkbenchPrefs(node), Engine.library(), runner());
+            f.showRestored();
+            return f;
+        });
+    }
+
+    /** @return the showing dialog named {@code name}, waiting for it */
+    static <T extends Window> T waitForWindow(String name, Class<T> type) throws Exception {
+        AtomicReference<T> found = new AtomicReference<>();
+        waitFor("the window '" + name + "'", () -> {
+            for (Window w : Window.getWindows()) {
+                if (w.isShowing() && name.equals(w.getName()) && type.isInstance(w)) {
+                    found.set(type.cast(w));
+                    return true;
+                }
+            }
+            return false;
+        });
+        return found.get();
+    }
+
+    /** @return the showing option pane's message, waiting for one; the pane's dialog is closed */
+    static String takeMessageBox() throws Exception {
+        AtomicReference<String> msg = new AtomicReference<>();
+        waitFor("a message box", () -> {
+            for (Window w : Window.getWindows()) {
+                if (w.isShowing() && w instanceof javax.swing.JDialog) {
+                    javax.swing.JOptionPane p = findOptionPane(((javax.swing.JDialog) w).getContentPane());
+                    if (p != null) {
+                        msg.set(((javax.swing.JDialog) w).getTitle() + ": " + p.getMessage());
+                        w.dispose();
+                        return true;
+                    }
+                }
+            }
+            return false;
+        });
+        return msg.get();
+    }
+
+    private static javax.swing.JOptionPane findOptionPane(java.awt.Container c) {
+        for (java.awt.Component k : c.getComponents()) {
+            if (k instanceof javax.swing.JOptionPane) {
+                return (javax.swing.JOptionPane) k;
+            }
+            if (k instanceof java.awt.Container) {
+                javax.swing.JOptionPane p = findOptionPane((java.awt.Container) k);
+                if (p != null) {
+                    return p;
+                }
+            }
+        }
+        return null;
+    }
+
+    /** @return the component named {@code name} inside {@code c}, failing when there is none */
+    @SuppressWarnings("unchecked")
+    static <T extends java.awt.Component> T named(java.awt.Container c, String name) {
+        java.awt.Component k = WorkbenchEditingTest.find(c, name);
+        if (k == null) {
+            fail("no component named '" + name + "' in " + c.getName());
+        }
+        return (T) k;
     }
 
     /** Runs {@code c} on the event thread and returns its value. */

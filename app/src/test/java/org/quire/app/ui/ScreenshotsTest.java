@@ -43,11 +43,58 @@ class ScreenshotsTest extends GuiTestSupport {
         onEdt(() -> { ed.document().undo(); ed.document().setReadOnly(true); ed.revealSection("Purpose and notes"); return null; });
         Thread.sleep(300);
         shot("06-review-copy");
+        Path dir = Files.createTempDirectory("quire-shots");
+        try {
+            Path file = dir.resolve("point-30.json");
+            Path earlier = dir.resolve("point-30-2025.json");
+            onEdt(() -> {
+                ed.document().setReadOnly(false);
+                org.quire.engine.document.DocumentStore.save(ed.document().content(), earlier);
+                ed.edit("Edit notes", "", b -> b.withInput("I_net", b.input("I_net").withNotes(
+                        "Mean of five runs; the dominant contribution comes from the balance repeatability.")));
+                ed.edit("Edit estimate", "", b -> b.withInput("d_evap", b.input("d_evap").withSource(
+                        "TVFL evaporation study 2026")).withNotes(b.notes() + "\nSecond run with the new diverter."));
+                ed.edit("Edit uncertainty", "", b -> b.withInput("d_res", b.input("d_res").withEvaluation(
+                        org.quire.engine.budget.TypeB.of("rectangular",
+                                java.util.Map.of("estimate", 0.0, "halfWidth", 0.01)))));
+                ed.modelEditor().setText(ed.modelEditor().getText().replace("E = 100", "# error of the meter\nE = 100"));
+                return null;
+            });
+            waitForCurrentResult(ed);
+            onEdt(() -> frame.saveTo(ed, file));
+            onEdt(() -> { frame.compareWith(ed, earlier); return null; });
+            org.quire.app.ui.compare.CompareWindow w = waitForWindow("compare", org.quire.app.ui.compare.CompareWindow.class);
+            Thread.sleep(300);
+            shot(w.getRootPane(), "08-compare");
+            onEdt(() -> { w.dispose(); frame.forceClose(ed); return null; });
+            BudgetEditor rev = onEdt(() -> {
+                BudgetEditor e = frame.open(file).orElseThrow();
+                e.document().setReadOnly(true);
+                return e;
+            });
+            waitForCurrentResult(rev);
+            onEdt(() -> {
+                javax.swing.JTable t = named(rev, "checklist");
+                t.setValueAt("agreed", 0, 3);
+                t.setValueAt("remark", 2, 3);
+                t.setValueAt("ν of the Type B inputs taken as infinite; acceptable here", 2, 4);
+                rev.setAllOpen(false);
+                rev.revealSection(org.quire.app.ui.review.ReviewPanel.TITLE);
+                return null;
+            });
+            Thread.sleep(400);
+            shot("07-review-panel");
+        } finally {
+            deleteTree(dir);
+        }
     }
 
     private void shot(String name) throws Exception {
+        shot(frame.getRootPane(), name);
+    }
+
+    private void shot(JRootPane root, String name) throws Exception {
         BufferedImage img = onEdt(() -> {
-            JRootPane root = frame.getRootPane();
             root.validate();
             BufferedImage i = new BufferedImage(root.getWidth(), root.getHeight(), BufferedImage.TYPE_INT_RGB);
             Graphics2D g = i.createGraphics();

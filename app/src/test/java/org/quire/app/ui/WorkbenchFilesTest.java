@@ -14,7 +14,7 @@ import org.junit.jupiter.api.io.TempDir;
 import org.quire.app.ui.document.BudgetDocument;
 import org.quire.app.ui.notebook.BudgetEditor;
 import org.quire.engine.budget.Budget;
-import org.quire.engine.io.BudgetJson;
+import org.quire.engine.document.DocumentStore;
 
 /** Saving, closing and reopening budgets, and the read-only review mode. */
 class WorkbenchFilesTest extends GuiTestSupport {
@@ -36,7 +36,8 @@ class WorkbenchFilesTest extends GuiTestSupport {
         try (Stream<Path> left = Files.list(dir)) {
             assertEquals(1, left.count(), "no temporary file is left beside the budget");
         }
-        assertEquals(edited, BudgetJson.read(file), "the saved file holds the edited budget");
+        assertEquals(edited, DocumentStore.open(file).budget(), "the saved file holds the edited budget");
+        assertEquals(ed.document().content(), DocumentStore.open(file), "and the document's details and history");
         onEdt(() -> { frame.forceClose(ed); return null; });
         assertTrue(frame.editors().isEmpty());
         BudgetEditor again = onEdt(() -> frame.open(file).orElseThrow());
@@ -67,6 +68,6 @@ class WorkbenchFilesTest extends GuiTestSupport {
                 () -> onEdt(() -> ed.document().apply("x", "", b -> b.withNotes("x"))));
         onEdt(() -> { ed.document().undo(); return null; });
         assertEquals(before, ed.document().budget(), "nothing changed");
-        assertEquals(before, BudgetJson.read(file), "the file is untouched");
+        assertEquals(before, DocumentStore.open(file).budget(), "the file is untouched");
     }
 }

@@ -85,6 +85,22 @@ public final class EditHistory {
         return e;
     }
 
+    /** Forgets every edit (the document was replaced from outside, e.g. by a recorded review decision). */
+    public void clear() {
+        undo.clear();
+        redo.clear();
+        savedDepth = 0;
+        merging = false;
+        fire();
+    }
+
+    /** Marks the present state as differing from any saved file (a recovered copy, for instance). */
+    public void markUnsaved() {
+        savedDepth = -1;
+        merging = false;
+        fire();
+    }
+
     /** Marks the present state as saved. */
     public void markSaved() {
         savedDepth = undo.size();

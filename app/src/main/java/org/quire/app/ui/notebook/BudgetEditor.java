@@ -26,6 +26,7 @@ import org.quire.app.ui.document.Recalculation;
 import org.quire.app.ui.document.Recalculator;
 import org.quire.app.ui.montecarlo.MonteCarloRunner;
 import org.quire.app.ui.montecarlo.MonteCarloSection;
+import org.quire.app.ui.review.ReviewPanel;
 import org.quire.engine.budget.Budget;
 import org.quire.engine.model.FunctionLibrary;
 
@@ -45,6 +46,12 @@ public final class BudgetEditor extends JPanel implements EditorContext {
     private final ResultsSection results;
     private final MonteCarloSection monteCarlo;
     private final JLabel banner = new JLabel();
+    private final ReviewPanel review;
+    private final JPanel notice = new JPanel(new BorderLayout(8, 0));
+    private final JLabel noticeText = new JLabel();
+    private final JButton noticeAction = new JButton();
+    private NotebookSection reviewSection;
+    private JButton reviewJump;
     private final Page page = new Page();
     private final JScrollPane scroll = new JScrollPane(page);
     private final List<Consumer<Recalculation>> recalcListeners = new CopyOnWriteArrayList<>();
@@ -52,6 +59,7 @@ public final class BudgetEditor extends JPanel implements EditorContext {
     private final List<StatusListener> statusListeners = new CopyOnWriteArrayList<>();
     private Recalculation latest;
     private String selectedInput;
+    private org.quire.engine.document.BudgetDocument shownContent;
 
     /** Hears of status messages (refused values and the like). */
     public interface StatusListener {
@@ -69,14 +77,19 @@ public final class BudgetEditor extends JPanel implements EditorContext {
         correlations = new CorrelationsSection(this);
         results = new ResultsSection(this);
         monteCarlo = new MonteCarloSection(runner);
+        review = new ReviewPanel(this, java.time.Clock.systemUTC());
         page.setLayout(new BoxLayout(page, BoxLayout.Y_AXIS));
-        JPanel outline = new JPanel(new FlowLayout(FlowLayout.LEFT, 2, 2));
+        JPanel outline = new JPanel(new org.quire.app.ui.WrapLayout(FlowLayout.LEFT, 2, 2));
         outline.add(new JLabel("Go to:"));
-        for (Section s : List.of(purpose, model, inputs, correlations, results, monteCarlo)) {
+        for (Section s : List.of(purpose, model, inputs, correlations, results, monteCarlo, review)) {
             NotebookSection ns = new NotebookSection(s);
             sections.add(ns);
             page.add(ns);
             JButton jump = new JButton(s.title());
+            if (s == review) {
+                reviewSection = ns;
+                reviewJump = jump;
+            }
             jump.putClientProperty("JButton.buttonType", "borderless");
             jump.setForeground(Colors.get("Quire.outline.foreground"));
             jump.addActionListener(e -> reveal(ns));
@@ -92,8 +105,26 @@ public final class BudgetEditor extends JPanel implements EditorContext {
         banner.setForeground(Colors.get("Quire.banner.foreground"));
         banner.setBorder(BorderFactory.createEmptyBorder(6, 8, 6, 8));
         banner.setText("Review copy: this budget is open read-only. Nothing in it can be changed.");
+        notice.setName("templateNotice");
+        notice.setOpaque(true);
+        notice.setBackground(Colors.get("Quire.notice.background"));
+        notice.setBorder(BorderFactory.createEmptyBorder(4, 8, 4, 8));
+        noticeText.setForeground(Colors.get("Quire.notice.foreground"));
+        notice.add(noticeText, BorderLayout.CENTER);
+        noticeAction.setName("noticeAction");
+        JButton dismiss = new JButton("Dismiss");
+        dismiss.addActionListener(e -> notice.setVisible(false));
+        JPanel noticeButtons = new JPanel(new FlowLayout(FlowLayout.RIGHT, 4, 0));
+        noticeButtons.setOpaque(false);
+        noticeButtons.add(noticeAction);
+        noticeButtons.add(dismiss);
+        notice.add(noticeButtons, BorderLayout.EAST);
+        notice.setVisible(false);
+        JPanel banners = new JPanel(new BorderLayout());
+        banners.add(banner, BorderLayout.NORTH);
+        banners.add(notice, BorderLayout.SOUTH);
         JPanel north = new JPanel(new BorderLayout());
-        north.add(banner, BorderLayout.NORTH);
+        north.add(banners, BorderLayout.NORTH);
         north.add(outline, BorderLayout.SOUTH);
         outline.setBorder(BorderFactory.createMatteBorder(0, 0, 1, 0, Colors.get("Quire.section.rule")));
         add(north, BorderLayout.NORTH);
@@ -109,9 +140,11 @@ public final class BudgetEditor extends JPanel implements EditorContext {
             @Override
             public void documentStateChanged(BudgetDocument d) {
                 applyReadOnly();
+                showDocument();
             }
         });
         showBudget(doc.budget());
+        showDocument();
         applyReadOnly();
         recalculator.requestNow(doc.budget());
     }
@@ -127,9 +160,22 @@ public final class BudgetEditor extends JPanel implements EditorContext {
         }
     }
 
+    private void showDocument() {
+        org.quire.engine.document.BudgetDocument c = doc.content();
+        if (c == shownContent) {
+            return;
+        }
+        shownContent = c;
+        for (NotebookSection s : sections) {
+            s.section().documentChanged(c);
+        }
+    }
+
     private void applyReadOnly() {
         boolean ro = doc.isReadOnly();
         banner.setVisible(ro);
+        reviewSection.setVisible(ro);
+        reviewJump.setVisible(ro);
         for (NotebookSection s : sections) {
             s.section().readOnlyChanged(ro);
         }
@@ -204,6 +250,17 @@ public final class BudgetEditor extends JPanel implements EditorContext {
     }
 
     @Override
+    public boolean editDocument(String name, String mergeKey,
+            UnaryOperator<org.quire.engine.document.BudgetDocument> change) {
+        try {
+            return doc.applyToDocument(name, mergeKey, change);
+        } catch (IllegalArgumentException | IllegalStateException e) {
+            status(e.getMessage(), true);
+            return false;
+        }
+    }
+
+    @Override
     public void status(String message, boolean error) {
         statusListeners.forEach(l -> l.status(message, error));
         if (error) {
@@ -228,6 +285,36 @@ public final class BudgetEditor extends JPanel implements EditorContext {
 
     /** @return the engine's latest answer for the present budget, or null before the first */
     public Recalculation latest() { return latest; }
+
+    /**
+     * Shows a notice above the notebook with one action (a newer template version, for instance).
+     *
+     * @param text what the notice says
+     * @param actionName the button's label
+     * @param action what the button does; the notice is hidden first
+     */
+    public void showNotice(String text, String actionName, Runnable action) {
+        noticeText.setText(text);
+        noticeAction.setText(actionName);
+        for (java.awt.event.ActionListener l : noticeAction.getActionListeners()) {
+            noticeAction.removeActionListener(l);
+        }
+        noticeAction.addActionListener(e -> {
+            notice.setVisible(false);
+            action.run();
+        });
+        notice.setVisible(true);
+        revalidate();
+    }
+
+    /** @return whether a notice is shown */
+    public boolean noticeShown() { return notice.isVisible(); }
+
+    /** @return the notice's action button, for tests */
+    public JButton noticeAction() { return noticeAction; }
+
+    /** @return the assessor's review section (shown on review copies) */
+    public ReviewPanel reviewPanel() { return review; }
 
     /** Starts a Monte Carlo run, when one can start. */
     public void runMonteCarlo() { monteCarlo.start(); }

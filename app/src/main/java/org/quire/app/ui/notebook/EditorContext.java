@@ -22,6 +22,15 @@ public interface EditorContext {
      */
     boolean edit(String name, String mergeKey, UnaryOperator<Budget> change);
 
+    /**
+     * Applies a change of the whole document (details, status, template changes); a refusal by the engine
+     * (IllegalArgumentException or IllegalStateException) is shown and the document stays as it was.
+     *
+     * @return whether the document changed
+     */
+    boolean editDocument(String name, String mergeKey,
+            UnaryOperator<org.quire.engine.document.BudgetDocument> change);
+
     /** Shows a short message in the status line (an error when {@code error}). */
     void status(String message, boolean error);
 

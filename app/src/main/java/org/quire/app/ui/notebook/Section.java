@@ -15,6 +15,10 @@ public interface Section {
     /** The budget changed (edit, undo, redo, opening). Called on the event thread. */
     void budgetChanged(Budget budget);
 
+    /** The document's details, status or history changed (also after every budget change). */
+    default void documentChanged(org.quire.engine.document.BudgetDocument content) {
+    }
+
     /** The engine answered for the present budget. Called on the event thread. */
     default void recalculated(Recalculation r) {
     }
