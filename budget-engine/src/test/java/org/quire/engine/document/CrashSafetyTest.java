@@ -63,8 +63,8 @@ class CrashSafetyTest {
                 Thread.sleep(2);
             }
             assertTrue(lastSaved.get() >= 0, "the saving process did not start: " + other);
-            Thread.sleep(random.nextInt(1, 400));
             long before = lastSaved.get();
+            Thread.sleep(random.nextInt(1, 400));
             p.destroyForcibly();
             assertTrue(p.waitFor(10, TimeUnit.SECONDS));
             reader.join(5000);
