@@ -477,25 +477,24 @@ public final class ReportBuilder {
                     Cell.text(r.status()), Cell.text(r.hash().length() > 16 ? r.hash().substring(0, 16) + "…" : r.hash()),
                     Cell.text(r.summary())));
             if (r.status().equals("approved") && !r.hash().isEmpty()) {
-                approvals.add(List.of(Cell.text(r.revision()), Cell.text(r.date()), Cell.text(r.author()),
+                approvals.add(List.of(Cell.text(r.revision()), Cell.text(r.author() + ", " + r.date()),
                         Cell.text(r.hash())));
             }
         }
         List<Block> blocks = new ArrayList<>();
         blocks.add(new TableBlock(new Table("revisions", "Revision history: every change of status, oldest first",
-                List.of(Column.of("Revision", "revision", Align.LEFT, 0.8f), Column.of("Date", "date", Align.LEFT, 1.5f),
-                        Column.of("By", "by", Align.LEFT, 1.3f), Column.of("Status", "status", Align.LEFT, 1f),
-                        Column.of("Hash", "hash", Align.LEFT, 1.5f), Column.of("Change", "change", Align.LEFT, 3f)),
+                List.of(Column.of("Revision", "revision", Align.LEFT, 0.95f), Column.of("Date", "date", Align.LEFT, 1.85f),
+                        Column.of("By", "by", Align.LEFT, 1.2f), Column.of("Status", "status", Align.LEFT, 0.9f),
+                        Column.of("Hash", "hash", Align.LEFT, 1.75f), Column.of("Change", "change", Align.LEFT, 2.95f)),
                 rows)));
         if (approvals.isEmpty()) {
             blocks.add(new Paragraph("No revision of this document has been approved."));
         } else {
             blocks.add(new TableBlock(new Table("approvals", "Approved revisions with the " + d.hashAlgorithm()
                     + " hash of the content approved; an approved revision stays readable after later changes",
-                    List.of(Column.of("Revision", "revision", Align.LEFT, 0.8f),
-                            Column.of("Approved", "date", Align.LEFT, 1.5f),
-                            Column.of("By", "by", Align.LEFT, 1.3f),
-                            Column.of("Content hash", "content_hash", Align.LEFT, 5.4f)), approvals)));
+                    List.of(Column.of("Revision", "revision", Align.LEFT, 0.95f),
+                            Column.of("Approved by, on", "approved_by_on", Align.LEFT, 2.3f),
+                            Column.of("Content hash", "content_hash", Align.LEFT, 6.4f)), approvals)));
         }
         return new Part("Revision history", blocks);
     }

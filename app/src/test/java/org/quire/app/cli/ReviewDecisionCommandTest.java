@@ -175,4 +175,16 @@ class ReviewDecisionCommandTest {
         assertEquals(1, run("review", g.toString(), "--decide", "send-back", "--assessor", "A. Brandt"));
         assertTrue(out().contains("needs a reason or at least one finding"), out());
     }
+
+    @Test
+    void monteCarloItemOfTheChecklistUsesTheRunWhenAskedFor() {
+        // JCGM 101:2008 9.3: the first-order GUM interval is not validated (d_low about 0.045 mg, delta = 0.0005 mg)
+        String f = Examples.file("jcgm101-9.3-mass-calibration.json").toString();
+        run("review", f);
+        assertTrue(out().contains("[not run]        The Monte Carlo result agrees with the GUM result"), out());
+        assertEquals(1, run("review", f, "--mc", "--trials", "100000", "--seed", "7"));
+        assertTrue(out().contains("[not met]        The Monte Carlo result agrees with the GUM result"), out());
+        assertTrue(out().contains("delta_m: does not agree (δ = 0.0005 mg"), out());
+        assertEquals(2, run("review", f, "--trials", "1000"), "--trials without --mc");
+    }
 }
