@@ -10,6 +10,7 @@ import java.util.Set;
 final class Args {
     private final List<String> positional = new ArrayList<>();
     private final Map<String, String> options = new LinkedHashMap<>();
+    private final Map<String, List<String>> every = new LinkedHashMap<>();
 
     /**
      * @param args the words after the command name
@@ -35,6 +36,7 @@ final class Args {
                         value = args[++i];
                     }
                     options.put(name, value);
+                    every.computeIfAbsent(name, k -> new ArrayList<>()).add(value);
                 } else if (flags.contains(name)) {
                     if (value != null) {
                         throw new UsageException("option --" + name + " takes no value");
@@ -59,6 +61,11 @@ final class Args {
 
     List<String> positional() {
         return positional;
+    }
+
+    /** @return every value given for an option that may be repeated, in order; empty when not given */
+    List<String> all(String option) {
+        return every.getOrDefault(option, List.of());
     }
 
     boolean has(String option) {

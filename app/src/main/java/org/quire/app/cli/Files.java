@@ -38,6 +38,26 @@ final class Files {
         }
     }
 
+    /**
+     * @return the budget document in the file; a file of format version 1 is migrated (revision 1, draft, no
+     *     history), see {@link org.quire.engine.document.DocumentStore#open}
+     */
+    static org.quire.engine.document.BudgetDocument loadDocument(String name) throws UsageException, FileProblem {
+        Path p = path(name);
+        if (java.nio.file.Files.isDirectory(p)) {
+            throw new UsageException("'" + name + "' is a folder, not a budget file");
+        }
+        try {
+            return org.quire.engine.document.DocumentStore.open(p);
+        } catch (NoSuchFileException e) {
+            throw new UsageException("no such file: " + name);
+        } catch (IOException e) {
+            throw new FileProblem(name, "cannot read the file: " + e.getMessage());
+        } catch (BudgetFormatException e) {
+            throw new FileProblem(name, e.getMessage());
+        }
+    }
+
     /** @return the model's problems, each on its own line with the file, the model line and column */
     static FileProblem modelProblem(String file, org.quire.engine.model.ModelException e) {
         StringBuilder s = new StringBuilder();

@@ -15,7 +15,7 @@ import org.quire.app.compare.BudgetComparison;
 import org.quire.app.compare.Comparison;
 import org.quire.app.compare.ComparisonSection;
 import org.quire.app.report.AtomicFile;
-import org.quire.app.report.CanonicalSha256;
+import org.quire.app.report.CalibrationSections;
 import org.quire.app.report.CsvTables;
 import org.quire.app.report.DocumentInfo;
 import org.quire.app.report.HtmlReport;
@@ -23,24 +23,39 @@ import org.quire.app.report.PdfReport;
 import org.quire.app.report.ReportBuilder;
 import org.quire.app.report.ReportInput;
 import org.quire.app.report.ReportModel;
+import org.quire.app.report.ReportSection;
 import org.quire.engine.budget.Budget;
+import org.quire.engine.document.BudgetDocument;
 import org.quire.engine.gum.GumEvaluator;
 import org.quire.engine.gum.GumResult;
+import org.quire.engine.model.CompiledModel;
 
 /**
- * {@code quire report FILE [-o OUT.pdf|OUT.html] [--csv DIR] [--laboratory T] [--author T] [--device T]
- * [--date YYYY-MM-DD] [--against EARLIER]}: the report of a budget as PDF or HTML (by the output's extension) and/or every table of
- * it as CSV files in a folder. Files are written whole or not at all.
+ * {@code quire report FILE [-o OUT.pdf|OUT.html] [--csv DIR] [--mc [--trials N] [--seed S]] [--laboratory T]
+ * [--author T] [--device T] [--date YYYY-MM-DD] [--against EARLIER]}: the report of a budget document as PDF or HTML
+ * (by the output's extension) and/or every table of it as CSV files in a folder. The header shows the document's
+ * laboratory, device under test, author, revision, status and content hash, and the report ends with its
+ * revision history; calibration lines, flow range and conformity decisions are added when the budget has them;
+ * {@code --mc} adds the Monte Carlo method. {@code --laboratory}, {@code --author} and {@code --device} fill those
+ * fields for a file of format version 1, which does not record them. Files are written whole or not at all.
+ *
+ * <p>The Monte Carlo method runs only when asked for with {@code --mc}: a budget's settings always carry a number of
+ * trials and a seed, so they cannot tell whether the author wanted it, and a million trials of a large model take
+ * long enough that a report should not start them unasked.
  */
 final class ReportCommand {
-    static final String USAGE = "quire report FILE [-o OUT.pdf|OUT.html] [--csv DIR] [--laboratory TEXT] "
-            + "[--author TEXT] [--device TEXT] [--date YYYY-MM-DD] [--against EARLIER.json]";
+    static final String USAGE = "quire report FILE [-o OUT.pdf|OUT.html] [--csv DIR] [--mc [--trials N] [--seed S]] "
+            + "[--laboratory TEXT] [--author TEXT] [--device TEXT] [--date YYYY-MM-DD] [--against EARLIER.json]";
 
     private ReportCommand() {
     }
 
     static int run(String[] argv, PrintStream out) throws Exception {
-        Args a = new Args(argv, 1, Set.of("output", "csv", "laboratory", "author", "device", "date", "against"), Set.of());
+        Args a = new Args(argv, 1, Set.of("output", "csv", "laboratory", "author", "device", "date", "against",
+                "trials", "seed"), Set.of("mc"));
+        if (!a.has("mc") && (a.has("trials") || a.has("seed"))) {
+            throw new UsageException("--trials and --seed set the Monte Carlo run; give --mc too");
+        }
         a.expectPositional(1, USAGE);
         if (!a.has("output") && !a.has("csv")) {
             throw new UsageException("say where the report goes: -o OUT.pdf, -o OUT.html or --csv DIR\nusage: " + USAGE);
@@ -72,22 +87,50 @@ final class ReportCommand {
             }
         }
         String file = a.positional().get(0);
-        Budget b = Files.loadBudget(file);
+        BudgetDocument document = Files.loadDocument(file);
+        Budget b = document.budget();
         GumResult r;
+        CompiledModel model;
+        List<ReportSection> sections;
         try {
-            r = GumEvaluator.evaluate(b, Engine.library());
+            model = b.compile(Engine.library());
+            r = GumEvaluator.evaluate(b, model, b.correlationMatrix(), b.settings());
+            sections = CalibrationSections.of(b, Engine.library());
         } catch (org.quire.engine.model.ModelException e) {
             throw Files.modelProblem(file, e);
         } catch (IllegalArgumentException e) {
             throw new Files.FileProblem(file, e.getMessage());
         }
-        DocumentInfo doc = DocumentInfo.forPlainBudget(b, CanonicalSha256.INSTANCE, date)
-                .withLaboratory(a.get("laboratory", "")).withAuthor(a.get("author", ""))
-                .withDeviceUnderTest(a.get("device", ""));
+        DocumentInfo doc = DocumentInfo.of(document, date);
+        if (document.migratedFrom() == 1) {
+            if (a.has("laboratory")) {
+                doc = doc.withLaboratory(a.get("laboratory", ""));
+            }
+            if (a.has("author")) {
+                doc = doc.withAuthor(a.get("author", ""));
+            }
+            if (a.has("device")) {
+                doc = doc.withDeviceUnderTest(a.get("device", ""));
+            }
+        } else {
+            for (String o : List.of("laboratory", "author", "device")) {
+                if (a.has(o)) {
+                    throw new UsageException("--" + o + " fills a field that a file of format version 1 lacks; " + file
+                            + " is a budget document that records it, and its content hash covers it: change it in "
+                            + "the document");
+                }
+            }
+        }
         ReportInput input = ReportInput.of(b, r, doc);
+        for (ReportSection s : sections) {
+            input = input.withSection(s);
+        }
+        if (a.has("mc")) {
+            input = input.withMonteCarlo(ReviewCommand.monteCarlo(a, file, b, model, r));
+        }
         if (a.has("against")) {
             String earlier = a.get("against", "");
-            Comparison c = BudgetComparison.compare(Files.loadBudget(earlier), b, Engine.library());
+            Comparison c = BudgetComparison.compare(Files.loadDocument(earlier).budget(), b, Engine.library());
             input = input.withSection(ComparisonSection.of(c, shortName(earlier), shortName(file)));
         }
         ReportModel m = ReportBuilder.build(input);

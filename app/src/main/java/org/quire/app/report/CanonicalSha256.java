@@ -1,19 +1,20 @@
 package org.quire.app.report;
 
-import java.nio.charset.StandardCharsets;
-import java.security.MessageDigest;
-import java.security.NoSuchAlgorithmException;
-import java.util.HexFormat;
 import org.quire.engine.budget.Budget;
+import org.quire.engine.document.CanonicalJson;
 import org.quire.engine.io.BudgetJson;
 
 /**
- * SHA-256 of a budget's canonical content: the budget as {@link BudgetJson#write(Budget)} writes it (fixed field
- * order, fixed number formatting, fields this version does not interpret kept), encoded as UTF-8. Two files
- * that differ only in spacing, field order or number spelling ({@code 1e-5} or {@code 0.00001}) have the same
- * hash; any change of content changes it.
+ * The content hash of a budget that is not held in a document: SHA-256 of the engine's canonical text
+ * ({@link CanonicalJson}) of the budget as {@link BudgetJson#toJson(Budget)} writes it. Two files that differ only
+ * in spacing, field order or number spelling have the same hash; any change of content changes it.
  *
- * <p>References: FIPS 180-4 (SHA-256), through {@link MessageDigest}.
+ * <p>A budget document has its own hash, {@link org.quire.engine.document.BudgetDocument#contentHash()}, which
+ * also covers laboratory, device under test, author and creation time; reports, reviews and decisions of a
+ * document quote that one ({@link DocumentInfo#of}, {@code Review.start(BudgetDocument, ...)}). Both use the one
+ * canonical form and the one SHA-256 of the engine.
+ *
+ * <p>References: FIPS 180-4 (SHA-256), through {@link CanonicalJson#sha256Hex(byte[])}.
  *
  * <p>Stateless and thread-safe.
  */
@@ -26,20 +27,16 @@ public final class CanonicalSha256 implements ContentHasher {
 
     @Override
     public String algorithm() {
-        return "SHA-256";
+        return DocumentInfo.HASH_ALGORITHM;
     }
 
     @Override
     public String hash(Budget budget) {
-        return sha256(BudgetJson.write(budget).getBytes(StandardCharsets.UTF_8));
+        return CanonicalJson.sha256(BudgetJson.toJson(budget));
     }
 
     /** @return the SHA-256 of {@code bytes} as 64 lower-case hexadecimal digits */
     public static String sha256(byte[] bytes) {
-        try {
-            return HexFormat.of().formatHex(MessageDigest.getInstance("SHA-256").digest(bytes));
-        } catch (NoSuchAlgorithmException e) {
-            throw new IllegalStateException("this Java runtime has no SHA-256, which every Java SE runtime must have", e);
-        }
+        return CanonicalJson.sha256Hex(bytes);
     }
 }

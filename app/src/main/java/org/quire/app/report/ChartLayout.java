@@ -43,7 +43,13 @@ final class ChartLayout {
     }
 
     static Layout of(Chart c) {
-        return c instanceof Chart.Bars ? bars((Chart.Bars) c) : histogram((Chart.Histogram) c);
+        if (c instanceof Chart.Bars) {
+            return bars((Chart.Bars) c);
+        }
+        if (c instanceof Chart.Plot) {
+            return plot((Chart.Plot) c);
+        }
+        return histogram((Chart.Histogram) c);
     }
 
     /** @return a rough width of {@code t} in points at {@code size}, for laying out label columns */
@@ -88,8 +94,43 @@ final class ChartLayout {
             s.add(new Label(x0 + w + 3f, y + row - 4.5f, MathText.upright(Figures.sig(v, 3)), FONT, Anchor.START, TEXT));
         }
         s.add(new Line(x0, top - 2, x0, plotBottom, AXIS, 0.8f, false));
-        s.add(new Label((x0 + x1) / 2, plotBottom + 22f, Typesetter.label(c.axisLabel()), FONT + 0.5f, Anchor.MIDDLE, AXIS));
+        s.add(new Label((x0 + x1) / 2, plotBottom + 22f, Typesetter.labelWithUnit(c.axisLabel()), FONT + 0.5f, Anchor.MIDDLE, AXIS));
         return new Layout(WIDTH, plotBottom + 28f, s);
+    }
+
+    static int rgb(Chart.Tone t) {
+        switch (t) {
+            case SECOND: return MARK;
+            case THIRD: return 0x2e7d32;
+            case FOURTH: return 0xc77700;
+            default: return BAR;
+        }
+    }
+
+    /** One legend entry: a sample line (dashed or not) or a filled square, and its text. */
+    private record Entry(String text, int rgb, boolean dashed, boolean square) {
+    }
+
+    /** Lays legend entries out in rows from {@code y}, left to right; returns the y below the last row. */
+    private static float legend(List<Shape> s, List<Entry> entries, float left, float right, float y) {
+        float x = left;
+        float row = y;
+        for (Entry e : entries) {
+            MathText text = Typesetter.labelWithUnit(e.text());
+            float w = 18f + estimateWidth(text, FONT) + 12f;
+            if (x > left && x + w > right) {
+                x = left;
+                row += 11f;
+            }
+            if (e.square()) {
+                s.add(new Rect(x + 4f, row - 6f, 6f, 6f, e.rgb()));
+            } else {
+                s.add(new Line(x, row - 2.5f, x + 14f, row - 2.5f, e.rgb(), 1.2f, e.dashed()));
+            }
+            s.add(new Label(x + 18f, row, text, FONT, Anchor.START, TEXT));
+            x += w;
+        }
+        return entries.isEmpty() ? y - 11f : row;
     }
 
     private static Layout histogram(Chart.Histogram c) {
@@ -100,18 +141,52 @@ final class ChartLayout {
         float right = WIDTH - 14f;
         float top = 14f;
         float bottom = 170f;
-        long max = 1;
+        double max = 1;
         for (long k : n) {
             max = Math.max(max, k);
         }
         double lo = e[0];
         double hi = e[e.length - 1];
+        for (Chart.Interval iv : c.intervals()) {
+            lo = Math.min(lo, iv.low());
+            hi = Math.max(hi, iv.high());
+        }
+        double[] cx = c.curveX();
+        double[] cy = c.curveY();
+        if (cx != null) {
+            for (double v : cy) {
+                max = Math.max(max, v);
+            }
+        }
+        double pad = (hi - lo) * 0.02;
+        if (lo < e[0] || hi > e[e.length - 1]) {
+            lo -= pad;
+            hi += pad;
+        }
+        final double l0 = lo;
+        final double span = hi - lo;
+        java.util.function.DoubleUnaryOperator px = v -> left + (right - left) * (v - l0) / span;
         for (int i = 0; i < n.length; i++) {
-            float xa = (float) (left + (right - left) * (e[i] - lo) / (hi - lo));
-            float xb = (float) (left + (right - left) * (e[i + 1] - lo) / (hi - lo));
-            float h = (float) ((bottom - top) * n[i] / (double) max);
+            float xa = (float) px.applyAsDouble(e[i]);
+            float xb = (float) px.applyAsDouble(e[i + 1]);
+            float h = (float) ((bottom - top) * n[i] / max);
             if (h > 0) {
-                s.add(new Rect(xa, bottom - h, Math.max(xb - xa, 0.3f), h, BAR));
+                // a little overlap, so that rounding leaves no hairline gaps between neighbouring bars
+                s.add(new Rect(xa, bottom - h, Math.max(xb - xa + 0.25f, 0.3f), h, BAR));
+            }
+        }
+        List<Entry> legend = new ArrayList<>();
+        if (cx != null && cx.length > 1) {
+            int rgb = rgb(Chart.Tone.THIRD);
+            for (int i = 1; i < cx.length; i++) {
+                if (cx[i - 1] < lo || cx[i] > hi) {
+                    continue;
+                }
+                s.add(new Line((float) px.applyAsDouble(cx[i - 1]), (float) (bottom - (bottom - top) * cy[i - 1] / max),
+                        (float) px.applyAsDouble(cx[i]), (float) (bottom - (bottom - top) * cy[i] / max), rgb, 1.3f, false));
+            }
+            if (!c.curveLegend().isEmpty()) {
+                legend.add(new Entry(c.curveLegend(), rgb, false, false));
             }
         }
         s.add(new Line(left, bottom, right, bottom, AXIS, 0.8f, false));
@@ -120,20 +195,151 @@ final class ChartLayout {
             if (t < lo || t > hi) {
                 continue;
             }
-            float x = (float) (left + (right - left) * (t - lo) / (hi - lo));
+            float x = (float) px.applyAsDouble(t);
             s.add(new Line(x, bottom, x, bottom + 3f, AXIS, 0.6f, false));
             s.add(new Label(x, bottom + 12f, MathText.upright(tick(t, ticks)), FONT, Anchor.MIDDLE, AXIS));
         }
         for (double m : c.markers()) {
-            float x = (float) (left + (right - left) * (m - lo) / (hi - lo));
+            float x = (float) px.applyAsDouble(m);
             s.add(new Line(x, top - 6f, x, bottom, MARK, 1f, true));
         }
         if (!c.markerLegend().isEmpty() && c.markers().length > 0) {
-            s.add(new Line(left, bottom + 23f, left + 14f, bottom + 23f, MARK, 1f, true));
-            s.add(new Label(left + 18f, bottom + 25.5f, MathText.upright(c.markerLegend()), FONT, Anchor.START, TEXT));
+            legend.add(0, new Entry(c.markerLegend(), MARK, true, false));
         }
-        s.add(new Label((left + right) / 2, bottom + 26f, Typesetter.label(c.axisLabel()), FONT + 0.5f, Anchor.MIDDLE, AXIS));
-        return new Layout(WIDTH, bottom + 32f, s);
+        int k = 0;
+        for (Chart.Interval iv : c.intervals()) {
+            int rgb = rgb(iv.tone());
+            // intervals drawn later start a little lower, so that coinciding ends stay visible
+            float y0 = top - 6f + 7f * k++;
+            s.add(new Line((float) px.applyAsDouble(iv.low()), y0, (float) px.applyAsDouble(iv.low()), bottom, rgb, 1f, true));
+            s.add(new Line((float) px.applyAsDouble(iv.high()), y0, (float) px.applyAsDouble(iv.high()), bottom, rgb, 1f, true));
+            legend.add(new Entry(iv.legend(), rgb, true, false));
+        }
+        s.add(new Label((left + right) / 2, bottom + 25f, Typesetter.labelWithUnit(c.axisLabel()), FONT + 0.5f, Anchor.MIDDLE, AXIS));
+        float end = legend(s, legend, left, right, bottom + 39f);
+        return new Layout(WIDTH, end + 7f, s);
+    }
+
+    private static Layout plot(Chart.Plot c) {
+        List<Shape> s = new ArrayList<>();
+        float left = 48f;
+        float right = WIDTH - 14f;
+        float top = 20f;
+        float bottom = 180f;
+        boolean log = c.logX();
+        double xlo = Double.POSITIVE_INFINITY;
+        double xhi = Double.NEGATIVE_INFINITY;
+        double ylo = Double.POSITIVE_INFINITY;
+        double yhi = Double.NEGATIVE_INFINITY;
+        for (Chart.Series se : c.series()) {
+            double[] x = se.x();
+            double[] y = se.y();
+            double[] err = se.yError();
+            for (int i = 0; i < x.length; i++) {
+                double xv = log ? Math.log10(x[i]) : x[i];
+                xlo = Math.min(xlo, xv);
+                xhi = Math.max(xhi, xv);
+                double eb = err == null ? 0 : err[i];
+                ylo = Math.min(ylo, y[i] - eb);
+                yhi = Math.max(yhi, y[i] + eb);
+            }
+        }
+        for (double r : c.yRules()) {
+            ylo = Math.min(ylo, r);
+            yhi = Math.max(yhi, r);
+        }
+        if (xhi <= xlo) {
+            xlo -= 0.5;
+            xhi += 0.5;
+        }
+        if (yhi <= ylo) {
+            double d = ylo == 0 ? 1 : Math.abs(ylo) * 0.1;
+            ylo -= d;
+            yhi += d;
+        }
+        double[] yt = ticks(ylo, yhi, 6);
+        ylo = Math.min(ylo, yt[0]);
+        yhi = Math.max(yhi, yt[yt.length - 1]);
+        double xpad = (xhi - xlo) * 0.04;
+        xlo -= xpad;
+        xhi += xpad;
+        final double x0 = xlo;
+        final double xs = xhi - xlo;
+        final double y0 = ylo;
+        final double ys = yhi - ylo;
+        java.util.function.DoubleUnaryOperator px = v -> left + (right - left) * ((log ? Math.log10(v) : v) - x0) / xs;
+        java.util.function.DoubleUnaryOperator py = v -> bottom - (bottom - top) * (v - y0) / ys;
+        for (double t : yt) {
+            float y = (float) py.applyAsDouble(t);
+            s.add(new Line(left, y, right, y, GRID, 0.5f, false));
+            s.add(new Label(left - 4f, y + 2.5f, MathText.upright(tick(t, yt)), FONT, Anchor.END, AXIS));
+        }
+        List<double[]> xticks = new ArrayList<>();
+        if (log) {
+            int d0 = (int) Math.floor(xlo);
+            int d1 = (int) Math.ceil(xhi);
+            boolean minor = d1 - d0 <= 4;
+            for (int d = d0; d <= d1; d++) {
+                for (int m : minor ? new int[] {1, 2, 5} : new int[] {1}) {
+                    double v = m * Math.pow(10, d);
+                    double lv = Math.log10(v);
+                    if (lv >= xlo && lv <= xhi) {
+                        xticks.add(new double[] {v, m == 1 ? 1 : 0});
+                    }
+                }
+            }
+        } else {
+            for (double t : ticks(xlo, xhi, 7)) {
+                if (t >= xlo && t <= xhi) {
+                    xticks.add(new double[] {t, 1});
+                }
+            }
+        }
+        for (double[] t : xticks) {
+            float x = (float) px.applyAsDouble(t[0]);
+            s.add(new Line(x, top, x, bottom, GRID, t[1] == 1 ? 0.5f : 0.3f, false));
+            String text = log ? Figures.compact(t[0], 3) : tick(t[0], ticks(x0, x0 + xs, 7));
+            s.add(new Label(x, bottom + 12f, MathText.upright(text), FONT, Anchor.MIDDLE, AXIS));
+        }
+        for (double r : c.yRules()) {
+            float y = (float) py.applyAsDouble(r);
+            s.add(new Line(left, y, right, y, AXIS, 0.7f, r != 0));
+        }
+        s.add(new Line(left, top, left, bottom, AXIS, 0.8f, false));
+        s.add(new Line(left, bottom, right, bottom, AXIS, 0.8f, false));
+        List<Entry> legend = new ArrayList<>();
+        for (Chart.Series se : c.series()) {
+            int rgb = rgb(se.tone());
+            double[] x = se.x();
+            double[] y = se.y();
+            double[] err = se.yError();
+            if (se.style() != Chart.Style.POINTS) {
+                for (int i = 1; i < x.length; i++) {
+                    s.add(new Line((float) px.applyAsDouble(x[i - 1]), (float) py.applyAsDouble(y[i - 1]),
+                            (float) px.applyAsDouble(x[i]), (float) py.applyAsDouble(y[i]), rgb,
+                            se.style() == Chart.Style.DASHED ? 1f : 1.2f, se.style() == Chart.Style.DASHED));
+                }
+            }
+            if (se.style() != Chart.Style.DASHED) {
+                for (int i = 0; i < x.length; i++) {
+                    float cx = (float) px.applyAsDouble(x[i]);
+                    float cy = (float) py.applyAsDouble(y[i]);
+                    if (err != null && err[i] > 0) {
+                        float ya = (float) py.applyAsDouble(y[i] - err[i]);
+                        float yb = (float) py.applyAsDouble(y[i] + err[i]);
+                        s.add(new Line(cx, ya, cx, yb, rgb, 0.8f, false));
+                        s.add(new Line(cx - 3f, ya, cx + 3f, ya, rgb, 0.8f, false));
+                        s.add(new Line(cx - 3f, yb, cx + 3f, yb, rgb, 0.8f, false));
+                    }
+                    s.add(new Rect(cx - 2.2f, cy - 2.2f, 4.4f, 4.4f, rgb));
+                }
+            }
+            legend.add(new Entry(se.legend(), rgb, se.style() == Chart.Style.DASHED, se.style() == Chart.Style.POINTS));
+        }
+        s.add(new Label(left - 40f, top - 8f, Typesetter.labelWithUnit(c.yLabel()), FONT + 0.5f, Anchor.START, AXIS));
+        s.add(new Label((left + right) / 2, bottom + 25f, Typesetter.labelWithUnit(c.xLabel()), FONT + 0.5f, Anchor.MIDDLE, AXIS));
+        float end = legend(s, legend, left, right, bottom + 39f);
+        return new Layout(WIDTH, end + 7f, s);
     }
 
     /** @return tick positions covering [lo, hi] with a step of 1, 2 or 5 times a power of ten (Heckbert 1990) */

@@ -66,6 +66,57 @@ public record DocumentInfo(String laboratory, String title, String deviceUnderTe
                 hasher.hash(budget), List.of());
     }
 
+    /**
+     * The header facts of a budget document as the engine keeps it: laboratory, device under test, author,
+     * revision with its last change, status, and the document's own content hash
+     * ({@link org.quire.engine.document.BudgetDocument#contentHash()}, SHA-256 of its canonical content). The
+     * revision history lists every change of status; approvals carry the hash of the content approved. A
+     * document migrated from a file of format version 1 records no revision or status, and says so.
+     *
+     * @param doc the document
+     * @param date the report's date
+     */
+    public static DocumentInfo of(org.quire.engine.document.BudgetDocument doc, LocalDate date) {
+        Objects.requireNonNull(doc, "doc");
+        String revision;
+        String status;
+        if (doc.migratedFrom() == 1) {
+            revision = NOT_RECORDED_V1;
+            status = NOT_RECORDED_V1;
+        } else {
+            revision = doc.revision() + ", last changed " + instant(doc.modified());
+            status = doc.status().label();
+            if (doc.status() == org.quire.engine.document.DocumentStatus.APPROVED) {
+                status += doc.approvalIntact() ? " (content unchanged since approval)"
+                        : " (WARNING: the content no longer has the hash recorded at approval; the file was changed "
+                                + "outside Quire)";
+            }
+        }
+        List<RevisionEntry> history = new java.util.ArrayList<>();
+        for (org.quire.engine.document.RevisionEntry e : doc.history()) {
+            history.add(new RevisionEntry(Integer.toString(e.revision()), instant(e.at()), e.by(), e.status().label(),
+                    e.contentHash(), e.comment()));
+        }
+        return new DocumentInfo(doc.laboratory(), doc.title(), doc.deviceUnderTest(), revision, status, date,
+                doc.author(), HASH_ALGORITHM, doc.contentHash(), history);
+    }
+
+    /** The algorithm of every content hash Quire shows: that of {@code BudgetDocument.contentHash()}. */
+    public static final String HASH_ALGORITHM = "SHA-256";
+    /** Shown for revision and status of a document read from a file of format version 1. */
+    public static final String NOT_RECORDED_V1 = "not recorded (file of format version 1)";
+
+    /** @return an instant as {@code 2026-11-20 14:03 UTC} */
+    static String instant(java.time.Instant t) {
+        return java.time.format.DateTimeFormatter.ofPattern("yyyy-MM-dd HH:mm 'UTC'", java.util.Locale.ROOT)
+                .withZone(java.time.ZoneOffset.UTC).format(t);
+    }
+
+    /** @return whether the header stands for a document whose revision and status are recorded */
+    public boolean hasRevisions() {
+        return !revision.equals(NOT_RECORDED) && !revision.equals(NOT_RECORDED_V1);
+    }
+
     public DocumentInfo withLaboratory(String v) { return new DocumentInfo(v, title, deviceUnderTest, revision, status, date, author, hashAlgorithm, hash, revisions); }
     public DocumentInfo withDeviceUnderTest(String v) { return new DocumentInfo(laboratory, title, v, revision, status, date, author, hashAlgorithm, hash, revisions); }
     public DocumentInfo withAuthor(String v) { return new DocumentInfo(laboratory, title, deviceUnderTest, revision, status, date, v, hashAlgorithm, hash, revisions); }

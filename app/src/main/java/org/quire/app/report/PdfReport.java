@@ -243,6 +243,8 @@ public final class PdfReport {
         p.setSpacingBefore(3f);
         p.setSpacingAfter(8f);
         p.setHeaderRows(2);
+        // a short table is not split over two pages
+        p.setKeepTogether(t.rows().size() <= 14);
         PdfPCell cap = new PdfPCell(new Phrase(t.caption(), new Font(bold, TABLE + 0.4f, Font.NORMAL, MUTED)));
         cap.setColspan(n);
         cap.setBorder(Rectangle.NO_BORDER);

@@ -65,11 +65,7 @@ public final class ReportBuilder {
         }
         parts.add(monteCarlo(in.monteCarlo()));
         for (ReportSection s : in.sections()) {
-            List<Block> blocks = new ArrayList<>();
-            s.paragraphs().forEach(p -> blocks.add(new Paragraph(p)));
-            s.tables().forEach(t -> blocks.add(new TableBlock(t)));
-            s.charts().forEach(c -> blocks.add(new ChartBlock(c)));
-            parts.add(new Part(s.heading(), blocks));
+            parts.add(new Part(s.heading(), s.ordered()));
         }
         parts.add(settings(gum.settings()));
         parts.add(warnings(gum));
@@ -329,6 +325,10 @@ public final class ReportBuilder {
         blocks.add(new Paragraph("Propagation of distributions with " + mc.trials() + " trials"
                 + (mc.adaptive() ? " (number chosen by the adaptive procedure, JCGM 101:2008 7.9)" : "")
                 + ", seed " + mc.seed() + "."));
+        if (!mc.outputs().isEmpty() && mc.outputs().stream().allMatch(MonteCarloSummary.Output::complete)) {
+            monteCarloComplete(mc, blocks);
+            return new Part("Monte Carlo method", blocks);
+        }
         List<List<Cell>> rows = new ArrayList<>();
         for (MonteCarloSummary.Output o : mc.outputs()) {
             rows.add(List.of(Cell.math(Typesetter.name(o.name())), Cell.number(Figures.compact(o.estimate(), 8), o.estimate()),
@@ -354,6 +354,80 @@ public final class ReportBuilder {
             }
         }
         return new Part("Monte Carlo method", blocks);
+    }
+
+    /** Both coverage intervals, the clause-8 comparison with its verdict, and the histograms. */
+    private static void monteCarloComplete(MonteCarloSummary mc, List<Block> blocks) {
+        List<List<Cell>> rows = new ArrayList<>();
+        List<List<Cell>> cmp = new ArrayList<>();
+        for (MonteCarloSummary.Output o : mc.outputs()) {
+            MathText y = Typesetter.name(o.name());
+            int d = decimals(o.standardUncertainty());
+            rows.add(List.of(Cell.math(y), Cell.number(fixed(o.estimate(), d), o.estimate()),
+                    Cell.number(Figures.sig(o.standardUncertainty(), 3), o.standardUncertainty()),
+                    Cell.number(fixed(o.symmetricLow(), d), o.symmetricLow()),
+                    Cell.number(fixed(o.symmetricHigh(), d), o.symmetricHigh()),
+                    Cell.number(fixed(o.shortestLow(), d), o.shortestLow()),
+                    Cell.number(fixed(o.shortestHigh(), d), o.shortestHigh()),
+                    Cell.number(Figures.probability(o.coverageProbability()), 100 * o.coverageProbability()),
+                    Cell.text(o.unit())));
+            cmp.add(List.of(Cell.math(y), Cell.number(fixed(o.gumLow(), d), o.gumLow()),
+                    Cell.number(fixed(o.gumHigh(), d), o.gumHigh()),
+                    Cell.number(Figures.compact(o.tolerance(), 1), o.tolerance()),
+                    Cell.number(Figures.sig(o.lowerDifference(), 2), o.lowerDifference()),
+                    Cell.number(Figures.sig(o.upperDifference(), 2), o.upperDifference()),
+                    Cell.text(o.agreesWithGum() ? "confirmed" : "not confirmed")));
+        }
+        blocks.add(new TableBlock(new Table("monte-carlo", "Monte Carlo estimate, standard uncertainty and coverage "
+                + "intervals (JCGM 101:2008 7.6, 7.7.1 probabilistically symmetric, 7.7.2 shortest)", List.of(
+                Column.of("Y", "output", Align.LEFT, 0.7f),
+                Column.of("y", "estimate", Align.RIGHT, 1.3f),
+                Column.of("u(y)", "standard_uncertainty", Align.RIGHT, 1.1f),
+                Column.of("symmetric y_{low}", "symmetric_low", Align.RIGHT, 1.3f),
+                Column.of("symmetric y_{high}", "symmetric_high", Align.RIGHT, 1.3f),
+                Column.of("shortest y_{low}", "shortest_low", Align.RIGHT, 1.3f),
+                Column.of("shortest y_{high}", "shortest_high", Align.RIGHT, 1.3f),
+                Column.of("p (%)", "coverage_percent", Align.RIGHT, 0.6f),
+                Column.of("Unit", "unit", Align.LEFT, 0.6f)), rows)));
+        blocks.add(new TableBlock(new Table("monte-carlo-comparison", "Validation of the GUM result: ends of the GUM "
+                + "interval y ± U against the probabilistically symmetric Monte Carlo interval (JCGM 101:2008 8.2; "
+                + "δ by 7.9.2 from u(y))", List.of(
+                Column.of("Y", "output", Align.LEFT, 0.7f),
+                Column.of("GUM y − U", "gum_low", Align.RIGHT, 1.3f),
+                Column.of("GUM y + U", "gum_high", Align.RIGHT, 1.3f),
+                Column.of("δ", "tolerance", Align.RIGHT, 0.9f),
+                Column.of("d_{low}", "d_low", Align.RIGHT, 0.9f),
+                Column.of("d_{high}", "d_high", Align.RIGHT, 0.9f),
+                Column.of("GUM result", "verdict", Align.LEFT, 1.3f)), cmp)));
+        for (MonteCarloSummary.Output o : mc.outputs()) {
+            String y = Typesetter.name(o.name()).plain();
+            blocks.add(new Paragraph(o.agreesWithGum()
+                    ? "For " + y + " both ends of the GUM interval lie within δ of the Monte Carlo interval: the GUM "
+                            + "result is confirmed (JCGM 101:2008 8.2) and may be reported."
+                    : "For " + y + " an end of the GUM interval differs from the Monte Carlo interval by more than δ: "
+                            + "the GUM result is not confirmed (JCGM 101:2008 8.2); report the Monte Carlo result."));
+        }
+        for (MonteCarloSummary.Output o : mc.outputs()) {
+            if (o.histogram() != null) {
+                blocks.add(new ChartBlock(o.histogram()));
+            }
+        }
+    }
+
+    /** @return the decimals that show two digits beyond the first significant digit of {@code u} */
+    private static int decimals(double u) {
+        if (!(u > 0) || !Double.isFinite(u)) {
+            return 6;
+        }
+        return Math.max(0, Math.min(12, 3 - (int) Math.floor(Math.log10(u))));
+    }
+
+    private static String fixed(double v, int decimals) {
+        if (!Double.isFinite(v)) {
+            return Figures.sig(v, 3);
+        }
+        String t = new java.math.BigDecimal(v).setScale(decimals, java.math.RoundingMode.HALF_EVEN).toPlainString();
+        return t.startsWith("-") ? "−" + t.substring(1) : t;
     }
 
     private static Part settings(EvaluationSettings s) {
@@ -388,20 +462,41 @@ public final class ReportBuilder {
 
     private static Part revisions(DocumentInfo d) {
         if (d.revisions().isEmpty()) {
-            return new Part("Revision history", List.of(new Paragraph(
-                    "No revision history is recorded for this budget.")));
+            String why = d.revision().equals(DocumentInfo.NOT_RECORDED_V1)
+                    ? "No revision history is recorded: the file is of format version 1, which keeps none. The content "
+                    + "hash in the header is that of the document as read; such a file records no creation time, so "
+                    + "its modification time stands in for it until the file is saved in format version 2."
+                    : d.hasRevisions() ? "No change of status has been recorded for this document yet."
+                    : "No revision history is recorded for this budget.";
+            return new Part("Revision history", List.of(new Paragraph(why)));
         }
         List<List<Cell>> rows = new ArrayList<>();
+        List<List<Cell>> approvals = new ArrayList<>();
         for (RevisionEntry r : d.revisions()) {
             rows.add(List.of(Cell.text(r.revision()), Cell.text(r.date()), Cell.text(r.author()),
                     Cell.text(r.status()), Cell.text(r.hash().length() > 16 ? r.hash().substring(0, 16) + "…" : r.hash()),
                     Cell.text(r.summary())));
+            if (r.status().equals("approved") && !r.hash().isEmpty()) {
+                approvals.add(List.of(Cell.text(r.revision()), Cell.text(r.author() + ", " + r.date()),
+                        Cell.text(r.hash())));
+            }
         }
-        return new Part("Revision history", List.of(new TableBlock(new Table("revisions", "Revision history",
-                List.of(Column.of("Revision", "revision", Align.LEFT, 0.8f), Column.of("Date", "date", Align.LEFT, 1.1f),
-                        Column.of("Author", "author", Align.LEFT, 1.4f), Column.of("Status", "status", Align.LEFT, 1.1f),
-                        Column.of("Hash", "hash", Align.LEFT, 1.6f), Column.of("Change", "change", Align.LEFT, 3f)),
-                rows))));
+        List<Block> blocks = new ArrayList<>();
+        blocks.add(new TableBlock(new Table("revisions", "Revision history: every change of status, oldest first",
+                List.of(Column.of("Revision", "revision", Align.LEFT, 0.95f), Column.of("Date", "date", Align.LEFT, 1.85f),
+                        Column.of("By", "by", Align.LEFT, 1.2f), Column.of("Status", "status", Align.LEFT, 0.9f),
+                        Column.of("Hash", "hash", Align.LEFT, 1.75f), Column.of("Change", "change", Align.LEFT, 2.95f)),
+                rows)));
+        if (approvals.isEmpty()) {
+            blocks.add(new Paragraph("No revision of this document has been approved."));
+        } else {
+            blocks.add(new TableBlock(new Table("approvals", "Approved revisions with the " + d.hashAlgorithm()
+                    + " hash of the content approved; an approved revision stays readable after later changes",
+                    List.of(Column.of("Revision", "revision", Align.LEFT, 0.95f),
+                            Column.of("Approved by, on", "approved_by_on", Align.LEFT, 2.3f),
+                            Column.of("Content hash", "content_hash", Align.LEFT, 6.4f)), approvals)));
+        }
+        return new Part("Revision history", blocks);
     }
 
     /** @return a name made safe for a file or table key: lower case, other characters as '-' */

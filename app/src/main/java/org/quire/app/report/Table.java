@@ -37,9 +37,12 @@ public record Table(String key, String caption, List<Column> columns, List<List<
             }
         }
 
-        /** @return a column whose heading is {@link Typesetter#label(String)} of {@code label} */
+        /**
+         * @return a column whose heading is {@link Typesetter#labelWithUnit(String)} of {@code label}: label markup,
+         *     with a unit in parentheses at the end set upright
+         */
         public static Column of(String label, String csvName, Align align, float weight) {
-            return new Column(Typesetter.label(label), csvName, align, weight);
+            return new Column(Typesetter.labelWithUnit(label), csvName, align, weight);
         }
     }
 

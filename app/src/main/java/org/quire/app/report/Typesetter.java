@@ -113,6 +113,27 @@ public final class Typesetter {
         return MathText.of(out);
     }
 
+    /**
+     * Sets a label that may hold units in parentheses, such as {@code flow (m3/h)} or {@code U_c (%)}: units (a
+     * parenthesis after a space, without spaces inside) upright, since units are never italic (SI Brochure 9th ed.
+     * 5.1), the rest as {@link #label(String)}.
+     */
+    public static MathText labelWithUnit(String markup) {
+        java.util.regex.Matcher m = UNIT.matcher(markup);
+        List<Run> out = new ArrayList<>();
+        int at = 0;
+        while (m.find()) {
+            out.addAll(label(markup.substring(at, m.start())).runs());
+            out.add(new Run(m.group(), false, Shift.BASE));
+            at = m.end();
+        }
+        out.addAll(label(markup.substring(at)).runs());
+        return MathText.of(out);
+    }
+
+    /** A unit in parentheses after a space, without spaces of its own: {@code " (m3/h)"}, {@code " (%)"}. */
+    private static final java.util.regex.Pattern UNIT = java.util.regex.Pattern.compile(" \\([^()\\s]+\\)");
+
     private static void words(String s, Shift shift, List<Run> out) {
         int i = 0;
         while (i < s.length()) {

@@ -63,6 +63,14 @@ public final class Review {
     }
 
     /**
+     * @return a new review of the document's budget, tied to the document's content hash
+     *     ({@link org.quire.engine.document.BudgetDocument#contentHash()})
+     */
+    public static Review start(org.quire.engine.document.BudgetDocument doc, GumResult gum, ReviewContext context) {
+        return start(doc.budget(), gum, context, ContentHasher.of(doc));
+    }
+
+    /**
      * @param itemId the id of a checklist item
      * @throws IllegalArgumentException for an unknown item, or after the decision
      */
