@@ -91,7 +91,7 @@ final class ReviewCommand {
         } catch (IllegalArgumentException e) {
             throw new Files.FileProblem(file, e.getMessage());
         }
-        ReviewContext ctx = ReviewContext.none();
+        ReviewContext ctx = ReviewContext.none().withUnits(new org.quire.app.review.EngineUnitChecker());
         if (a.has("mc")) {
             ctx = ctx.withMonteCarlo(monteCarlo(a, file, b, model, r));
         }

@@ -87,7 +87,16 @@ class WorkbenchDocumentsTest extends GuiTestSupport {
                 "a draft can go to review or be withdrawn, nothing else");
         onEdt(() -> { status.setSelectedItem(DocumentStatus.IN_REVIEW); return null; });
         assertEquals(DocumentStatus.IN_REVIEW, ed.document().content().status());
-        onEdt(() -> { status.setSelectedItem(DocumentStatus.APPROVED); return null; });
+        List<DocumentStatus> inReview = onEdt(() -> {
+            List<DocumentStatus> l = new java.util.ArrayList<>();
+            for (int i = 0; i < status.getItemCount(); i++) {
+                l.add(status.getItemAt(i));
+            }
+            return l;
+        });
+        assertTrue(!inReview.contains(DocumentStatus.APPROVED), "approval is the assessor's, in review mode: " + inReview);
+        onEdt(() -> ed.document().applyToDocument("Approve", null,
+                d -> d.moveTo(DocumentStatus.APPROVED, "Test Engineer", ed.document().now(), "checked")));
         BudgetDocument approved = ed.document().content();
         assertEquals(DocumentStatus.APPROVED, approved.status());
         assertEquals("Test Engineer", approved.history().get(approved.history().size() - 1).by());

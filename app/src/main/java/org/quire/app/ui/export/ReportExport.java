@@ -4,9 +4,6 @@ import java.io.IOException;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Path;
 import java.time.LocalDate;
-import java.time.ZoneOffset;
-import java.util.ArrayList;
-import java.util.List;
 import java.util.Locale;
 import org.quire.app.report.AtomicFile;
 import org.quire.app.report.DocumentInfo;
@@ -53,14 +50,7 @@ public final class ReportExport {
 
     /** @return the header facts of the document as a report prints them, dated {@code date} */
     public static DocumentInfo info(BudgetDocument doc, LocalDate date) {
-        List<org.quire.app.report.RevisionEntry> revisions = new ArrayList<>();
-        for (org.quire.engine.document.RevisionEntry e : doc.history()) {
-            revisions.add(new org.quire.app.report.RevisionEntry(String.valueOf(e.revision()),
-                    e.at().atOffset(ZoneOffset.UTC).toLocalDate().toString(), e.by(), e.status().label(),
-                    e.contentHash(), e.comment()));
-        }
-        return new DocumentInfo(doc.laboratory(), doc.title(), doc.deviceUnderTest(), String.valueOf(doc.revision()),
-                doc.status().label(), date, doc.author(), HASH_ALGORITHM, doc.contentHash(), revisions);
+        return DocumentInfo.of(doc, date);
     }
 
     /**

@@ -160,7 +160,8 @@ final class PurposeSection implements Section {
             status.removeAllItems();
             status.addItem(d.status());
             for (DocumentStatus s : DocumentStatus.values()) {
-                if (d.status().canMoveTo(s)) {
+                // approval is the assessor's decision, recorded in review mode with the content hash
+                if (d.status().canMoveTo(s) && s != DocumentStatus.APPROVED) {
                     status.addItem(s);
                 }
             }

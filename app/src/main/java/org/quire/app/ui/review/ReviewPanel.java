@@ -197,7 +197,8 @@ public final class ReviewPanel implements Section {
         if (base != null && base.contentHash().equals(d.contentHash())) {
             return;
         }
-        base = Review.start(r.budget(), r.result(), ReviewContext.none(), DocumentDecisionRecorder.hasherOf(d));
+        base = Review.start(r.budget(), r.result(), ReviewContext.none().withUnits(new org.quire.app.review.EngineUnitChecker()),
+                DocumentDecisionRecorder.hasherOf(d));
         items.set(base.items());
         head.setText("<html>Checklist of revision " + d.revision() + " (" + d.status().label() + "), content SHA-256 "
                 + d.contentHash().substring(0, 16) + "\u2026. Items <i>not met</i> or <i>to confirm</i> need your mark "
