@@ -47,13 +47,37 @@ public final class EngineMonteCarloRunner implements MonteCarloRunner {
             org.quire.engine.montecarlo.Histogram h = s.histogram();
             double[] edges = h.edges();
             org.quire.engine.montecarlo.GumComparison c = o.comparisons().get(k);
+            CoverageInterval other = ci.kind() == CoverageInterval.Kind.SHORTEST ? s.symmetricInterval()
+                    : s.shortestInterval();
             outs.add(new MonteCarloOutcome.OutputOutcome(o.outputNames().get(k), gum.outputs().get(k).unit(),
                     s.mean(), s.standardUncertainty(), ci.probability(), ci.lower(), ci.upper(),
                     ci.kind() == CoverageInterval.Kind.SHORTEST,
                     new MonteCarloOutcome.Histogram(edges[0], edges[edges.length - 1], h.counts()),
                     new MonteCarloOutcome.GumComparison(c.tolerance(), c.lowerDifference(), c.upperDifference(),
-                            c.confirmed())));
+                            c.confirmed()), other.lower(), other.upper(),
+                    gumCounts(gum.outputs().get(k), edges, s.validTrials())));
         }
         return new MonteCarloOutcome(o.result().trials(), o.result().seed(), budget.settings().adaptive(), outs);
+    }
+
+    /**
+     * The GUM distribution of an output, a normal distribution or, for finite degrees of freedom, a scaled and
+     * shifted t distribution (JCGM 100:2008 G.3), as the number of trials expected in each histogram bin.
+     */
+    static double[] gumCounts(org.quire.engine.gum.OutputResult g, double[] edges, long trials) {
+        double u = g.standardUncertainty();
+        if (!(u > 0)) {
+            return null;
+        }
+        org.apache.commons.math3.distribution.AbstractRealDistribution d = Double.isInfinite(g.dofUsed())
+                ? new org.apache.commons.math3.distribution.NormalDistribution(null, 0, 1)
+                : new org.apache.commons.math3.distribution.TDistribution(null, g.dofUsed());
+        double[] out = new double[edges.length - 1];
+        for (int i = 0; i < out.length; i++) {
+            double lo = (edges[i] - g.estimate()) / u;
+            double hi = (edges[i + 1] - g.estimate()) / u;
+            out[i] = trials * (d.cumulativeProbability(hi) - d.cumulativeProbability(lo));
+        }
+        return out;
     }
 }

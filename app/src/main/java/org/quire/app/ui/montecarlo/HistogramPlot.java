@@ -10,8 +10,9 @@ import org.quire.app.ui.Colors;
 import org.quire.app.ui.Fmt;
 
 /**
- * Draws the engine's histogram of an output's model values, with the Monte Carlo coverage interval and the GUM
- * interval y ± U marked. Drawing only: bins and intervals come from the engine.
+ * Draws the engine's histogram of an output's model values with the GUM distribution over it, both Monte Carlo
+ * coverage intervals (solid: the one compared with the GUM; dotted: the other) and the GUM interval y ± U (dashed)
+ * marked. Drawing only: bins, curve and intervals come from the engine.
  */
 final class HistogramPlot extends JComponent {
     private MonteCarloOutcome.OutputOutcome outcome;
@@ -45,6 +46,12 @@ final class HistogramPlot extends JComponent {
         for (long c : counts) {
             max = Math.max(max, c);
         }
+        double[] curve = outcome.gumCounts();
+        if (curve != null && curve.length == counts.length) {
+            for (double c : curve) {
+                max = Math.max(max, (long) Math.ceil(c));
+            }
+        }
         int left = 10;
         int right = getWidth() - 10;
         int top = 10;
@@ -62,11 +69,38 @@ final class HistogramPlot extends JComponent {
         g.drawString(Fmt.short4(h.lower()), left, bottom + 15);
         String hi = Fmt.short4(h.upper());
         g.drawString(hi, right - g.getFontMetrics().stringWidth(hi), bottom + 15);
+        if (curve != null && curve.length == counts.length) {
+            g.setColor(Colors.get("Quire.plot.gumInterval"));
+            g.setStroke(new BasicStroke(1.5f));
+            int px = -1;
+            int py = -1;
+            for (int i = 0; i < curve.length; i++) {
+                int x = left + (int) Math.round((right - left) * (i + 0.5) / counts.length);
+                int y = bottom - (int) Math.round((bottom - top) * curve[i] / max);
+                if (px >= 0) {
+                    g.drawLine(px, py, x, y);
+                }
+                px = x;
+                py = y;
+            }
+        }
+        markDotted(g, outcome.otherLower(), h.lower(), span, left, right, top, bottom);
+        markDotted(g, outcome.otherUpper(), h.lower(), span, left, right, top, bottom);
         mark(g, outcome.lower(), h.lower(), span, left, right, top, bottom, "Quire.plot.mcInterval", false);
         mark(g, outcome.upper(), h.lower(), span, left, right, top, bottom, "Quire.plot.mcInterval", false);
         mark(g, gumLow, h.lower(), span, left, right, top, bottom, "Quire.plot.gumInterval", true);
         mark(g, gumHigh, h.lower(), span, left, right, top, bottom, "Quire.plot.gumInterval", true);
         g.dispose();
+    }
+
+    private void markDotted(Graphics2D g, double v, double lo, double span, int left, int right, int top, int bottom) {
+        if (Double.isNaN(v)) {
+            return;
+        }
+        int x = left + (int) Math.round((right - left) * (v - lo) / span);
+        g.setColor(Colors.get("Quire.plot.mcInterval"));
+        g.setStroke(new BasicStroke(1.2f, BasicStroke.CAP_BUTT, BasicStroke.JOIN_MITER, 10, new float[] {1.5f, 3}, 0));
+        g.drawLine(x, top, x, bottom);
     }
 
     private void mark(Graphics2D g, double v, double lo, double span, int left, int right, int top, int bottom,

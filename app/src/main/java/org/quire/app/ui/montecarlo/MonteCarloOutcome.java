@@ -33,10 +33,32 @@ public record MonteCarloOutcome(long trials, long seed, boolean adaptive, List<O
      * @param shortest whether the interval is the shortest one (7.7.2) rather than probabilistically symmetric
      * @param histogram the model values binned for display
      * @param comparison the check of the GUM result against this one (clause 8), or null when not made
+     * @param otherLower lower end of the other coverage interval (the shortest when the first is symmetric), or NaN
+     * @param otherUpper its upper end, or NaN
+     * @param gumCounts the GUM distribution of the output (normal, or scaled t with the degrees of freedom the
+     *     GUM result used) as expected counts in each histogram bin, for drawing over the histogram; or null
      */
     public record OutputOutcome(String name, String unit, double estimate, double standardUncertainty,
             double coverageProbability, double lower, double upper, boolean shortest, Histogram histogram,
-            GumComparison comparison) {
+            GumComparison comparison, double otherLower, double otherUpper, double[] gumCounts) {
+
+        public OutputOutcome {
+            gumCounts = gumCounts == null ? null : gumCounts.clone();
+        }
+
+        /** An outcome with one coverage interval and no GUM curve. */
+        public OutputOutcome(String name, String unit, double estimate, double standardUncertainty,
+                double coverageProbability, double lower, double upper, boolean shortest, Histogram histogram,
+                GumComparison comparison) {
+            this(name, unit, estimate, standardUncertainty, coverageProbability, lower, upper, shortest, histogram,
+                    comparison, Double.NaN, Double.NaN, null);
+        }
+
+        /** @return the GUM distribution as expected counts per histogram bin, or null when not given */
+        @Override
+        public double[] gumCounts() {
+            return gumCounts == null ? null : gumCounts.clone();
+        }
     }
 
     /**

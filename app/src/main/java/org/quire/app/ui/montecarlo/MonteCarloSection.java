@@ -180,6 +180,10 @@ public final class MonteCarloSection implements Section {
                 .append(" (u)<br>").append(o.shortest() ? "shortest " : "symmetric ")
                 .append(Fmt.probability(o.coverageProbability())).append(" interval:<br>[")
                 .append(Fmt.num(o.lower())).append(", ").append(Fmt.num(o.upper())).append("]").append(unit);
+        if (!Double.isNaN(o.otherLower())) {
+            s.append("<br>").append(o.shortest() ? "symmetric: [" : "shortest: [").append(Fmt.num(o.otherLower()))
+                    .append(", ").append(Fmt.num(o.otherUpper())).append("]");
+        }
         MonteCarloOutcome.GumComparison c = o.comparison();
         if (c != null) {
             String colour = String.format("#%06x", Colors.get(c.gumValidated() ? "Quire.ok" : "Quire.error")
