@@ -43,6 +43,8 @@ public final class CommandLine {
             "      current content, and the effect on each U; exit 1 when they differ",
             "  " + BatchCommand.USAGE,
             "      evaluate a template for every row of a CSV file of parameter values",
+            "  " + TemplateCommand.USAGE,
+            "      the template library: list it, make a budget from a template, publish to the team, check for a newer version",
             "  quire version",
             "  quire help",
             "");
@@ -78,6 +80,8 @@ public final class CommandLine {
                     return DiffCommand.run(args, out);
                 case "batch":
                     return BatchCommand.run(args, err);
+                case "template":
+                    return TemplateCommand.run(args, out, err);
                 case "version":
                 case "--version":
                     out.println("quire " + EngineVersion.get());
