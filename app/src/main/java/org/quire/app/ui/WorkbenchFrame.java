@@ -210,11 +210,13 @@ public final class WorkbenchFrame extends JFrame {
             if (in == null) {
                 throw new IllegalStateException("the demo budget " + DEMO + " is missing from the application");
             }
-            Budget b = BudgetJson.read(new String(in.readAllBytes(), StandardCharsets.UTF_8));
             String user = prefs.userName();
             Instant now = Instant.now();
+            org.quire.engine.document.BudgetDocument shipped = org.quire.engine.document.DocumentJson.read(
+                    new String(in.readAllBytes(), StandardCharsets.UTF_8), now);
             org.quire.engine.document.BudgetDocument d = org.quire.engine.document.BudgetDocument
-                    .newDraft(b, user, now).withDetails("Tarrow Vale Flow Laboratory", "", user, user, now);
+                    .newDraft(shipped.budget(), user, now)
+                    .withDetails(shipped.laboratory(), shipped.deviceUnderTest(), user, user, now);
             return open(new BudgetDocument(d, null, "Tarrow Vale demo", user));
         } catch (IOException | BudgetFormatException e) {
             throw new IllegalStateException("the demo budget cannot be read: " + e.getMessage(), e);
