@@ -104,7 +104,7 @@ public final class WorkbenchFrame extends JFrame {
         getContentPane().add(status, BorderLayout.SOUTH);
         actions = new WorkbenchActions(this);
         setJMenuBar(actions.menuBar());
-        setTransferHandler(new FileDropHandler(this::open));
+        setTransferHandler(new FileDropHandler(this::dropped));
         addWindowListener(new WindowAdapter() {
             @Override
             public void windowClosing(WindowEvent e) {
@@ -182,6 +182,41 @@ public final class WorkbenchFrame extends JFrame {
     }
 
     /** Opens a budget file; reports an unreadable file in a message that says where and why. */
+    /** A file dropped on the window: a CSV file gives readings to the selected Type A input, others open. */
+    void dropped(Path file) {
+        if (file.getFileName().toString().toLowerCase(java.util.Locale.ROOT).endsWith(".csv")) {
+            importReadings(file);
+        } else {
+            open(file);
+        }
+    }
+
+    /**
+     * Takes the readings in a CSV file as the Type A evaluation of the input selected in the active budget
+     * (an undoable edit).
+     *
+     * @return whether the readings were taken
+     */
+    public boolean importReadings(Path file) {
+        Optional<BudgetEditor> ed = activeEditor();
+        String name = ed.map(BudgetEditor::selectedInput).orElse(null);
+        if (ed.isEmpty() || name == null) {
+            showError("Cannot import readings", "Select the input the readings in " + file.getFileName()
+                    + " belong to, then drop the file again.");
+            return false;
+        }
+        try {
+            double[] r = org.quire.engine.io.ReadingsCsv.read(file);
+            org.quire.engine.budget.TypeA a = org.quire.engine.budget.TypeA.ofReadings(r);
+            ed.get().edit("Import readings into " + name, "", b -> b.withInput(name,
+                    b.input(name).withEvaluation(a)));
+            return true;
+        } catch (IOException | BudgetFormatException | IllegalArgumentException e) {
+            showError("Cannot import readings", file + ":\n" + e.getMessage());
+            return false;
+        }
+    }
+
     public Optional<BudgetEditor> open(Path file) {
         for (BudgetEditor e : editors.keySet()) {
             if (file.toAbsolutePath().equals(e.document().file())) {

@@ -27,6 +27,7 @@ final class TypeAForm extends JPanel {
     private final JTextField pooledDof = new JTextField(4);
     private final JButton useReadings = new JButton("Use readings");
     private final JButton useSummary = new JButton("Use summary");
+    private final JButton importCsv = new JButton("Import CSV\u2026");
 
     TypeAForm(Consumer<TypeA> apply, Consumer<String> problem) {
         super(new BorderLayout(4, 4));
@@ -53,6 +54,22 @@ final class TypeAForm extends JPanel {
         JPanel buttons = new JPanel(new FlowLayout(FlowLayout.LEFT, 4, 0));
         buttons.add(useReadings);
         buttons.add(useSummary);
+        buttons.add(importCsv);
+        importCsv.setToolTipText("Readings from a CSV file: the column named reading, or the first column");
+        importCsv.addActionListener(e -> {
+            javax.swing.JFileChooser c = new javax.swing.JFileChooser();
+            c.setDialogTitle("Import readings");
+            c.setFileFilter(new javax.swing.filechooser.FileNameExtensionFilter("CSV files", "csv", "txt"));
+            if (c.showOpenDialog(this) != javax.swing.JFileChooser.APPROVE_OPTION) {
+                return;
+            }
+            try {
+                grid.setReadings(org.quire.engine.io.ReadingsCsv.read(c.getSelectedFile().toPath()));
+                problem.accept(null);
+            } catch (java.io.IOException | org.quire.engine.io.BudgetFormatException x) {
+                problem.accept(c.getSelectedFile().getName() + ": " + x.getMessage());
+            }
+        });
         add(buttons, BorderLayout.SOUTH);
         grid.addPropertyChangeListener("pasteProblem", e -> problem.accept((String) e.getNewValue()));
         useReadings.addActionListener(e -> {
@@ -117,6 +134,7 @@ final class TypeAForm extends JPanel {
             f.setEditable(on);
         }
         useReadings.setEnabled(on);
+        importCsv.setEnabled(on);
         useSummary.setEnabled(on);
     }
 }
