@@ -103,4 +103,25 @@ class BatchCommandTest {
         assertEquals(2, run(err2, "batch", TEMPLATE.toString(), data.toString(), "-o", out.toString(), "--trials", "5"));
         assertTrue(err2.toString(StandardCharsets.UTF_8).contains("go with --mc"));
     }
+
+    @Test
+    void theShippedGravimetricTemplateRunsOverAFleetTable(@TempDir Path dir) throws Exception {
+        Path template = Path.of(System.getProperty("quire.projectRoot", ".."), "templates", "gravimetric-emf-flow-point.json");
+        Path data = dir.resolve("fleet.csv");
+        // row 1: the template's own values; row 2: a temperature outside the parameter's range
+        Files.writeString(data, "id,I_net,t_tank,t_meter,p_meter,t_c,p_a,t_a,h_a\n"
+                + "TV-1,997.1,20.42,20.55,280000,72.0,100650,21.3,0.48\n"
+                + "TV-2,997.1,50,20.55,280000,72.0,100650,21.3,0.48\n");
+        Path out = dir.resolve("results.csv");
+        ByteArrayOutputStream err = new ByteArrayOutputStream();
+        assertEquals(1, run(err, "batch", template.toString(), data.toString(), "-o", out.toString()));
+        List<String> lines = Files.readAllLines(out);
+        String[] c = lines.get(1).split(",", -1);
+        // E and u(E) of the template at its own values, from the independent GUM script named in
+        // ShippedTemplatesTest (app/src/test/resources/templates-check): 0.120164490 %, 0.0292704 %
+        assertEquals(0.120164490, Double.parseDouble(c[1]), 5e-9);
+        assertEquals(0.0292704, Double.parseDouble(c[2]), 5e-8);
+        assertTrue(lines.get(2).contains("t_tank"), lines.get(2));
+        assertTrue(err.toString(StandardCharsets.UTF_8).contains("rows per second"));
+    }
 }
