@@ -92,6 +92,18 @@ final class Args {
         }
     }
 
+    /** @return the option as a date written YYYY-MM-DD, or {@code fallback} when not given */
+    java.time.LocalDate date(String option, java.time.LocalDate fallback) throws UsageException {
+        if (!options.containsKey(option)) {
+            return fallback;
+        }
+        try {
+            return java.time.LocalDate.parse(options.get(option));
+        } catch (java.time.format.DateTimeParseException e) {
+            throw new UsageException("--" + option + " needs a date written YYYY-MM-DD, not '" + options.get(option) + "'");
+        }
+    }
+
     long integer(String option, long fallback) throws UsageException {
         String v = options.get(option);
         if (v == null) {

@@ -6,7 +6,6 @@ import java.io.PrintStream;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Path;
 import java.time.LocalDate;
-import java.time.format.DateTimeParseException;
 import java.util.List;
 import java.util.Locale;
 import java.util.Set;
@@ -78,14 +77,7 @@ final class ReportCommand {
         if (csvDir != null && !java.nio.file.Files.isDirectory(csvDir)) {
             throw new UsageException("--csv needs an existing folder; " + csvDir + " is not one");
         }
-        LocalDate date = LocalDate.now();
-        if (a.has("date")) {
-            try {
-                date = LocalDate.parse(a.get("date", ""));
-            } catch (DateTimeParseException e) {
-                throw new UsageException("--date needs a date written YYYY-MM-DD, not '" + a.get("date", "") + "'");
-            }
-        }
+        LocalDate date = a.date("date", LocalDate.now());
         String file = a.positional().get(0);
         BudgetDocument document = Files.loadDocument(file);
         Budget b = document.budget();

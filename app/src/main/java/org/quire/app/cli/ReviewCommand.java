@@ -4,7 +4,6 @@ import java.io.PrintStream;
 import java.nio.file.Path;
 import java.time.Clock;
 import java.time.LocalDate;
-import java.time.format.DateTimeParseException;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
@@ -70,13 +69,7 @@ final class ReviewCommand {
             if (a.get("assessor", "").isBlank()) {
                 throw new UsageException("a decision needs the assessor's name: --assessor NAME");
             }
-            if (a.has("date")) {
-                try {
-                    date = LocalDate.parse(a.get("date", ""));
-                } catch (DateTimeParseException e) {
-                    throw new UsageException("--date needs a date written YYYY-MM-DD, not '" + a.get("date", "") + "'");
-                }
-            }
+            date = a.date("date", date);
         }
         String file = a.positional().get(0);
         BudgetDocument doc = Files.loadDocument(file);
