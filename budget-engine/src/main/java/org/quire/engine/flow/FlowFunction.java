@@ -94,6 +94,24 @@ abstract class FlowFunction implements ModelFunction {
 
     abstract double compute(double[] args);
 
+    /**
+     * Over a block of Monte Carlo trials: the arity is checked once, not per trial; a trial whose arguments are
+     * not finite or leave the domain gives NaN.
+     */
+    @Override
+    public final void valueBlock(double[][] args, int n, double[] out) {
+        checkArity(args.length);
+        double[] a = new double[args.length];
+        for (int t = 0; t < n; t++) {
+            boolean finite = true;
+            for (int i = 0; i < a.length; i++) {
+                a[i] = args[i][t];
+                finite &= Double.isFinite(a[i]);
+            }
+            out[t] = finite && problem(a) == null ? compute(a) : Double.NaN;
+        }
+    }
+
     abstract DerivativeStructure compute(DerivativeStructure[] args);
 
     final void checkArity(int n) {
