@@ -65,8 +65,13 @@ final class DistributionPlot extends JComponent {
         int n = 240;
         double[] ys = new double[n + 1];
         double max = 0;
-        for (int i = 0; i <= n; i++) {
-            ys[i] = shape(d, lo + (hi - lo) * i / n);
+        org.quire.engine.montecarlo.Marginal m = d instanceof Distribution.Constant ? null
+                : org.quire.engine.montecarlo.Marginal.of(d);
+        double h = (hi - lo) / n;
+        for (int i = 0; i <= n && m != null; i++) {
+            double x = lo + h * i;
+            // probability of a pixel-wide bin around x, from the engine's distribution function
+            ys[i] = m.cdf(x + 0.5 * h) - m.cdf(x - 0.5 * h);
             max = Math.max(max, ys[i]);
         }
         g.setColor(Colors.get("Quire.plot.axis"));
@@ -118,49 +123,4 @@ final class DistributionPlot extends JComponent {
         return null;
     }
 
-    /** The height of the shape at x, up to a constant factor: for drawing only. */
-    private static double shape(Distribution d, double x) {
-        if (d instanceof Distribution.Normal) {
-            Distribution.Normal n = (Distribution.Normal) d;
-            double z = (x - n.mean()) / n.sd();
-            return Math.exp(-0.5 * z * z);
-        }
-        if (d instanceof Distribution.StudentT) {
-            Distribution.StudentT t = (Distribution.StudentT) d;
-            double z = (x - t.location()) / t.scale();
-            return Math.pow(1 + z * z / t.dof(), -(t.dof() + 1) / 2);
-        }
-        if (d instanceof Distribution.Exponential) {
-            return x < 0 ? 0 : Math.exp(-x / d.mean());
-        }
-        if (d instanceof Distribution.Rectangular) {
-            Distribution.Rectangular r = (Distribution.Rectangular) d;
-            return x >= r.lower() && x <= r.upper() ? 1 : 0;
-        }
-        if (d instanceof Distribution.Triangular) {
-            Distribution.Triangular t = (Distribution.Triangular) d;
-            double h = 0.5 * (t.upper() - t.lower());
-            return Math.max(0, 1 - Math.abs(x - t.mean()) / h);
-        }
-        if (d instanceof Distribution.Arcsine) {
-            Distribution.Arcsine a = (Distribution.Arcsine) d;
-            double h = 0.5 * (a.upper() - a.lower());
-            double z = (x - a.mean()) / h;
-            return Math.abs(z) >= 0.995 ? (Math.abs(z) <= 1 ? 10 : 0) : 1 / Math.sqrt(1 - z * z);
-        }
-        if (d instanceof Distribution.Trapezoidal) {
-            Distribution.Trapezoidal t = (Distribution.Trapezoidal) d;
-            double h = 0.5 * (t.upper() - t.lower());
-            double top = t.beta() * h;
-            double z = Math.abs(x - t.mean());
-            return z <= top ? 1 : z >= h ? 0 : (h - z) / (h - top);
-        }
-        if (d instanceof Distribution.CurvilinearTrapezoid) {
-            Distribution.CurvilinearTrapezoid c = (Distribution.CurvilinearTrapezoid) d;
-            double h = 0.5 * (c.upper() - c.lower());
-            double z = Math.abs(x - c.mean());
-            return z <= h - c.d() ? 1 : z >= h + c.d() ? 0 : Math.log((h + c.d()) / z) / Math.log((h + c.d()) / (h - c.d()));
-        }
-        return 0;
-    }
 }
