@@ -5,21 +5,22 @@ import java.util.List;
 import java.util.Objects;
 import org.quire.engine.budget.Budget;
 import org.quire.engine.gum.GumResult;
+import org.quire.engine.montecarlo.MonteCarloOutcome;
 
 /**
  * Everything a report is built from: the budget, its GUM evaluation, the document facts, and what other parts
- * of Quire contribute when they have run: the Monte Carlo summary and further sections (calibration line and
+ * of Quire contribute when they have run: the engine's Monte Carlo outcome and further sections (calibration line and
  * conformity, flow-range table, comparison with another budget).
  *
  * @param budget the budget
  * @param gum its GUM evaluation
  * @param document header facts and revision history
- * @param monteCarlo the Monte Carlo summary, or null when the method was not run
+ * @param monteCarlo the engine's Monte Carlo outcome, or null when the method was not run
  * @param sections further sections, in the order they are to appear
  *
  * <p>Immutable and thread-safe.
  */
-public record ReportInput(Budget budget, GumResult gum, DocumentInfo document, MonteCarloSummary monteCarlo,
+public record ReportInput(Budget budget, GumResult gum, DocumentInfo document, MonteCarloOutcome monteCarlo,
         List<ReportSection> sections) {
     public ReportInput {
         Objects.requireNonNull(budget, "budget");
@@ -32,7 +33,7 @@ public record ReportInput(Budget budget, GumResult gum, DocumentInfo document, M
         return new ReportInput(budget, gum, document, null, List.of());
     }
 
-    public ReportInput withMonteCarlo(MonteCarloSummary mc) {
+    public ReportInput withMonteCarlo(MonteCarloOutcome mc) {
         return new ReportInput(budget, gum, document, mc, sections);
     }
 
