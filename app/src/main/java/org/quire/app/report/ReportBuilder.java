@@ -225,10 +225,13 @@ public final class ReportBuilder {
                     Column.of("r(x_i, x_j)", "r", Align.RIGHT, 1f),
                     Column.of("term in u_c^2(y)", "variance", Align.RIGHT, 1.5f)), terms)));
         }
-        if (o.higherOrderVariance() != 0) {
+        if (o.higherOrderTerms() == org.quire.engine.gum.HigherOrderTerms.INCLUDED) {
             blocks.add(new Paragraph("Higher-order terms (JCGM 100:2008 5.1.2, note) add "
                     + Figures.sig(o.higherOrderVariance(), 3) + (unit.isEmpty() ? "" : " " + unit + "²")
                     + " to the combined variance of " + y.plain() + "."));
+        } else if (o.higherOrderTerms() == org.quire.engine.gum.HigherOrderTerms.NOT_INCLUDED) {
+            blocks.add(new Paragraph("Higher-order terms (JCGM 100:2008 5.1.2, note) were asked for but are "
+                    + o.higherOrderTerms().text() + "; u_c(" + y.plain() + ") is the first-order result."));
         }
         List<MathText> labels = new ArrayList<>();
         List<Double> values = new ArrayList<>();
