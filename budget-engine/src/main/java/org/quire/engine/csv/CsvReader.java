@@ -126,7 +126,8 @@ public final class CsvReader {
                         CsvMessages.cellCount(cells.size(), expected, header, separatorHint(records, sep)));
             }
         }
-        return CsvTable.of(sourceName, sep, options.decimalMark(), header, records.subList(first, records.size()),
+        return CsvTable.of(sourceName, sep, options.decimalMark(), options.header() ? lines.get(0) : 0, header,
+                records.subList(first, records.size()),
                 lines.subList(first, lines.size()));
     }
 
