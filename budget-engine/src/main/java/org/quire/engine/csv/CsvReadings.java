@@ -26,8 +26,7 @@ public final class CsvReadings {
 
     /** Reads the readings in a file, by {@link #parse(String, String, CsvOptions)}. */
     public static double[] read(Path file, CsvOptions options) throws IOException, CsvException {
-        CsvTable t = CsvReader.read(file, options);
-        return headerless(t) ? readings(CsvReader.read(file, oneColumn(t, options).withHeader(false))) : readings(t);
+        return parse(CsvReader.sourceName(file), CsvReader.readText(file, options), options);
     }
 
     /**
@@ -36,26 +35,36 @@ public final class CsvReadings {
      * @throws CsvException naming the line and column of a bad cell, or saying that there is no reading column
      */
     public static double[] parse(String sourceName, String text, CsvOptions options) throws CsvException {
-        CsvTable t = CsvReader.parse(sourceName, text, options);
-        return headerless(t) ? readings(CsvReader.parse(sourceName, text, oneColumn(t, options).withHeader(false)))
-                : readings(t);
-    }
-
-    /**
-     * Readings without a header are one column or one row; a detected comma between numbers there is a decimal
-     * comma or an error by the number rule, never a split.
-     */
-    private static CsvOptions oneColumn(CsvTable t, CsvOptions options) {
-        return options.separator() == null && t.separator() == CsvOptions.Separator.COMMA
-                ? options.withSeparator(CsvOptions.Separator.SEMICOLON) : options;
-    }
-
-    private static boolean headerless(CsvTable t) {
-        if (t.header().isEmpty()) {
-            return false;
+        String first = firstRow(text);
+        if (options.header() && first != null && numbers(first)) {
+            CsvOptions o = options.withHeader(false);
+            if (options.separator() == null && first.indexOf(';') < 0 && first.indexOf('\t') < 0) {
+                // one column: a comma between digits is a decimal comma or an error, never a split
+                o = o.withSeparator(text.indexOf('\t') >= 0 ? CsvOptions.Separator.TAB : CsvOptions.Separator.SEMICOLON);
+            }
+            return readings(CsvReader.parse(sourceName, text, o));
         }
-        for (String h : t.header()) {
-            if (!NUMBER_LIKE.matcher(h).matches()) {
+        return readings(CsvReader.parse(sourceName, text, options));
+    }
+
+    private static String firstRow(String text) {
+        for (String line : text.split("\\R")) {
+            String l = line.replace("\uFEFF", "").strip();
+            if (!l.isEmpty() && !l.startsWith("#")) {
+                return l;
+            }
+        }
+        return null;
+    }
+
+    /** @return whether every cell of the row (split at ',' ';' tab, quotes removed) looks like a number */
+    private static boolean numbers(String row) {
+        for (String cell : row.split("[,;\t]", -1)) {
+            String c = cell.strip();
+            if (c.length() >= 2 && c.startsWith("\"") && c.endsWith("\"")) {
+                c = c.substring(1, c.length() - 1).strip();
+            }
+            if (!c.isEmpty() && !NUMBER_LIKE.matcher(c).matches()) {
                 return false;
             }
         }
