@@ -75,6 +75,15 @@ public final class ConformityAssessment {
 
     /** @return the overall decision */
     public Decision overall() {
+        return overall(decisions);
+    }
+
+    /**
+     * @param decisions the decisions at the points of one item
+     * @return "does not conform" if any point does not conform, otherwise "undecided" if any point is
+     *     undecided, otherwise "conforms"
+     */
+    public static Decision overall(List<PointDecision> decisions) {
         boolean undecided = false;
         for (PointDecision d : decisions) {
             if (d.decision() == Decision.DOES_NOT_CONFORM) {
@@ -87,12 +96,23 @@ public final class ConformityAssessment {
 
     /** @return the sentences for the certificate: the rule with its risk, and the limits applied */
     public String statement() {
+        return statement(rule, envelope.name(), decisions);
+    }
+
+    /**
+     * @param rule the decision rule applied
+     * @param limitsName the name of the maximum permissible errors applied
+     * @param decisions the decisions at the points, at least one
+     * @return the rule's sentence for the smallest coverage factor and degrees of freedom among the points (the
+     *     largest risk), followed by the name of the limits
+     */
+    public static String statement(DecisionRule rule, String limitsName, List<PointDecision> decisions) {
         double k = Double.POSITIVE_INFINITY;
         double dof = Double.POSITIVE_INFINITY;
         for (PointDecision d : decisions) {
             k = Math.min(k, d.point().coverageFactor());
             dof = Math.min(dof, d.point().dof());
         }
-        return rule.statement(k, dof) + " Maximum permissible errors: " + envelope.name() + ".";
+        return rule.statement(k, dof) + " Maximum permissible errors: " + limitsName + ".";
     }
 }
