@@ -2,6 +2,7 @@ package org.quire.app.report;
 
 import java.util.ArrayList;
 import java.util.List;
+import org.quire.engine.gum.Figures;
 import org.quire.engine.montecarlo.CoverageInterval;
 import org.quire.engine.montecarlo.Histogram;
 import org.quire.engine.montecarlo.MonteCarloOutcome;
