@@ -164,8 +164,14 @@ public final class GumEvaluator {
                 warnings.add("inputs are correlated; the Welch–Satterthwaite formula assumes independent inputs, "
                         + "so nu_eff is approximate");
             }
-            if (uc == 0 && active.length > 0) {
+            boolean anySensitive = false;
+            for (int i : active) {
+                anySensitive |= c[k][i] != 0;
+            }
+            if (uc == 0 && active.length > 0 && !anySensitive) {
                 warnings.add(firstOrderZero(name, higher));
+            } else if (uc == 0 && active.length > 0) {
+                warnings.add("u_c(" + name + ") is zero: the correlated contributions cancel exactly");
             } else if (uc == 0) {
                 warnings.add("u_c(" + name + ") is zero: no input has an uncertainty");
             }
