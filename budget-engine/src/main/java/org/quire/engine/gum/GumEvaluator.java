@@ -7,6 +7,7 @@ import java.util.Locale;
 import java.util.Map;
 import org.apache.commons.math3.analysis.differentiation.DerivativeStructure;
 import org.quire.engine.budget.Budget;
+import org.quire.engine.budget.CoverageFactor;
 import org.quire.engine.budget.CorrelationMatrix;
 import org.quire.engine.budget.EvaluationSettings;
 import org.quire.engine.budget.Evaluation;

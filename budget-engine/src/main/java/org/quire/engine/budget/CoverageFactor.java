@@ -1,4 +1,4 @@
-package org.quire.engine.gum;
+package org.quire.engine.budget;
 
 import org.apache.commons.math3.distribution.NormalDistribution;
 import org.apache.commons.math3.distribution.TDistribution;
