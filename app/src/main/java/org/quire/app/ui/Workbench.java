@@ -1,11 +1,12 @@
 package org.quire.app.ui;
 
+import org.quire.app.ui.common.WorkbenchPrefs;
 import com.formdev.flatlaf.FlatDarkLaf;
 import com.formdev.flatlaf.FlatLaf;
 import com.formdev.flatlaf.FlatLightLaf;
 import java.awt.EventQueue;
 import java.nio.file.Path;
-import org.quire.app.Engine;
+import org.quire.app.common.Engine;
 import org.quire.app.ui.montecarlo.MonteCarloRunner;
 
 /**

@@ -5,8 +5,8 @@ import java.awt.Graphics2D;
 import java.awt.RenderingHints;
 import javax.swing.JTable;
 import javax.swing.table.DefaultTableCellRenderer;
-import org.quire.app.ui.Colors;
-import org.quire.app.ui.Fmt;
+import org.quire.app.ui.common.Colors;
+import org.quire.app.ui.common.Fmt;
 
 /** Draws an input's share of the combined variance as a bar with the percentage on it. */
 final class ShareBarRenderer extends DefaultTableCellRenderer {
