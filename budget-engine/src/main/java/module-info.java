@@ -21,4 +21,5 @@ module org.quire.engine {
     exports org.quire.engine.document;
     exports org.quire.engine.validate;
     exports org.quire.engine.io;
+    exports org.quire.engine.reference;
 }
