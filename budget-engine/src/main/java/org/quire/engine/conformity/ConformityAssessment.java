@@ -76,6 +76,15 @@ public final class ConformityAssessment {
 
     /** @return the overall decision */
     public Decision overall() {
+        return overall(decisions);
+    }
+
+    /**
+     * @param decisions the decisions at the points of one item
+     * @return "does not conform" if any point does not conform, otherwise "undecided" if any point is
+     *     undecided, otherwise "conforms"
+     */
+    public static Decision overall(List<PointDecision> decisions) {
         boolean undecided = false;
         for (PointDecision d : decisions) {
             if (d.decision() == Decision.DOES_NOT_CONFORM) {
@@ -88,12 +97,23 @@ public final class ConformityAssessment {
 
     /** @return the sentences for the certificate: the rule with its risk, and the limits applied */
     public String statement() {
+        return statement(rule, envelope.name(), decisions);
+    }
+
+    /**
+     * @param rule the decision rule applied
+     * @param limitsName the name of the maximum permissible errors applied
+     * @param decisions the decisions at the points, at least one
+     * @return the rule's sentence for the points' own coverage factors (one k when they agree, else the k stated
+     *     with each point and the largest risk over the points), followed by the name of the limits
+     */
+    public static String statement(DecisionRule rule, String limitsName, List<PointDecision> decisions) {
         double[] k = new double[decisions.size()];
         double[] dof = new double[decisions.size()];
         for (int i = 0; i < k.length; i++) {
             k[i] = decisions.get(i).point().coverageFactor();
             dof[i] = decisions.get(i).point().dof();
         }
-        return rule.statement(k, dof) + " Maximum permissible errors: " + envelope.name() + ".";
+        return rule.statement(k, dof) + " Maximum permissible errors: " + limitsName + ".";
     }
 }
