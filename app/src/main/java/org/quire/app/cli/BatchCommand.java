@@ -37,6 +37,12 @@ import org.quire.engine.gum.OutputResult;
 import org.quire.engine.io.BudgetFormatException;
 import org.quire.engine.model.CompiledModel;
 import org.quire.engine.model.ModelException;
+import java.util.concurrent.Callable;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.ParentCommand;
+import picocli.CommandLine.Parameters;
 
 /**
  * {@code quire batch TEMPLATE DATA.csv -o RESULTS.csv}: evaluates a template (GUM) for every row of a CSV
@@ -45,14 +51,45 @@ import org.quire.engine.model.ModelException;
  * {@code error} column. A bad row is reported on stderr with its line number and does not stop the others.
  * Exit status 0 when every row was evaluated, 1 when some failed, 2 for unusable files or arguments.
  */
-final class BatchCommand {
-    static final String USAGE = "quire batch TEMPLATE DATA.csv -o RESULTS.csv [--mc [--trials N] [--seed S]]";
+@Command(name = "batch", mixinStandardHelpOptions = true, sortOptions = false,
+        description = {"Evaluate a template (GUM, and with --mc the Monte Carlo method) for every row of a CSV file "
+                + "whose columns are named after the template's parameters; an 'id' column is copied through.",
+            "Writes per row the estimate, u, k and U of every output and an error column. A bad row is reported "
+                + "on stderr with its line number and does not stop the others. Exit status 0 when every row was "
+                + "evaluated, 1 when some failed, 2 for unusable files or arguments.",
+            "On a terminal a progress line on stderr shows the rate and the time left."},
+        footerHeading = "%nExamples:%n",
+        footer = {"  quire template list          # the templates and their parameters",
+            "  quire batch templates/tvfl-gravimetric-emf-point.json fleet.csv -o results.csv",
+            "  quire batch tvfl-gravimetric-emf-point fleet.csv -o results.csv --mc --trials 1e5 --seed 3"})
+final class BatchCommand implements Callable<Integer> {
     /** Largest data file read. */
     static final long MAX_CSV_BYTES = 256L * 1024 * 1024;
     private static final Pattern NUMBER = Pattern.compile("[-+]?(\\d+\\.?\\d*|\\.\\d+)([eE][-+]?\\d+)?");
 
-    private BatchCommand() {
-    }
+    @ParentCommand
+    QuireCommand quire;
+
+    @Parameters(index = "0", paramLabel = "TEMPLATE", description = "a template file, or the id of a template in the library")
+    String templateName;
+
+    @Parameters(index = "1", paramLabel = "DATA.csv", description = "one row of parameter values per meter")
+    String dataName;
+
+    @Option(names = {"-o", "--output"}, paramLabel = "RESULTS.csv", required = true, description = "the results file")
+    String output;
+
+    @Option(names = "--mc", description = "add the Monte Carlo method (JCGM 101:2008) for every row")
+    boolean mc;
+
+    @Mixin
+    Options.Trials trials;
+
+    @Mixin
+    TemplateCommand.Folders folders;
+
+    @Mixin
+    Options.Quiet quiet;
 
     /** One data row: where it is, its id and its cells by column. */
     private record Row(long line, String id, Map<String, String> cells, String problem) {
@@ -62,23 +99,17 @@ final class BatchCommand {
     private record Outcome(List<String> cells, String error) {
     }
 
-    static int run(String[] argv, PrintStream err) throws Exception {
-        Args a = new Args(argv, 1, Set.of("output", "trials", "seed"), Set.of("mc"));
-        boolean mc = a.has("mc");
-        if (!mc && (a.has("trials") || a.has("seed"))) {
+    @Override
+    public Integer call() throws Exception {
+        PrintStream err = quire.err;
+        if (!mc && trials.given()) {
             throw new UsageException("--trials and --seed go with --mc");
         }
-        a.expectPositional(2, USAGE);
-        if (!a.has("output")) {
-            throw new UsageException("give the results file with -o RESULTS.csv\nusage: " + USAGE);
-        }
-        String templateName = a.positional().get(0);
-        String dataName = a.positional().get(1);
-        Path out = Files.path(a.get("output", ""));
-        Template template = loadTemplate(templateName);
+        Path out = Files.path(output);
+        Template template = TemplateCommand.template(templateName, folders.library());
         Budget base = template.document().budget();
         if (mc) {
-            base = base.withSettings(MonteCarloCommand.settings(a, base.settings()));
+            base = base.withSettings(trials.apply(base.settings()));
         }
         EvaluationSettings settings = base.settings();
         CompiledModel model;
@@ -91,22 +122,26 @@ final class BatchCommand {
         int n = rows.size();
         long started = System.nanoTime();
         AtomicInteger done = new AtomicInteger();
-        int step = Math.max(1, n / 10);
-        err.println("quire batch: " + n + " rows of " + dataName + " with template " + template.id() + " version "
+        ProgressLine progress = ProgressLine.forTerminal(err, "quire batch", "rows", quiet.quiet);
+        info(err, "quire batch: " + n + " rows of " + dataName + " with template " + template.id() + " version "
                 + template.version() + " on " + Runtime.getRuntime().availableProcessors() + " cores");
-        Outcome[] outcomes = IntStream.range(0, n).parallel().mapToObj(i -> {
-            Outcome o = evaluate(template, model, rows.get(i), mc ? settings : null);
-            synchronized (err) {
-                int d = done.incrementAndGet();
-                if (o.error() != null) {
-                    err.println(dataName + " line " + rows.get(i).line() + ": " + o.error());
+        Outcome[] outcomes;
+        try {
+            outcomes = IntStream.range(0, n).parallel().mapToObj(i -> {
+                Outcome o = evaluate(template, model, rows.get(i), mc ? settings : null);
+                synchronized (err) {
+                    int d = done.incrementAndGet();
+                    if (o.error() != null) {
+                        progress.finish();
+                        err.println(dataName + " line " + rows.get(i).line() + ": " + o.error());
+                    }
+                    progress.progress(d, n);
                 }
-                if (d % step == 0 && d < n) {
-                    err.println("quire batch: " + d + " of " + n + " rows");
-                }
-            }
-            return o;
-        }).toArray(Outcome[]::new);
+                return o;
+            }).toArray(Outcome[]::new);
+        } finally {
+            progress.finish();
+        }
         List<String> header = new ArrayList<>();
         header.add("id");
         for (String o : base.outputNames()) {
@@ -139,31 +174,16 @@ final class BatchCommand {
         }
         DocumentStore.writeAtomically(out, text.toString().getBytes(StandardCharsets.UTF_8), false);
         double seconds = (System.nanoTime() - started) / 1e9;
-        err.println("quire batch: " + (n - failed) + " rows evaluated, " + failed + " failed; results in " + out);
-        err.println(String.format(java.util.Locale.ROOT, "quire batch: %.2f s, %.0f rows per second", seconds,
+        info(err, "quire batch: " + (n - failed) + " rows evaluated, " + failed + " failed; results in " + out);
+        info(err, String.format(java.util.Locale.ROOT, "quire batch: %.2f s, %.0f rows per second", seconds,
                 n / Math.max(seconds, 1e-9)));
-        return failed == 0 ? 0 : 1;
+        return failed == 0 ? CommandLine.OK : CommandLine.CHECK_FAILED;
     }
 
-    private static Template loadTemplate(String name) throws UsageException, Files.FileProblem {
-        Path p = Files.path(name);
-        if (java.nio.file.Files.isDirectory(p)) {
-            throw new UsageException("'" + name + "' is a folder, not a template file");
-        }
-        BudgetDocument d;
-        try {
-            d = DocumentStore.open(p);
-        } catch (NoSuchFileException e) {
-            throw new UsageException("no such file: " + name);
-        } catch (IOException e) {
-            throw new Files.FileProblem(name, "cannot read the file: " + e.getMessage());
-        } catch (BudgetFormatException e) {
-            throw new Files.FileProblem(name, e.getMessage());
-        }
-        try {
-            return Template.of(d);
-        } catch (IllegalArgumentException e) {
-            throw new Files.FileProblem(name, e.getMessage());
+    /** Prints a line of information, unless --quiet; a row's error is always printed. */
+    private void info(PrintStream err, String line) {
+        if (!quiet.quiet) {
+            err.println(line);
         }
     }
 

@@ -52,6 +52,48 @@ public final class TemplateLibrary {
         this.folders = folders;
     }
 
+    /** The resource folder, on the class path of the application, that holds the shipped templates. */
+    public static final String SHIPPED_RESOURCE = "templates";
+
+    /**
+     * The shipped templates, read from the application's own files (the {@value #SHIPPED_RESOURCE} resource
+     * folder packed into the jar, or the build's class folder), wherever the program runs; the working folder
+     * plays no part. The command line and the workbench both find them here.
+     *
+     * @return the folder (inside the jar's file system when packed), or null when this build ships none
+     */
+    public static Path shippedFolder() {
+        ClassLoader loader = TemplateLibrary.class.getClassLoader();
+        java.net.URL url = loader == null ? ClassLoader.getSystemResource(SHIPPED_RESOURCE)
+                : loader.getResource(SHIPPED_RESOURCE);
+        if (url == null) {
+            return null;
+        }
+        try {
+            java.net.URI uri = url.toURI();
+            if ("jar".equals(uri.getScheme())) {
+                java.nio.file.FileSystem fs;
+                try {
+                    fs = java.nio.file.FileSystems.newFileSystem(uri, Map.of());
+                } catch (java.nio.file.FileSystemAlreadyExistsException e) {
+                    fs = java.nio.file.FileSystems.getFileSystem(uri);
+                }
+                return fs.getPath("/" + SHIPPED_RESOURCE);
+            }
+            return Path.of(uri);
+        } catch (java.net.URISyntaxException | IOException | IllegalArgumentException e) {
+            return null;
+        }
+    }
+
+    /**
+     * @return the library of the shipped templates ({@link #shippedFolder()}) and the given personal and team
+     *     folders
+     */
+    public static TemplateLibrary withShipped(Path personal, Path team) {
+        return of(shippedFolder(), personal, team);
+    }
+
     /**
      * @param shipped the shipped templates (the {@code templates} folder of the installation), or null
      * @param personal the user's folder, or null
