@@ -73,7 +73,7 @@ final class TypeAForm extends JPanel {
         buttons.add(useReadings);
         buttons.add(useSummary);
         buttons.add(importCsv);
-        importCsv.setToolTipText("Readings from a CSV file: the column named reading, or the first column");
+        importCsv.setToolTipText("Readings from a CSV file: the column named reading, or a file of one column");
         importCsv.addActionListener(e -> {
             javax.swing.JFileChooser c = new javax.swing.JFileChooser();
             c.setDialogTitle("Import readings");
@@ -82,9 +82,12 @@ final class TypeAForm extends JPanel {
                 return;
             }
             try {
-                grid.setReadings(org.quire.engine.io.ReadingsCsv.read(c.getSelectedFile().toPath()));
+                grid.setReadings(org.quire.engine.csv.CsvReadings.read(c.getSelectedFile().toPath(),
+                        org.quire.engine.csv.CsvOptions.defaults()));
                 problem.accept(null);
-            } catch (java.io.IOException | org.quire.engine.io.BudgetFormatException x) {
+            } catch (org.quire.engine.csv.CsvException x) {
+                problem.accept(x.getMessage());
+            } catch (java.io.IOException x) {
                 problem.accept(c.getSelectedFile().getName() + ": " + x.getMessage());
             }
         });
