@@ -83,6 +83,17 @@ final class ReadingsGrid extends JTable {
         model.addRow(new Object[] {model.getRowCount() + 1, ""});
     }
 
+    /** Shows readings as text (a draft kept while not applied). */
+    void setReadingTexts(List<String> texts) {
+        model.setRowCount(0);
+        for (String t : texts) {
+            if (!t.isBlank()) {
+                model.addRow(new Object[] {model.getRowCount() + 1, t});
+            }
+        }
+        model.addRow(new Object[] {model.getRowCount() + 1, ""});
+    }
+
     /** @return the readings entered; blank rows skipped */
     double[] readings() {
         if (isEditing()) {
