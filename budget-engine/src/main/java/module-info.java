@@ -23,4 +23,5 @@ module org.quire.engine {
     exports org.quire.engine.validate;
     exports org.quire.engine.io;
     exports org.quire.engine.csv;
+    exports org.quire.engine.calibration;
 }
