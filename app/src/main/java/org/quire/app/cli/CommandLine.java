@@ -43,6 +43,10 @@ public final class CommandLine {
             "      current content, and the effect on each U; exit 1 when they differ",
             "  " + BatchCommand.USAGE,
             "      evaluate a template for every row of a CSV file of parameter values",
+            "  " + CalibrationCommand.USAGE,
+            "      a meter's calibration across its range: build it from a method template, the rig's runs and a job",
+            "      file; evaluate it (per run, per point, adjustment, as found and as left, conformity, CMC);",
+            "      evaluate a fleet of meters' runs in one CSV file (a meter column) in parallel",
             "  " + TemplateCommand.USAGE,
             "      the template library: list it, make a budget from a template, publish to the team, check for a newer version",
             "  quire version",
@@ -80,6 +84,8 @@ public final class CommandLine {
                     return DiffCommand.run(args, out);
                 case "batch":
                     return BatchCommand.run(args, err);
+                case "calibration":
+                    return CalibrationCommand.run(args, out, err);
                 case "template":
                     return TemplateCommand.run(args, out, err);
                 case "version":
