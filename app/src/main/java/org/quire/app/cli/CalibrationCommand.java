@@ -9,7 +9,13 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 import java.util.Set;
+import java.util.concurrent.Callable;
 import java.util.stream.IntStream;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.ParentCommand;
+import picocli.CommandLine.Parameters;
 import jakarta.json.JsonObject;
 import org.apache.commons.csv.CSVFormat;
 import org.apache.commons.csv.CSVPrinter;
@@ -51,36 +57,141 @@ import org.quire.engine.model.ModelException;
  *     meter.</li>
  * </ul>
  */
-final class CalibrationCommand {
-    static final String USAGE = "quire calibration build METHOD RUNS.csv --job JOB.json -o CAL.json [--meter ID]"
-            + " [--separator comma|semicolon|tab] [--decimal point|comma]\n"
-            + "  quire calibration evaluate CAL.json [--method TEMPLATE] [--format text|json|csv] [-o FILE]\n"
-            + "  quire calibration fleet METHOD RUNS.csv --job JOB.json -o RESULTS.csv [--separator ...] [--decimal ...]";
+@Command(name = "calibration", mixinStandardHelpOptions = true, synopsisSubcommandLabel = "ACTION",
+        description = "A meter's calibration across its range: build it from a method template, the rig's runs and "
+                + "a job file; evaluate it (per run, per point, adjustment, as found and as left, conformity, CMC); "
+                + "evaluate a fleet of meters' runs in one CSV file in parallel.",
+        subcommands = {CalibrationCommand.BuildAction.class, CalibrationCommand.EvaluateAction.class,
+            CalibrationCommand.FleetAction.class},
+        footerHeading = "%nExamples:%n",
+        footer = {"  quire calibration build templates/tvfl-emf-gravimetric-calibration-run.json runs.csv --job job.json -o cal.json",
+            "  quire calibration evaluate worked-examples/calibration/tarrow-vale-dn80-calibration.json",
+            "  quire calibration fleet templates/tvfl-emf-gravimetric-calibration-run.json fleet.csv --job job.json -o results.csv"})
+final class CalibrationCommand implements Callable<Integer> {
+    @ParentCommand
+    QuireCommand quire;
 
-    private CalibrationCommand() {
+    @Override
+    public Integer call() throws UsageException {
+        throw new UsageException("say what to do: build, evaluate or fleet (see 'quire calibration --help')");
     }
 
-    static int run(String[] argv, PrintStream out, PrintStream err) throws Exception {
-        if (argv.length < 2) {
-            throw new UsageException("calibration needs a subcommand: build, evaluate or fleet\nusage: " + USAGE);
-        }
-        switch (argv[1]) {
-            case "build":
-                return build(argv, out);
-            case "evaluate":
-                return evaluate(argv, out);
-            case "fleet":
-                return fleet(argv, err);
-            default:
-                throw new UsageException("unknown subcommand 'calibration " + argv[1] + "'; expected build, evaluate "
-                        + "or fleet\nusage: " + USAGE);
+    /** {@code --separator} and {@code --decimal}: how the runs file is read (detected when not given). */
+    static final class CsvChoice {
+        @Option(names = "--separator", paramLabel = "SEP",
+                description = "comma, semicolon or tab (default: detected from the header)")
+        String separator;
+
+        @Option(names = "--decimal", paramLabel = "MARK",
+                description = "point or comma (default: detected; a decimal comma only when the file proves it)")
+        String decimal;
+    }
+
+    @Command(name = "build", mixinStandardHelpOptions = true,
+            description = "A calibration file from the method template, the rig's runs (CSV: point, optional phase "
+                    + "as-found/as-left, meter, run, constant, and one column per per-run quantity of the method) "
+                    + "and the job file (laboratory, customer, item, declarations, adjustment, CMC, conformity).",
+            footerHeading = "%nExamples:%n",
+            footer = {"  quire calibration build templates/tvfl-emf-gravimetric-calibration-run.json "
+                    + "worked-examples/calibration/tarrow-vale-dn80-runs.csv --job worked-examples/calibration/"
+                    + "tarrow-vale-dn80-job.json -o cal.json"})
+    static final class BuildAction implements Callable<Integer> {
+        @ParentCommand
+        CalibrationCommand parent;
+
+        @Parameters(index = "0", paramLabel = "METHOD", description = "the method template (one run at one point)")
+        String method;
+
+        @Parameters(index = "1", paramLabel = "RUNS.csv", description = "the rig's runs")
+        String runs;
+
+        @Option(names = "--job", paramLabel = "JOB.json", required = true, description = "the job file")
+        String job;
+
+        @Option(names = {"-o", "--output"}, paramLabel = "CAL.json", required = true,
+                description = "the calibration file to write")
+        String output;
+
+        @Option(names = "--meter", paramLabel = "ID", description = "the meter to take from a file of several")
+        String meter;
+
+        @Mixin
+        CsvChoice csv;
+
+        @Override
+        public Integer call() throws Exception {
+            return build(method, runs, job, output, meter, csv, parent.quire.out);
         }
     }
 
-    private static CsvOptions csvOptions(Args a) throws UsageException {
+    @Command(name = "evaluate", mixinStandardHelpOptions = true,
+            description = "Evaluates a calibration file: per run, per point (mean, Type A repeatability, budget, U "
+                    + "with its own k), covariance of the points, adjustment with the old and new constant, as found "
+                    + "and as left, conformity and CMC findings.",
+            footerHeading = "%nExamples:%n",
+            footer = {"  quire calibration evaluate worked-examples/calibration/tarrow-vale-dn80-calibration.json",
+                "  quire calibration evaluate cal.json --format csv -o cal-results.csv"})
+    static final class EvaluateAction implements Callable<Integer> {
+        @ParentCommand
+        CalibrationCommand parent;
+
+        @Parameters(paramLabel = "CAL.json", description = "the calibration file")
+        String file;
+
+        @Option(names = "--method", paramLabel = "TEMPLATE",
+                description = "the method template (default: the file the calibration names)")
+        String method;
+
+        @Option(names = "--format", paramLabel = "FORMAT", defaultValue = "text",
+                description = "text, json or csv (default: ${DEFAULT-VALUE})")
+        String format;
+
+        @Option(names = {"-o", "--output"}, paramLabel = "FILE", description = "write to FILE instead of the screen")
+        String output;
+
+        @Override
+        public Integer call() throws Exception {
+            return evaluate(file, method, format, output, parent.quire.out);
+        }
+    }
+
+    @Command(name = "fleet", mixinStandardHelpOptions = true,
+            description = "Many meters' runs in one CSV file (a meter column, optionally a constant column), "
+                    + "evaluated in one process in parallel with one job file: one row per meter and point and one "
+                    + "verdict row per meter. Exit status 1 when a meter could not be evaluated.",
+            footerHeading = "%nExamples:%n",
+            footer = {"  quire calibration fleet templates/tvfl-emf-gravimetric-calibration-run.json fleet.csv "
+                    + "--job job.json -o results.csv"})
+    static final class FleetAction implements Callable<Integer> {
+        @ParentCommand
+        CalibrationCommand parent;
+
+        @Parameters(index = "0", paramLabel = "METHOD", description = "the method template")
+        String method;
+
+        @Parameters(index = "1", paramLabel = "RUNS.csv", description = "the runs of every meter")
+        String runs;
+
+        @Option(names = "--job", paramLabel = "JOB.json", required = true, description = "the job file")
+        String job;
+
+        @Option(names = {"-o", "--output"}, paramLabel = "RESULTS.csv", required = true,
+                description = "the results file to write")
+        String output;
+
+        @Mixin
+        CsvChoice csv;
+
+        @Override
+        public Integer call() throws Exception {
+            return fleet(method, runs, job, output, csv, parent.quire.err);
+        }
+    }
+
+    private static CsvOptions csvOptions(CsvChoice a) throws UsageException {
         CsvOptions o = CsvOptions.defaults();
-        if (a.has("separator")) {
-            String s = a.get("separator", "");
+        if (a.separator != null) {
+            String s = a.separator;
             switch (s) {
                 case "comma": o = o.withSeparator(CsvOptions.Separator.COMMA); break;
                 case "semicolon": o = o.withSeparator(CsvOptions.Separator.SEMICOLON); break;
@@ -88,8 +199,8 @@ final class CalibrationCommand {
                 default: throw new UsageException("--separator must be comma, semicolon or tab, not '" + s + "'");
             }
         }
-        if (a.has("decimal")) {
-            String s = a.get("decimal", "");
+        if (a.decimal != null) {
+            String s = a.decimal;
             switch (s) {
                 case "point": o = o.withDecimalMark(CsvOptions.DecimalMark.POINT); break;
                 case "comma": o = o.withDecimalMark(CsvOptions.DecimalMark.COMMA); break;
@@ -151,21 +262,14 @@ final class CalibrationCommand {
         return r.replace('\\', '/');
     }
 
-    private static int build(String[] argv, PrintStream out) throws Exception {
-        Args a = new Args(argv, 2, Set.of("output", "job", "meter", "separator", "decimal"), Set.of());
-        a.expectPositional(2, USAGE);
-        if (!a.has("output") || !a.has("job")) {
-            throw new UsageException("give the job file with --job JOB.json and the calibration file with -o CAL.json"
-                    + "\nusage: " + USAGE);
-        }
-        String methodName = a.positional().get(0);
-        String runsName = a.positional().get(1);
-        Path target = Files.path(a.get("output", ""));
+    private static int build(String methodName, String runsName, String jobName, String outputName, String meter,
+            CsvChoice csv, PrintStream out) throws Exception {
+        Path target = Files.path(outputName);
         Template method = method(methodName);
-        List<RunsCsv.MeterRuns> all = runs(runsName, method, csvOptions(a));
+        List<RunsCsv.MeterRuns> all = runs(runsName, method, csvOptions(csv));
         RunsCsv.MeterRuns mine;
-        if (a.has("meter")) {
-            String id = a.get("meter", "");
+        if (meter != null) {
+            String id = meter;
             mine = all.stream().filter(m -> m.meter().equals(id)).findFirst().orElse(null);
             if (mine == null) {
                 throw new Files.FileProblem(runsName, "no runs of meter '" + id + "'");
@@ -177,13 +281,13 @@ final class CalibrationCommand {
             }
             mine = all.get(0);
         }
-        JsonObject job = job(a.get("job", ""));
+        JsonObject job = job(jobName);
         CalibrationJson.Loaded loaded;
         try {
             loaded = CalibrationJson.complete(job, method.origin(), relative(target, Files.path(methodName)),
                     mine.asFound(), mine.asLeft(), mine.constant());
         } catch (BudgetFormatException e) {
-            throw new Files.FileProblem(a.get("job", ""), e.getMessage());
+            throw new Files.FileProblem(jobName, e.getMessage());
         }
         List<String> undeclared = new ArrayList<>();
         for (String n : method.document().budget().inputNames()) {
@@ -204,14 +308,11 @@ final class CalibrationCommand {
         return 0;
     }
 
-    private static int evaluate(String[] argv, PrintStream out) throws Exception {
-        Args a = new Args(argv, 2, Set.of("output", "method", "format"), Set.of());
-        a.expectPositional(1, USAGE);
-        String format = a.get("format", "text");
+    private static int evaluate(String name, String methodName, String format, String output, PrintStream out)
+            throws Exception {
         if (!Set.of("text", "json", "csv").contains(format)) {
             throw new UsageException("--format must be text, json or csv, not '" + format + "'");
         }
-        String name = a.positional().get(0);
         Path file = Files.path(name);
         if (!java.nio.file.Files.isRegularFile(file)) {
             throw new UsageException("no such calibration file: " + name);
@@ -220,15 +321,15 @@ final class CalibrationCommand {
         Template method;
         try {
             loaded = CalibrationJson.read(file);
-            method = a.has("method") ? method(a.get("method", "")) : CalibrationJson.method(file, loaded);
+            method = methodName != null ? method(methodName) : CalibrationJson.method(file, loaded);
         } catch (BudgetFormatException e) {
             throw new Files.FileProblem(name, e.getMessage());
         }
         CalibrationResult r = evaluate(name, method, loaded);
         String text = format.equals("json") ? BudgetJson.pretty(CalibrationResultJson.toJson(r))
                 : format.equals("csv") ? csv(r) : text(r);
-        if (a.has("output")) {
-            DocumentStore.writeAtomically(Files.path(a.get("output", "")), text.getBytes(StandardCharsets.UTF_8), false);
+        if (output != null) {
+            DocumentStore.writeAtomically(Files.path(output), text.getBytes(StandardCharsets.UTF_8), false);
         } else {
             out.print(text);
         }
@@ -383,20 +484,13 @@ final class CalibrationCommand {
     private record MeterOutcome(String meter, CalibrationResult result, String error) {
     }
 
-    private static int fleet(String[] argv, PrintStream err) throws Exception {
-        Args a = new Args(argv, 2, Set.of("output", "job", "separator", "decimal"), Set.of());
-        a.expectPositional(2, USAGE);
-        if (!a.has("output") || !a.has("job")) {
-            throw new UsageException("give the job file with --job JOB.json and the results file with -o RESULTS.csv"
-                    + "\nusage: " + USAGE);
-        }
-        String methodName = a.positional().get(0);
-        String runsName = a.positional().get(1);
-        Path target = Files.path(a.get("output", ""));
+    private static int fleet(String methodName, String runsName, String jobName, String outputName, CsvChoice csv,
+            PrintStream err) throws Exception {
+        Path target = Files.path(outputName);
         long started = System.nanoTime();
         Template method = method(methodName);
-        List<RunsCsv.MeterRuns> meters = runs(runsName, method, csvOptions(a));
-        JsonObject job = job(a.get("job", ""));
+        List<RunsCsv.MeterRuns> meters = runs(runsName, method, csvOptions(csv));
+        JsonObject job = job(jobName);
         CalibrationEvaluator ev;
         try {
             ev = CalibrationEvaluator.of(method, Engine.library()).withMonteCarloThreads(1);

@@ -3,6 +3,7 @@ package org.quire.app.report;
 import java.math.BigDecimal;
 import java.util.ArrayList;
 import java.util.List;
+import org.quire.engine.gum.Figures;
 
 /**
  * Lays a {@link Chart} out as drawing primitives (rectangles, lines, text) in a box of points with the origin

@@ -5,6 +5,7 @@ import java.util.List;
 import java.util.Objects;
 import org.apache.commons.math3.special.Gamma;
 import org.quire.engine.budget.Budget;
+import org.quire.engine.gum.Figures;
 import org.quire.engine.gum.GumResult;
 import org.quire.engine.gum.OutputResult;
 import org.quire.engine.model.CompiledModel;

@@ -44,7 +44,7 @@ class BatchCommandTest {
         assertEquals(1, run(err, "batch", TEMPLATE.toString(), data.toString(), "-o", out.toString()));
         String messages = err.toString(StandardCharsets.UTF_8);
         assertTrue(messages.contains("runs.csv line 58: parameter 'T_tank' = 60.0 lies outside"), messages);
-        assertTrue(messages.contains("runs.csv line 202: parameter 'm_net': 'abc' is not a number"), messages);
+        assertTrue(messages.contains("runs.csv line 202: parameter 'm_net': \"abc\" is not a number"), messages);
         assertTrue(messages.contains("199 rows evaluated, 2 failed"), messages);
         List<String> lines = Files.readAllLines(out);
         assertEquals(202, lines.size());
@@ -123,5 +123,25 @@ class BatchCommandTest {
         assertEquals(0.0292704, Double.parseDouble(c[2]), 5e-8);
         assertTrue(lines.get(2).contains("t_tank"), lines.get(2));
         assertTrue(err.toString(StandardCharsets.UTF_8).contains("rows per second"));
+    }
+
+    @Test
+    void extraCellsAWrongSeparatorAndAmbiguousNumbersAreNeverIgnored(@TempDir Path dir) throws Exception {
+        Path data = dir.resolve("runs.csv");
+        Path out = dir.resolve("r.csv");
+        // issue 11/12: an extra cell in a row stops the run with the line, nothing written
+        Files.writeString(data, "id,m_net,T_tank,V_meter\nrun-1,1000,20.5,1002.6\nrun-2,500,20.5,501.2,7\n");
+        ByteArrayOutputStream err = new ByteArrayOutputStream();
+        assertEquals(2, run(err, "batch", TEMPLATE.toString(), data.toString(), "-o", out.toString()));
+        String m = err.toString(StandardCharsets.UTF_8);
+        assertTrue(m.contains("runs.csv, line 3: the row has 5 cells, but the header has 4"), m);
+        assertTrue(Files.notExists(out));
+        // a tab-separated table read as comma-separated would be one column; detection reads it right, and
+        // a decimal comma that could be a thousands group is refused for its row
+        Files.writeString(data, "id\tm_net\tT_tank\tV_meter\nrun-1\t1000\t20.5\t1002.6\nrun-2\t1,002\t20.5\t501.2\n");
+        err.reset();
+        assertEquals(1, run(err, "batch", TEMPLATE.toString(), data.toString(), "-o", out.toString()));
+        m = err.toString(StandardCharsets.UTF_8);
+        assertTrue(m.contains("runs.csv line 3: parameter 'm_net': \"1,002\" is ambiguous"), m);
     }
 }

@@ -22,10 +22,11 @@ public final class CompiledModel implements BlockEvaluator {
     private final int nodeCount;
     private final List<Node> constants;
     private final List<ModelProblem> warnings;
+    private final List<Formula.Line> lines;
 
     CompiledModel(List<String> inputs, List<String> quantities, List<String> equationTexts,
             List<String> functionTexts, Node[] roots, int[] order, int[] outputIndex, List<String> outputs,
-            int nodeCount, List<Node> constants, List<ModelProblem> warnings) {
+            int nodeCount, List<Node> constants, List<ModelProblem> warnings, List<Formula.Line> lines) {
         this.inputs = inputs;
         this.quantities = List.copyOf(quantities);
         this.equationTexts = List.copyOf(equationTexts);
@@ -37,6 +38,15 @@ public final class CompiledModel implements BlockEvaluator {
         this.nodeCount = nodeCount;
         this.constants = constants;
         this.warnings = List.copyOf(warnings);
+        this.lines = List.copyOf(lines);
+    }
+
+    /**
+     * @return the model's lines with every name resolved, for typesetting: the model's own functions first, then
+     *     the quantities' equations in the order they are written
+     */
+    public List<Formula.Line> lines() {
+        return lines;
     }
 
     /** @return the input names, in the order the evaluation methods expect their values */
@@ -113,6 +123,42 @@ public final class CompiledModel implements BlockEvaluator {
             y[k] = v[outputIndex[k]];
         }
         return y;
+    }
+
+    /** Free parameters per pass of {@link #sensitivities}. */
+    static final int SENSITIVITY_CHUNK = 32;
+
+    /**
+     * The first-order partial derivatives of every output, by forward-mode automatic differentiation in passes
+     * of at most {@value #SENSITIVITY_CHUNK} free inputs each. In first order the derivative with respect to
+     * one input is carried through the model independently of the others (each operation combines at most two
+     * terms per component), so the passes give the same numbers as one pass over all inputs, while the cost stays
+     * linear in the number of inputs for a model of a given size: a derivative structure of N free parameters
+     * would need a table of all N at once, whose construction grows faster than N^2.
+     *
+     * <p>References: JCGM 100:2008 5.1.3, eq. (10) (sensitivity coefficients c_i = df/dx_i); Commons Math
+     * {@code DerivativeStructure}.
+     *
+     * @param x input values (checked first with {@link #evaluate(double[])} by the caller)
+     * @param active indices of the inputs that are free variables; the others are held constant
+     * @return {@code c[k][a]}, the partial derivative of output k with respect to input {@code active[a]}
+     */
+    public double[][] sensitivities(double[] x, int[] active) {
+        checkLength(x.length);
+        double[][] c = new double[outputIndex.length][active.length];
+        for (int from = 0; from < active.length; from += SENSITIVITY_CHUNK) {
+            int[] chunk = java.util.Arrays.copyOfRange(active, from, Math.min(active.length, from + SENSITIVITY_CHUNK));
+            DerivativeStructure[] y = derivatives(x, chunk, 1);
+            int[] orders = new int[chunk.length];
+            for (int a = 0; a < chunk.length; a++) {
+                orders[a] = 1;
+                for (int k = 0; k < y.length; k++) {
+                    c[k][from + a] = y[k].getPartialDerivative(orders);
+                }
+                orders[a] = 0;
+            }
+        }
+        return c;
     }
 
     /**

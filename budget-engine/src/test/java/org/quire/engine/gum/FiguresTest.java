@@ -1,4 +1,4 @@
-package org.quire.app.report;
+package org.quire.engine.gum;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 
@@ -23,7 +23,7 @@ class FiguresTest {
         assertEquals("0.000215", Figures.estimate(0.000215));
         assertEquals("−0.1", Figures.estimate(-0.1));
         assertEquals("1.15 × 10⁻⁵", Figures.estimate(1.15e-5));
-        assertEquals("100000", Figures.estimate(1e5));
+        assertEquals("100\u202f000", Figures.estimate(1e5));
     }
 
     @Test
