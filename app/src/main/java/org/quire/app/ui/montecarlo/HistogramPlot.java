@@ -66,8 +66,8 @@ final class HistogramPlot extends JComponent {
         }
         g.setColor(Colors.get("Quire.plot.axis"));
         g.drawLine(left, bottom, right, bottom);
-        g.drawString(Fmt.short4(h.lower()), left, bottom + 15);
-        String hi = Fmt.short4(h.upper());
+        g.drawString(Fmt.working(h.lower()), left, bottom + 15);
+        String hi = Fmt.working(h.upper());
         g.drawString(hi, right - g.getFontMetrics().stringWidth(hi), bottom + 15);
         if (curve != null && curve.length == counts.length) {
             g.setColor(Colors.get("Quire.plot.gumInterval"));

@@ -190,9 +190,9 @@ public final class MonteCarloSection implements Section {
                     .getRGB() & 0xffffff);
             s.append("<br><b style='color:").append(colour).append("'>")
                     .append(c.gumValidated() ? "GUM result confirmed" : "GUM result NOT confirmed")
-                    .append("</b><br>d_low = ").append(Fmt.short4(c.lowDifference()))
-                    .append(", d_high = ").append(Fmt.short4(c.highDifference()))
-                    .append("<br>tolerance \u03b4 = ").append(Fmt.short4(c.numericalTolerance()));
+                    .append("</b><br>d_low = ").append(Fmt.working(c.lowDifference()))
+                    .append(", d_high = ").append(Fmt.working(c.highDifference()))
+                    .append("<br>tolerance \u03b4 = ").append(Fmt.working(c.numericalTolerance()));
         }
         return s.append("</html>").toString();
     }
