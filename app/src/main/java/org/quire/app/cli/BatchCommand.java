@@ -58,9 +58,9 @@ import picocli.CommandLine.Parameters;
                 + "evaluated, 1 when some failed, 2 for unusable files or arguments.",
             "On a terminal a progress line on stderr shows the rate and the time left."},
         footerHeading = "%nExamples:%n",
-        footer = {"  quire template list          # the templates and their parameters",
-            "  quire batch templates/tvfl-gravimetric-emf-point.json fleet.csv -o results.csv",
-            "  quire batch tvfl-gravimetric-emf-point fleet.csv -o results.csv --mc --trials 1e5 --seed 3"})
+        footer = {"  quire batch tvfl-volumetric-proving-tank fleet.csv -o results.csv",
+            "  quire batch my-template.json fleet.csv -o results.csv --mc --trials 1e5 --seed 3",
+            "  quire template list          # the templates and their parameters (the CSV's column names)"})
 final class BatchCommand implements Callable<Integer> {
     /** Largest data file read. */
     static final long MAX_CSV_BYTES = 256L * 1024 * 1024;

@@ -232,19 +232,12 @@ public final class ReportBuilder {
             blocks.add(new Paragraph("Higher-order terms (JCGM 100:2008 5.1.2, note) were asked for but are "
                     + o.higherOrderTerms().text() + "; u_c(" + y.plain() + ") is the first-order result."));
         }
-        List<MathText> labels = new ArrayList<>();
-        List<Double> values = new ArrayList<>();
-        o.contributions().stream().filter(c -> c.share() > 0)
-                .sorted(Comparator.comparingDouble(Contribution::share).reversed())
-                .forEach(c -> {
-                    labels.add(Typesetter.name(c.input()));
-                    values.add(100 * c.share());
-                });
-        if (!labels.isEmpty()) {
-            blocks.add(new ChartBlock(new Chart.Bars("Share of each input in the combined variance of "
-                    + y.plain() + (o.correlationTerms().isEmpty() ? "" : "; the correlation terms are not shown"
-                    + (o.correlationVariance() < 0 ? ", and as they are negative the shares add up to more than 100 %" : "")),
-                    "share of u_c^2 (%)", labels, values)));
+        Chart.Ranking ranking = Chart.Ranking.of(o, "Contributions u_i(y) to the standard uncertainty of " + y.plain()
+                + ", largest first, with the cumulative share of the combined variance"
+                + (o.correlationTerms().isEmpty() ? "" : "; the correlation terms are not shown"
+                + (o.correlationVariance() < 0 ? ", and as they are negative the shares add up to more than 100 %" : "")));
+        if (!ranking.labels().isEmpty()) {
+            blocks.add(new ChartBlock(ranking));
         }
         double big = o.expandedUncertainty();
         String ru = Rounding.uncertainty(o.standardUncertainty(), digits).toPlainString();

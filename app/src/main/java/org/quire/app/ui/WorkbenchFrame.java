@@ -106,6 +106,7 @@ public final class WorkbenchFrame extends JFrame {
         getContentPane().add(status, BorderLayout.SOUTH);
         actions = new WorkbenchActions(this);
         setJMenuBar(actions.menuBar());
+        KeyBindings.yieldToMenu(getJMenuBar());
         setTransferHandler(new FileDropHandler(this::dropped));
         addWindowListener(new WindowAdapter() {
             @Override

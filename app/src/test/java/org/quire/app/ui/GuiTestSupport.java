@@ -34,8 +34,9 @@ abstract class GuiTestSupport {
     @BeforeAll
     static void needsDisplay() {
         if (GraphicsEnvironment.isHeadless()) {
-            System.out.println("SKIPPED: workbench GUI tests need a display; run them with "
-                    + "'xvfb-run -a mvn -B -o test -pl app -am'");
+            String line = "*".repeat(100);
+            System.err.println(line + "\n*** GUI TESTS SKIPPED: no display (java.awt.headless or no DISPLAY). "
+                    + "Run ./run-tests, which starts Xvfb. ***\n" + line);
         }
         if (!GraphicsEnvironment.isHeadless()) {
             Workbench.installLookAndFeel(WorkbenchPrefs.Theme.LIGHT);

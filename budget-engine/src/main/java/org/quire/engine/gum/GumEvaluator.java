@@ -92,13 +92,14 @@ public final class GumEvaluator {
             globalWarnings.add("higher-order terms were not included: some correlated inputs are not normal, and "
                     + "the terms of JCGM 100:2008 5.1.2 note need the higher moments of a normal distribution");
         }
-        DerivativeStructure[] ds = model.derivatives(x, active, higher ? 3 : 1);
+        DerivativeStructure[] ds = higher ? model.derivatives(x, active, 3) : null;
+        double[][] firstOrder = higher ? null : model.sensitivities(x, active);
         int m = y.length;
         Conversion[] shown = displayConversions(budget, model);
         double[][] c = new double[m][n];
         for (int k = 0; k < m; k++) {
             for (int a = 0; a < active.length; a++) {
-                c[k][active[a]] = partial(ds[k], active.length, a, -1, -1);
+                c[k][active[a]] = higher ? partial(ds[k], active.length, a, -1, -1) : firstOrder[k][a];
                 if (!Double.isFinite(c[k][active[a]])) {
                     throw new ModelException(new ModelProblem(0, 0, 0, ModelProblem.Severity.ERROR,
                             "the sensitivity coefficient of output '" + model.outputNames().get(k) + "' to input '"
@@ -112,8 +113,16 @@ public final class GumEvaluator {
             for (int l = 0; l < m; l++) {
                 double s = 0;
                 for (int i : active) {
+                    if (!correlated) {
+                        // r is the identity: only the terms i = j remain, so the cost is linear in the inputs
+                        s += c[k][i] * c[l][i] * u[i] * u[i];
+                        continue;
+                    }
                     for (int j : active) {
-                        s += c[k][i] * c[l][j] * u[i] * u[j] * r.get(i, j);
+                        double rij = r.get(i, j);
+                        if (rij != 0) {
+                            s += c[k][i] * c[l][j] * u[i] * u[j] * rij;
+                        }
                     }
                 }
                 cov[k][l] = s;

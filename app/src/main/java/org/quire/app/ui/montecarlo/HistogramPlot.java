@@ -67,8 +67,8 @@ final class HistogramPlot extends JComponent {
         }
         g.setColor(Colors.get("Quire.plot.axis"));
         g.drawLine(left, bottom, right, bottom);
-        g.drawString(Fmt.short4(lower), left, bottom + 15);
-        String hi = Fmt.short4(upper);
+        g.drawString(Fmt.working(lower), left, bottom + 15);
+        String hi = Fmt.working(upper);
         g.drawString(hi, right - g.getFontMetrics().stringWidth(hi), bottom + 15);
         if (curve != null && curve.length == counts.length) {
             g.setColor(Colors.get("Quire.plot.gumInterval"));
