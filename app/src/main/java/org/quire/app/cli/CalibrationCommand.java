@@ -37,8 +37,8 @@ import org.quire.engine.document.DocumentStore;
 import org.quire.engine.document.Template;
 import org.quire.engine.io.BudgetFormatException;
 import org.quire.engine.io.BudgetJson;
-import org.quire.engine.io.CalibrationJson;
-import org.quire.engine.io.CalibrationResultJson;
+import org.quire.engine.calibration.CalibrationJson;
+import org.quire.engine.calibration.CalibrationResultJson;
 import org.quire.engine.io.JsonCursor;
 import org.quire.engine.model.ModelException;
 
