@@ -1,6 +1,6 @@
 /**
  * Quire's computation library: measurement models, input quantities, the GUM evaluation, the Monte Carlo
- * method, calibration lines, units and budget documents. It depends only on {@code java.base}, JSON-P and
+ * method, calibration lines, units and budget documents. It depends only on {@code java.base}, JSON-P, Commons CSV and
  * its numeric libraries; the compiler refuses any import of a user-interface toolkit here.
  */
 module org.quire.engine {
@@ -9,6 +9,7 @@ module org.quire.engine {
     requires org.apache.commons.rng.api;
     requires org.apache.commons.rng.simple;
     requires org.apache.commons.rng.sampling;
+    requires org.apache.commons.csv;
 
     exports org.quire.engine.model;
     exports org.quire.engine.budget;
@@ -21,4 +22,7 @@ module org.quire.engine {
     exports org.quire.engine.document;
     exports org.quire.engine.validate;
     exports org.quire.engine.io;
+    exports org.quire.engine.reference;
+    exports org.quire.engine.csv;
+    exports org.quire.engine.calibration;
 }

@@ -2,7 +2,6 @@ package org.quire.app.compare;
 
 import java.util.ArrayList;
 import java.util.List;
-import org.quire.app.report.Figures;
 import org.quire.app.report.MathText;
 import org.quire.app.report.ReportSection;
 import org.quire.app.report.Table;
@@ -11,6 +10,7 @@ import org.quire.app.report.Table.Cell;
 import org.quire.app.report.Table.Column;
 import org.quire.app.report.Typesetter;
 import org.quire.engine.budget.InputQuantity;
+import org.quire.engine.gum.Figures;
 
 /** A {@link Comparison} as a report section: what changed and the effect on U. Stateless and thread-safe. */
 public final class ComparisonSection {

@@ -2,8 +2,8 @@ package org.quire.app.compare;
 
 import java.util.List;
 import java.util.Locale;
-import org.quire.app.report.Figures;
 import org.quire.engine.budget.InputQuantity;
+import org.quire.engine.gum.Figures;
 
 /** A {@link Comparison} as plain text for the command line. Stateless and thread-safe. */
 public final class ComparisonText {

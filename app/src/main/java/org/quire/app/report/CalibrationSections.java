@@ -16,6 +16,7 @@ import org.quire.engine.conformity.MpeEnvelope;
 import org.quire.engine.conformity.MpeLimits;
 import org.quire.engine.conformity.MpeZone;
 import org.quire.engine.conformity.PointDecision;
+import org.quire.engine.gum.Figures;
 import org.quire.engine.gum.FlowRange;
 import org.quire.engine.gum.FlowRangeResult;
 import org.quire.engine.line.CalibrationLine;
@@ -25,6 +26,7 @@ import org.quire.engine.line.LineFit;
 import org.quire.engine.line.LineMethod;
 import org.quire.engine.model.FunctionLibrary;
 import org.quire.engine.model.ModelException;
+import org.quire.engine.units.Units;
 
 /**
  * The report sections of a budget's calibration lines, flow range and conformity decisions: for each data set
@@ -57,7 +59,7 @@ public final class CalibrationSections {
             out.add(fit(line));
         }
         if (budget.flowPoints() != null) {
-            out.add(flowRange(FlowRange.evaluate(budget, library)));
+            out.add(flowRange(FlowRange.evaluate(budget, library), budget.settings().significantDigits()));
         }
         return out;
     }
@@ -152,12 +154,20 @@ public final class CalibrationSections {
         return ReportSection.of("fit-" + key, "Calibration line " + line.name(), blocks);
     }
 
-    /** @return the section of a flow-range evaluation, with its conformity decisions when it has them */
-    public static ReportSection flowRange(FlowRangeResult r) {
+    /**
+     * @param digits significant digits of the reported uncertainties (JCGM 100:2008 7.2.6)
+     * @return the section of a flow-range evaluation: the table over the points, every point's own budget labelled
+     *     by its flow with its result stated with its own coverage factor, the correlation of the point results, and
+     *     the conformity decisions when it has them
+     */
+    public static ReportSection flowRange(FlowRangeResult r, int digits) {
         String fu = r.flowUnit();
         String yu = r.unit();
         String y = Typesetter.name(r.output()).plain();
-        boolean relativeAlready = yu.strip().equals("%");
+        boolean relativeAlready = true;
+        for (FlowRangeResult.Point p : r.points()) {
+            relativeAlready &= !Figures.relativeUncertaintyMeaningful(yu, p.estimate(), p.expandedUncertainty());
+        }
         List<Block> blocks = new ArrayList<>();
         blocks.add(new Paragraph("The budget is evaluated at each of its " + r.points().size() + " flow points for the output "
                 + y + ". Inputs read afresh at each point are independent between points; inputs shared by all "
@@ -169,23 +179,33 @@ public final class CalibrationSections {
         double[] rel = new double[m];
         double[] est = new double[m];
         boolean relOk = !relativeAlready;
+        List<Block> pointBudgets = new ArrayList<>();
         for (int i = 0; i < m; i++) {
             FlowRangeResult.Point p = r.points().get(i);
             q[i] = p.flow();
             big[i] = p.expandedUncertainty();
             est[i] = p.estimate();
             rel[i] = 100 * p.relativeExpandedUncertainty();
-            relOk &= Double.isFinite(rel[i]);
+            relOk &= Figures.relativeUncertaintyMeaningful(yu, p.estimate(), p.expandedUncertainty());
             rows.add(List.of(Cell.number(Integer.toString(i + 1), i + 1), Cell.number(Figures.estimate(p.flow()), p.flow()),
                     Cell.number(Figures.sig(p.estimate(), 5), p.estimate()),
                     Cell.number(Figures.sig(p.standardUncertainty(), 4), p.standardUncertainty()),
                     Cell.number(Figures.dof(p.result().dofUsed()), p.result().dofUsed()),
                     Cell.number(Figures.compact(p.result().coverageFactor(), 3), p.result().coverageFactor()),
                     Cell.number(Figures.sig(p.expandedUncertainty(), 4), p.expandedUncertainty()),
-                    Cell.number(!Double.isFinite(rel[i]) ? "–" : Figures.sig(rel[i], 3), rel[i])));
+                    Cell.number(!Figures.relativeUncertaintyMeaningful(yu, p.estimate(), p.expandedUncertainty()) ? "–"
+                            : Figures.sig(rel[i], 3), rel[i])));
             if (relativeAlready) {
                 rows.set(i, rows.get(i).subList(0, 7));
             }
+            MathText label = MathText.upright("point " + (i + 1) + " at " + Figures.estimate(p.flow())
+                    + (fu.isBlank() ? "" : " " + Units.display(fu)));
+            pointBudgets.add(new TableBlock(ReportBuilder.budgetTable(p.result(), "flow-point-" + (i + 1) + "-budget",
+                    MathText.concat(MathText.upright("Uncertainty budget of "), Typesetter.name(r.output()),
+                            MathText.upright(" at flow "), label, MathText.upright(yu.isBlank() ? ""
+                                    : " (contributions in " + Units.display(yu) + ")")))));
+            pointBudgets.add(new Statement(MathText.concat(label, MathText.upright(": "),
+                    ReportBuilder.statement(p.result(), digits))));
         }
         List<Column> columns = new ArrayList<>(List.of(
                 Column.of("Point", "point", Align.RIGHT, 0.6f),
@@ -198,12 +218,12 @@ public final class CalibrationSections {
         if (!relativeAlready) {
             columns.add(Column.of("U/|y| (%)", "relative_expanded_uncertainty_percent", Align.RIGHT, 1f));
         }
-        blocks.add(new TableBlock(new Table("flow-range", "Uncertainty of " + y + " across the flow range"
-                + (relativeAlready ? " (" + y + " is in % of the reading, so U is relative to the reading already)"
-                        : ""), columns, rows)));
+        blocks.add(new TableBlock(new Table("flow-range", MathText.concat(MathText.upright("Uncertainty of "),
+                Typesetter.name(r.output()), MathText.upright(" across the flow range" + (yu.strip().equals("%")
+                        ? " (in % of the reading, so U is relative to the reading already)" : ""))), columns, rows)));
         boolean log = positive(q) && max(q) / min(q) > 20;
         String flowAxis = "flow" + unitSuffix(fu) + (log ? ", logarithmic scale" : "");
-        blocks.add(new ChartBlock(new Chart.Plot("Expanded uncertainty U of " + y + " against flow" + (relativeAlready
+        blocks.add(new ChartBlock(new Chart.Plot("Expanded uncertainty U of " + y + " against flow" + (yu.strip().equals("%")
                 ? "; " + y + " is an error in % of the reading, so U is relative to the reading already" : ""),
                 flowAxis, "U" + unitSuffix(yu), log,
                 List.of(new Chart.Series("U" + unitSuffix(yu), q, big, null, Chart.Style.LINE_POINTS, Chart.Tone.FIRST)),
@@ -228,8 +248,12 @@ public final class CalibrationSections {
             }
             cr.add(row);
         }
-        blocks.add(new TableBlock(new Table("flow-range-correlation", "Correlation coefficients of the point results r("
-                + y + "_p, " + y + "_q) (JCGM 102:2011 6.2.1.3)", cc, cr)));
+        blocks.add(new TableBlock(new Table("flow-range-correlation", MathText.concat(MathText.upright(
+                "Correlation coefficients of the point results r("), indexed(r.output(), "p"), MathText.upright(", "),
+                indexed(r.output(), "q"), MathText.upright(") (JCGM 102:2011 6.2.1.3)")), cc, cr)));
+        blocks.add(new Paragraph("The budget of each flow point follows, with its result stated with its own coverage "
+                + "factor."));
+        blocks.addAll(pointBudgets);
         ConformityAssessment a = r.conformity();
         if (a != null) {
             conformity(a, y, q, est, fu, blocks, log, flowAxis);
@@ -263,7 +287,7 @@ public final class CalibrationSections {
                 + a.rule().kind().title() + "; JCGM 106:2012)", List.of(
                 Column.of("flow" + unitSuffix(fu), "flow", Align.RIGHT, 1f),
                 Column.of("Zone", "zone", Align.LEFT, 1f),
-                Column.of(y + " (%)", "error_percent", Align.RIGHT, 0.8f),
+                new Column(MathText.concat(Typesetter.name(y), MathText.upright(" (%)")), "error_percent", Align.RIGHT, 0.8f),
                 Column.of("U (%)", "expanded_uncertainty_percent", Align.RIGHT, 0.8f),
                 Column.of("MPE (%)", "mpe", Align.LEFT, 0.9f),
                 Column.of("acceptance (%)", "acceptance_interval", Align.LEFT, 1.3f),
@@ -273,7 +297,7 @@ public final class CalibrationSections {
         blocks.add(new Paragraph("Overall decision: " + a.overall().label() + ". The specific risk is that of false "
                 + "acceptance for a point that conforms and of false rejection for one that does not (JCGM 106:2012 "
                 + "9.5)."));
-        blocks.add(new Statement(MathText.upright(a.statement())));
+        blocks.add(new Statement(Typesetter.prose(a.statement())));
         List<Chart.Series> series = new ArrayList<>();
         series.add(new Chart.Series("error " + y + " with its U", q, est, bigU, Chart.Style.POINTS, Chart.Tone.FIRST));
         envelope(a.envelope(), a.decisions().get(0).point().temperature(), q, log, series);
@@ -322,10 +346,16 @@ public final class CalibrationSections {
 
     /** @return the quantity's symbol with the point number added to its subscript, e.g. E₁ or q_cal,1 */
     static MathText indexed(String name, int i) {
+        return indexed(name, Integer.toString(i));
+    }
+
+    /** @return the quantity's symbol with an index added to its subscript; its plain form is e.g. {@code E[3]} */
+    static MathText indexed(String name, String index) {
         List<MathText.Run> runs = new ArrayList<>(Typesetter.name(name).runs());
         boolean sub = runs.stream().anyMatch(x -> x.shift() == MathText.Shift.SUB);
-        runs.add(new MathText.Run((sub ? "," : "") + i, false, MathText.Shift.SUB));
-        return MathText.of(runs);
+        runs.add(new MathText.Run((sub ? "," : "") + index, index.length() == 1 && Character.isLetter(index.charAt(0)),
+                MathText.Shift.SUB));
+        return MathText.of(runs, name + "[" + index + "]");
     }
 
     private static List<Cell> row(String figure, String symbol, double v, int digits, String unit) {

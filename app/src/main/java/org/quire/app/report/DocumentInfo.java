@@ -112,6 +112,30 @@ public record DocumentInfo(String laboratory, String title, String deviceUnderTe
                 .withZone(java.time.ZoneOffset.UTC).format(t);
     }
 
+    /**
+     * @return the words every page of a report carries in a band at its top when the content is not an approved
+     *     revision (a draft, a document in review or withdrawn, a plain budget file that records no approval, an
+     *     approved document whose content changed since), or null for approved content whose hash is intact
+     */
+    public String notApprovedMark() {
+        if (status.equals("approved (content unchanged since approval)")) {
+            return null;
+        }
+        if (status.startsWith("approved")) {
+            return "CHANGED SINCE APPROVAL: not the content approved";
+        }
+        if (status.startsWith("draft")) {
+            return "DRAFT: not approved, not for issue";
+        }
+        if (status.startsWith("in review") || status.startsWith("in-review")) {
+            return "IN REVIEW: not approved, not for issue";
+        }
+        if (status.startsWith("withdrawn")) {
+            return "WITHDRAWN: not for use";
+        }
+        return "NOT APPROVED: no approval recorded for this content";
+    }
+
     /** @return whether the header stands for a document whose revision and status are recorded */
     public boolean hasRevisions() {
         return !revision.equals(NOT_RECORDED) && !revision.equals(NOT_RECORDED_V1);

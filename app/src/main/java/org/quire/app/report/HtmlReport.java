@@ -36,6 +36,8 @@ public final class HtmlReport {
             ".statement { font-size: 11.5pt; font-weight: bold; margin: .5rem 0 1rem; padding: .4rem .7rem;",
             "  border-left: 3px solid var(--accent); background: var(--band); }",
             ".notices li { color: #7a4b00; }",
+            ".draft-band { background: #a0361c; color: #fff; font-weight: bold; font-size: 9pt; padding: .2rem .6rem;",
+            "  margin-bottom: .8rem; }",
             ".cautions { margin-top: 2rem; padding: .6rem .8rem; border: 1px solid var(--rule); font-size: 9pt; }",
             "figure { margin: .5rem 0 1rem; break-inside: avoid; }",
             "figcaption { font-size: 9pt; color: var(--muted); }",
@@ -46,6 +48,9 @@ public final class HtmlReport {
             "  h2 { break-after: avoid; page-break-after: avoid; }",
             "  tr, figure, .statement, .eq { break-inside: avoid; page-break-inside: avoid; }",
             "  thead { display: table-header-group; }",
+            "  .draft-band { position: fixed; top: 0; left: 0; right: 0; -webkit-print-color-adjust: exact;",
+            "    print-color-adjust: exact; }",
+            "  body { padding-top: 1.4rem; }",
             "  th { background: #e6e9ee !important; -webkit-print-color-adjust: exact; print-color-adjust: exact; }",
             "}");
 
@@ -59,7 +64,13 @@ public final class HtmlReport {
         h.append("<!DOCTYPE html>\n<html lang=\"en\">\n<head>\n<meta charset=\"utf-8\">\n")
                 .append("<meta name=\"generator\" content=\"Quire ").append(esc(m.engineVersion())).append("\">\n")
                 .append("<title>").append(esc(d.title())).append("</title>\n<style>\n").append(STYLE)
-                .append("\n</style>\n</head>\n<body>\n<header>\n<h1>").append(esc(d.title())).append("</h1>\n");
+                .append("\n</style>\n</head>\n<body>\n");
+        String mark = d.notApprovedMark();
+        if (mark != null) {
+            // On screen a band at the top; in print the band is fixed, so it repeats on every page.
+            h.append("<div class=\"draft-band\">").append(esc(mark)).append("</div>\n");
+        }
+        h.append("<header>\n<h1>").append(esc(d.title())).append("</h1>\n");
         h.append("<table class=\"facts\">\n");
         fact(h, "Laboratory", d.laboratory());
         fact(h, "Device under test", d.deviceUnderTest());
@@ -74,7 +85,7 @@ public final class HtmlReport {
         int n = 0;
         for (Part p : m.parts()) {
             n++;
-            h.append("<section>\n<h2>").append(n).append(". ").append(esc(p.heading())).append("</h2>\n");
+            h.append("<section>\n<h2>").append(n).append(". ").append(math(p.heading())).append("</h2>\n");
             for (Block b : p.blocks()) {
                 block(h, b);
             }
@@ -92,7 +103,7 @@ public final class HtmlReport {
 
     private static void block(StringBuilder h, Block b) {
         if (b instanceof Paragraph) {
-            h.append("<p>").append(esc(((Paragraph) b).text())).append("</p>\n");
+            h.append("<p>").append(math(((Paragraph) b).text())).append("</p>\n");
         } else if (b instanceof Equations) {
             for (MathText line : ((Equations) b).lines()) {
                 h.append("<div class=\"eq\">").append(math(line)).append("</div>\n");
@@ -109,13 +120,13 @@ public final class HtmlReport {
             table(h, ((TableBlock) b).table());
         } else if (b instanceof ChartBlock) {
             Chart c = ((ChartBlock) b).chart();
-            h.append("<figure>\n").append(Svg.render(c)).append("<figcaption>").append(esc(c.caption()))
+            h.append("<figure>\n").append(Svg.render(c)).append("<figcaption>").append(math(Typesetter.prose(c.caption())))
                     .append("</figcaption>\n</figure>\n");
         }
     }
 
     static void table(StringBuilder h, Table t) {
-        h.append("<table id=\"").append(esc(t.key())).append("\">\n<caption>").append(esc(t.caption()))
+        h.append("<table id=\"").append(esc(t.key())).append("\">\n<caption>").append(math(t.caption()))
                 .append("</caption>\n<thead><tr>");
         for (Table.Column c : t.columns()) {
             h.append(c.align() == Table.Align.RIGHT ? "<th class=\"num\">" : "<th>").append(math(c.heading())).append("</th>");

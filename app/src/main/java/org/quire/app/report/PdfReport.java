@@ -49,6 +49,7 @@ public final class PdfReport {
     private static final Color RULE = new Color(0xc9cfd8);
     private static final Color BAND = new Color(0xeef1f5);
     private static final Color WARN = new Color(0x7a4b00);
+    private static final Color DRAFT_BAND = new Color(0xa0361c);
     private static final float BODY = 9f;
     private static final float TABLE = 7.6f;
 
@@ -145,12 +146,16 @@ public final class PdfReport {
         int n = 0;
         for (Part p : m.parts()) {
             n++;
-            if (w.getVerticalPosition(true) - doc.bottom() < 110f) {
-                doc.newPage();
-            }
-            Paragraph h = new Paragraph(n + ". " + p.heading(), new Font(bold, 11.5f, Font.NORMAL, ACCENT));
+            Paragraph h = new Paragraph(math(MathText.concat(MathText.upright(n + ". "), p.heading()), 11.5f, ACCENT,
+                    bold, bold));
             h.setSpacingBefore(12f);
             h.setSpacingAfter(4f);
+            // A heading stays with what follows: when the heading and the start of its first block do not fit on
+            // what is left of the page, both go to the next page.
+            float need = 34f + (p.blocks().isEmpty() ? 0f : Math.min(150f, height(p.blocks().get(0), doc)));
+            if (w.getVerticalPosition(true) - doc.bottom() < need) {
+                doc.newPage();
+            }
             doc.add(h);
             for (Block b : p.blocks()) {
                 block(doc, w, b);
@@ -190,17 +195,12 @@ public final class PdfReport {
 
     private void block(Document doc, PdfWriter w, Block b) throws DocumentException {
         if (b instanceof ReportModel.Paragraph) {
-            Paragraph p = new Paragraph(((ReportModel.Paragraph) b).text(), new Font(regular, BODY, Font.NORMAL, INK));
+            Paragraph p = new Paragraph(math(((ReportModel.Paragraph) b).text(), BODY, INK));
             p.setLeading(BODY * 1.35f);
             p.setSpacingAfter(4f);
             doc.add(p);
         } else if (b instanceof Equations) {
-            for (MathText line : ((Equations) b).lines()) {
-                Paragraph p = new Paragraph(math(line, 10.5f, INK));
-                p.setIndentationLeft(22f);
-                p.setLeading(17f);
-                doc.add(p);
-            }
+            doc.add(equations((Equations) b));
         } else if (b instanceof Statement) {
             PdfPTable t = new PdfPTable(1);
             t.setWidthPercentage(100);
@@ -232,6 +232,54 @@ public final class PdfReport {
         }
     }
 
+    /**
+     * The equations of a model as one block kept on one page (unless it is longer than a page), so that no
+     * equation is left alone at the foot or head of a page.
+     */
+    private PdfPTable equations(Equations e) {
+        PdfPTable t = new PdfPTable(1);
+        t.setWidthPercentage(100);
+        t.setKeepTogether(true);
+        for (MathText line : e.lines()) {
+            Paragraph p = new Paragraph(math(line, 10.5f, INK));
+            p.setLeading(17f);
+            PdfPCell c = new PdfPCell();
+            c.addElement(p);
+            c.setBorder(Rectangle.NO_BORDER);
+            c.setPaddingLeft(22f);
+            c.setPaddingTop(0f);
+            c.setPaddingBottom(1f);
+            t.addCell(c);
+        }
+        return t;
+    }
+
+    /** @return the height a block takes on the page, for keeping a heading with it (an estimate for text) */
+    private float height(Block b, Document doc) {
+        float width = doc.right() - doc.left();
+        PdfPTable t = null;
+        if (b instanceof TableBlock) {
+            try {
+                t = table(((TableBlock) b).table());
+            } catch (DocumentException e) {
+                return 100f;
+            }
+        } else if (b instanceof Equations) {
+            t = equations((Equations) b);
+        } else if (b instanceof ChartBlock) {
+            return 150f;
+        } else if (b instanceof ReportModel.Paragraph) {
+            float chars = ((ReportModel.Paragraph) b).text().plain().length();
+            return (float) Math.ceil(chars / 110f) * BODY * 1.35f + 4f;
+        }
+        if (t == null) {
+            return 40f;
+        }
+        t.setTotalWidth(width);
+        t.setLockedWidth(true);
+        return t.getTotalHeight();
+    }
+
     private PdfPTable table(Table t) throws DocumentException {
         int n = t.columns().size();
         float[] widths = new float[n];
@@ -245,7 +293,7 @@ public final class PdfReport {
         p.setHeaderRows(2);
         // a short table is not split over two pages
         p.setKeepTogether(t.rows().size() <= 14);
-        PdfPCell cap = new PdfPCell(new Phrase(t.caption(), new Font(bold, TABLE + 0.4f, Font.NORMAL, MUTED)));
+        PdfPCell cap = new PdfPCell(math(t.caption(), TABLE + 0.4f, MUTED, bold, bold));
         cap.setColspan(n);
         cap.setBorder(Rectangle.NO_BORDER);
         cap.setPaddingLeft(0f);
@@ -289,8 +337,7 @@ public final class PdfReport {
     }
 
     private static Phrase math(MathText m, float size, Color colour, BaseFont upright, BaseFont slanted) {
-        Phrase p = new Phrase();
-        p.setLeading(size * 1.45f);
+        Phrase p = new Phrase(size * 1.45f, "", new Font(upright, size, Font.NORMAL, colour));
         for (MathText.Run r : m.runs()) {
             float s = r.shift() == MathText.Shift.BASE ? size : size * 0.72f;
             Chunk c = new Chunk(r.text(), new Font(r.italic() ? slanted : upright, s, Font.NORMAL, colour));
@@ -356,7 +403,7 @@ public final class PdfReport {
         }
         img.setSpacingBefore(4f);
         doc.add(img);
-        Paragraph cap = new Paragraph(chart.caption(), new Font(regular, TABLE, Font.NORMAL, MUTED));
+        Paragraph cap = new Paragraph(math(Typesetter.prose(chart.caption()), TABLE, MUTED));
         cap.setSpacingAfter(8f);
         doc.add(cap);
     }
@@ -404,6 +451,25 @@ public final class PdfReport {
             cb.showText(page);
             cb.endText();
             cb.addTemplate(total, document.right() - 14f, y);
+            String mark = d.notApprovedMark();
+            if (mark != null) {
+                // Every page of content that is not an approved revision says so at its top, in a band that
+                // no copy of a single page can lose.
+                float top = document.getPageSize().getHeight() - 16f;
+                cb.setColorFill(DRAFT_BAND);
+                cb.rectangle(document.left(), top - 14f, document.right() - document.left(), 14f);
+                cb.fill();
+                cb.beginText();
+                cb.setColorFill(Color.WHITE);
+                cb.setFontAndSize(bold, 7.6f);
+                String text = mark + "  ·  " + d.title();
+                while (bold.getWidthPoint(text, 7.6f) > document.right() - document.left() - 12f && text.length() > 20) {
+                    text = text.substring(0, text.length() - 2) + "…";
+                }
+                cb.setTextMatrix(document.left() + 6f, top - 10f);
+                cb.showText(text);
+                cb.endText();
+            }
             cb.restoreState();
         }
 

@@ -23,11 +23,17 @@ import org.quire.engine.budget.InputQuantity;
 import org.quire.engine.budget.OutputQuantity;
 import org.quire.engine.gum.Contribution;
 import org.quire.engine.gum.CorrelationTerm;
+import org.quire.engine.gum.Figures;
 import org.quire.engine.gum.GumResult;
 import org.quire.engine.gum.OutputResult;
 import org.quire.engine.gum.Rounding;
 import org.quire.engine.io.EngineVersion;
+import org.quire.engine.montecarlo.CoverageInterval;
+import org.quire.engine.montecarlo.GumComparison;
+import org.quire.engine.montecarlo.MonteCarloOutcome;
 import org.quire.engine.model.CompiledModel;
+import org.quire.engine.model.Formula;
+import org.quire.engine.units.Units;
 import org.quire.engine.model.ModelException;
 
 /**
@@ -70,6 +76,9 @@ public final class ReportBuilder {
         parts.add(settings(gum.settings()));
         parts.add(warnings(gum));
         parts.add(revisions(in.document()));
+        if (in.authorNotes()) {
+            parts.add(authorNotes(b));
+        }
         return new ReportModel(in.document(), EngineVersion.get(), parts, Cautions.TEXT);
     }
 
@@ -84,7 +93,7 @@ public final class ReportBuilder {
         }
         List<List<Cell>> rows = new ArrayList<>();
         for (OutputQuantity o : b.outputs()) {
-            rows.add(List.of(Cell.math(Typesetter.name(o.name())), Cell.text(o.description()), Cell.text(o.unit())));
+            rows.add(List.of(Cell.math(Typesetter.name(o.name())), Cell.text(o.description()), Cell.unit(o.unit())));
         }
         blocks.add(new TableBlock(new Table("measurands", "Measurands", List.of(
                 Column.of("Quantity", "quantity", Align.LEFT, 1f),
@@ -98,11 +107,8 @@ public final class ReportBuilder {
         List<Block> blocks = new ArrayList<>();
         try {
             CompiledModel m = b.compile(Engine.library());
-            for (String f : m.functionTexts()) {
-                lines.add(Typesetter.equation(f));
-            }
-            for (String e : m.equationTexts()) {
-                lines.add(Typesetter.equation(e));
+            for (Formula.Line l : m.lines()) {
+                lines.add(Typesetter.equation(l));
             }
         } catch (ModelException e) {
             // The budget was evaluated before the report is built, so its model compiles; show it as written.
@@ -122,13 +128,12 @@ public final class ReportBuilder {
         for (InputQuantity q : b.inputs()) {
             var e = q.evaluation();
             rows.add(List.of(Cell.math(Typesetter.name(q.name())), Cell.text(q.description()),
-                    Cell.number(Figures.estimate(e.estimate()), e.estimate()), Cell.text(q.unit()),
+                    Cell.number(Figures.estimate(e.estimate()), e.estimate()), Cell.unit(q.unit()),
                     Cell.text(e.type()), Cell.text(e.distribution().shape()),
                     Cell.number(Figures.sig(e.standardUncertainty(), 3), e.standardUncertainty()),
                     Cell.number(Figures.dof(e.dof()), e.dof())));
             sources.add(List.of(Cell.math(Typesetter.name(q.name())),
-                    Cell.text(q.source().isBlank() ? "not stated" : q.source()), Cell.text(e.basis()),
-                    Cell.text(q.notes())));
+                    Cell.text(q.source().isBlank() ? "not stated" : q.source()), Cell.text(e.basis())));
         }
         List<Block> blocks = new ArrayList<>();
         blocks.add(new TableBlock(new Table("inputs", "Input quantities", List.of(
@@ -140,20 +145,34 @@ public final class ReportBuilder {
                 Column.of("Distribution", "distribution", Align.LEFT, 1.3f),
                 Column.of("u(x_i)", "standard_uncertainty", Align.RIGHT, 1.4f),
                 Column.of("ν_i", "dof", Align.RIGHT, 0.6f)), rows)));
-        boolean notes = b.inputs().stream().anyMatch(q -> !q.notes().isBlank());
-        if (!notes) {
-            sources.replaceAll(r -> r.subList(0, 3));
-        }
-        List<Column> sourceColumns = new ArrayList<>(List.of(
+        List<Column> sourceColumns = List.of(
                 Column.of("X_i", "quantity", Align.LEFT, 0.9f),
                 Column.of("Source", "source", Align.LEFT, 3.5f),
-                Column.of("Basis of u(x_i)", "basis", Align.LEFT, 3.5f)));
-        if (notes) {
-            sourceColumns.add(Column.of("Notes", "notes", Align.LEFT, 2f));
-        }
+                Column.of("Basis of u(x_i)", "basis", Align.LEFT, 3.5f));
         blocks.add(new TableBlock(new Table("sources", "Sources and bases of the input values", sourceColumns,
                 sources)));
         return new Part("Input quantities", blocks);
+    }
+
+    /**
+     * The inputs' notes, which hold the author's guidance (a template's instructions for filling in each input):
+     * for the author, so only in an appendix on request.
+     */
+    private static Part authorNotes(Budget b) {
+        List<List<Cell>> rows = new ArrayList<>();
+        for (InputQuantity q : b.inputs()) {
+            if (!q.notes().isBlank()) {
+                rows.add(List.of(Cell.math(Typesetter.name(q.name())), Cell.text(q.notes())));
+            }
+        }
+        if (rows.isEmpty()) {
+            return new Part("Appendix: notes on the inputs", List.of(new Paragraph("The inputs carry no notes.")));
+        }
+        return new Part("Appendix: notes on the inputs", List.of(new Paragraph("The author's notes and guidance on "
+                + "each input, as written in the budget; they are not part of the evaluation."),
+                new TableBlock(new Table("input-notes", "Notes on the inputs", List.of(
+                        Column.of("X_i", "quantity", Align.LEFT, 0.9f),
+                        Column.of("Notes", "notes", Align.LEFT, 7f)), rows))));
     }
 
     private static Part correlations(Budget b) {
@@ -188,58 +207,37 @@ public final class ReportBuilder {
         String unit = o.unit();
         MathText y = Typesetter.name(o.name());
         List<Block> blocks = new ArrayList<>();
-        List<List<Cell>> rows = new ArrayList<>();
-        for (Contribution c : o.contributions()) {
-            rows.add(List.of(Cell.math(Typesetter.name(c.input())),
-                    Cell.number(Figures.estimate(c.estimate()), c.estimate()), Cell.text(c.unit()),
-                    Cell.number(Figures.sig(c.standardUncertainty(), 3), c.standardUncertainty()),
-                    Cell.number(Figures.sig(c.sensitivity(), 3), c.sensitivity()),
-                    Cell.number(Figures.sig(c.contribution(), 3), c.contribution()),
-                    Cell.number(Figures.dof(c.dof()), c.dof()),
-                    Cell.number(Figures.percent(c.share()), 100 * c.share())));
-        }
         String key = fileKey(o.name());
-        blocks.add(new TableBlock(new Table("budget-" + key, "Uncertainty budget of " + y.plain()
-                + (unit.isEmpty() ? "" : " (contributions in " + unit + ")"), List.of(
-                Column.of("X_i", "quantity", Align.LEFT, 1f),
-                Column.of("x_i", "estimate", Align.RIGHT, 1.6f),
-                Column.of("Unit", "unit", Align.LEFT, 0.8f),
-                Column.of("u(x_i)", "standard_uncertainty", Align.RIGHT, 1.3f),
-                Column.of("c_i", "sensitivity", Align.RIGHT, 1.3f),
-                Column.of("u_i(y)", "contribution", Align.RIGHT, 1.3f),
-                Column.of("ν_i", "dof", Align.RIGHT, 0.6f),
-                Column.of("share (%)", "share_percent", Align.RIGHT, 0.8f)), rows)));
+        blocks.add(new TableBlock(budgetTable(o, "budget-" + key, MathText.concat(MathText.upright("Uncertainty budget of "), y,
+                MathText.upright(unit.isEmpty() ? "" : " (contributions in " + Units.display(unit) + ")")))));
         if (!o.correlationTerms().isEmpty()) {
             List<List<Cell>> terms = new ArrayList<>();
             for (CorrelationTerm t : o.correlationTerms()) {
                 terms.add(List.of(Cell.math(Typesetter.name(t.first())), Cell.math(Typesetter.name(t.second())),
                         Cell.number(Figures.sig(t.r(), 3), t.r()), Cell.number(Figures.sig(t.variance(), 3), t.variance())));
             }
-            blocks.add(new TableBlock(new Table("correlation-terms-" + key, "Correlation terms in the combined variance of "
-                    + y.plain() + " (JCGM 100:2008 5.2.2, eq. 16)", List.of(
+            blocks.add(new TableBlock(new Table("correlation-terms-" + key, MathText.concat(MathText.upright(
+                    "Correlation terms in the combined variance of "), y, MathText.upright(" (JCGM 100:2008 5.2.2, eq. 16)")),
+                    List.of(
                     Column.of("X_i", "first", Align.LEFT, 1f),
                     Column.of("X_j", "second", Align.LEFT, 1f),
                     Column.of("r(x_i, x_j)", "r", Align.RIGHT, 1f),
                     Column.of("term in u_c^2(y)", "variance", Align.RIGHT, 1.5f)), terms)));
         }
-        if (o.higherOrderVariance() != 0) {
+        if (o.higherOrderTerms() == org.quire.engine.gum.HigherOrderTerms.INCLUDED) {
             blocks.add(new Paragraph("Higher-order terms (JCGM 100:2008 5.1.2, note) add "
-                    + Figures.sig(o.higherOrderVariance(), 3) + (unit.isEmpty() ? "" : " " + unit + "²")
+                    + Figures.sig(o.higherOrderVariance(), 3) + (unit.isEmpty() ? "" : " (" + Units.display(unit) + ")²")
                     + " to the combined variance of " + y.plain() + "."));
+        } else if (o.higherOrderTerms() == org.quire.engine.gum.HigherOrderTerms.NOT_INCLUDED) {
+            blocks.add(new Paragraph("Higher-order terms (JCGM 100:2008 5.1.2, note) were asked for but are "
+                    + o.higherOrderTerms().text() + "; u_c(" + y.plain() + ") is the first-order result."));
         }
-        List<MathText> labels = new ArrayList<>();
-        List<Double> values = new ArrayList<>();
-        o.contributions().stream().filter(c -> c.share() > 0)
-                .sorted(Comparator.comparingDouble(Contribution::share).reversed())
-                .forEach(c -> {
-                    labels.add(Typesetter.name(c.input()));
-                    values.add(100 * c.share());
-                });
-        if (!labels.isEmpty()) {
-            blocks.add(new ChartBlock(new Chart.Bars("Share of each input in the combined variance of "
-                    + y.plain() + (o.correlationTerms().isEmpty() ? "" : "; the correlation terms are not shown"
-                    + (o.correlationVariance() < 0 ? ", and as they are negative the shares add up to more than 100 %" : "")),
-                    "share of u_c^2 (%)", labels, values)));
+        Chart.Ranking ranking = Chart.Ranking.of(o, "Contributions u_i(y) to the standard uncertainty of " + y.plain()
+                + ", largest first, with the cumulative share of the combined variance"
+                + (o.correlationTerms().isEmpty() ? "" : "; the correlation terms are not shown"
+                + (o.correlationVariance() < 0 ? ", and as they are negative the shares add up to more than 100 %" : "")));
+        if (!ranking.labels().isEmpty()) {
+            blocks.add(new ChartBlock(ranking));
         }
         double big = o.expandedUncertainty();
         String ru = Rounding.uncertainty(o.standardUncertainty(), digits).toPlainString();
@@ -248,9 +246,9 @@ public final class ReportBuilder {
         String used = Double.isInfinite(o.effectiveDof()) ? "" : o.dofUsed() == o.effectiveDof() ? ""
                 : " (" + Figures.dof(o.dofUsed()) + " used)";
         List<List<Cell>> res = new ArrayList<>();
-        res.add(List.of(Cell.text("estimate"), Cell.math(y), Cell.number(ry, o.estimate()), Cell.text(unit)));
+        res.add(List.of(Cell.text("estimate"), Cell.math(y), Cell.number(ry, o.estimate()), Cell.unit(unit)));
         res.add(List.of(Cell.text("combined standard uncertainty"), Cell.math(Typesetter.label("u_c")),
-                Cell.number(ru, o.standardUncertainty()), Cell.text(unit)));
+                Cell.number(ru, o.standardUncertainty()), Cell.unit(unit)));
         res.add(List.of(Cell.text("effective degrees of freedom (Welch–Satterthwaite)"),
                 Cell.math(Typesetter.label("ν_{eff}")),
                 Cell.number(Double.isInfinite(o.effectiveDof()) ? "∞" : Figures.sig(o.effectiveDof(), 3) + used,
@@ -261,13 +259,15 @@ public final class ReportBuilder {
                 Cell.number(Figures.probability(o.coverageProbability()), 100 * o.coverageProbability()),
                 Cell.text("%")));
         res.add(List.of(Cell.text("expanded uncertainty"), Cell.math(Typesetter.label("U = k u_c")),
-                Cell.number(rU, big), Cell.text(unit)));
-        double rel = o.relativeExpandedUncertainty();
-        res.add(List.of(Cell.text("relative expanded uncertainty"), Cell.math(Typesetter.label("U/|y|")),
-                Cell.number(Double.isNaN(rel) ? "– (y = 0)" : Figures.sig(rel, 2), rel), Cell.text("")));
-        blocks.add(new TableBlock(new Table("result-" + key, "Result for " + y.plain()
-                + ", uncertainties rounded to " + digits + " significant digit" + (digits == 1 ? "" : "s")
-                + " (JCGM 100:2008 7.2.6)", List.of(
+                Cell.number(rU, big), Cell.unit(unit)));
+        if (Figures.relativeUncertaintyMeaningful(unit, o.estimate(), big)) {
+            double rel = o.relativeExpandedUncertainty();
+            res.add(List.of(Cell.text("relative expanded uncertainty"), Cell.math(Typesetter.label("U/|y|")),
+                    Cell.number(Figures.sig(100 * rel, 2), 100 * rel), Cell.text("%")));
+        }
+        blocks.add(new TableBlock(new Table("result-" + key, MathText.concat(MathText.upright("Result for "), y,
+                MathText.upright(", uncertainties rounded to " + digits + " significant digit" + (digits == 1 ? "" : "s")
+                + " (JCGM 100:2008 7.2.6)")), List.of(
                 Column.of("Figure", "figure", Align.LEFT, 3f),
                 Column.of("Symbol", "symbol", Align.LEFT, 1.2f),
                 Column.of("Value", "value", Align.RIGHT, 1.6f),
@@ -276,7 +276,33 @@ public final class ReportBuilder {
         if (!o.warnings().isEmpty()) {
             blocks.add(new Notices(o.warnings()));
         }
-        return new Part("Uncertainty budget of " + y.plain(), blocks);
+        return new Part(MathText.concat(MathText.upright("Uncertainty budget of "), y), blocks);
+    }
+
+    /**
+     * @return the budget table of one result: x_i, unit, u(x_i), c_i, u_i(y), ν_i and the share of u_c²(y) of each
+     *     input (JCGM 100:2008 5.1.3, 5.1.6 and G.4.1)
+     */
+    static Table budgetTable(OutputResult o, String key, MathText caption) {
+        List<List<Cell>> rows = new ArrayList<>();
+        for (Contribution c : o.contributions()) {
+            rows.add(List.of(Cell.math(Typesetter.name(c.input())),
+                    Cell.number(Figures.estimate(c.estimate()), c.estimate()), Cell.unit(c.unit()),
+                    Cell.number(Figures.sig(c.standardUncertainty(), 3), c.standardUncertainty()),
+                    Cell.number(Figures.sig(c.sensitivity(), 3), c.sensitivity()),
+                    Cell.number(Figures.sig(c.contribution(), 3), c.contribution()),
+                    Cell.number(Figures.dof(c.dof()), c.dof()),
+                    Cell.number(Figures.percent(c.share()), Figures.sharePercent(c.share()))));
+        }
+        return new Table(key, caption, List.of(
+                Column.of("X_i", "quantity", Align.LEFT, 1f),
+                Column.of("x_i", "estimate", Align.RIGHT, 1.6f),
+                Column.of("Unit", "unit", Align.LEFT, 0.8f),
+                Column.of("u(x_i)", "standard_uncertainty", Align.RIGHT, 1.3f),
+                Column.of("c_i", "sensitivity", Align.RIGHT, 1.3f),
+                Column.of("u_i(y)", "contribution", Align.RIGHT, 1.3f),
+                Column.of("ν_i", "dof", Align.RIGHT, 0.6f),
+                Column.of("share (%)", "share_percent", Align.RIGHT, 0.8f)), rows);
     }
 
     /**
@@ -284,7 +310,7 @@ public final class ReportBuilder {
      */
     public static MathText statement(OutputResult o, int digits) {
         List<MathText.Run> runs = new ArrayList<>(Typesetter.name(o.name()).runs());
-        String unit = o.unit().isEmpty() ? "" : " " + o.unit();
+        String unit = o.unit().isEmpty() ? "" : " " + Units.display(o.unit());
         String text = " = (" + Rounding.format(o.estimate(), o.expandedUncertainty(), digits) + ")" + unit;
         runs.add(new MathText.Run(text.replace("(-", "(−"), false, MathText.Shift.BASE));
         runs.add(new MathText.Run(", ", false, MathText.Shift.BASE));
@@ -315,68 +341,41 @@ public final class ReportBuilder {
                 "Correlation coefficients of the outputs (JCGM 102:2011 6.2.1.3)", cols, rows))));
     }
 
-    private static Part monteCarlo(MonteCarloSummary mc) {
+    private static Part monteCarlo(MonteCarloOutcome mc) {
         List<Block> blocks = new ArrayList<>();
         if (mc == null) {
             blocks.add(new Paragraph("The Monte Carlo method (JCGM 101:2008) was not run for this report, so the GUM "
                     + "result above is not validated by it (JCGM 101:2008 clause 8)."));
             return new Part("Monte Carlo method", blocks);
         }
-        blocks.add(new Paragraph("Propagation of distributions with " + mc.trials() + " trials"
+        blocks.add(new Paragraph("Propagation of distributions with " + Figures.count(mc.trials()) + " trials"
                 + (mc.adaptive() ? " (number chosen by the adaptive procedure, JCGM 101:2008 7.9)" : "")
                 + ", seed " + mc.seed() + "."));
-        if (!mc.outputs().isEmpty() && mc.outputs().stream().allMatch(MonteCarloSummary.Output::complete)) {
-            monteCarloComplete(mc, blocks);
-            return new Part("Monte Carlo method", blocks);
-        }
-        List<List<Cell>> rows = new ArrayList<>();
-        for (MonteCarloSummary.Output o : mc.outputs()) {
-            rows.add(List.of(Cell.math(Typesetter.name(o.name())), Cell.number(Figures.compact(o.estimate(), 8), o.estimate()),
-                    Cell.number(Figures.sig(o.standardUncertainty(), 3), o.standardUncertainty()),
-                    Cell.number(Figures.compact(o.low(), 6), o.low()), Cell.number(Figures.compact(o.high(), 6), o.high()),
-                    Cell.number(Figures.probability(o.coverageProbability()), 100 * o.coverageProbability()),
-                    Cell.text(o.shortest() ? "shortest" : "symmetric"),
-                    Cell.text((o.agreesWithGum() ? "yes" : "no") + (o.comparison().isEmpty() ? "" : ": " + o.comparison()))));
-        }
-        blocks.add(new TableBlock(new Table("monte-carlo", "Monte Carlo results and comparison with the GUM "
-                + "(JCGM 101:2008 7.6, 7.7, 8)", List.of(
-                Column.of("Y", "output", Align.LEFT, 0.8f),
-                Column.of("y", "estimate", Align.RIGHT, 1.4f),
-                Column.of("u(y)", "standard_uncertainty", Align.RIGHT, 1.1f),
-                Column.of("y_{low}", "low", Align.RIGHT, 1.2f),
-                Column.of("y_{high}", "high", Align.RIGHT, 1.2f),
-                Column.of("p (%)", "coverage_percent", Align.RIGHT, 0.7f),
-                Column.of("Interval", "interval", Align.LEFT, 1f),
-                Column.of("GUM validated", "gum_validated", Align.LEFT, 2.4f)), rows)));
-        for (MonteCarloSummary.Output o : mc.outputs()) {
-            if (o.histogram() != null) {
-                blocks.add(new ChartBlock(o.histogram()));
-            }
-        }
-        return new Part("Monte Carlo method", blocks);
-    }
-
-    /** Both coverage intervals, the clause-8 comparison with its verdict, and the histograms. */
-    private static void monteCarloComplete(MonteCarloSummary mc, List<Block> blocks) {
         List<List<Cell>> rows = new ArrayList<>();
         List<List<Cell>> cmp = new ArrayList<>();
-        for (MonteCarloSummary.Output o : mc.outputs()) {
+        for (MonteCarloOutcome.Output o : mc.outputs()) {
             MathText y = Typesetter.name(o.name());
-            int d = decimals(o.standardUncertainty());
+            GumComparison c = o.comparison();
+            double uForDigits = o.hasStandardUncertainty() ? o.standardUncertainty() : c.gumStandardUncertainty();
+            int d = decimals(uForDigits);
+            CoverageInterval sym = o.symmetricInterval();
+            CoverageInterval sho = o.shortestInterval();
+            CoverageInterval gum = o.gumInterval();
             rows.add(List.of(Cell.math(y), Cell.number(fixed(o.estimate(), d), o.estimate()),
-                    Cell.number(Figures.sig(o.standardUncertainty(), 3), o.standardUncertainty()),
-                    Cell.number(fixed(o.symmetricLow(), d), o.symmetricLow()),
-                    Cell.number(fixed(o.symmetricHigh(), d), o.symmetricHigh()),
-                    Cell.number(fixed(o.shortestLow(), d), o.shortestLow()),
-                    Cell.number(fixed(o.shortestHigh(), d), o.shortestHigh()),
-                    Cell.number(Figures.probability(o.coverageProbability()), 100 * o.coverageProbability()),
-                    Cell.text(o.unit())));
-            cmp.add(List.of(Cell.math(y), Cell.number(fixed(o.gumLow(), d), o.gumLow()),
-                    Cell.number(fixed(o.gumHigh(), d), o.gumHigh()),
-                    Cell.number(Figures.compact(o.tolerance(), 1), o.tolerance()),
-                    Cell.number(Figures.sig(o.lowerDifference(), 2), o.lowerDifference()),
-                    Cell.number(Figures.sig(o.upperDifference(), 2), o.upperDifference()),
-                    Cell.text(o.agreesWithGum() ? "confirmed" : "not confirmed")));
+                    o.hasStandardUncertainty()
+                            ? Cell.number(Figures.sig(o.standardUncertainty(), 3), o.standardUncertainty())
+                            : Cell.text("not defined"),
+                    Cell.number(fixed(sym.lower(), d), sym.lower()), Cell.number(fixed(sym.upper(), d), sym.upper()),
+                    Cell.number(fixed(sho.lower(), d), sho.lower()), Cell.number(fixed(sho.upper(), d), sho.upper()),
+                    Cell.number(Figures.probability(sym.probability()), 100 * sym.probability()),
+                    Cell.unit(o.unit())));
+            cmp.add(List.of(Cell.math(y), Cell.number(fixed(gum.lower(), d), gum.lower()),
+                    Cell.number(fixed(gum.upper(), d), gum.upper()),
+                    Double.isNaN(c.tolerance()) ? Cell.text("–")
+                            : Cell.number(Figures.compact(c.tolerance(), 1), c.tolerance()),
+                    Cell.number(Figures.sig(c.lowerDifference(), 2), c.lowerDifference()),
+                    Cell.number(Figures.sig(c.upperDifference(), 2), c.upperDifference()),
+                    Cell.text(c.verdict().word())));
         }
         blocks.add(new TableBlock(new Table("monte-carlo", "Monte Carlo estimate, standard uncertainty and coverage "
                 + "intervals (JCGM 101:2008 7.6, 7.7.1 probabilistically symmetric, 7.7.2 shortest)", List.of(
@@ -399,19 +398,21 @@ public final class ReportBuilder {
                 Column.of("d_{low}", "d_low", Align.RIGHT, 0.9f),
                 Column.of("d_{high}", "d_high", Align.RIGHT, 0.9f),
                 Column.of("GUM result", "verdict", Align.LEFT, 1.3f)), cmp)));
-        for (MonteCarloSummary.Output o : mc.outputs()) {
+        for (MonteCarloOutcome.Output o : mc.outputs()) {
             String y = Typesetter.name(o.name()).plain();
-            blocks.add(new Paragraph(o.agreesWithGum()
-                    ? "For " + y + " both ends of the GUM interval lie within δ of the Monte Carlo interval: the GUM "
-                            + "result is confirmed (JCGM 101:2008 8.2) and may be reported."
-                    : "For " + y + " an end of the GUM interval differs from the Monte Carlo interval by more than δ: "
-                            + "the GUM result is not confirmed (JCGM 101:2008 8.2); report the Monte Carlo result."));
+            String reason = o.comparison().reason();
+            blocks.add(new Paragraph("For " + y + ": " + reason + "."));
         }
-        for (MonteCarloSummary.Output o : mc.outputs()) {
-            if (o.histogram() != null) {
-                blocks.add(new ChartBlock(o.histogram()));
+        for (String n : mc.notes()) {
+            blocks.add(new Paragraph("Note: " + n + "."));
+        }
+        for (MonteCarloOutcome.Output o : mc.outputs()) {
+            Chart.Histogram h = MonteCarloReport.histogram(o);
+            if (h != null) {
+                blocks.add(new ChartBlock(h));
             }
         }
+        return new Part("Monte Carlo method", blocks);
     }
 
     /** @return the decimals that show two digits beyond the first significant digit of {@code u} */

@@ -27,11 +27,15 @@ public record ReportModel(DocumentInfo document, String engineVersion, List<Part
         }
     }
 
-    /** A numbered part of the report. */
-    public record Part(String heading, List<Block> blocks) {
+    /** A numbered part of the report; its heading may hold typeset names ("Uncertainty budget of E<sub>lo</sub>"). */
+    public record Part(MathText heading, List<Block> blocks) {
         public Part {
             Objects.requireNonNull(heading, "heading");
             blocks = List.copyOf(blocks);
+        }
+
+        public Part(String heading, List<Block> blocks) {
+            this(MathText.upright(heading), blocks);
         }
     }
 
@@ -39,9 +43,14 @@ public record ReportModel(DocumentInfo document, String engineVersion, List<Part
     public sealed interface Block permits Paragraph, Equations, TableBlock, ChartBlock, Statement, Notices {
     }
 
-    /** @param text one paragraph of plain text */
-    public record Paragraph(String text) implements Block {
+    /** @param text one paragraph, with names typeset where it names quantities */
+    public record Paragraph(MathText text) implements Block {
         public Paragraph { Objects.requireNonNull(text, "text"); }
+
+        /** @param text one paragraph of words, shown as {@link Typesetter#prose(String)} sets it */
+        public Paragraph(String text) {
+            this(Typesetter.prose(text));
+        }
     }
 
     /** @param lines equations, one a line */
@@ -64,9 +73,9 @@ public record ReportModel(DocumentInfo document, String engineVersion, List<Part
         public Statement { Objects.requireNonNull(text, "text"); }
     }
 
-    /** @param items warnings or findings, one sentence each */
+    /** @param items warnings or findings, one sentence each (set as {@link Typesetter#prose(String)}) */
     public record Notices(List<String> items) implements Block {
-        public Notices { items = List.copyOf(items); }
+        public Notices { items = items.stream().map(i -> Typesetter.prose(i).plain()).toList(); }
     }
 
     /** @return every table of the report, in order */

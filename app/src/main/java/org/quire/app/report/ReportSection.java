@@ -51,7 +51,7 @@ public record ReportSection(String key, String heading, List<String> paragraphs,
         List<Chart> c = new ArrayList<>();
         for (Block b : blocks) {
             if (b instanceof Paragraph) {
-                p.add(((Paragraph) b).text());
+                p.add(((Paragraph) b).text().plain());
             } else if (b instanceof TableBlock) {
                 t.add(((TableBlock) b).table());
             } else if (b instanceof ChartBlock) {

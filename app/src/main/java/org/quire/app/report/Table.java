@@ -16,7 +16,12 @@ import java.util.Objects;
  *
  * <p>Immutable and thread-safe.
  */
-public record Table(String key, String caption, List<Column> columns, List<List<Cell>> rows) {
+public record Table(String key, MathText caption, List<Column> columns, List<List<Cell>> rows) {
+
+    /** A table whose caption is words only. */
+    public Table(String key, String caption, List<Column> columns, List<List<Cell>> rows) {
+        this(key, Typesetter.prose(caption), columns, rows);
+    }
 
     /** How a column's cells are aligned. */
     public enum Align { LEFT, RIGHT }
@@ -55,8 +60,14 @@ public record Table(String key, String caption, List<Column> columns, List<List<
             Objects.requireNonNull(text, "text");
         }
 
+        /** @return a cell of words, as {@link Typesetter#prose(String)} sets them ("±", m³) */
         public static Cell text(String s) {
-            return new Cell(MathText.upright(s == null ? "" : s), Double.NaN);
+            return new Cell(Typesetter.prose(s == null ? "" : s), Double.NaN);
+        }
+
+        /** @return a cell holding a unit as written in a budget, in its display form */
+        public static Cell unit(String written) {
+            return new Cell(Typesetter.unit(written), Double.NaN);
         }
 
         public static Cell math(MathText m) {

@@ -6,6 +6,8 @@ import java.util.Locale;
 import java.util.Map;
 import org.quire.app.report.MathText.Run;
 import org.quire.app.report.MathText.Shift;
+import org.quire.engine.model.Formula;
+import org.quire.engine.units.Units;
 
 /**
  * Sets the equations of a measurement model, and the names of quantities, as readable mathematics.
@@ -22,7 +24,9 @@ import org.quire.app.report.MathText.Shift;
  *     parentheses the meaning needs, {@code x^2} a superscript, {@code sqrt(x)} as √(x), {@code abs(x)} as |x|,
  *     {@code pi} as π and {@code 1.5e-3} as 1.5 × 10⁻³.</li>
  * </ul>
- * Text that does not parse as an equation (it should not: the model compiled) is shown as written, upright.
+ * Equations are set from the compiled model's {@link Formula} tree, which knows which names are inputs,
+ * quantities, parameters and functions: a function of the engine's library or of the model, such as
+ * {@code water_density(t_w)}, is a word set upright as written, never a symbol with a subscript.
  *
  * <p>Stateless and thread-safe.
  */
@@ -49,33 +53,67 @@ public final class Typesetter {
     public static MathText name(String name) {
         List<Run> out = new ArrayList<>();
         name(name, Shift.BASE, out);
+        return MathText.of(out, name);
+    }
+
+    /**
+     * @param line one line of a compiled model, {@code name = formula} or, for a function of the model's own,
+     *     {@code f(a, b) = formula}
+     * @return the line set as mathematics
+     */
+    public static MathText equation(Formula.Line line) {
+        List<Run> out = new ArrayList<>();
+        if (line.isFunction()) {
+            out.add(new Run(line.name() + "(", false, Shift.BASE));
+            for (int i = 0; i < line.parameters().size(); i++) {
+                if (i > 0) {
+                    out.add(new Run(", ", false, Shift.BASE));
+                }
+                name(line.parameters().get(i), Shift.BASE, out);
+            }
+            out.add(new Run(")", false, Shift.BASE));
+        } else {
+            name(line.name(), Shift.BASE, out);
+        }
+        out.add(new Run(" = ", false, Shift.BASE));
+        set(line.right(), out, Shift.BASE, 0);
         return MathText.of(out);
     }
 
     /**
-     * @param equation one equation of a model as written, {@code name = expression} or {@code f(a, b) = expression}
-     * @return the equation set as mathematics, or the text upright when it does not parse
+     * Sets words written by a person or a budget file (notes, sources, bases, findings) for reading: "+-" and
+     * "+/-" as "±", a power written after a unit symbol ({@code m^3}, {@code kg/m^3}, {@code s^-1}) with
+     * superscript digits. Nothing else is changed.
+     *
+     * @return the words, upright
      */
-    public static MathText equation(String equation) {
-        String text = stripComment(equation).strip();
-        try {
-            Parser p = new Parser(text);
-            Node lhs = p.expression();
-            p.expect('=');
-            Node rhs = p.expression();
-            p.end();
-            List<Run> out = new ArrayList<>();
-            lhs.set(out, Shift.BASE, 0);
-            out.add(new Run(" = ", false, Shift.BASE));
-            rhs.set(out, Shift.BASE, 0);
-            return MathText.of(out);
-        } catch (IllegalArgumentException e) {
-            return MathText.upright(text.replaceAll("\\s+", " "));
+    public static MathText prose(String words) {
+        String t = words.replace("+/-", "±").replace("+-", "±");
+        java.util.regex.Matcher m = POWER.matcher(t);
+        StringBuilder out = new StringBuilder();
+        while (m.find()) {
+            StringBuilder sup = new StringBuilder();
+            for (char c : m.group(2).toCharArray()) {
+                sup.append(c == '-' ? '⁻' : "⁰¹²³⁴⁵⁶⁷⁸⁹".charAt(c - '0'));
+            }
+            m.appendReplacement(out, java.util.regex.Matcher.quoteReplacement(m.group(1) + sup));
         }
+        m.appendTail(out);
+        return MathText.upright(out.toString());
+    }
+
+    /** A power after a letter: m^3, s^-1, m^(-3). */
+    private static final java.util.regex.Pattern POWER = java.util.regex.Pattern.compile(
+            "(\\p{L})\\^\\(?(-?\\d+)\\)?");
+
+    /** @return a unit as written in a budget, in its display form (m³/h, kg·m⁻³), upright */
+    public static MathText unit(String written) {
+        return MathText.upright(Units.display(written));
     }
 
     /**
-     * Sets a short label such as a table heading. {@code _x} or {@code _{xy}} is a subscript, {@code ^x} or
+     * Sets a short label such as a table heading. {@code _x}, {@code _xy} (the letters and digits that follow) or
+     * {@code _{x y}} is a subscript, {@code ^x} or
      * {@code ^{xy}} a superscript; single letters (Latin or Greek) are italic, words and other signs upright.
      */
     public static MathText label(String markup) {
@@ -93,6 +131,15 @@ public final class Typesetter {
                     }
                     group = markup.substring(i + 2, close);
                     i = Math.min(markup.length(), close + 1);
+                } else if (shift == Shift.SUB) {
+                    // an unbraced subscript is the word that follows: E_lo, ν_eff, x_i
+                    int end = i + 1;
+                    while (end < markup.length() && Character.isLetterOrDigit(markup.charAt(end))) {
+                        end++;
+                    }
+                    end = Math.max(end, i + 2);
+                    group = markup.substring(i + 1, end);
+                    i = end;
                 } else {
                     group = markup.substring(i + 1, i + 2);
                     i += 2;
@@ -124,7 +171,8 @@ public final class Typesetter {
         int at = 0;
         while (m.find()) {
             out.addAll(label(markup.substring(at, m.start())).runs());
-            out.add(new Run(m.group(), false, Shift.BASE));
+            String unit = m.group().substring(2, m.group().length() - 1);
+            out.add(new Run(" (" + Units.display(unit) + ")", false, Shift.BASE));
             at = m.end();
         }
         out.addAll(label(markup.substring(at)).runs());
@@ -152,11 +200,6 @@ public final class Typesetter {
             }
             i = j;
         }
-    }
-
-    private static String stripComment(String s) {
-        int hash = s.indexOf('#');
-        return hash < 0 ? s : s.substring(0, hash);
     }
 
     private static void name(String name, Shift shift, List<Run> out) {
@@ -204,314 +247,114 @@ public final class Typesetter {
     }
 
     // ------------------------------------------------------------------------------------------------------
-    // A small parser of the model language, enough to typeset it. Precedence: + - (1), * / (2), unary - (3),
-    // ^ (4, right-associative), atoms (5).
+    // The compiled model's formula tree, set as mathematics. Precedence as the model language binds:
+    // + - (1), * / (2), unary - (3), ^ (4, right-associative), atoms (5).
 
-    private abstract static class Node {
-        abstract int precedence();
-
-        abstract void set(List<Run> out, Shift shift, int context);
-
-        void wrapped(List<Run> out, Shift shift, int context) {
-            boolean paren = precedence() < context;
-            if (paren) {
-                out.add(new Run("(", false, shift));
-            }
-            set(out, shift, 0);
-            if (paren) {
-                out.add(new Run(")", false, shift));
-            }
+    private static int precedence(Formula f) {
+        if (f instanceof Formula.Operation o) {
+            return o.precedence();
         }
+        return f instanceof Formula.Negation ? 3 : 5;
     }
 
-    private static final class Num extends Node {
-        final String text;
-
-        Num(String text) {
-            this.text = text;
+    private static void wrapped(Formula f, List<Run> out, Shift shift, int context) {
+        boolean paren = precedence(f) < context;
+        if (paren) {
+            out.add(new Run("(", false, shift));
         }
-
-        @Override int precedence() { return 5; }
-
-        @Override
-        void set(List<Run> out, Shift shift, int context) {
-            String lower = text.toLowerCase(Locale.ROOT);
-            int e = lower.indexOf('e');
-            if (e < 0) {
-                out.add(new Run(text, false, shift));
-                return;
-            }
-            String mantissa = text.substring(0, e);
-            String exp = text.substring(e + 1);
-            if (exp.startsWith("+")) {
-                exp = exp.substring(1);
-            }
-            if (exp.startsWith("-")) {
-                exp = "−" + exp.substring(1);
-            }
-            Shift up = shift == Shift.BASE ? Shift.SUP : shift;
-            boolean paren = context > 2;
-            if (paren) {
-                out.add(new Run("(", false, shift));
-            }
-            out.add(new Run(mantissa + " × 10", false, shift));
-            out.add(new Run(exp, false, up));
-            if (paren) {
-                out.add(new Run(")", false, shift));
-            }
-        }
-    }
-
-    private static final class Name extends Node {
-        final String name;
-
-        Name(String name) {
-            this.name = name;
-        }
-
-        @Override int precedence() { return 5; }
-
-        @Override
-        void set(List<Run> out, Shift shift, int context) {
-            Typesetter.name(name, shift, out);
-        }
-    }
-
-    private static final class Call extends Node {
-        final String name;
-        final List<Node> args;
-
-        Call(String name, List<Node> args) {
-            this.name = name;
-            this.args = args;
-        }
-
-        @Override int precedence() { return 5; }
-
-        @Override
-        void set(List<Run> out, Shift shift, int context) {
-            if (name.equals("abs") && args.size() == 1) {
-                out.add(new Run("|", false, shift));
-                args.get(0).set(out, shift, 0);
-                out.add(new Run("|", false, shift));
-                return;
-            }
-            if (name.equals("sqrt") && args.size() == 1) {
-                out.add(new Run("√(", false, shift));
-            } else if (name.equals("exponential") || name.equals("ln") || name.equals("exp")
-                    || name.equals("log10") || name.equals("min") || name.equals("max")
-                    || name.matches("a?(sin|cos|tan)")) {
-                out.add(new Run(name.equals("log10") ? "lg(" : name + "(", false, shift));
-            } else {
-                Typesetter.name(name, shift, out);
-                out.add(new Run("(", false, shift));
-            }
-            for (int i = 0; i < args.size(); i++) {
-                if (i > 0) {
-                    out.add(new Run(", ", false, shift));
-                }
-                args.get(i).set(out, shift, 0);
-            }
+        set(f, out, shift, 0);
+        if (paren) {
             out.add(new Run(")", false, shift));
         }
     }
 
-    private static final class Unary extends Node {
-        final Node operand;
-
-        Unary(Node operand) {
-            this.operand = operand;
-        }
-
-        @Override int precedence() { return 3; }
-
-        @Override
-        void set(List<Run> out, Shift shift, int context) {
+    private static void set(Formula f, List<Run> out, Shift shift, int context) {
+        if (f instanceof Formula.Number n) {
+            number(n, out, shift, context);
+        } else if (f instanceof Formula.Symbol sym) {
+            name(sym.name(), shift, out);
+        } else if (f instanceof Formula.Negation neg) {
             boolean paren = context > 3;
             if (paren) {
                 out.add(new Run("(", false, shift));
             }
             out.add(new Run("−", false, shift));
-            operand.wrapped(out, shift, 3);
+            wrapped(neg.operand(), out, shift, 3);
             if (paren) {
                 out.add(new Run(")", false, shift));
             }
-        }
-    }
-
-    private static final class Binary extends Node {
-        final char op;
-        final Node left;
-        final Node right;
-
-        Binary(char op, Node left, Node right) {
-            this.op = op;
-            this.left = left;
-            this.right = right;
-        }
-
-        @Override
-        int precedence() {
-            return op == '+' || op == '-' ? 1 : op == '*' || op == '/' ? 2 : 4;
-        }
-
-        @Override
-        void set(List<Run> out, Shift shift, int context) {
-            boolean paren = precedence() < context;
+        } else if (f instanceof Formula.Operation op) {
+            boolean paren = op.precedence() < context;
             if (paren) {
                 out.add(new Run("(", false, shift));
             }
-            int p = precedence();
-            if (op == '^') {
-                left.wrapped(out, shift, p + 1);
+            int p = op.precedence();
+            if (op.operator() == '^') {
+                wrapped(op.left(), out, shift, p + 1);
                 // A raised exponent is grouped by its position, so it needs no parentheses of its own.
-                Shift up = shift == Shift.BASE ? Shift.SUP : shift;
-                right.set(out, up, 0);
+                set(op.right(), out, shift == Shift.BASE ? Shift.SUP : shift, 0);
             } else {
-                left.wrapped(out, shift, p);
-                String sign = op == '+' ? " + " : op == '-' ? " − " : op == '*' ? " · " : " / ";
-                out.add(new Run(sign, false, shift));
-                right.wrapped(out, shift, p + 1);
+                wrapped(op.left(), out, shift, p);
+                char c = op.operator();
+                out.add(new Run(c == '+' ? " + " : c == '-' ? " − " : c == '*' ? " · " : " / ", false, shift));
+                wrapped(op.right(), out, shift, p + 1);
             }
             if (paren) {
                 out.add(new Run(")", false, shift));
             }
+        } else {
+            call((Formula.Call) f, out, shift);
         }
     }
 
-    private static final class Parser {
-        private final String s;
-        private int pos;
-
-        Parser(String s) {
-            this.s = s;
+    private static void number(Formula.Number n, List<Run> out, Shift shift, int context) {
+        String text = n.written();
+        int e = text.toLowerCase(Locale.ROOT).indexOf('e');
+        if (e < 0) {
+            out.add(new Run(text, false, shift));
+            return;
         }
-
-        private void skip() {
-            while (pos < s.length() && Character.isWhitespace(s.charAt(pos))) {
-                pos++;
-            }
+        String mantissa = text.substring(0, e);
+        String exp = text.substring(e + 1);
+        if (exp.startsWith("+")) {
+            exp = exp.substring(1);
         }
-
-        private char peek() {
-            skip();
-            if (pos >= s.length()) {
-                return 0;
-            }
-            char c = s.charAt(pos);
-            switch (c) {
-                case '\u2212': return '-';
-                case '\u00d7': case '\u00b7': case '\u22c5': return '*';
-                case '\u00f7': return '/';
-                default: return c;
-            }
+        if (exp.startsWith("-")) {
+            exp = "−" + exp.substring(1);
         }
-
-        void expect(char c) {
-            if (peek() != c) {
-                throw new IllegalArgumentException("expected '" + c + "' at " + pos);
-            }
-            pos++;
+        boolean paren = context > 2;
+        if (paren) {
+            out.add(new Run("(", false, shift));
         }
-
-        void end() {
-            if (peek() != 0) {
-                throw new IllegalArgumentException("unexpected text at " + pos);
-            }
+        out.add(new Run(mantissa + " × 10", false, shift));
+        out.add(new Run(exp, false, shift == Shift.BASE ? Shift.SUP : shift));
+        if (paren) {
+            out.add(new Run(")", false, shift));
         }
+    }
 
-        Node expression() {
-            Node n = term();
-            while (peek() == '+' || peek() == '-') {
-                char op = peek();
-                pos++;
-                n = new Binary(op, n, term());
-            }
-            return n;
+    private static void call(Formula.Call c, List<Run> out, Shift shift) {
+        List<Formula> args = c.arguments();
+        String name = c.function();
+        if (c.kind() == Formula.FunctionKind.STANDARD && name.equals("abs") && args.size() == 1) {
+            out.add(new Run("|", false, shift));
+            set(args.get(0), out, shift, 0);
+            out.add(new Run("|", false, shift));
+            return;
         }
-
-        private Node term() {
-            Node n = unary();
-            while (peek() == '*' || peek() == '/') {
-                char op = peek();
-                pos++;
-                n = new Binary(op, n, unary());
-            }
-            return n;
+        if (c.kind() == Formula.FunctionKind.STANDARD) {
+            out.add(new Run(name.equals("sqrt") ? "√(" : name.equals("log10") ? "lg(" : name + "(", false, shift));
+        } else {
+            // A function's name is a word, set upright as written (ISO 80000-2: function names are upright),
+            // never read as a symbol with subscripts.
+            out.add(new Run(name + "(", false, shift));
         }
-
-        private Node unary() {
-            if (peek() == '-') {
-                pos++;
-                return new Unary(unary());
+        for (int i = 0; i < args.size(); i++) {
+            if (i > 0) {
+                out.add(new Run(", ", false, shift));
             }
-            if (peek() == '+') {
-                pos++;
-                return unary();
-            }
-            return power();
+            set(args.get(i), out, shift, 0);
         }
-
-        private Node power() {
-            Node base = atom();
-            if (peek() == '^') {
-                pos++;
-                return new Binary('^', base, unary());
-            }
-            return base;
-        }
-
-        private Node atom() {
-            char c = peek();
-            if (c == '(') {
-                pos++;
-                Node inner = expression();
-                expect(')');
-                return inner;
-            }
-            if (Character.isDigit(c) || c == '.') {
-                int start = pos;
-                while (pos < s.length() && (Character.isDigit(s.charAt(pos)) || s.charAt(pos) == '.')) {
-                    pos++;
-                }
-                if (pos < s.length() && (s.charAt(pos) == 'e' || s.charAt(pos) == 'E')) {
-                    int save = pos;
-                    pos++;
-                    if (pos < s.length() && (s.charAt(pos) == '+' || s.charAt(pos) == '-')) {
-                        pos++;
-                    }
-                    if (pos < s.length() && Character.isDigit(s.charAt(pos))) {
-                        while (pos < s.length() && Character.isDigit(s.charAt(pos))) {
-                            pos++;
-                        }
-                    } else {
-                        pos = save;
-                    }
-                }
-                return new Num(s.substring(start, pos));
-            }
-            if (Character.isLetter(c) || c == '_') {
-                int start = pos;
-                while (pos < s.length() && (Character.isLetterOrDigit(s.charAt(pos)) || s.charAt(pos) == '_')) {
-                    pos++;
-                }
-                String name = s.substring(start, pos);
-                if (peek() == '(') {
-                    pos++;
-                    List<Node> args = new ArrayList<>();
-                    if (peek() != ')') {
-                        args.add(expression());
-                        while (peek() == ',') {
-                            pos++;
-                            args.add(expression());
-                        }
-                    }
-                    expect(')');
-                    return new Call(name, args);
-                }
-                return new Name(name);
-            }
-            throw new IllegalArgumentException("unexpected '" + c + "' at " + pos);
-        }
+        out.add(new Run(")", false, shift));
     }
 }

@@ -8,8 +8,9 @@ import java.util.List;
  * {@link DecisionRule}, with an overall decision and the certificate statement. Immutable and thread-safe.
  *
  * <p>The overall decision is "does not conform" if any point does not conform, otherwise "undecided" if any
- * point is undecided, otherwise "conforms". The statement is the rule's sentence for the smallest coverage
- * factor and degrees of freedom among the points (the largest risk), followed by the envelope's name.
+ * point is undecided, otherwise "conforms". The statement is the rule's sentence for the points' own coverage
+ * factors (one k when they agree, else the k stated with each point and the largest risk over the points),
+ * followed by the envelope's name.
  *
  * <p>References: ISO/IEC 17025:2017 7.8.6 (statement of conformity with the decision rule applied); ILAC
  * G8:2019; JCGM 106:2012 clauses 7 to 9.
@@ -75,6 +76,15 @@ public final class ConformityAssessment {
 
     /** @return the overall decision */
     public Decision overall() {
+        return overall(decisions);
+    }
+
+    /**
+     * @param decisions the decisions at the points of one item
+     * @return "does not conform" if any point does not conform, otherwise "undecided" if any point is
+     *     undecided, otherwise "conforms"
+     */
+    public static Decision overall(List<PointDecision> decisions) {
         boolean undecided = false;
         for (PointDecision d : decisions) {
             if (d.decision() == Decision.DOES_NOT_CONFORM) {
@@ -87,12 +97,23 @@ public final class ConformityAssessment {
 
     /** @return the sentences for the certificate: the rule with its risk, and the limits applied */
     public String statement() {
-        double k = Double.POSITIVE_INFINITY;
-        double dof = Double.POSITIVE_INFINITY;
-        for (PointDecision d : decisions) {
-            k = Math.min(k, d.point().coverageFactor());
-            dof = Math.min(dof, d.point().dof());
+        return statement(rule, envelope.name(), decisions);
+    }
+
+    /**
+     * @param rule the decision rule applied
+     * @param limitsName the name of the maximum permissible errors applied
+     * @param decisions the decisions at the points, at least one
+     * @return the rule's sentence for the points' own coverage factors (one k when they agree, else the k stated
+     *     with each point and the largest risk over the points), followed by the name of the limits
+     */
+    public static String statement(DecisionRule rule, String limitsName, List<PointDecision> decisions) {
+        double[] k = new double[decisions.size()];
+        double[] dof = new double[decisions.size()];
+        for (int i = 0; i < k.length; i++) {
+            k[i] = decisions.get(i).point().coverageFactor();
+            dof[i] = decisions.get(i).point().dof();
         }
-        return rule.statement(k, dof) + " Maximum permissible errors: " + envelope.name() + ".";
+        return rule.statement(k, dof) + " Maximum permissible errors: " + limitsName + ".";
     }
 }

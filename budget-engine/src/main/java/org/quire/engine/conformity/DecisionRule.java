@@ -270,7 +270,45 @@ public final class DecisionRule {
      * and (for the t distribution) the given effective degrees of freedom.
      */
     public String statement(double coverageFactor, double dof) {
-        double risk = maximumRiskOfFalseAcceptance(coverageFactor, dof);
+        return statement("coverage factor k = " + num(coverageFactor), maximumRiskOfFalseAcceptance(coverageFactor, dof),
+                dof);
+    }
+
+    /**
+     * A sentence for a certificate stating the rule and its risk for results that each carry their own coverage
+     * factor: when every point has the same k and degrees of freedom this is {@link #statement(double, double)};
+     * otherwise the sentence refers to the k stated with each point's U, gives their range, and states the largest
+     * specific risk over the points.
+     *
+     * @param coverageFactors k of each point
+     * @param dofs effective degrees of freedom of each point, parallel to {@code coverageFactors}
+     */
+    public String statement(double[] coverageFactors, double[] dofs) {
+        if (coverageFactors.length == 0 || coverageFactors.length != dofs.length) {
+            throw new IllegalArgumentException("coverageFactors and dofs must be of the same, non-zero length, not "
+                    + coverageFactors.length + " and " + dofs.length);
+        }
+        double kMin = Double.POSITIVE_INFINITY;
+        double kMax = Double.NEGATIVE_INFINITY;
+        double dofMin = Double.POSITIVE_INFINITY;
+        double risk = 0;
+        boolean same = true;
+        for (int i = 0; i < coverageFactors.length; i++) {
+            kMin = Math.min(kMin, coverageFactors[i]);
+            kMax = Math.max(kMax, coverageFactors[i]);
+            dofMin = Math.min(dofMin, dofs[i]);
+            same &= num(coverageFactors[i]).equals(num(coverageFactors[0])) && dofs[i] == dofs[0];
+            risk = Math.max(risk, maximumRiskOfFalseAcceptance(coverageFactors[i], dofs[i]));
+        }
+        if (same) {
+            return statement(coverageFactors[0], dofs[0]);
+        }
+        String kText = num(kMin).equals(num(kMax)) ? "coverage factor k = " + num(kMin)
+                : "the coverage factor k stated with each point's U (k = " + num(kMin) + " to " + num(kMax) + ")";
+        return statement(kText, risk, dofMin);
+    }
+
+    private String statement(String kText, double risk, double dof) {
         String dist = distribution == ResultDistribution.NORMAL || Double.isInfinite(dof)
                 ? "a normal distribution"
                 : "a scaled and shifted t distribution with " + num(dof) + " effective degrees of freedom";
@@ -283,15 +321,14 @@ public final class DecisionRule {
                         + " to " + riskText + " %.";
             case GUARDED_ACCEPTANCE:
                 return "Decision rule: guarded acceptance (ILAC G8:2019; JCGM 106:2012) with guard band w = "
-                        + guardText() + ", where U is the expanded uncertainty with coverage factor k = "
-                        + num(coverageFactor) + ". A result is stated to conform when the measured error lies"
+                        + guardText() + ", where U is the expanded uncertainty with " + kText + ". A result is stated to conform when the measured error lies"
                         + " within the maximum permissible error narrowed by w at each limit, and not to conform"
                         + " otherwise. Assuming " + dist + " for the error, the specific risk of false acceptance"
                         + " is at most about " + riskText + " %.";
             case GUARDED_NON_BINARY:
                 return "Decision rule: guarded acceptance and rejection (ILAC G8:2019; JCGM 106:2012) with guard"
-                        + " band w = " + guardText() + ", where U is the expanded uncertainty with coverage"
-                        + " factor k = " + num(coverageFactor) + ". A result is stated to conform when the"
+                        + " band w = " + guardText() + ", where U is the expanded uncertainty with " + kText
+                        + ". A result is stated to conform when the"
                         + " measured error lies within the maximum permissible error narrowed by w at each limit,"
                         + " not to conform when it lies outside the maximum permissible error widened by w, and"
                         + " no statement is made in between. Assuming " + dist + " for the error, the specific"

@@ -104,49 +104,14 @@ public final class FlowRange {
             }
             results.add(g.output(outName));
         }
-        // cross-point covariance through the shared inputs
-        CorrelationMatrix r = budget.correlationMatrix();
+        // cross-point covariance through the shared inputs (JCGM 102:2011 6.2.1.3)
         List<InputQuantity> inputs = budget.inputs();
-        int n = inputs.size();
-        boolean[] shared = new boolean[n];
-        double[] u = new double[n];
-        for (int i = 0; i < n; i++) {
-            shared[i] = !varying.contains(inputs.get(i).name());
-            u[i] = inputs.get(i).evaluation().standardUncertainty();
+        double[] between = new double[inputs.size()];
+        for (int i = 0; i < between.length; i++) {
+            between[i] = varying.contains(inputs.get(i).name()) ? 0 : 1;
         }
-        double[][] c = new double[m][n];
-        for (int p = 0; p < m; p++) {
-            for (int i = 0; i < n; i++) {
-                c[p][i] = results.get(p).contributions().get(i).sensitivity();
-            }
-        }
-        double[][] cov = new double[m][m];
-        for (int p = 0; p < m; p++) {
-            double up = results.get(p).standardUncertainty();
-            cov[p][p] = up * up;
-            for (int q = p + 1; q < m; q++) {
-                double s = 0;
-                for (int i = 0; i < n; i++) {
-                    if (!shared[i] || u[i] == 0) {
-                        continue;
-                    }
-                    for (int j = 0; j < n; j++) {
-                        if (shared[j] && u[j] != 0) {
-                            s += c[p][i] * c[q][j] * u[i] * u[j] * r.get(i, j);
-                        }
-                    }
-                }
-                cov[p][q] = s;
-                cov[q][p] = s;
-            }
-        }
-        double[][] corr = new double[m][m];
-        for (int p = 0; p < m; p++) {
-            for (int q = 0; q < m; q++) {
-                double d = Math.sqrt(cov[p][p] * cov[q][q]);
-                corr[p][q] = p == q ? 1 : d > 0 ? Math.max(-1, Math.min(1, cov[p][q] / d)) : Double.NaN;
-            }
-        }
+        double[][] cov = PointCovariance.of(results, budget.correlationMatrix(), between);
+        double[][] corr = PointCovariance.correlation(cov);
         List<FlowRangeResult.Point> table = new ArrayList<>();
         for (int p = 0; p < m; p++) {
             table.add(new FlowRangeResult.Point(rows.get(p).flow(), results.get(p)));

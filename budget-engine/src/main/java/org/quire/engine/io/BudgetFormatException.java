@@ -2,9 +2,10 @@ package org.quire.engine.io;
 
 /**
  * A budget file that cannot be read: malformed JSON (with line and column), or a field that is missing, of the
- * wrong type or out of range (with its JSON path, e.g. {@code $.inputs[2].evaluation.halfWidth}).
+ * wrong type or out of range (with its JSON path, e.g. {@code $.inputs[2].evaluation.halfWidth}); its subclass
+ * {@code org.quire.engine.csv.CsvException} is a CSV file that cannot be read (with line and column).
  */
-public final class BudgetFormatException extends Exception {
+public class BudgetFormatException extends Exception {
     private static final long serialVersionUID = 1L;
     private final String path;
 

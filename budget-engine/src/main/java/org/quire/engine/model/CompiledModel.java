@@ -22,10 +22,11 @@ public final class CompiledModel implements BlockEvaluator {
     private final int nodeCount;
     private final List<Node> constants;
     private final List<ModelProblem> warnings;
+    private final List<Formula.Line> lines;
 
     CompiledModel(List<String> inputs, List<String> quantities, List<String> equationTexts,
             List<String> functionTexts, Node[] roots, int[] order, int[] outputIndex, List<String> outputs,
-            int nodeCount, List<Node> constants, List<ModelProblem> warnings) {
+            int nodeCount, List<Node> constants, List<ModelProblem> warnings, List<Formula.Line> lines) {
         this.inputs = inputs;
         this.quantities = List.copyOf(quantities);
         this.equationTexts = List.copyOf(equationTexts);
@@ -37,6 +38,15 @@ public final class CompiledModel implements BlockEvaluator {
         this.nodeCount = nodeCount;
         this.constants = constants;
         this.warnings = List.copyOf(warnings);
+        this.lines = List.copyOf(lines);
+    }
+
+    /**
+     * @return the model's lines with every name resolved, for typesetting: the model's own functions first, then
+     *     the quantities' equations in the order they are written
+     */
+    public List<Formula.Line> lines() {
+        return lines;
     }
 
     /** @return the input names, in the order the evaluation methods expect their values */

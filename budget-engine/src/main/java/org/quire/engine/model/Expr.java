@@ -7,8 +7,8 @@ sealed interface Expr permits Expr.Num, Expr.Name, Expr.Unary, Expr.Binary, Expr
 
     SourcePosition at();
 
-    /** A number as written. */
-    record Num(double value, SourcePosition at) implements Expr { }
+    /** A number, with its digits as written. */
+    record Num(double value, String written, SourcePosition at) implements Expr { }
 
     /** A reference to an input, an equation's result, a function parameter or a constant. */
     record Name(String name, SourcePosition at) implements Expr { }

@@ -185,8 +185,45 @@ public final class ModelCompiler {
         for (Equation f : functions.values()) {
             functionTexts.add(f.text());
         }
+        List<Formula.Line> lines = new ArrayList<>();
+        for (Equation f : functions.values()) {
+            lines.add(new Formula.Line(f.name(), f.parameters(), true, false,
+                    formula(f.expression(), Set.copyOf(f.parameters())), f.text()));
+        }
+        for (Equation q : quantities) {
+            lines.add(new Formula.Line(q.name(), List.of(), false, outputs.contains(q.name()),
+                    formula(q.expression(), Set.of()), q.text()));
+        }
         return new CompiledModel(List.copyOf(inputs), names, texts, functionTexts, roots, order, outIdx,
-                List.copyOf(outputs), nextId, List.copyOf(consts), warnings);
+                List.copyOf(outputs), nextId, List.copyOf(consts), warnings, lines);
+    }
+
+    /** The expression with its names resolved; called only once the model compiled without errors. */
+    private Formula formula(Expr e, Set<String> params) {
+        if (e instanceof Expr.Num n) {
+            return new Formula.Number(n.value(), n.written());
+        }
+        if (e instanceof Expr.Name n) {
+            String name = n.name();
+            Formula.Role role = params.contains(name) ? Formula.Role.PARAMETER
+                    : inputIndex.containsKey(name) ? Formula.Role.INPUT
+                    : quantityIndex.containsKey(name) ? Formula.Role.QUANTITY : Formula.Role.CONSTANT;
+            return new Formula.Symbol(name, role);
+        }
+        if (e instanceof Expr.Unary u) {
+            return new Formula.Negation(formula(u.operand(), params));
+        }
+        if (e instanceof Expr.Binary b) {
+            return new Formula.Operation(b.op(), formula(b.left(), params), formula(b.right(), params));
+        }
+        Expr.Call c = (Expr.Call) e;
+        List<Formula> args = new ArrayList<>();
+        for (Expr a : c.args()) {
+            args.add(formula(a, params));
+        }
+        Formula.FunctionKind kind = functions.containsKey(c.name()) ? Formula.FunctionKind.MODEL
+                : FunctionLibrary.isStandard(c.name()) ? Formula.FunctionKind.STANDARD : Formula.FunctionKind.LIBRARY;
+        return new Formula.Call(c.name(), kind, args);
     }
 
     /** Topological order of the quantities; reports each circular definition once. */

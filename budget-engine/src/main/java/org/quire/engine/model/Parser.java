@@ -181,7 +181,7 @@ final class Parser {
         Token t = take();
         switch (t.kind()) {
             case NUMBER:
-                return new Expr.Num(t.number(), t.at());
+                return new Expr.Num(t.number(), t.text(), t.at());
             case NAME:
                 if (peek().is(Token.Kind.LPAREN)) {
                     take();

@@ -225,9 +225,113 @@ public final class Units {
         return unit.isDimensionless() ? null : Messages.notDimensionless(context, unit);
     }
 
+    /**
+     * The form in which reports, certificates and screens show a unit as written in a budget: powers as
+     * superscripts ({@code m^3/h} and {@code m3/h} as m³/h, {@code kg m^-3} as kg·m⁻³), products with the half-high
+     * dot, {@code degC} as °C and {@code uV} as µV (SI Brochure, 9th ed., 5.4.3 and 5.4.6). The form shown reads back
+     * as the same unit; a text that is not a unit expression (a blank, or free text in an old file) is returned
+     * trimmed, as written.
+     *
+     * @param written the unit as written
+     * @return its display form
+     */
+    public static String display(String written) {
+        if (written == null) {
+            return "";
+        }
+        String w = written.strip();
+        if (w.isEmpty()) {
+            return w;
+        }
+        Unit original;
+        try {
+            original = parse(w);
+        } catch (UnitFormatException e) {
+            return w;
+        }
+        StringBuilder out = new StringBuilder();
+        int i = 0;
+        while (i < w.length()) {
+            char c = w.charAt(i);
+            if (c == '^') {
+                int j = i + 1;
+                boolean paren = j < w.length() && w.charAt(j) == '(';
+                int k = paren ? j + 1 : j;
+                int start = k;
+                if (k < w.length() && (w.charAt(k) == '-' || w.charAt(k) == '+')) {
+                    k++;
+                }
+                while (k < w.length() && Character.isDigit(w.charAt(k))) {
+                    k++;
+                }
+                boolean whole = k > start && Character.isDigit(w.charAt(k - 1)) && (!paren || (k < w.length() && w.charAt(k) == ')'));
+                if (!whole) {
+                    out.append(c);
+                    i++;
+                    continue;
+                }
+                out.append(superscript(w.substring(start, k)));
+                i = paren ? k + 1 : k;
+            } else if (Character.isDigit(c) && i > 0 && Character.isLetter(w.charAt(i - 1))) {
+                int k = i;
+                while (k < w.length() && Character.isDigit(w.charAt(k))) {
+                    k++;
+                }
+                out.append(superscript(w.substring(i, k)));
+                i = k;
+            } else if (c == '*' || c == '\u22c5' || (c == ' ' && i > 0 && i + 1 < w.length()
+                    && Character.isLetter(w.charAt(i - 1)) && Character.isLetter(w.charAt(i + 1)) && !w.startsWith("US ")
+                    && !w.startsWith("imp "))) {
+                out.append('·');
+                i++;
+            } else {
+                out.append(c);
+                i++;
+            }
+        }
+        String shown = out.toString().replace("degC", "°C").replace("degF", "°F");
+        if (shown.startsWith("u") && shown.length() > 1 && Character.isLetter(shown.charAt(1))) {
+            String micro = "µ" + shown.substring(1);
+            shown = readsAs(micro, original) ? micro : shown;
+        }
+        return readsAs(shown, original) ? shown : w;
+    }
+
+    private static boolean readsAs(String shown, Unit original) {
+        try {
+            Unit u = parse(shown);
+            return u.dimension().equals(original.dimension()) && u.factor() == original.factor()
+                    && u.offset() == original.offset();
+        } catch (UnitFormatException e) {
+            return false;
+        }
+    }
+
+    private static String superscript(String exponent) {
+        StringBuilder s = new StringBuilder();
+        for (char c : exponent.toCharArray()) {
+            s.append(c == '-' ? '⁻' : c == '+' ? '⁺' : "⁰¹²³⁴⁵⁶⁷⁸⁹".charAt(c - '0'));
+        }
+        return s.toString();
+    }
+
     /** @return the known unit symbols without prefixes, in a fixed order, for help texts */
     public static List<String> symbols() {
         return List.copyOf(TABLE.keySet());
+    }
+
+    /** @return whether SI prefixes apply to this symbol of {@link #symbols()} (k for km, m for mL ...) */
+    public static boolean prefixable(String symbol) {
+        Entry e = TABLE.get(symbol);
+        if (e == null) {
+            throw new IllegalArgumentException("symbol: '" + symbol + "' is not a unit of the table");
+        }
+        return e.prefixable();
+    }
+
+    /** @return the other spellings the reader accepts, each with the unit it stands for, for help texts */
+    public static Map<String, String> aliases() {
+        return Collections.unmodifiableMap(ALIASES);
     }
 
     /** @return the SI prefixes accepted, with their powers of ten */

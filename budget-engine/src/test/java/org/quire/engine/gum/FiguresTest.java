@@ -1,0 +1,37 @@
+package org.quire.engine.gum;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+
+import org.junit.jupiter.api.Test;
+
+/** Number formatting in reports (common practice: powers of ten outside 10⁻³ ... 10⁶, ISO 80000-1 7.3.2 from memory). */
+class FiguresTest {
+
+    @Test
+    void significantDigitsWithPowersOfTen() {
+        assertEquals("2.50 × 10⁻⁵", Figures.sig(2.5e-5, 3));
+        assertEquals("−5.75 × 10⁻⁴", Figures.sig(-5.75e-4, 3));
+        assertEquals("0.0289", Figures.sig(0.028867513, 3));
+        assertEquals("575", Figures.sig(575.0, 3));
+        assertEquals("1.23 × 10⁶", Figures.sig(1_234_567, 3));
+        assertEquals("∞", Figures.sig(Double.POSITIVE_INFINITY, 3));
+    }
+
+    @Test
+    void estimatesAsEntered() {
+        assertEquals("50.000623", Figures.estimate(50.000623));
+        assertEquals("0.000215", Figures.estimate(0.000215));
+        assertEquals("−0.1", Figures.estimate(-0.1));
+        assertEquals("1.15 × 10⁻⁵", Figures.estimate(1.15e-5));
+        assertEquals("100\u202f000", Figures.estimate(1e5));
+    }
+
+    @Test
+    void degreesOfFreedomAndProbabilities() {
+        assertEquals("∞", Figures.dof(Double.POSITIVE_INFINITY));
+        assertEquals("16", Figures.dof(16));
+        assertEquals("25.6", Figures.dof(25.6));
+        assertEquals("95.45", Figures.probability(0.9545));
+        assertEquals("99", Figures.probability(0.99));
+    }
+}
