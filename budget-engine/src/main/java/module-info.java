@@ -23,6 +23,6 @@ module org.quire.engine {
     exports org.quire.engine.validate;
     exports org.quire.engine.io;
     exports org.quire.engine.reference;
-    exports org.quire.engine.calibration;
     exports org.quire.engine.csv;
+    exports org.quire.engine.calibration;
 }

@@ -2,28 +2,27 @@ package org.quire.app.cli;
 
 import java.io.IOException;
 import java.io.PrintStream;
-import java.io.StringReader;
 import java.io.StringWriter;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.NoSuchFileException;
 import java.nio.file.Path;
 import java.util.ArrayList;
-import java.util.Arrays;
-import java.util.HashMap;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Set;
 import java.util.concurrent.atomic.AtomicInteger;
-import java.util.regex.Pattern;
 import java.util.stream.IntStream;
 import org.apache.commons.csv.CSVFormat;
-import org.apache.commons.csv.CSVParser;
 import org.apache.commons.csv.CSVPrinter;
-import org.apache.commons.csv.CSVRecord;
 import org.quire.app.Engine;
 import org.quire.engine.budget.Budget;
 import org.quire.engine.budget.EvaluationSettings;
+import org.quire.engine.csv.CsvException;
+import org.quire.engine.csv.CsvOptions;
+import org.quire.engine.csv.CsvReader;
+import org.quire.engine.csv.CsvRow;
+import org.quire.engine.csv.CsvTable;
 import org.quire.engine.montecarlo.BudgetSimulation;
 import org.quire.engine.montecarlo.CoverageInterval;
 import org.quire.engine.montecarlo.ProgressListener;
@@ -37,6 +36,12 @@ import org.quire.engine.gum.OutputResult;
 import org.quire.engine.io.BudgetFormatException;
 import org.quire.engine.model.CompiledModel;
 import org.quire.engine.model.ModelException;
+import java.util.concurrent.Callable;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.ParentCommand;
+import picocli.CommandLine.Parameters;
 
 /**
  * {@code quire batch TEMPLATE DATA.csv -o RESULTS.csv}: evaluates a template (GUM) for every row of a CSV
@@ -45,40 +50,64 @@ import org.quire.engine.model.ModelException;
  * {@code error} column. A bad row is reported on stderr with its line number and does not stop the others.
  * Exit status 0 when every row was evaluated, 1 when some failed, 2 for unusable files or arguments.
  */
-final class BatchCommand {
-    static final String USAGE = "quire batch TEMPLATE DATA.csv -o RESULTS.csv [--mc [--trials N] [--seed S]]";
+@Command(name = "batch", mixinStandardHelpOptions = true, sortOptions = false,
+        description = {"Evaluate a template (GUM, and with --mc the Monte Carlo method) for every row of a CSV file "
+                + "whose columns are named after the template's parameters; an 'id' column is copied through.",
+            "Writes per row the estimate, u, k and U of every output and an error column. A bad row is reported "
+                + "on stderr with its line number and does not stop the others. Exit status 0 when every row was "
+                + "evaluated, 1 when some failed, 2 for unusable files or arguments.",
+            "On a terminal a progress line on stderr shows the rate and the time left."},
+        footerHeading = "%nExamples:%n",
+        footer = {"  quire batch tvfl-volumetric-proving-tank fleet.csv -o results.csv",
+            "  quire batch my-template.json fleet.csv -o results.csv --mc --trials 1e5 --seed 3",
+            "  quire template list          # the templates and their parameters (the CSV's column names)"})
+final class BatchCommand implements Callable<Integer> {
     /** Largest data file read. */
     static final long MAX_CSV_BYTES = 256L * 1024 * 1024;
-    private static final Pattern NUMBER = Pattern.compile("[-+]?(\\d+\\.?\\d*|\\.\\d+)([eE][-+]?\\d+)?");
 
-    private BatchCommand() {
-    }
+    @ParentCommand
+    QuireCommand quire;
+
+    @Parameters(index = "0", paramLabel = "TEMPLATE", description = "a template file, or the id of a template in the library")
+    String templateName;
+
+    @Parameters(index = "1", paramLabel = "DATA.csv", description = "one row of parameter values per meter")
+    String dataName;
+
+    @Option(names = {"-o", "--output"}, paramLabel = "RESULTS.csv", required = true, description = "the results file")
+    String output;
+
+    @Option(names = "--mc", description = "add the Monte Carlo method (JCGM 101:2008) for every row")
+    boolean mc;
+
+    @Mixin
+    Options.Trials trials;
+
+    @Mixin
+    TemplateCommand.Folders folders;
+
+    @Mixin
+    Options.Quiet quiet;
 
     /** One data row: where it is, its id and its cells by column. */
-    private record Row(long line, String id, Map<String, String> cells, String problem) {
+    private record Row(long line, String id, CsvRow cells) {
     }
 
     /** One row's result: the output cells, or the error. */
     private record Outcome(List<String> cells, String error) {
     }
 
-    static int run(String[] argv, PrintStream err) throws Exception {
-        Args a = new Args(argv, 1, Set.of("output", "trials", "seed"), Set.of("mc"));
-        boolean mc = a.has("mc");
-        if (!mc && (a.has("trials") || a.has("seed"))) {
+    @Override
+    public Integer call() throws Exception {
+        PrintStream err = quire.err;
+        if (!mc && trials.given()) {
             throw new UsageException("--trials and --seed go with --mc");
         }
-        a.expectPositional(2, USAGE);
-        if (!a.has("output")) {
-            throw new UsageException("give the results file with -o RESULTS.csv\nusage: " + USAGE);
-        }
-        String templateName = a.positional().get(0);
-        String dataName = a.positional().get(1);
-        Path out = Files.path(a.get("output", ""));
-        Template template = loadTemplate(templateName);
+        Path out = Files.path(output);
+        Template template = TemplateCommand.template(templateName, folders.library());
         Budget base = template.document().budget();
         if (mc) {
-            base = base.withSettings(MonteCarloCommand.settings(a, base.settings()));
+            base = base.withSettings(trials.apply(base.settings()));
         }
         EvaluationSettings settings = base.settings();
         CompiledModel model;
@@ -91,22 +120,26 @@ final class BatchCommand {
         int n = rows.size();
         long started = System.nanoTime();
         AtomicInteger done = new AtomicInteger();
-        int step = Math.max(1, n / 10);
-        err.println("quire batch: " + n + " rows of " + dataName + " with template " + template.id() + " version "
+        ProgressLine progress = ProgressLine.forTerminal(err, "quire batch", "rows", quiet.quiet);
+        info(err, "quire batch: " + n + " rows of " + dataName + " with template " + template.id() + " version "
                 + template.version() + " on " + Runtime.getRuntime().availableProcessors() + " cores");
-        Outcome[] outcomes = IntStream.range(0, n).parallel().mapToObj(i -> {
-            Outcome o = evaluate(template, model, rows.get(i), mc ? settings : null);
-            synchronized (err) {
-                int d = done.incrementAndGet();
-                if (o.error() != null) {
-                    err.println(dataName + " line " + rows.get(i).line() + ": " + o.error());
+        Outcome[] outcomes;
+        try {
+            outcomes = IntStream.range(0, n).parallel().mapToObj(i -> {
+                Outcome o = evaluate(template, model, rows.get(i), mc ? settings : null);
+                synchronized (err) {
+                    int d = done.incrementAndGet();
+                    if (o.error() != null) {
+                        progress.finish();
+                        err.println(dataName + " line " + rows.get(i).line() + ": " + o.error());
+                    }
+                    progress.progress(d, n);
                 }
-                if (d % step == 0 && d < n) {
-                    err.println("quire batch: " + d + " of " + n + " rows");
-                }
-            }
-            return o;
-        }).toArray(Outcome[]::new);
+                return o;
+            }).toArray(Outcome[]::new);
+        } finally {
+            progress.finish();
+        }
         List<String> header = new ArrayList<>();
         header.add("id");
         for (String o : base.outputNames()) {
@@ -139,118 +172,76 @@ final class BatchCommand {
         }
         DocumentStore.writeAtomically(out, text.toString().getBytes(StandardCharsets.UTF_8), false);
         double seconds = (System.nanoTime() - started) / 1e9;
-        err.println("quire batch: " + (n - failed) + " rows evaluated, " + failed + " failed; results in " + out);
-        err.println(String.format(java.util.Locale.ROOT, "quire batch: %.2f s, %.0f rows per second", seconds,
+        info(err, "quire batch: " + (n - failed) + " rows evaluated, " + failed + " failed; results in " + out);
+        info(err, String.format(java.util.Locale.ROOT, "quire batch: %.2f s, %.0f rows per second", seconds,
                 n / Math.max(seconds, 1e-9)));
-        return failed == 0 ? 0 : 1;
+        return failed == 0 ? CommandLine.OK : CommandLine.CHECK_FAILED;
     }
 
-    private static Template loadTemplate(String name) throws UsageException, Files.FileProblem {
-        Path p = Files.path(name);
-        if (java.nio.file.Files.isDirectory(p)) {
-            throw new UsageException("'" + name + "' is a folder, not a template file");
-        }
-        BudgetDocument d;
-        try {
-            d = DocumentStore.open(p);
-        } catch (NoSuchFileException e) {
-            throw new UsageException("no such file: " + name);
-        } catch (IOException e) {
-            throw new Files.FileProblem(name, "cannot read the file: " + e.getMessage());
-        } catch (BudgetFormatException e) {
-            throw new Files.FileProblem(name, e.getMessage());
-        }
-        try {
-            return Template.of(d);
-        } catch (IllegalArgumentException e) {
-            throw new Files.FileProblem(name, e.getMessage());
+    /** Prints a line of information, unless --quiet; a row's error is always printed. */
+    private void info(PrintStream err, String line) {
+        if (!quiet.quiet) {
+            err.println(line);
         }
     }
 
     private static List<Row> readRows(String name, Template template) throws UsageException, Files.FileProblem {
         Path p = Files.path(name);
-        String text;
+        CsvTable table;
         try {
-            if (java.nio.file.Files.size(p) > MAX_CSV_BYTES) {
-                throw new Files.FileProblem(name, "the file is larger than " + MAX_CSV_BYTES + " bytes");
-            }
-            text = java.nio.file.Files.readString(p, StandardCharsets.UTF_8);
+            table = CsvReader.read(p, CsvOptions.defaults().withMaxBytes(MAX_CSV_BYTES));
         } catch (NoSuchFileException e) {
             throw new UsageException("no such file: " + name);
-        } catch (java.nio.charset.MalformedInputException e) {
-            throw new Files.FileProblem(name, "the file is not UTF-8 text");
+        } catch (CsvException e) {
+            throw new Files.FileProblem(e);
         } catch (IOException e) {
             throw new Files.FileProblem(name, "cannot read the file: " + e.getMessage());
         }
-        if (text.startsWith("\ufeff")) {
-            text = text.substring(1);
-        }
-        int[] lineStarts = lineStarts(text);
-        CSVFormat format = CSVFormat.DEFAULT.builder().setHeader().setSkipHeaderRecord(true).setTrim(true)
-                .setIgnoreEmptyLines(true).get();
+        checkColumns(table, template);
         List<Row> rows = new ArrayList<>();
-        try (CSVParser parser = CSVParser.builder().setReader(new StringReader(text)).setFormat(format).get()) {
-            List<String> columns = parser.getHeaderNames();
-            checkColumns(name, columns, template);
-            for (CSVRecord r : parser) {
-                long line = lineOf(lineStarts, r.getCharacterPosition());
-                String id = r.isMapped("id") && r.isSet("id") ? r.get("id") : Long.toString(r.getRecordNumber());
-                if (!r.isConsistent()) {
-                    rows.add(new Row(line, id, Map.of(), "the row has " + r.size() + " cells, the header "
-                            + columns.size()));
-                    continue;
-                }
-                Map<String, String> cells = new HashMap<>();
-                for (String c : columns) {
-                    if (!c.equals("id")) {
-                        cells.put(c, r.get(c));
-                    }
-                }
-                rows.add(new Row(line, id, cells, null));
+        boolean hasId = table.hasColumn("id");
+        int n = 0;
+        for (CsvRow r : table.rows()) {
+            n++;
+            String id;
+            try {
+                id = hasId && !r.isBlank("id") ? r.text("id") : Integer.toString(n);
+            } catch (CsvException e) {
+                throw new Files.FileProblem(e);
             }
-        } catch (IOException | java.io.UncheckedIOException | IllegalArgumentException | IllegalStateException e) {
-            throw new Files.FileProblem(name, "not a readable CSV file: " + e.getMessage());
+            rows.add(new Row(r.line(), id, r));
         }
         return rows;
     }
 
-    private static void checkColumns(String name, List<String> columns, Template template)
-            throws Files.FileProblem {
+    private static void checkColumns(CsvTable table, Template template) throws Files.FileProblem {
         List<String> params = template.parameterNames();
-        for (String c : columns) {
-            if (!c.equals("id") && !params.contains(c)) {
-                throw new Files.FileProblem(name, "column '" + c + "' is not a parameter of template "
-                        + template.id() + "; its parameters are " + String.join(", ", params) + " (and 'id')");
-            }
-        }
+        List<String> columns = table.header();
+        List<String> required = new ArrayList<>();
         for (TemplateParameter tp : template.spec().parameters()) {
-            if (!tp.hasDefault() && !columns.contains(tp.name())) {
-                throw new Files.FileProblem(name, "parameter '" + tp.name() + "' has no default, so the file needs "
-                        + "a column '" + tp.name() + "'");
+            if (!tp.hasDefault()) {
+                required.add(tp.name());
             }
         }
-    }
-
-    private static int[] lineStarts(String text) {
-        int count = 1;
-        for (int i = 0; i < text.length(); i++) {
-            if (text.charAt(i) == '\n') {
-                count++;
+        try {
+            if (columns.size() == 1 && required.size() > 1) {
+                table.requireColumns(required.toArray(String[]::new));
             }
-        }
-        int[] starts = new int[count];
-        int k = 1;
-        for (int i = 0; i < text.length(); i++) {
-            if (text.charAt(i) == '\n') {
-                starts[k++] = i + 1;
+            for (int c = 0; c < columns.size(); c++) {
+                if (!columns.get(c).equals("id") && !params.contains(columns.get(c))) {
+                    throw table.headerProblem(c, "column '" + columns.get(c) + "' is not a parameter of template "
+                            + template.id() + "; its parameters are " + String.join(", ", params) + " (and 'id')");
+                }
             }
+            for (String r : required) {
+                if (!columns.contains(r)) {
+                    throw table.headerProblem(-1, "parameter '" + r + "' has no default, so the file needs a column '"
+                            + r + "'");
+                }
+            }
+        } catch (CsvException e) {
+            throw new Files.FileProblem(e);
         }
-        return starts;
-    }
-
-    private static long lineOf(int[] lineStarts, long position) {
-        int i = Arrays.binarySearch(lineStarts, (int) position);
-        return (i >= 0 ? i : -i - 2) + 1;
     }
 
     /**
@@ -258,20 +249,18 @@ final class BatchCommand {
      *     for the GUM only
      */
     private static Outcome evaluate(Template template, CompiledModel model, Row row, EvaluationSettings mc) {
-        if (row.problem() != null) {
-            return new Outcome(null, row.problem());
-        }
         Map<String, Double> values = new LinkedHashMap<>();
-        for (Map.Entry<String, String> c : row.cells().entrySet()) {
-            String v = c.getValue();
-            if (v.isEmpty()) {
-                continue;
+        List<String> header = row.cells().table().header();
+        for (int c = 0; c < header.size(); c++) {
+            String column = header.get(c);
+            try {
+                if (column.equals("id") || row.cells().isBlank(c)) {
+                    continue;
+                }
+                values.put(column, row.cells().number(c));
+            } catch (CsvException e) {
+                return new Outcome(null, "parameter '" + column + "': " + e.reason());
             }
-            if (!NUMBER.matcher(v).matches()) {
-                return new Outcome(null, "parameter '" + c.getKey() + "': '" + v + "' is not a number"
-                        + (v.matches("[-+]?\\d+,\\d+") ? " (use a point as the decimal separator)" : ""));
-            }
-            values.put(c.getKey(), Double.parseDouble(v));
         }
         try {
             Budget b = template.budgetFor(values);
@@ -287,14 +276,14 @@ final class BatchCommand {
                 }
             }
             if (mc != null) {
-                BudgetSimulation.Outcome m = BudgetSimulation.run(b, model, r,
+                org.quire.engine.montecarlo.MonteCarloOutcome m = BudgetSimulation.run(b, model, r,
                         BudgetSimulation.settings(mc, r).withThreads(1), ProgressListener.NONE);
                 int per = 7;
                 for (int k = 0; k < r.outputs().size(); k++) {
-                    CoverageInterval ci = m.result().output(k).shortestInterval();
+                    CoverageInterval ci = m.output(k).symmetricInterval();
                     cells.set(k * per + 4, EvaluateCommand.num(ci.lower()));
                     cells.set(k * per + 5, EvaluateCommand.num(ci.upper()));
-                    cells.set(k * per + 6, m.comparisons().get(k).confirmed() ? "confirmed" : "not confirmed");
+                    cells.set(k * per + 6, m.output(k).comparison().verdict().word());
                 }
             }
             return new Outcome(cells, null);

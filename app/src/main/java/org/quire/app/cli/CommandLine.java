@@ -1,111 +1,121 @@
 package org.quire.app.cli;
 
 import java.io.PrintStream;
-import org.quire.engine.io.EngineVersion;
+import java.io.PrintWriter;
+import java.nio.file.Path;
 
 /**
- * The {@code quire} command line. Exit status: 0 success, 1 a check or comparison failed, 2 bad input or
- * usage. User errors print a message that says where and why, never a stack trace.
+ * The {@code quire} command line, parsed by picocli. Every command answers {@code --help} with its own usage and
+ * examples; {@code quire help COMMAND} gives the same, {@code quire help model|units|functions} the reference of
+ * the model language, and {@code -V}/{@code --version} the version.
+ *
+ * <p>Exit status, one place for all commands: {@link #OK} 0 success, {@link #CHECK_FAILED} 1 a check or
+ * comparison failed, {@link #USER_ERROR} 2 bad input or usage (the message says which file, field, line or
+ * column and why, never a stack trace), {@link #BUG} 3 an internal error (a bug in Quire).
+ *
+ * <p>The command classes only read their options and ask the engine; each call builds a new parser, so calls on
+ * different threads do not share state.
  */
 public final class CommandLine {
-    static final String HELP = String.join("\n",
-            "Quire " + EngineVersion.get() + " - measurement-uncertainty budgets for flow metrology",
-            "",
-            "usage:",
-            "  " + EvaluateCommand.USAGE,
-            "      the GUM budget table and results of every output",
-            "  " + FitCommand.USAGE,
-            "      fit a straight line to a calibration CSV (columns x, y, u_x, u_y): parameters, chi-squared",
-            "      check, standardized residuals; x for a new indication, y at a given x",
-            "  " + RangeCommand.USAGE,
-            "      the budget at each of its flow points: y, u, U, relative U, the correlation of the point",
-            "      results and, with maximum permissible errors in the file, the conformity decisions",
-            "  " + ValidateCommand.USAGE,
-            "      check Quire against the published worked examples",
-            "  " + MonteCarloCommand.USAGE,
-            "      the Monte Carlo method (JCGM 101) and its comparison with the GUM result",
-            "  " + BenchCommand.USAGE,
-            "      Monte Carlo throughput on the Tarrow Vale benchmark budget",
-            "  quire open [--review] FILE",
-            "      open a budget in the workbench (read-only with --review); no arguments opens the demo",
-            "  " + ReportCommand.USAGE,
-            "      the report of a budget as PDF or HTML (by the extension), and/or every table of it as one",
-            "      CSV file each in the folder DIR; the header shows the document's laboratory, device,",
-            "      author, revision, status and content hash; calibration lines, flow range and conformity",
-            "      are added when the budget has them; --mc adds the Monte Carlo method (JCGM 101);",
-            "      --against adds the changes from an earlier budget",
-            "  " + ReviewCommand.USAGE,
-            "      the assessor's automatic checklist; exit 1 when an item is not met. --decide records the",
-            "      assessor's decision in the document's history (endorse: approved; send-back: draft) and",
-            "      saves the file; endorsing is refused while an item not met or to confirm is unmarked",
-            "  " + DiffCommand.USAGE,
-            "      what changed from budget A to budget B, or from approved revision N of FILE to its",
-            "      current content, and the effect on each U; exit 1 when they differ",
-            "  " + BatchCommand.USAGE,
-            "      evaluate a template for every row of a CSV file of parameter values",
-            "  " + TemplateCommand.USAGE,
-            "      the template library: list it, make a budget from a template, publish to the team, check for a newer version",
-            "  quire version",
-            "  quire help",
-            "");
+    /** Exit status of a successful command. */
+    public static final int OK = 0;
+    /** Exit status when a check failed, budgets differ or rows failed. */
+    public static final int CHECK_FAILED = 1;
+    /** Exit status of a user error: bad input file, option or argument. */
+    public static final int USER_ERROR = 2;
+    /** Exit status of an internal error, which is a bug. */
+    public static final int BUG = 3;
+
+    /** Opens the workbench for {@code quire open}; the command line itself never touches Swing. */
+    @FunctionalInterface
+    public interface WorkbenchLauncher {
+        /**
+         * @param file the budget to open, or null for the demo budget
+         * @param review whether the budget opens read-only for an assessor
+         */
+        void open(Path file, boolean review);
+    }
+
+    private static final WorkbenchLauncher NO_WORKBENCH = (file, review) -> {
+        throw new IllegalStateException("no workbench launcher in this call");
+    };
 
     private CommandLine() {
     }
 
-    /** Runs one command; returns the exit status. */
+    /** Runs one command with no workbench (as tests and scripts do); returns the exit status. */
     public static int run(String[] args, PrintStream out, PrintStream err) {
-        if (args.length == 0) {
-            err.print(HELP);
-            return 2;
-        }
+        return run(args, out, err, NO_WORKBENCH);
+    }
+
+    /** Runs one command; {@code quire open} hands over to {@code launcher}. @return the exit status */
+    public static int run(String[] args, PrintStream out, PrintStream err, WorkbenchLauncher launcher) {
+        picocli.CommandLine cmd = parser(out, err, launcher);
+        int status;
         try {
-            switch (args[0]) {
-                case "evaluate":
-                    return EvaluateCommand.run(args, out);
-                case "fit":
-                    return FitCommand.run(args, out);
-                case "range":
-                    return RangeCommand.run(args, out);
-                case "validate":
-                    return ValidateCommand.run(args, out);
-                case "montecarlo":
-                    return MonteCarloCommand.run(args, out, err);
-                case "bench":
-                    return BenchCommand.run(args, out);
-                case "report":
-                    return ReportCommand.run(args, out);
-                case "review":
-                    return ReviewCommand.run(args, out);
-                case "diff":
-                    return DiffCommand.run(args, out);
-                case "batch":
-                    return BatchCommand.run(args, err);
-                case "template":
-                    return TemplateCommand.run(args, out, err);
-                case "version":
-                case "--version":
-                    out.println("quire " + EngineVersion.get());
-                    return 0;
-                case "help":
-                case "--help":
-                case "-h":
-                    out.print(HELP);
-                    return 0;
-                default:
-                    throw new UsageException("unknown command '" + args[0] + "'\n" + HELP);
-            }
-        } catch (UsageException e) {
-            err.println("quire: " + e.getMessage());
-            return 2;
-        } catch (Files.FileProblem e) {
-            err.println(e.getMessage());
-            return 2;
-        } catch (java.io.IOException e) {
-            err.println("quire: " + e.getMessage());
-            return 2;
-        } catch (Exception e) {
-            err.println("quire: internal error: " + e);
-            return 3;
+            status = cmd.execute(args);
+        } finally {
+            cmd.getOut().flush();
+            cmd.getErr().flush();
+            out.flush();
+            err.flush();
         }
+        return status;
+    }
+
+    /** @return the parser of the whole command line, for help, man pages and shell completion */
+    static picocli.CommandLine parser(PrintStream out, PrintStream err, WorkbenchLauncher launcher) {
+        QuireCommand root = new QuireCommand(out, err, launcher);
+        picocli.CommandLine cmd = new picocli.CommandLine(root);
+        cmd.setOut(new PrintWriter(out, true));
+        cmd.setErr(new PrintWriter(err, true));
+        cmd.setCaseInsensitiveEnumValuesAllowed(true);
+        cmd.setUsageHelpWidth(100);
+        cmd.setUsageHelpLongOptionsMaxWidth(28);
+        cmd.setParameterExceptionHandler(CommandLine::badUsage);
+        cmd.setExecutionExceptionHandler((e, c, parsed) -> failure(e, c, err));
+        cmd.setExitCodeExceptionMapper(e -> BUG);
+        versionEverywhere(cmd);
+        return cmd;
+    }
+
+    /** Gives every command and action the version of {@code quire --version}, for its own {@code -V}. */
+    private static void versionEverywhere(picocli.CommandLine c) {
+        for (picocli.CommandLine sub : c.getSubcommands().values()) {
+            sub.getCommandSpec().versionProvider(new QuireCommand.Version());
+            versionEverywhere(sub);
+        }
+    }
+
+    private static int badUsage(picocli.CommandLine.ParameterException e, String[] args) {
+        picocli.CommandLine c = e.getCommandLine();
+        PrintWriter w = c.getErr();
+        String message = String.valueOf(e.getMessage())
+                .replaceFirst("^Invalid value for option '([^']+)': ", "$1 ")
+                .replaceFirst("^Invalid value for positional parameter at index \\d+ \\(([^)]+)\\): ", "$1 ");
+        w.println(c.getCommandSpec().qualifiedName() + ": " + message);
+        picocli.CommandLine.UnmatchedArgumentException.printSuggestions(e, w);
+        w.println("Try '" + c.getCommandSpec().qualifiedName() + " --help' for its usage and examples.");
+        w.flush();
+        return USER_ERROR;
+    }
+
+    /** Maps an exception a command threw to a message and the exit status. */
+    private static int failure(Exception e, picocli.CommandLine c, PrintStream err) {
+        c.getOut().flush();
+        if (e instanceof UsageException) {
+            err.println(c.getCommandSpec().qualifiedName() + ": " + e.getMessage());
+            return USER_ERROR;
+        }
+        if (e instanceof Files.FileProblem) {
+            err.println(e.getMessage());
+            return USER_ERROR;
+        }
+        if (e instanceof java.io.IOException) {
+            err.println("quire: " + e.getMessage());
+            return USER_ERROR;
+        }
+        err.println("quire: internal error (a bug in Quire; please report it with the command and file): " + e);
+        return BUG;
     }
 }

@@ -12,27 +12,49 @@ import org.quire.app.compare.ComparisonText;
 import org.quire.engine.document.BudgetDocument;
 import org.quire.engine.document.DocumentStatus;
 import org.quire.engine.document.RevisionEntry;
+import java.util.concurrent.Callable;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.ParentCommand;
+import picocli.CommandLine.Parameters;
 
 /**
  * {@code quire diff A B}: what differs from budget A to B; {@code quire diff FILE --revision N}: what differs from
  * approved revision N of a document (read back from its history) to its current content. Exit 0 when identical,
  * 1 when they differ.
  */
-final class DiffCommand {
-    static final String USAGE = "quire diff A B | quire diff FILE --revision N";
+@Command(name = "diff", mixinStandardHelpOptions = true, sortOptions = false,
+        description = {"What changed from budget A to budget B, or from approved revision N of FILE to its current "
+                + "content, and the effect of each change on every expanded uncertainty U.",
+            "Exit status 0 when they are the same, 1 when they differ."},
+        footerHeading = "%nExamples:%n",
+        footer = {"  quire diff budget-2025.json budget-2026.json",
+            "  quire diff budget.json --revision 2"})
+final class DiffCommand implements Callable<Integer> {
+    @ParentCommand
+    QuireCommand quire;
 
-    private DiffCommand() {
-    }
+    @Parameters(paramLabel = "FILE", arity = "1..2", description = "budgets A and B, or one document with --revision")
+    List<String> files;
 
-    static int run(String[] argv, PrintStream out) throws Exception {
-        Args a = new Args(argv, 1, Set.of("revision"), Set.of());
-        if (a.has("revision")) {
-            a.expectPositional(1, USAGE);
-            return revision(a, out);
+    @Option(names = "--revision", paramLabel = "N", converter = Options.WholeNumber.class,
+            description = "compare approved revision N of FILE with its current content")
+    Long revision;
+
+    @Override
+    public Integer call() throws Exception {
+        PrintStream out = quire.out;
+        if (revision != null) {
+            if (files.size() != 1) {
+                throw new UsageException("--revision N compares one document with its own history; give one FILE");
+            }
+            return revision(out);
         }
-        a.expectPositional(2, USAGE);
-        String fa = a.positional().get(0);
-        String fb = a.positional().get(1);
+        if (files.size() != 2) {
+            throw new UsageException("give two budgets A and B, or one FILE with --revision N");
+        }
+        String fa = files.get(0);
+        String fb = files.get(1);
         BudgetDocument da = Files.loadDocument(fa);
         BudgetDocument db = Files.loadDocument(fb);
         Comparison c = BudgetComparison.compare(da.budget(), db.budget(), Engine.library());
@@ -41,12 +63,12 @@ final class DiffCommand {
         return c.identical() && !details ? 0 : 1;
     }
 
-    private static int revision(Args a, PrintStream out) throws Exception {
-        long n = a.integer("revision", 0);
-        String file = a.positional().get(0);
+    private int revision(PrintStream out) throws Exception {
+        long n = revision;
+        String file = files.get(0);
         BudgetDocument doc = Files.loadDocument(file);
         if (n < 1 || n > Integer.MAX_VALUE) {
-            throw new UsageException("--revision needs a revision number of 1 or more, not " + a.get("revision", ""));
+            throw new UsageException("--revision needs a revision number of 1 or more, not " + n);
         }
         Optional<BudgetDocument> approved = doc.approvedRevision((int) n);
         if (approved.isEmpty()) {

@@ -4,6 +4,7 @@ import jakarta.json.JsonObject;
 import java.io.PrintStream;
 import java.util.Locale;
 import java.util.Set;
+import java.util.concurrent.Callable;
 import org.quire.app.Cautions;
 import org.quire.app.Engine;
 import org.quire.engine.budget.Budget;
@@ -14,38 +15,64 @@ import org.quire.engine.gum.GumResult;
 import org.quire.engine.gum.OutputResult;
 import org.quire.engine.io.BudgetJson;
 import org.quire.engine.io.ResultJson;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.ParentCommand;
+import picocli.CommandLine.Parameters;
 
-/** {@code quire evaluate FILE [--format text|json|csv] [--coverage P | --k K] [--higher-order]}. */
-final class EvaluateCommand {
-    static final String USAGE = "quire evaluate FILE [--format text|json|csv] [--coverage P | --k K] [--higher-order]";
+/** {@code quire evaluate FILE}: the GUM budget table and results of every output of a budget. */
+@Command(name = "evaluate", mixinStandardHelpOptions = true, sortOptions = false,
+        description = "The GUM uncertainty budget (JCGM 100:2008) of every output: estimate, standard "
+                + "uncertainty, sensitivity coefficients, contributions, effective degrees of freedom, coverage "
+                + "factor and expanded uncertainty.",
+        footerHeading = "%nExamples:%n",
+        footer = {"  quire evaluate worked-examples/jcgm100-h1-end-gauge.json",
+            "  quire evaluate budget.json --format json > result.json",
+            "  quire evaluate budget.json --coverage 0.99 --higher-order"})
+final class EvaluateCommand implements Callable<Integer> {
+    @ParentCommand
+    QuireCommand quire;
 
-    private EvaluateCommand() {
+    @Parameters(paramLabel = "FILE", description = "the budget file (JSON)")
+    String file;
+
+    @Option(names = "--format", paramLabel = "FORMAT", defaultValue = "text",
+            description = "text, json or csv (default: ${DEFAULT-VALUE})")
+    String format;
+
+    @Mixin
+    Options.Coverage coverage;
+
+    @Option(names = "--k", paramLabel = "K", converter = Options.FiniteNumber.class,
+            description = "a fixed coverage factor instead of one from the effective degrees of freedom")
+    Double k;
+
+    @Option(names = "--higher-order", description = "add the higher-order terms of JCGM 100:2008 5.1.2 note")
+    boolean higherOrder;
+
+    @Override
+    public Integer call() throws Exception {
+        return run(quire.out);
     }
 
-    static int run(String[] argv, PrintStream out) throws Exception {
-        Args a = new Args(argv, 1, Set.of("format", "coverage", "k"), Set.of("higher-order"));
-        a.expectPositional(1, USAGE);
-        String format = a.get("format", "text");
+    private int run(PrintStream out) throws Exception {
         if (!Set.of("text", "json", "csv").contains(format)) {
             throw new UsageException("--format must be text, json or csv, not '" + format + "'");
         }
-        if (a.has("coverage") && a.has("k")) {
+        if (coverage.coverage != null && k != null) {
             throw new UsageException("give either --coverage or --k, not both");
         }
-        Budget b = Files.loadBudget(a.positional().get(0));
-        EvaluationSettings s = b.settings();
+        Budget b = Files.loadBudget(file);
+        EvaluationSettings s = coverage.apply(b.settings());
         try {
-            if (a.has("coverage")) {
-                double p = a.number("coverage", 0);
-                s = s.withCoverageProbability(p > 1 && p < 100 ? p / 100 : p);
-            }
-            if (a.has("k")) {
-                s = s.withCoverageFactor(a.number("k", 0));
+            if (k != null) {
+                s = s.withCoverageFactor(k);
             }
         } catch (IllegalArgumentException e) {
             throw new UsageException(e.getMessage());
         }
-        if (a.has("higher-order")) {
+        if (higherOrder) {
             s = s.withHigherOrder(true);
         }
         b = b.withSettings(s);
@@ -53,9 +80,9 @@ final class EvaluateCommand {
         try {
             r = GumEvaluator.evaluate(b, Engine.library());
         } catch (org.quire.engine.model.ModelException e) {
-            throw Files.modelProblem(a.positional().get(0), e);
+            throw Files.modelProblem(file, e);
         } catch (IllegalArgumentException e) {
-            throw new Files.FileProblem(a.positional().get(0), e.getMessage());
+            throw new Files.FileProblem(file, e.getMessage());
         }
         switch (format) {
             case "json":

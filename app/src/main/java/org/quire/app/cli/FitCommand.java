@@ -2,8 +2,6 @@ package org.quire.app.cli;
 
 import java.io.IOException;
 import java.io.PrintStream;
-import java.io.Reader;
-import java.nio.charset.StandardCharsets;
 import java.nio.file.NoSuchFileException;
 import java.nio.file.Path;
 import java.util.Locale;
@@ -15,31 +13,63 @@ import org.quire.engine.line.LineEstimate;
 import org.quire.engine.line.LineFit;
 import org.quire.engine.line.LineFitter;
 import org.quire.engine.line.LineMethod;
+import java.util.concurrent.Callable;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.ParentCommand;
+import picocli.CommandLine.Parameters;
 
 /**
- * {@code quire fit DATA.csv [--method OLS|WLS|GDR] [--x0 X|mean] [--predict Y0 --u-predict U] [--at X]}: fits a
- * straight line to a calibration CSV and prints the parameters, the chi-squared check and the standardized
- * residuals, and optionally x inferred from a new indication (inverse use) or y predicted at x.
+ * {@code quire fit DATA.csv}: fits a straight line to a calibration CSV and prints the parameters, the chi-squared
+ * check and the standardized residuals, and optionally x inferred from a new indication (inverse use) or y
+ * predicted at x.
  */
-final class FitCommand {
-    static final String USAGE = "quire fit DATA.csv [--method OLS|WLS|GDR] [--x0 X|mean] [--predict Y0 --u-predict U]"
-            + " [--at X]";
+@Command(name = "fit", mixinStandardHelpOptions = true, sortOptions = false,
+        description = {"Fit a straight line y = a + b (x - x0) to a calibration CSV file (columns x, y, u_x, u_y; "
+                + "ISO/TS 28037:2010): parameters and their uncertainties and covariance, the chi-squared check "
+                + "and the standardized residuals.",
+            "With --predict, x for a new indication (inverse use); with --at, y at a given x."},
+        footerHeading = "%nExamples:%n",
+        footer = {"  quire fit calibration.csv --method WLS",
+            "  quire fit calibration.csv --method GDR --x0 mean --predict 12.5 --u-predict 0.02",
+            "  quire fit calibration.csv --at 40"})
+final class FitCommand implements Callable<Integer> {
+    @ParentCommand
+    QuireCommand quire;
 
-    private FitCommand() {
-    }
+    @Parameters(paramLabel = "DATA.csv", description = "the calibration data: columns x, y and optionally u_x, u_y")
+    String file;
 
-    static int run(String[] argv, PrintStream out) throws Exception {
-        Args a = new Args(argv, 1, Set.of("method", "x0", "predict", "u-predict", "at"), Set.of());
-        a.expectPositional(1, USAGE);
-        String file = a.positional().get(0);
-        if (a.has("u-predict") && !a.has("predict")) {
+    @Option(names = "--method", paramLabel = "METHOD",
+            description = "OLS, WLS, GDR or GMR (ISO/TS 28037:2010); default: WLS when every point has u_y, else OLS")
+    String method;
+
+    @Option(names = "--x0", paramLabel = "X|mean", description = "the reference x0 of the line, a number or 'mean'; default 0")
+    String x0;
+
+    @Option(names = "--predict", paramLabel = "Y0", converter = Options.FiniteNumber.class,
+            description = "a new indication y0: infer x from it (inverse use)")
+    Double predict;
+
+    @Option(names = "--u-predict", paramLabel = "U", converter = Options.FiniteNumber.class,
+            description = "the standard uncertainty of --predict Y0; default 0")
+    Double uPredict;
+
+    @Option(names = "--at", paramLabel = "X", converter = Options.FiniteNumber.class,
+            description = "predict y at this x (forward use)")
+    Double at;
+
+    @Override
+    public Integer call() throws Exception {
+        PrintStream out = quire.out;
+        if (uPredict != null && predict == null) {
             throw new UsageException("--u-predict gives the uncertainty of --predict Y0; give --predict too");
         }
         CalibrationData data = load(file);
         LineMethod method;
-        if (a.has("method")) {
+        if (this.method != null) {
             try {
-                method = LineMethod.parse(a.get("method", ""));
+                method = LineMethod.parse(this.method);
             } catch (IllegalArgumentException e) {
                 throw new UsageException("--method: " + e.getMessage());
             }
@@ -47,30 +77,34 @@ final class FitCommand {
             method = data.points().stream().allMatch(p -> p.uy() > 0) ? LineMethod.WEIGHTED_LEAST_SQUARES
                     : LineMethod.ORDINARY_LEAST_SQUARES;
         }
-        double x0 = 0;
-        if (a.has("x0")) {
-            if (a.get("x0", "").equals("mean")) {
-                x0 = data.points().stream().mapToDouble(CalibrationPoint::x).average().orElse(0);
+        double reference = 0;
+        if (x0 != null) {
+            if (x0.equals("mean")) {
+                reference = data.points().stream().mapToDouble(CalibrationPoint::x).average().orElse(0);
             } else {
-                x0 = a.number("x0", 0);
+                try {
+                    reference = new Options.FiniteNumber().convert(x0);
+                } catch (picocli.CommandLine.TypeConversionException e) {
+                    throw new UsageException("--x0 " + e.getMessage() + " or 'mean'");
+                }
             }
         }
         LineFit fit;
         try {
-            fit = LineFitter.of(method).withReferenceX(x0).fit(data);
+            fit = LineFitter.of(method).withReferenceX(reference).fit(data);
         } catch (IllegalArgumentException | ArithmeticException e) {
             throw new Files.FileProblem(file, e.getMessage());
         }
         out.print(format(fit));
-        if (a.has("at")) {
-            double x = a.number("at", 0);
+        if (at != null) {
+            double x = at;
             LineEstimate e = fit.valueAt(x);
             out.printf(Locale.ROOT, "%nforward use: at x = %s, y = %s with u(y) = %s (nu = %s)%n", g(x), g(e.value()),
                     g(e.standardUncertainty()), dof(e.dof()));
         }
-        if (a.has("predict")) {
-            double y0 = a.number("predict", 0);
-            double u0 = a.number("u-predict", 0);
+        if (predict != null) {
+            double y0 = predict;
+            double u0 = uPredict == null ? 0 : uPredict;
             if (u0 < 0) {
                 throw new UsageException("--u-predict must not be negative, not " + u0);
             }
@@ -88,14 +122,14 @@ final class FitCommand {
 
     private static CalibrationData load(String file) throws UsageException, Files.FileProblem {
         Path p = Files.path(file);
-        try (Reader r = java.nio.file.Files.newBufferedReader(p, StandardCharsets.UTF_8)) {
-            return CalibrationCsv.read(r, p.getFileName().toString(), "", "");
+        try {
+            return CalibrationCsv.read(p, "", "");
         } catch (NoSuchFileException e) {
             throw new UsageException("no such file: " + file);
-        } catch (IOException | java.io.UncheckedIOException e) {
+        } catch (org.quire.engine.csv.CsvException e) {
+            throw new Files.FileProblem(e);
+        } catch (IOException e) {
             throw new Files.FileProblem(file, "cannot read the file: " + e.getMessage());
-        } catch (IllegalArgumentException e) {
-            throw new Files.FileProblem(file, e.getMessage());
         }
     }
 

@@ -3,6 +3,7 @@ package org.quire.app.cli;
 import java.io.PrintStream;
 import java.util.Locale;
 import java.util.Set;
+import java.util.concurrent.Callable;
 import org.quire.app.Cautions;
 import org.quire.app.Engine;
 import org.quire.engine.budget.Budget;
@@ -14,67 +15,61 @@ import org.quire.engine.io.MonteCarloJson;
 import org.quire.engine.model.CompiledModel;
 import org.quire.engine.montecarlo.BudgetSimulation;
 import org.quire.engine.montecarlo.GumComparison;
+import org.quire.engine.montecarlo.MonteCarloOutcome;
 import org.quire.engine.montecarlo.MonteCarloResult;
 import org.quire.engine.montecarlo.MonteCarloSettings;
-import org.quire.engine.montecarlo.OutputSummary;
-import org.quire.engine.montecarlo.ProgressListener;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.ParentCommand;
+import picocli.CommandLine.Parameters;
 
-/**
- * {@code quire montecarlo FILE [--trials N] [--seed S] [--threads T] [--adaptive] [--coverage P]
- * [--format text|json]}: the Monte Carlo method (JCGM 101) for a budget and its comparison with the GUM result.
- */
-final class MonteCarloCommand {
-    static final String USAGE = "quire montecarlo FILE [--trials N] [--seed S] [--threads T] [--adaptive] "
-            + "[--coverage P] [--format text|json]";
+/** {@code quire montecarlo FILE}: the Monte Carlo method (JCGM 101) for a budget and its comparison with the GUM. */
+@Command(name = "montecarlo", mixinStandardHelpOptions = true, sortOptions = false,
+        description = {"The Monte Carlo method of JCGM 101:2008 for a budget: mean, standard uncertainty, "
+                + "probabilistically symmetric and shortest coverage intervals of every output, and the "
+                + "comparison with the GUM result (JCGM 101:2008 clause 8).",
+            "On a terminal a progress line on stderr shows the rate and the time left."},
+        footerHeading = "%nExamples:%n",
+        footer = {"  quire montecarlo worked-examples/jcgm101-9.3-mass-calibration.json --trials 1e6",
+            "  quire montecarlo budget.json --trials 1e7 --seed 7 --threads 2",
+            "  quire montecarlo budget.json --adaptive --format json > mc.json"})
+final class MonteCarloCommand implements Callable<Integer> {
+    @ParentCommand
+    QuireCommand quire;
 
-    private MonteCarloCommand() {
-    }
+    @Parameters(paramLabel = "FILE", description = "the budget file (JSON)")
+    String file;
 
-    /** Reads the Monte Carlo options shared by several commands into budget settings. */
-    static EvaluationSettings settings(Args a, EvaluationSettings s) throws UsageException {
-        try {
-            if (a.has("trials")) {
-                long n = a.integer("trials", 0);
-                if (n < 1) {
-                    throw new UsageException("--trials must be a whole number of at least 1, not " + a.get("trials", ""));
-                }
-                s = s.withTrials(n);
-            }
-            if (a.has("seed")) {
-                s = s.withSeed(a.integer("seed", 0));
-            }
-            if (a.has("coverage")) {
-                double p = a.number("coverage", 0);
-                s = s.withCoverageProbability(p > 1 && p < 100 ? p / 100 : p);
-            }
-            if (a.has("adaptive")) {
-                s = s.withAdaptive(true);
-            }
-        } catch (IllegalArgumentException e) {
-            throw new UsageException(e.getMessage());
-        }
-        return s;
-    }
+    @Mixin
+    Options.Trials trials;
 
-    static int threads(Args a) throws UsageException {
-        long t = a.integer("threads", Runtime.getRuntime().availableProcessors());
-        if (t < 1 || t > 1024) {
-            throw new UsageException("--threads must be between 1 and 1024, not " + a.get("threads", ""));
-        }
-        return (int) t;
-    }
+    @Mixin
+    Options.Coverage coverage;
 
-    static int run(String[] argv, PrintStream out, PrintStream err) throws Exception {
-        Args a = new Args(argv, 1, Set.of("trials", "seed", "threads", "coverage", "format"), Set.of("adaptive"));
-        a.expectPositional(1, USAGE);
-        String format = a.get("format", "text");
+    @Option(names = "--adaptive", description = "the adaptive procedure of JCGM 101:2008 7.9")
+    boolean adaptive;
+
+    @Mixin
+    Options.Threads threads;
+
+    @Option(names = "--format", paramLabel = "FORMAT", defaultValue = "text",
+            description = "text or json (default: ${DEFAULT-VALUE})")
+    String format;
+
+    @Mixin
+    Options.Quiet quiet;
+
+    @Override
+    public Integer call() throws Exception {
+        PrintStream out = quire.out;
         if (!Set.of("text", "json").contains(format)) {
             throw new UsageException("--format must be text or json, not '" + format + "'");
         }
-        String file = a.positional().get(0);
         Budget b = Files.loadBudget(file);
-        b = b.withSettings(settings(a, b.settings()));
-        int threads = threads(a);
+        EvaluationSettings settings = coverage.apply(trials.apply(b.settings()));
+        b = b.withSettings(adaptive ? settings.withAdaptive(true) : settings);
+        int threadCount = threads.count();
         CompiledModel model;
         GumResult gum;
         try {
@@ -85,28 +80,13 @@ final class MonteCarloCommand {
         } catch (IllegalArgumentException e) {
             throw new Files.FileProblem(file, e.getMessage());
         }
-        MonteCarloSettings ms = BudgetSimulation.settings(b.settings(), gum).withThreads(threads);
-        boolean tty = System.console() != null;
-        ProgressListener progress = new ProgressListener() {
-            private int last = -1;
-
-            @Override
-            public void progress(long done, long planned) {
-                int pct = planned > 0 ? (int) (100 * done / planned) : 0;
-                if (tty && pct / 10 != last) {
-                    last = pct / 10;
-                    err.printf("\rMonte Carlo: %3d %%", pct);
-                }
-            }
-
-            @Override
-            public boolean cancelRequested() {
-                return false;
-            }
-        };
-        BudgetSimulation.Outcome o = BudgetSimulation.run(b, model, gum, ms, progress);
-        if (tty) {
-            err.print("\r");
+        MonteCarloSettings ms = BudgetSimulation.settings(b.settings(), gum).withThreads(threadCount);
+        ProgressLine progress = ProgressLine.forTerminal(quire.err, "Monte Carlo", "trials", quiet.quiet);
+        MonteCarloOutcome o;
+        try {
+            o = BudgetSimulation.run(b, model, gum, ms, progress);
+        } finally {
+            progress.finish();
         }
         if (format.equals("json")) {
             out.print(BudgetJson.pretty(MonteCarloJson.toJson(o, true)));
@@ -118,7 +98,7 @@ final class MonteCarloCommand {
         return 0;
     }
 
-    static String text(String title, BudgetSimulation.Outcome o) {
+    static String text(String title, MonteCarloOutcome o) {
         MonteCarloResult r = o.result();
         StringBuilder s = new StringBuilder();
         s.append("Budget: ").append(title).append('\n');
@@ -126,25 +106,24 @@ final class MonteCarloCommand {
                 r.trials(), r.seed(), BudgetTableText.g(100 * r.coverageProbability(), 4),
                 r.settings().adaptive() ? ", adaptive: " + r.adaptiveRuns() + " runs"
                         + (r.stabilized() ? ", stabilized" : ", NOT stabilized") : ""));
-        for (int k = 0; k < r.outputCount(); k++) {
-            OutputSummary m = r.output(k);
-            GumComparison c = o.comparisons().get(k);
-            s.append('\n').append("Output ").append(o.outputNames().get(k)).append('\n');
-            s.append(String.format(Locale.ROOT, "  mean                     %s%n", BudgetTableText.g(m.mean(), 10)));
-            s.append(String.format(Locale.ROOT, "  standard uncertainty     %s%n", BudgetTableText.g(m.standardUncertainty(), 5)));
+        for (MonteCarloOutcome.Output m : o.outputs()) {
+            GumComparison c = m.comparison();
+            String unit = m.unit().isEmpty() ? "" : " " + m.unit();
+            s.append('\n').append("Output ").append(m.name()).append(unit.isEmpty() ? "" : " /" + unit).append('\n');
+            s.append(String.format(Locale.ROOT, "  mean                     %s%n", BudgetTableText.g(m.estimate(), 10)));
+            s.append(String.format(Locale.ROOT, "  standard uncertainty     %s%n", m.hasStandardUncertainty()
+                    ? BudgetTableText.g(m.standardUncertainty(), 5) : "not defined"));
             s.append(String.format(Locale.ROOT, "  symmetric interval       [%s, %s]%n",
                     BudgetTableText.g(m.symmetricInterval().lower(), 8), BudgetTableText.g(m.symmetricInterval().upper(), 8)));
             s.append(String.format(Locale.ROOT, "  shortest interval        [%s, %s]%n",
                     BudgetTableText.g(m.shortestInterval().lower(), 8), BudgetTableText.g(m.shortestInterval().upper(), 8)));
             s.append(String.format(Locale.ROOT, "  GUM interval             [%s, %s]%n",
-                    BudgetTableText.g(c.gumInterval()[0], 8), BudgetTableText.g(c.gumInterval()[1], 8)));
-            s.append(String.format(Locale.ROOT, "  comparison (JCGM 101 clause 8): delta = %s, d_low = %s, d_high = %s: %s%n",
-                    BudgetTableText.g(c.tolerance(), 2), BudgetTableText.g(c.lowerDifference(), 3),
-                    BudgetTableText.g(c.upperDifference(), 3),
-                    c.confirmed() ? "GUM result confirmed" : "GUM result NOT confirmed; report the Monte Carlo result"));
-            m.exclusionNote().ifPresent(n -> s.append("  note: ").append(n).append('\n'));
+                    BudgetTableText.g(m.gumInterval().lower(), 8), BudgetTableText.g(m.gumInterval().upper(), 8)));
+            s.append(String.format(Locale.ROOT, "  comparison (JCGM 101 clause 8): %s%n", c.verdict().word()));
+            s.append("  ").append(c.reason()).append('\n');
+            m.summary().exclusionNote().ifPresent(n -> s.append("  note: ").append(n).append('\n'));
         }
-        for (String n : r.notes()) {
+        for (String n : o.notes()) {
             s.append("note: ").append(n).append('\n');
         }
         return s.toString();

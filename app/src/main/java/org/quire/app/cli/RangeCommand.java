@@ -9,26 +9,38 @@ import org.quire.engine.budget.Budget;
 import org.quire.engine.conformity.PointDecision;
 import org.quire.engine.gum.FlowRange;
 import org.quire.engine.gum.FlowRangeResult;
+import java.util.concurrent.Callable;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.ParentCommand;
+import picocli.CommandLine.Parameters;
 
-/**
- * {@code quire range FILE [--format text|csv]}: the budget evaluated at its flow points, the table of results
- * (flow, y, u, U, relative U), the correlation matrix of the point results and, when the file gives maximum
- * permissible errors and a decision rule, the conformity decision at each point.
- */
-final class RangeCommand {
-    static final String USAGE = "quire range FILE [--format text|csv]";
+/** {@code quire range FILE}: a budget evaluated at each of its flow points, with the conformity decisions. */
+@Command(name = "range", mixinStandardHelpOptions = true, sortOptions = false,
+        description = "The budget evaluated at each of its flow points: flow, y, u, U and relative U, the "
+                + "correlation of the point results (shared inputs correlate them) and, when the file gives "
+                + "maximum permissible errors and a decision rule, the conformity decision at each point "
+                + "(JCGM 106:2012).",
+        footerHeading = "%nExamples:%n",
+        footer = {"  quire range worked-examples/tarrow-vale-emf-six-point.json",
+            "  quire range budget.json --format csv > range.csv"})
+final class RangeCommand implements Callable<Integer> {
+    @ParentCommand
+    QuireCommand quire;
 
-    private RangeCommand() {
-    }
+    @Parameters(paramLabel = "FILE", description = "the budget file (JSON) with flow points")
+    String file;
 
-    static int run(String[] argv, PrintStream out) throws Exception {
-        Args a = new Args(argv, 1, Set.of("format"), Set.of());
-        a.expectPositional(1, USAGE);
-        String format = a.get("format", "text");
+    @Option(names = "--format", paramLabel = "FORMAT", defaultValue = "text",
+            description = "text or csv (default: ${DEFAULT-VALUE})")
+    String format;
+
+    @Override
+    public Integer call() throws Exception {
+        PrintStream out = quire.out;
         if (!Set.of("text", "csv").contains(format)) {
             throw new UsageException("--format must be text or csv, not '" + format + "'");
         }
-        String file = a.positional().get(0);
         Budget b = Files.loadBudget(file);
         FlowRangeResult r;
         try {

@@ -28,6 +28,12 @@ import org.quire.engine.document.BudgetDocument;
 import org.quire.engine.gum.GumEvaluator;
 import org.quire.engine.gum.GumResult;
 import org.quire.engine.model.CompiledModel;
+import java.util.concurrent.Callable;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.ParentCommand;
+import picocli.CommandLine.Parameters;
 
 /**
  * {@code quire report FILE [-o OUT.pdf|OUT.html] [--csv DIR] [--mc [--trials N] [--seed S]] [--laboratory T]
@@ -42,27 +48,66 @@ import org.quire.engine.model.CompiledModel;
  * trials and a seed, so they cannot tell whether the author wanted it, and a million trials of a large model take
  * long enough that a report should not start them unasked.
  */
-final class ReportCommand {
-    static final String USAGE = "quire report FILE [-o OUT.pdf|OUT.html] [--csv DIR] [--mc [--trials N] [--seed S]] "
-            + "[--laboratory TEXT] [--author TEXT] [--device TEXT] [--date YYYY-MM-DD] [--against EARLIER.json]";
+@Command(name = "report", mixinStandardHelpOptions = true, sortOptions = false,
+        description = {"The report of a budget as PDF or HTML (by the file name's extension), and/or every table of "
+                + "it as one CSV file each in a folder.",
+            "The header shows the document's laboratory, device under test, author, revision, status and content "
+                + "hash; calibration lines, flow range and conformity are added when the budget has them; --mc adds "
+                + "the Monte Carlo method (JCGM 101), --against the changes from an earlier budget.",
+            "Files are written whole or not at all."},
+        footerHeading = "%nExamples:%n",
+        footer = {"  quire report budget.json -o report.pdf",
+            "  quire report budget.json -o report.html --mc --trials 1e6 --seed 11",
+            "  quire report budget.json --csv tables/ --against budget-2025.json"})
+final class ReportCommand implements Callable<Integer> {
+    @ParentCommand
+    QuireCommand quire;
 
-    private ReportCommand() {
-    }
+    @Parameters(paramLabel = "FILE", description = "the budget file (JSON)")
+    String file;
 
-    static int run(String[] argv, PrintStream out) throws Exception {
-        Args a = new Args(argv, 1, Set.of("output", "csv", "laboratory", "author", "device", "date", "against",
-                "trials", "seed"), Set.of("mc"));
-        if (!a.has("mc") && (a.has("trials") || a.has("seed"))) {
+    @Option(names = {"-o", "--output"}, paramLabel = "OUT", description = "the report file, ending in .pdf or .html")
+    String output;
+
+    @Option(names = "--csv", paramLabel = "DIR", description = "write every table as a CSV file into this folder")
+    String csv;
+
+    @Option(names = "--mc", description = "add the Monte Carlo method (JCGM 101:2008)")
+    boolean mc;
+
+    @Mixin
+    Options.Trials trials;
+
+    @Option(names = "--laboratory", paramLabel = "TEXT", description = "the laboratory, for a file of format version 1")
+    String laboratory;
+
+    @Option(names = "--author", paramLabel = "TEXT", description = "the author, for a file of format version 1")
+    String author;
+
+    @Option(names = "--device", paramLabel = "TEXT",
+            description = "the device under test, for a file of format version 1")
+    String device;
+
+    @Option(names = "--date", paramLabel = "YYYY-MM-DD", converter = Options.IsoDate.class,
+            description = "the report's date (default: today)")
+    LocalDate date;
+
+    @Option(names = "--against", paramLabel = "EARLIER.json", description = "add the changes from this earlier budget")
+    String against;
+
+    @Override
+    public Integer call() throws Exception {
+        PrintStream out = quire.out;
+        if (!mc && trials.given()) {
             throw new UsageException("--trials and --seed set the Monte Carlo run; give --mc too");
         }
-        a.expectPositional(1, USAGE);
-        if (!a.has("output") && !a.has("csv")) {
-            throw new UsageException("say where the report goes: -o OUT.pdf, -o OUT.html or --csv DIR\nusage: " + USAGE);
+        if (output == null && csv == null) {
+            throw new UsageException("say where the report goes: -o OUT.pdf, -o OUT.html or --csv DIR");
         }
         String format = null;
         Path target = null;
-        if (a.has("output")) {
-            target = Files.path(a.get("output", ""));
+        if (output != null) {
+            target = Files.path(output);
             String name = target.getFileName() == null ? "" : target.getFileName().toString().toLowerCase(Locale.ROOT);
             if (name.endsWith(".pdf")) {
                 format = "pdf";
@@ -73,12 +118,11 @@ final class ReportCommand {
                         + "' (for CSV tables use --csv DIR)");
             }
         }
-        Path csvDir = a.has("csv") ? Files.path(a.get("csv", "")) : null;
+        Path csvDir = csv != null ? Files.path(csv) : null;
         if (csvDir != null && !java.nio.file.Files.isDirectory(csvDir)) {
             throw new UsageException("--csv needs an existing folder; " + csvDir + " is not one");
         }
-        LocalDate date = a.date("date", LocalDate.now());
-        String file = a.positional().get(0);
+        LocalDate date = this.date == null ? LocalDate.now() : this.date;
         BudgetDocument document = Files.loadDocument(file);
         Budget b = document.budget();
         GumResult r;
@@ -95,19 +139,20 @@ final class ReportCommand {
         }
         DocumentInfo doc = DocumentInfo.of(document, date);
         if (document.migratedFrom() == 1) {
-            if (a.has("laboratory")) {
-                doc = doc.withLaboratory(a.get("laboratory", ""));
+            if (laboratory != null) {
+                doc = doc.withLaboratory(laboratory);
             }
-            if (a.has("author")) {
-                doc = doc.withAuthor(a.get("author", ""));
+            if (author != null) {
+                doc = doc.withAuthor(author);
             }
-            if (a.has("device")) {
-                doc = doc.withDeviceUnderTest(a.get("device", ""));
+            if (device != null) {
+                doc = doc.withDeviceUnderTest(device);
             }
         } else {
-            for (String o : List.of("laboratory", "author", "device")) {
-                if (a.has(o)) {
-                    throw new UsageException("--" + o + " fills a field that a file of format version 1 lacks; " + file
+            String[][] given = {{"laboratory", laboratory}, {"author", author}, {"device", device}};
+            for (String[] o : given) {
+                if (o[1] != null) {
+                    throw new UsageException("--" + o[0] + " fills a field that a file of format version 1 lacks; " + file
                             + " is a budget document that records it, and its content hash covers it: change it in "
                             + "the document");
                 }
@@ -117,11 +162,11 @@ final class ReportCommand {
         for (ReportSection s : sections) {
             input = input.withSection(s);
         }
-        if (a.has("mc")) {
-            input = input.withMonteCarlo(ReviewCommand.monteCarlo(a, file, b, model, r));
+        if (mc) {
+            input = input.withMonteCarlo(ReviewCommand.monteCarlo(trials, file, b, model, r));
         }
-        if (a.has("against")) {
-            String earlier = a.get("against", "");
+        if (against != null) {
+            String earlier = against;
             Comparison c = BudgetComparison.compare(Files.loadDocument(earlier).budget(), b, Engine.library());
             input = input.withSection(ComparisonSection.of(c, shortName(earlier), shortName(file)));
         }

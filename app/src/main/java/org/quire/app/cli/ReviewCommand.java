@@ -9,8 +9,6 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Set;
 import org.quire.app.Engine;
-import org.quire.app.report.MonteCarloReport;
-import org.quire.app.report.MonteCarloSummary;
 import org.quire.app.review.ChecklistText;
 import org.quire.app.review.DecisionRecorder;
 import org.quire.app.review.DocumentDecisionRecorder;
@@ -26,6 +24,12 @@ import org.quire.engine.gum.GumResult;
 import org.quire.engine.model.CompiledModel;
 import org.quire.engine.montecarlo.BudgetSimulation;
 import org.quire.engine.montecarlo.ProgressListener;
+import java.util.concurrent.Callable;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.ParentCommand;
+import picocli.CommandLine.Parameters;
 
 /**
  * {@code quire review FILE [--mc [--trials N] [--seed S]] [--decide endorse|send-back --assessor NAME
@@ -33,45 +37,77 @@ import org.quire.engine.montecarlo.ProgressListener;
  * of a budget document and, with {@code --decide}, the assessor's decision recorded in the document's history
  * and saved atomically. Exit 0, or 1 when an item is not met (without a decision) or the decision is refused.
  */
-final class ReviewCommand {
-    static final String USAGE = "quire review FILE [--mc [--trials N] [--seed S]] [--decide endorse|send-back "
-            + "--assessor NAME [--reason TEXT] [--mark ITEM=agreed|finding|remark[:COMMENT]]... [--date YYYY-MM-DD]]";
+@Command(name = "review", mixinStandardHelpOptions = true, sortOptions = false,
+        description = {"The assessor's automatic checklist of a budget document; exit status 1 when an item is not "
+                + "met.",
+            "--decide records the assessor's decision in the document's history (endorse: approved; send-back: "
+                + "draft) and saves the file atomically; endorsing is refused while an item not met or to confirm "
+                + "is unmarked."},
+        footerHeading = "%nExamples:%n",
+        footer = {"  quire review budget.json",
+            "  quire review budget.json --mc --trials 1e6",
+            "  quire review budget.json --decide endorse --assessor \"R. Okafor\" --mark sources=agreed",
+            "  quire review budget.json --decide send-back --assessor \"R. Okafor\" --reason \"Type A from 3 readings\""})
+final class ReviewCommand implements Callable<Integer> {
+    @ParentCommand
+    QuireCommand quire;
 
-    private ReviewCommand() {
-    }
+    @Parameters(paramLabel = "FILE", description = "the budget document (JSON)")
+    String file;
 
-    static int run(String[] argv, PrintStream out) throws Exception {
-        Args a = new Args(argv, 1, Set.of("decide", "assessor", "reason", "mark", "date", "trials", "seed"),
-                Set.of("mc"));
-        a.expectPositional(1, USAGE);
-        if (!a.has("decide")) {
-            for (String o : List.of("assessor", "reason", "mark", "date")) {
-                if (a.has(o)) {
-                    throw new UsageException("--" + o + " belongs to a decision; give --decide endorse or --decide "
-                            + "send-back\nusage: " + USAGE);
-                }
+    @Option(names = "--mc", description = "run the Monte Carlo method (JCGM 101:2008) for the comparison item")
+    boolean mc;
+
+    @Mixin
+    Options.Trials trials;
+
+    @Option(names = "--decide", paramLabel = "endorse|send-back", description = "record the assessor's decision")
+    String decide;
+
+    @Option(names = "--assessor", paramLabel = "NAME", description = "the assessor's name (needed with --decide)")
+    String assessor;
+
+    @Option(names = "--reason", paramLabel = "TEXT", description = "the reason for the decision")
+    String reason;
+
+    @Option(names = "--mark", paramLabel = "ITEM=MARK[:COMMENT]",
+            description = "mark a checklist item agreed, finding or remark, with an optional comment (repeatable)")
+    List<String> marks = new ArrayList<>();
+
+    @Option(names = "--date", paramLabel = "YYYY-MM-DD", converter = Options.IsoDate.class,
+            description = "the date of the decision (default: today, UTC)")
+    LocalDate date;
+
+    @Override
+    public Integer call() throws Exception {
+        PrintStream out = quire.out;
+        if (decide == null) {
+            if (assessor != null || reason != null || !marks.isEmpty() || date != null) {
+                throw new UsageException("--assessor, --reason, --mark and --date belong to a decision; give "
+                        + "--decide endorse or --decide send-back");
             }
         }
-        if (!a.has("mc") && (a.has("trials") || a.has("seed"))) {
+        if (!mc && trials.given()) {
             throw new UsageException("--trials and --seed set the Monte Carlo run; give --mc too");
         }
         Verdict verdict = null;
         LocalDate date = LocalDate.now(Clock.systemUTC());
-        if (a.has("decide")) {
-            String v = a.get("decide", "").toLowerCase(Locale.ROOT);
+        if (decide != null) {
+            String v = decide.toLowerCase(Locale.ROOT);
             if (v.equals("endorse")) {
                 verdict = Verdict.ENDORSED;
             } else if (v.equals("send-back")) {
                 verdict = Verdict.SENT_BACK;
             } else {
-                throw new UsageException("--decide must be endorse or send-back, not '" + a.get("decide", "") + "'");
+                throw new UsageException("--decide must be endorse or send-back, not '" + decide + "'");
             }
-            if (a.get("assessor", "").isBlank()) {
+            if (assessor == null || assessor.isBlank()) {
                 throw new UsageException("a decision needs the assessor's name: --assessor NAME");
             }
-            date = a.date("date", date);
+            if (this.date != null) {
+                date = this.date;
+            }
         }
-        String file = a.positional().get(0);
         BudgetDocument doc = Files.loadDocument(file);
         Budget b = doc.budget();
         GumResult r;
@@ -85,11 +121,11 @@ final class ReviewCommand {
             throw new Files.FileProblem(file, e.getMessage());
         }
         ReviewContext ctx = ReviewContext.none().withUnits(new org.quire.app.review.EngineUnitChecker());
-        if (a.has("mc")) {
-            ctx = ctx.withMonteCarlo(monteCarlo(a, file, b, model, r));
+        if (mc) {
+            ctx = ctx.withMonteCarlo(monteCarlo(trials, file, b, model, r));
         }
         Review review = Review.start(doc, r, ctx);
-        for (String m : a.all("mark")) {
+        for (String m : marks) {
             review = mark(review, m);
         }
         out.print(ChecklistText.format(b.title(), review.hashAlgorithm(), review.contentHash(), review.items()));
@@ -97,7 +133,7 @@ final class ReviewCommand {
             return review.anyNotMet() ? 1 : 0;
         }
         try {
-            review = review.decide(verdict, a.get("assessor", ""), date, a.get("reason", ""));
+            review = review.decide(verdict, assessor, date, reason == null ? "" : reason);
         } catch (IllegalStateException | IllegalArgumentException e) {
             out.println();
             out.println("decision refused: " + e.getMessage() + "; " + file + " is unchanged");
@@ -156,11 +192,11 @@ final class ReviewCommand {
     }
 
     /** Runs the Monte Carlo method with the budget's settings and --trials / --seed. */
-    static MonteCarloSummary monteCarlo(Args a, String file, Budget b, CompiledModel model, GumResult gum)
-            throws Exception {
-        Budget run = b.withSettings(MonteCarloCommand.settings(a, b.settings()));
+    static org.quire.engine.montecarlo.MonteCarloOutcome monteCarlo(Options.Trials trials, String file, Budget b,
+            CompiledModel model, GumResult gum) throws Exception {
+        Budget run = b.withSettings(trials.apply(b.settings()));
         try {
-            return MonteCarloReport.run(run, model, gum, BudgetSimulation.settings(run.settings(), gum)
+            return BudgetSimulation.run(run, model, gum, BudgetSimulation.settings(run.settings(), gum)
                     .withThreads(Runtime.getRuntime().availableProcessors()), ProgressListener.NONE);
         } catch (org.quire.engine.model.ModelException e) {
             throw Files.modelProblem(file, e);

@@ -1,6 +1,9 @@
 package org.quire.app.cli;
 
-/** A command line that cannot be carried out as written: exit status 2 with the message, no stack trace. */
+/**
+ * A command line that cannot be carried out as written: exit status {@link CommandLine#USER_ERROR} with the
+ * message, no stack trace.
+ */
 final class UsageException extends Exception {
     private static final long serialVersionUID = 1L;
 

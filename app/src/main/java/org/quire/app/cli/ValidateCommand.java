@@ -13,60 +13,51 @@ import java.util.Set;
 import org.quire.app.Engine;
 import org.quire.engine.validate.CheckOutcome;
 import org.quire.engine.validate.Validator;
+import java.util.concurrent.Callable;
+import org.quire.engine.document.TemplateLibrary;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.ParentCommand;
 
 /**
  * {@code quire validate [--dir DIR]}: runs every worked example, prints one line per check and ends with
  * {@code N passed, N failed}; exits 1 when any check fails.
  */
-final class ValidateCommand {
-    static final String USAGE = "quire validate [--dir DIR]";
+@Command(name = "validate", mixinStandardHelpOptions = true, sortOptions = false,
+        description = {"Check Quire against the published worked examples (JCGM 100, JCGM 101, ISO/TS 28037, "
+                + "JCGM 106 ...) and the shipped templates: one line per check, ending with 'N passed, N failed'.",
+            "Without --dir it runs the worked-examples folder of the working folder, or else the copy in the "
+                + "program. Exit status 1 when a check fails."},
+        footerHeading = "%nExamples:%n",
+        footer = {"  quire validate", "  quire validate --dir my-lab-examples"})
+final class ValidateCommand implements Callable<Integer> {
+    @ParentCommand
+    QuireCommand quire;
 
-    private ValidateCommand() {
-    }
+    @Option(names = "--dir", paramLabel = "DIR", description = "a folder of worked-example files to run instead")
+    String dir;
 
-    static int run(String[] argv, PrintStream out) throws Exception {
-        Args a = new Args(argv, 1, Set.of("dir"), Set.of());
-        a.expectPositional(0, USAGE);
+    @Override
+    public Integer call() throws Exception {
+        PrintStream out = quire.out;
         Validator v = Validator.standard(Engine.library());
         List<CheckOutcome> outcomes;
-        if (a.has("dir")) {
-            Path dir = Files.path(a.get("dir", ""));
-            if (!java.nio.file.Files.isDirectory(dir)) {
+        if (dir != null) {
+            Path folder = Files.path(dir);
+            if (!java.nio.file.Files.isDirectory(folder)) {
                 throw new UsageException("no such folder: " + dir);
             }
-            outcomes = v.runAll(dir);
-        } else if (java.nio.file.Files.isDirectory(Path.of("worked-examples"))) {
-            outcomes = new java.util.ArrayList<>(v.runAll(Path.of("worked-examples")));
-            if (java.nio.file.Files.isDirectory(Path.of("templates"))) {
-                outcomes.addAll(templates(Path.of("templates")));
-            }
+            outcomes = v.runAll(folder);
         } else {
-            outcomes = bundled(v);
+            Path local = Path.of("worked-examples");
+            outcomes = new java.util.ArrayList<>(v.runAll(java.nio.file.Files.isDirectory(local) ? local
+                    : ExamplesCommand.bundled()));
+            Path shipped = TemplateLibrary.shippedFolder();
+            if (shipped != null) {
+                outcomes.addAll(templates(shipped));
+            }
         }
         return print(outcomes, out);
-    }
-
-    /** Runs the copy of the worked examples packed into the jar. */
-    private static List<CheckOutcome> bundled(Validator v) throws IOException, UsageException {
-        java.net.URL url = ValidateCommand.class.getResource("/worked-examples/");
-        if (url == null) {
-            throw new UsageException("no worked-examples folder here and none bundled; give one with --dir");
-        }
-        try {
-            URI uri = url.toURI();
-            if (uri.getScheme().equals("jar")) {
-                try (FileSystem fs = FileSystems.newFileSystem(uri, Map.of())) {
-                    List<CheckOutcome> all = new java.util.ArrayList<>(v.runAll(fs.getPath("/worked-examples")));
-                    if (java.nio.file.Files.isDirectory(fs.getPath("/templates"))) {
-                        all.addAll(templates(fs.getPath("/templates")));
-                    }
-                    return all;
-                }
-            }
-            return v.runAll(Path.of(uri));
-        } catch (URISyntaxException e) {
-            throw new IOException(e);
-        }
     }
 
     /**

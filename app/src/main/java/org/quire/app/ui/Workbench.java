@@ -6,7 +6,7 @@ import com.formdev.flatlaf.FlatLightLaf;
 import java.awt.EventQueue;
 import java.nio.file.Path;
 import org.quire.app.Engine;
-import org.quire.app.ui.montecarlo.MonteCarloRunners;
+import org.quire.app.ui.montecarlo.MonteCarloRunner;
 
 /**
  * Starts the workbench in a fixed order: platform properties, the look and feel (light or dark from the
@@ -27,15 +27,35 @@ public final class Workbench {
         WorkbenchPrefs prefs = WorkbenchPrefs.user();
         installLookAndFeel(prefs.theme());
         EventQueue.invokeLater(() -> {
-            WorkbenchFrame frame = new WorkbenchFrame(prefs, Engine.library(), MonteCarloRunners.installed());
+            WorkbenchFrame frame = new WorkbenchFrame(prefs, Engine.library(), MonteCarloRunner.engine(Engine.library()));
             frame.showRestored();
             if (file == null) {
                 frame.openDemo();
             } else {
                 frame.open(file).ifPresent(ed -> ed.document().setReadOnly(review));
             }
+            if (Boolean.getBoolean(TIMING_PROPERTY)) {
+                EventQueue.invokeLater(() -> reportPainted(frame));
+            }
             EventQueue.invokeLater(frame::offerRecovery);
         });
+    }
+
+    /**
+     * With {@code -Dquire.timing=true} the workbench prints {@code workbench_content_painted_ms=N} on standard
+     * error once the window's content (menu, panes and the opened budget) has been painted, N counted from the
+     * start of the process: the startup benchmark of {@code app/src/test/resources/bench/run-benchmarks.sh}.
+     */
+    public static final String TIMING_PROPERTY = "quire.timing";
+
+    private static void reportPainted(javax.swing.JFrame frame) {
+        javax.swing.JRootPane root = frame.getRootPane();
+        root.paintImmediately(0, 0, root.getWidth(), root.getHeight());
+        java.time.Instant started = ProcessHandle.current().info().startInstant().orElse(null);
+        if (started != null) {
+            System.err.println("workbench_content_painted_ms="
+                    + java.time.Duration.between(started, java.time.Instant.now()).toMillis());
+        }
     }
 
     /** Installs FlatLaf with Quire's theme files ({@code org/quire/app/ui/themes/*.properties}). */

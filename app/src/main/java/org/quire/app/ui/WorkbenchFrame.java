@@ -63,7 +63,7 @@ public final class WorkbenchFrame extends JFrame {
 
     private final WorkbenchPrefs prefs;
     private final FunctionLibrary library;
-    private final Optional<MonteCarloRunner> runner;
+    private final MonteCarloRunner runner;
     private final JTabbedPane tabs = new JTabbedPane();
     private final CardLayout inspectorCards = new CardLayout();
     private final JPanel inspectors = new JPanel(inspectorCards);
@@ -76,7 +76,7 @@ public final class WorkbenchFrame extends JFrame {
     private final RecoveryKeeper recovery;
     private BiConsumer<String, Boolean> statusHook = (m, e) -> { };
 
-    public WorkbenchFrame(WorkbenchPrefs prefs, FunctionLibrary library, Optional<MonteCarloRunner> runner) {
+    public WorkbenchFrame(WorkbenchPrefs prefs, FunctionLibrary library, MonteCarloRunner runner) {
         super("Quire");
         this.prefs = prefs;
         this.library = library;
@@ -104,6 +104,7 @@ public final class WorkbenchFrame extends JFrame {
         getContentPane().add(status, BorderLayout.SOUTH);
         actions = new WorkbenchActions(this);
         setJMenuBar(actions.menuBar());
+        KeyBindings.yieldToMenu(getJMenuBar());
         setTransferHandler(new FileDropHandler(this::dropped));
         addWindowListener(new WindowAdapter() {
             @Override
@@ -206,13 +207,14 @@ public final class WorkbenchFrame extends JFrame {
             return false;
         }
         try {
-            double[] r = org.quire.engine.io.ReadingsCsv.read(file);
+            double[] r = org.quire.engine.csv.CsvReadings.read(file, org.quire.engine.csv.CsvOptions.defaults());
             org.quire.engine.budget.TypeA a = org.quire.engine.budget.TypeA.ofReadings(r);
             ed.get().edit("Import readings into " + name, "", b -> b.withInput(name,
                     b.input(name).withEvaluation(a)));
             return true;
         } catch (IOException | BudgetFormatException | IllegalArgumentException e) {
-            showError("Cannot import readings", file + ":\n" + e.getMessage());
+            showError("Cannot import readings", e instanceof org.quire.engine.csv.CsvException ? e.getMessage()
+                    : file + ":\n" + e.getMessage());
             return false;
         }
     }

@@ -115,7 +115,7 @@ class CommandLineTest {
 
         Run opt = run("evaluate", "x.json", "--colour");
         assertEquals(2, opt.status());
-        assertTrue(opt.err().contains("unknown option --colour"), opt.err());
+        assertTrue(opt.err().contains("Unknown option: '--colour'"), opt.err());
         for (Run r : new Run[] {missing, cut, neg, model, opt}) {
             assertFalse(r.err().contains("Exception"), r.err());
         }

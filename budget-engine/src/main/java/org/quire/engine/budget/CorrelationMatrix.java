@@ -217,6 +217,9 @@ public final class CorrelationMatrix {
 
     /** @return whether no two inputs are correlated */
     public boolean isIdentity() {
+        if (identity) {
+            return true; // no coefficient stated and no fitted line: nothing to scan
+        }
         for (int i = 0; i < r.length; i++) {
             for (int j = i + 1; j < r.length; j++) {
                 if (r[i][j] != 0) {

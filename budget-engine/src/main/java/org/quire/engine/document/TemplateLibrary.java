@@ -52,6 +52,28 @@ public final class TemplateLibrary {
         this.folders = folders;
     }
 
+    /** The resource folder, on the class path of the application, that holds the shipped templates. */
+    public static final String SHIPPED_RESOURCE = "templates";
+
+    /**
+     * The shipped templates, read from the application's own files (the {@value #SHIPPED_RESOURCE} resource
+     * folder packed into the jar, or the build's class folder), wherever the program runs; the working folder
+     * plays no part. The command line and the workbench both find them here.
+     *
+     * @return the folder (inside the jar's file system when packed), or null when this build ships none
+     */
+    public static Path shippedFolder() {
+        return org.quire.engine.io.ResourceFolders.find(SHIPPED_RESOURCE);
+    }
+
+    /**
+     * @return the library of the shipped templates ({@link #shippedFolder()}) and the given personal and team
+     *     folders
+     */
+    public static TemplateLibrary withShipped(Path personal, Path team) {
+        return of(shippedFolder(), personal, team);
+    }
+
     /**
      * @param shipped the shipped templates (the {@code templates} folder of the installation), or null
      * @param personal the user's folder, or null

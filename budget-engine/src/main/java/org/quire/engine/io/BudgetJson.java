@@ -170,7 +170,7 @@ public final class BudgetJson {
         }
         List<CalibrationLine> dataSets = root.has("dataSets") ? DataSetJson.readAll(root.get("dataSets")) : List.of();
         List<InputQuantity> inputs = new ArrayList<>();
-        List<String> seen = new ArrayList<>();
+        java.util.Set<String> seen = new java.util.HashSet<>();
         for (JsonCursor in : root.get("inputs").elements()) {
             InputQuantity q = readInput(in, dataSets);
             if (seen.contains(q.name())) {

@@ -320,6 +320,20 @@ public final class Units {
         return List.copyOf(TABLE.keySet());
     }
 
+    /** @return whether SI prefixes apply to this symbol of {@link #symbols()} (k for km, m for mL ...) */
+    public static boolean prefixable(String symbol) {
+        Entry e = TABLE.get(symbol);
+        if (e == null) {
+            throw new IllegalArgumentException("symbol: '" + symbol + "' is not a unit of the table");
+        }
+        return e.prefixable();
+    }
+
+    /** @return the other spellings the reader accepts, each with the unit it stands for, for help texts */
+    public static Map<String, String> aliases() {
+        return Collections.unmodifiableMap(ALIASES);
+    }
+
     /** @return the SI prefixes accepted, with their powers of ten */
     public static Map<String, Integer> prefixes() {
         return Collections.unmodifiableMap(PREFIXES);

@@ -1,13 +1,7 @@
 package org.quire.app.ui.templates;
 
 import java.io.IOException;
-import java.net.URI;
-import java.net.URISyntaxException;
-import java.net.URL;
 import java.nio.file.DirectoryStream;
-import java.nio.file.FileSystem;
-import java.nio.file.FileSystemAlreadyExistsException;
-import java.nio.file.FileSystems;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.time.Instant;
@@ -31,15 +25,12 @@ import org.quire.engine.io.BudgetFormatException;
  * section) asks for its parameters and records its origin in the new document; a plain budget is copied as a
  * new draft and records no origin, since it has no template id or version a later version could be matched by.
  *
- * <p>The shipped folder is {@code templates} in the working folder when there is one (a source checkout), else
- * the {@code /templates} folder bundled with the application.
+ * <p>The shipped folder is the one the engine finds in the application's own files
+ * ({@link TemplateLibrary#shippedFolder()}), wherever the program runs.
  *
  * <p>No user-interface imports. Immutable and thread-safe; every listing reads the folders afresh.
  */
 public final class TemplateCatalog {
-    /** The folder of the templates bundled with the application. */
-    public static final String BUNDLED = "/templates";
-
     /**
      * One entry.
      *
@@ -92,31 +83,9 @@ public final class TemplateCatalog {
         return library;
     }
 
-    /** @return {@code templates} in the working folder when present, else the bundled folder, or null */
+    /** @return the shipped templates, from the application's own files ({@link TemplateLibrary#shippedFolder()}) */
     public static Path shippedFolder() {
-        Path local = Path.of("templates");
-        if (Files.isDirectory(local)) {
-            return local.toAbsolutePath();
-        }
-        URL url = TemplateCatalog.class.getResource(BUNDLED);
-        if (url == null) {
-            return null;
-        }
-        try {
-            URI uri = url.toURI();
-            if ("jar".equals(uri.getScheme())) {
-                FileSystem fs;
-                try {
-                    fs = FileSystems.newFileSystem(uri, Map.of());
-                } catch (FileSystemAlreadyExistsException e) {
-                    fs = FileSystems.getFileSystem(uri);
-                }
-                return fs.getPath(BUNDLED);
-            }
-            return Path.of(uri);
-        } catch (URISyntaxException | IOException | IllegalArgumentException e) {
-            return null;
-        }
+        return TemplateLibrary.shippedFolder();
     }
 
     /** @return templates and plain budgets, folder by folder (shipped, personal, team), by file name within one */

@@ -1,0 +1,136 @@
+#!/usr/bin/env bash
+# The performance targets of Quire, measured side by side with their NumPy peers.
+#
+#   app/src/test/resources/bench/run-benchmarks.sh [JAR ...]
+#
+# Run from the repository root after `mvn -B -pl app -am package -DskipTests`. With no JAR it measures
+# app/target/quire.jar; with several (e.g. a build of main and one of a branch) it measures each, and the
+# NumPy peers, interleaved: every round runs every target once for every jar, so that a change in the
+# machine's load hits all of them alike. REPEATS rounds (default 3); the table gives the median of the rounds.
+# JAVA_OPTS is passed to every java command (e.g. JAVA_OPTS=-XX:SharedArchiveFile=app/target/quire.jsa).
+# A jar given as JAR@OPTS is run with the extra java options OPTS (spaces as commas), so one run can compare
+# app/target/quire.jar with app/target/quire.jar@-XX:SharedArchiveFile=app/target/quire.jsa.
+#
+# Targets (issue 16): bench trials/s and its ratio to the matched NumPy peer; montecarlo of the gravimetric
+# template with 10^6 trials end to end against its NumPy peer; evaluate of a worked example end to end; GUM
+# recalculation of a 1000-input budget warm and first in a fresh JVM; batch of 10 000 rows over the gravimetric
+# template (GUM), and of 200 rows with --mc; the workbench's time to content painted (needs xvfb-run).
+set -u
+here=$(cd "$(dirname "$0")" && pwd)
+repeats=${REPEATS:-3}
+jars=("$@")
+if [ ${#jars[@]} -eq 0 ]; then
+    jars=(app/target/quire.jar)
+fi
+work=$(mktemp -d)
+trap 'rm -rf "$work"' EXIT
+template=templates/gravimetric-emf-flow-point.json
+example=worked-examples/jcgm100-h1-end-gauge.json
+
+python3 - "$work" <<'EOF'
+import random, sys
+# 10 000 invented flow points of the Tarrow Vale gravimetric rig, inside the template's parameter limits
+random.seed(16)
+with open(sys.argv[1] + "/rows.csv", "w") as f:
+    f.write("id,I_net,t_tank,t_meter,p_meter,t_c,p_a,t_a,h_a\n")
+    for i in range(10000):
+        f.write("TV-%05d,%.3f,%.2f,%.2f,%.0f,%.3f,%.0f,%.2f,%.2f\n" % (i, random.uniform(200, 2000),
+                random.uniform(15, 24), random.uniform(15, 24), random.uniform(150000, 400000),
+                random.uniform(30, 300), random.uniform(97000, 103000), random.uniform(18, 24),
+                random.uniform(0.3, 0.7)))
+with open(sys.argv[1] + "/rows-mc.csv", "w") as f:
+    f.writelines(open(sys.argv[1] + "/rows.csv").readlines()[:201])
+EOF
+
+now() { date +%s%N; }
+# wall seconds of a command, its output discarded
+wall() {
+    local t0 t1
+    t0=$(now)
+    "$@" > /dev/null 2>&1
+    t1=$(now)
+    echo "scale=3; ($t1 - $t0) / 1000000000" | bc
+}
+# java with the jar spec's options: run_java SPEC args...
+run_java() {
+    local spec=$1
+    shift
+    local jar=${spec%%@*} opts=""
+    if [ "$spec" != "$jar" ]; then
+        opts=${spec#*@}
+        opts=${opts//,/ }
+    fi
+    # shellcheck disable=SC2086
+    java ${JAVA_OPTS:-} $opts -jar "$jar" "$@"
+}
+field() { sed -n "s/.*$1=\([0-9.]*\).*/\1/p" | tail -1; }
+
+record() { echo "$1|$2|$3" >> "$work/results"; }
+
+workbench_ms() {
+    local spec=$1 log="$work/wb.log" opts="" pid
+    command -v xvfb-run > /dev/null || { echo ""; return; }
+    if [ "$spec" != "${spec%%@*}" ]; then
+        opts=$(echo "${spec#*@}" | tr ',' ' ')
+    fi
+    : > "$log"
+    rm -f "$work/wb.pid"
+    xvfb-run -a bash -c "echo \$\$ > $work/wb.pid; exec java ${JAVA_OPTS:-} $opts -Dquire.timing=true \
+        -Duser.home=$work/home -jar ${spec%%@*}" > "$log" 2>&1 &
+    for _ in $(seq 1 300); do
+        grep -q workbench_content_painted_ms "$log" && break
+        sleep 0.1
+    done
+    pid=$(cat "$work/wb.pid" 2> /dev/null)
+    [ -n "$pid" ] && kill "$pid" 2> /dev/null
+    wait 2> /dev/null
+    field workbench_content_painted_ms < "$log"
+}
+
+for round in $(seq 1 "$repeats"); do
+    echo "round $round of $repeats" >&2
+    for spec in "${jars[@]}"; do
+        out=$(run_java "$spec" bench --trials 2000000 --runs 3 2>&1)
+        record "bench trials/s" "$spec" "$(echo "$out" | field trials_per_second)"
+    done
+    out=$(cd "$here" && python3 numpy_benchmark_summaries.py 2000000 3 2>&1)
+    record "bench trials/s" "numpy (same summaries)" "$(echo "$out" | field trials_per_second)"
+    for spec in "${jars[@]}"; do
+        record "montecarlo 1e6 s" "$spec" "$(wall run_java "$spec" montecarlo "$template" --trials 1e6)"
+    done
+    record "montecarlo 1e6 s" "numpy" "$(wall python3 "$here/numpy_gravimetric_montecarlo.py" 1e6)"
+    for spec in "${jars[@]}"; do
+        record "evaluate s" "$spec" "$(wall run_java "$spec" evaluate "$example")"
+    done
+    for spec in "${jars[@]}"; do
+        out=$(run_java "$spec" bench --budget-inputs 1000 --runs 5 2>&1)
+        record "GUM 1000 inputs warm ms" "$spec" "$(echo "$out" | field ' evaluate_ms')"
+        record "GUM 1000 inputs first ms" "$spec" "$(echo "$out" | field first_evaluate_ms)"
+    done
+    for spec in "${jars[@]}"; do
+        record "batch 10000 rows s" "$spec" "$(wall run_java "$spec" batch "$template" "$work/rows.csv" -o "$work/out.csv")"
+        record "batch --mc 200 rows x 1e5 s" "$spec" \
+            "$(wall run_java "$spec" batch "$template" "$work/rows-mc.csv" -o "$work/out-mc.csv" --mc --trials 100000)"
+    done
+    for spec in "${jars[@]}"; do
+        record "workbench painted ms" "$spec" "$(workbench_ms "$spec")"
+    done
+done
+
+echo
+echo "load average at the end: $(cut -d' ' -f1-3 /proc/loadavg); $(nproc) cores; $repeats rounds, medians"
+python3 - "$work/results" <<'EOF'
+import sys
+from collections import OrderedDict
+rows = OrderedDict()
+for line in open(sys.argv[1]):
+    target, who, value = line.rstrip("\n").split("|")
+    rows.setdefault(target, OrderedDict()).setdefault(who, []).append(value)
+def median(v):
+    v = sorted(float(x) for x in v if x)
+    return v[len(v) // 2] if v else float("nan")
+print("%-30s %-60s %14s  %s" % ("target", "program", "median", "all rounds"))
+for target, whos in rows.items():
+    for who, values in whos.items():
+        print("%-30s %-60s %14.4g  %s" % (target, who, median(values), " ".join(values)))
+EOF
