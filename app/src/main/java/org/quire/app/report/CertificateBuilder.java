@@ -24,6 +24,7 @@ import org.quire.engine.calibration.ConformityResult;
 import org.quire.engine.calibration.PointConformity;
 import org.quire.engine.calibration.PointResult;
 import org.quire.engine.calibration.SeriesResult;
+import org.quire.engine.document.SeparationOfDuties;
 import org.quire.engine.gum.Figures;
 import org.quire.engine.gum.Rounding;
 import org.quire.engine.reference.ReferenceRegister;
@@ -86,11 +87,9 @@ public final class CertificateBuilder {
             refused.add("the calibration names no reference standard (details.referenceStandards), so its "
                     + "traceability cannot be stated");
         }
-        if (issue.approver().isEmpty()) {
-            refused.add("name the person who authorises the certificate");
-        } else if (issue.approver().equalsIgnoreCase(d.author())) {
-            refused.add("the approver '" + issue.approver() + "' is the author of the calibration; a certificate is "
-                    + "authorised by someone other than the person who performed it (separation of duties)");
+        String duties = SeparationOfDuties.problem("the calibration", d.author(), issue.approver());
+        if (duties != null) {
+            refused.add(duties);
         }
         if (issue.role().isEmpty()) {
             refused.add("state the approver's role (for instance technical manager)");
@@ -201,7 +200,7 @@ public final class CertificateBuilder {
                     Cell.number(Rounding.uncertainty(uF, DIGITS).toPlainString() + (f.raisedToCmc() ? " *" : ""), uF),
                     Cell.number(rounded(l.error(), uL), l.error()),
                     Cell.number(Rounding.uncertainty(uL, DIGITS).toPlainString() + (l.raisedToCmc() ? " *" : ""), uL),
-                    Cell.number(Figures.compact(l.coverageFactor(), 3), l.coverageFactor()),
+                    Cell.number(Figures.sig(l.coverageFactor(), 3), l.coverageFactor()),
                     Cell.number(Double.isNaN(p) ? "–" : Figures.probability(p), 100 * p)));
         }
         List<Block> blocks = new ArrayList<>();
@@ -344,7 +343,7 @@ public final class CertificateBuilder {
         double p = Double.NaN;
         SeriesResult s = r.asReturned();
         for (PointResult pt : s.points()) {
-            ks.add(Figures.compact(pt.coverageFactor(), 3));
+            ks.add(Figures.sig(pt.coverageFactor(), 3));
         }
         for (PointResult pt : r.asFound().points()) {
             if (pt.result() != null) {
@@ -403,7 +402,7 @@ public final class CertificateBuilder {
                         + "every reference was within its calibration interval on the date of calibration, " + date
                         + ": see the findings."));
         blocks.add(new TableBlock(new Table("certificate-references", "Reference standards used", List.of(
-                Column.of("Id", "id", Align.LEFT, 1f),
+                Column.of("Id", "id", Align.LEFT, 1.4f),
                 Column.of("Reference", "reference", Align.LEFT, 3.2f),
                 Column.of("Certificate", "certificate", Align.LEFT, 1.3f),
                 Column.of("Issued by", "issued_by", Align.LEFT, 2.4f),

@@ -26,7 +26,7 @@ import org.quire.engine.document.Template;
 
 /**
  * The certificate tests' calibration (invented Tarrow Vale data): a meter under test compared with the reference
- * meter TV-MM-05 at three flow points of three runs each, adjusted by the weighted mean error, with a CMC of
+ * meter TVFL-MM-05 at three flow points of three runs each, adjusted by the weighted mean error, with a CMC of
  * 0.052 % and MPE = ±(0.5 % of the reading + 1 mm/s over a 100 mm bore) under simple acceptance. The expected
  * figures are computed independently by {@code app/src/test/scripts/certificate_expected.py}.
  */
@@ -64,7 +64,7 @@ final class CertificateFixture {
         decl.put("q_ref", InputDeclaration.shared());
         decl.put("q_ind", InputDeclaration.independent());
         CertificateDetails details = new CertificateDetails(
-                new CertificateDetails.Party("Tarrow Vale Flow Laboratory (invented)",
+                new CertificateDetails.Party("Tarrow Vale Flow Laboratory",
                         "4 Weir Lane\nTarrow Vale TV3 9QL (invented)", "TVAS calibration laboratory No. 0417 (invented)"),
                 new CertificateDetails.Party("Hollin Water Services (invented)", "Pumping Station Road, Hollin (invented)",
                         ""),
@@ -89,7 +89,7 @@ final class CertificateFixture {
     }
 
     static CalibrationResult worked() throws Exception {
-        return evaluate(calibration(LocalDate.of(2026, 11, 12), List.of("TV-MM-05", "TV-PRT-04", "TV-TMR-01"),
+        return evaluate(calibration(LocalDate.of(2026, 11, 12), List.of("TVFL-MM-05", "TVFL-PRT-12", "TVFL-TMR-01"),
                 "R. Ashdown (invented)"));
     }
 }
