@@ -25,9 +25,9 @@ final class CalibrationMessages {
         return new java.math.BigDecimal(v).round(new java.math.MathContext(6)).stripTrailingZeros().toPlainString();
     }
 
-    /** Two significant digits for an uncertainty or limit in %, at least to 0.001. */
+    /** Three significant digits for an uncertainty or limit in %. */
     static String pct(double v) {
-        return new java.math.BigDecimal(v).round(new java.math.MathContext(2)).stripTrailingZeros().toPlainString();
+        return new java.math.BigDecimal(v).round(new java.math.MathContext(3)).stripTrailingZeros().toPlainString();
     }
 
     static String negative(String what, double v) {

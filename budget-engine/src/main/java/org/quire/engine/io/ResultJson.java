@@ -51,6 +51,11 @@ public final class ResultJson {
         return o.build();
     }
 
+    /** @return one output's result as in {@link #toJson}'s {@code outputs} list, rounded to {@code digits} */
+    public static JsonObject outputJson(OutputResult out, int digits) {
+        return output(out, digits);
+    }
+
     private static JsonObject output(OutputResult out, int digits) {
         JsonObjectBuilder b = JsonSupport.JSON.createObjectBuilder();
         b.add("name", out.name());
