@@ -515,6 +515,34 @@ public final class WorkbenchFrame extends JFrame {
         }
     }
 
+    // ----- calibration -----------------------------------------------------------------------------------------
+
+    /** File &gt; Open calibration: asks for a calibration file and shows it in its own window. */
+    void openCalibration() {
+        Path p = FileChooser.openTarget(this, "Open calibration");
+        if (p != null) {
+            openCalibration(p, w -> { });
+        }
+    }
+
+    /**
+     * Opens a calibration file off the event thread and shows it; a point's budget opens here as a review copy.
+     *
+     * @param shown told of the window once it is shown
+     */
+    public void openCalibration(Path file, java.util.function.Consumer<org.quire.app.ui.calibration.CalibrationWindow> shown) {
+        status("Opening " + file.getFileName() + "\u2026", false);
+        org.quire.app.ui.calibration.CalibrationOpener.open(file, library, p -> {
+            BudgetEditor ed = open(BudgetDocument.ofBudget(p.budget(), "point " + p.label() + " of "
+                    + file.getFileName(), prefs.userName()));
+            ed.document().setReadOnly(true);
+            toFront();
+        }, w -> {
+            status("Opened the calibration " + file.getFileName(), false);
+            shown.accept(w);
+        }, this::showError);
+    }
+
     // ----- report and comparison ------------------------------------------------------------------------------
 
     /** Budget &gt; Export report: asks for a .pdf or .html file and writes the report off the event thread. */
