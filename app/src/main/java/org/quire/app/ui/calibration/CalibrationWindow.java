@@ -150,7 +150,7 @@ public final class CalibrationWindow extends JFrame {
         residuals.setName("residuals");
         charts.add(errorCurve);
         charts.add(residuals);
-        JSplitPane split = new JSplitPane(JSplitPane.HORIZONTAL_SPLIT, new JScrollPane(table), new JScrollPane(charts));
+        JSplitPane split = new JSplitPane(JSplitPane.HORIZONTAL_SPLIT, new JScrollPane(table), charts);
         split.setResizeWeight(0.55);
         getContentPane().add(north, BorderLayout.NORTH);
         getContentPane().add(split, BorderLayout.CENTER);
@@ -247,7 +247,7 @@ public final class CalibrationWindow extends JFrame {
         StringBuilder h = new StringBuilder("<html><b>").append(esc(r.calibration().title())).append("</b><br>Method: ")
                 .append(esc(r.methodTitle())).append(" (").append(esc(r.calibration().method().id())).append(" version ")
                 .append(r.calibration().method().version()).append("); repeatability: ")
-                .append(esc(r.calibration().repeatability().word()));
+                .append(esc(r.calibration().repeatability().word().replace('-', ' ')));
         for (String f : r.findings()) {
             h.append("<br><span style='color:").append(hex("Quire.warning")).append("'>").append(esc(f)).append("</span>");
         }
@@ -257,8 +257,8 @@ public final class CalibrationWindow extends JFrame {
             adjustmentText.setText("<html>Not adjusted: the as-found results stand as left.</html>");
         } else {
             String unit = adj.constantUnit().isEmpty() ? "" : " " + adj.constantUnit();
-            adjustmentText.setText("<html><b>Adjustment</b> (" + esc(adj.kind().word()) + "): " + esc(adj.constantName())
-                    + " as found " + Fmt.num(adj.oldConstant()) + unit + ", as left " + Fmt.num(adj.newConstant()) + unit
+            adjustmentText.setText("<html><b>Adjustment</b> (" + esc(adj.kind().word().replace('-', ' ')) + "): " + esc(adj.constantName())
+                    + " as found " + Fmt.num(adj.oldConstant()) + unit + ", as left " + org.quire.engine.gum.Figures.compact(adj.newConstant(), 6) + unit
                     + " (u = " + Fmt.working(adj.newConstantUncertainty()) + unit + "); error removed "
                     + Fmt.working(adj.errorRemoved()) + " %"
                     + (adj.notes().isEmpty() ? "" : "<br>" + esc(String.join(" ", adj.notes()))) + "</html>");

@@ -60,7 +60,7 @@ public final class MonteCarloSection implements Section {
         trials.setName("mcTrials");
         seed.setName("mcSeed");
         adaptive.setName("mcAdaptive");
-        JPanel settings = new JPanel(new FlowLayout(FlowLayout.LEFT, 6, 0));
+        JPanel settings = new JPanel(new org.quire.app.ui.WrapLayout(FlowLayout.LEFT, 6, 2));
         javax.swing.JLabel tl = new javax.swing.JLabel("Trials");
         tl.setLabelFor(trials);
         javax.swing.JLabel sl = new javax.swing.JLabel("Seed");
@@ -82,7 +82,7 @@ public final class MonteCarloSection implements Section {
             });
         }
         adaptive.addActionListener(e -> commitSettings());
-        JPanel bar = new JPanel(new FlowLayout(FlowLayout.LEFT, 6, 0));
+        JPanel bar = new JPanel(new org.quire.app.ui.WrapLayout(FlowLayout.LEFT, 6, 2));
         bar.add(run);
         bar.add(cancel);
         bar.add(progress);
@@ -296,8 +296,8 @@ public final class MonteCarloSection implements Section {
     }
 
     private static void interval(StringBuilder s, String label, CoverageInterval i, String unit) {
-        s.append(label).append(' ').append(Fmt.probability(i.probability())).append(": [").append(Fmt.num(i.lower()))
-                .append(", ").append(Fmt.num(i.upper())).append("]").append(esc(unit)).append("<br>");
+        s.append(label).append(' ').append(Fmt.probability(i.probability())).append(": [").append(Fmt.working(i.lower()))
+                .append(", ").append(Fmt.working(i.upper())).append("]").append(esc(unit)).append("<br>");
     }
 
     private static String esc(String t) {
