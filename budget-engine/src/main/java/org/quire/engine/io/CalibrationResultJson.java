@@ -112,8 +112,8 @@ public final class CalibrationResultJson {
             num(mc, "low", g.monteCarloInterval().lower());
             num(mc, "high", g.monteCarloInterval().upper());
             num(mc, "tolerance", g.tolerance());
-            mc.add("validated", g.validated());
             mc.add("verdict", g.verdict().word());
+            mc.add("validated", g.validated());
             b.add("monteCarlo", mc);
         }
         return b.build();
