@@ -276,14 +276,14 @@ final class BatchCommand implements Callable<Integer> {
                 }
             }
             if (mc != null) {
-                BudgetSimulation.Outcome m = BudgetSimulation.run(b, model, r,
+                org.quire.engine.montecarlo.MonteCarloOutcome m = BudgetSimulation.run(b, model, r,
                         BudgetSimulation.settings(mc, r).withThreads(1), ProgressListener.NONE);
                 int per = 7;
                 for (int k = 0; k < r.outputs().size(); k++) {
-                    CoverageInterval ci = m.result().output(k).shortestInterval();
+                    CoverageInterval ci = m.output(k).symmetricInterval();
                     cells.set(k * per + 4, EvaluateCommand.num(ci.lower()));
                     cells.set(k * per + 5, EvaluateCommand.num(ci.upper()));
-                    cells.set(k * per + 6, m.comparisons().get(k).confirmed() ? "confirmed" : "not confirmed");
+                    cells.set(k * per + 6, m.output(k).comparison().verdict().word());
                 }
             }
             return new Outcome(cells, null);

@@ -1,93 +1,71 @@
 package org.quire.app.ui;
 
-import java.util.Locale;
+import org.quire.engine.csv.CsvException;
+import org.quire.engine.csv.CsvOptions;
+import org.quire.engine.csv.CsvReader;
+import org.quire.engine.gum.Figures;
 
-/** How the workbench prints numbers it is given: formatting only, never arithmetic on the figures. */
+/**
+ * How the workbench prints and reads numbers: the engine's one rule ({@link Figures} for working figures,
+ * estimates, degrees of freedom and shares; {@link org.quire.engine.gum.Rounding} for stated results) and its one
+ * number reader ({@link org.quire.engine.csv.CsvRow#number(int)}: a decimal comma only where unambiguous).
+ * Formatting only, never arithmetic on the figures.
+ */
 public final class Fmt {
     private Fmt() {
     }
 
-    /**
-     * @return {@code v} as entered when it has at most 10 significant digits (1000.212 stays 1000.212), else
-     *     with 6 significant digits; "∞" for infinity, "" for NaN
-     */
+    /** @return an entered value (an estimate, a parameter) as its shortest exact decimal, "" for NaN */
     public static String num(double v) {
-        if (Double.isNaN(v)) {
-            return "";
-        }
-        if (Double.isInfinite(v)) {
-            return v > 0 ? "\u221e" : "-\u221e";
-        }
-        if (v == 0) {
-            return "0";
-        }
-        java.math.BigDecimal b = new java.math.BigDecimal(Double.toString(v)).stripTrailingZeros();
-        double a = Math.abs(v);
-        if (b.precision() <= 10 && a >= 1e-5 && a < 1e10) {
-            return b.toPlainString();
-        }
-        if (b.precision() <= 10) {
-            return Double.toString(v).replace("E", "e");
-        }
-        if (a >= 1e-4 && a < 1e7) {
-            String s = String.format(Locale.ROOT, "%.6g", v);
-            if (s.contains(".") && !s.contains("e")) {
-                s = s.replaceAll("0+$", "").replaceAll("\\.$", "");
-            }
-            return s;
-        }
-        return String.format(Locale.ROOT, "%.4e", v);
+        return Double.isNaN(v) ? "" : Figures.estimate(v);
     }
 
-    /** @return {@code v} with 4 significant digits, for columns */
-    public static String short4(double v) {
-        if (Double.isNaN(v) || Double.isInfinite(v) || v == 0) {
-            return num(v);
-        }
-        double a = Math.abs(v);
-        return a >= 1e-3 && a < 1e6 ? String.format(Locale.ROOT, "%.4g", v) : String.format(Locale.ROOT, "%.3e", v);
+    /** @return a working figure (u, c, u_i(y), a statistic) to {@link Figures#WORKING_DIGITS} significant digits */
+    public static String working(double v) {
+        return Double.isNaN(v) ? "" : Figures.working(v);
     }
 
     /** @return degrees of freedom: an integer, one decimal, or ∞ */
     public static String dof(double v) {
-        if (Double.isInfinite(v)) {
-            return "\u221e";
-        }
-        if (v == Math.rint(v)) {
-            return String.valueOf((long) v);
-        }
-        return String.format(Locale.ROOT, "%.1f", v);
+        return Figures.dof(v);
     }
 
-    /** @return a fraction as a percentage with one decimal */
+    /** @return a fraction as a percentage with one decimal, e.g. "62.3 %" */
     public static String percent(double fraction) {
-        return Double.isNaN(fraction) ? "" : String.format(Locale.ROOT, "%.1f %%", 100 * fraction);
+        return Double.isNaN(fraction) ? "" : Figures.percent(fraction) + " %";
     }
 
     /** @return a coverage probability as a percentage with the digits it has, e.g. "95.45 %" */
     public static String probability(double p) {
-        String s = String.format(Locale.ROOT, "%.6f", 100 * p).replaceAll("0+$", "").replaceAll("\\.$", "");
-        return s + " %";
+        return Figures.probability(p) + " %";
+    }
+
+    /** @return a count in groups of three digits, e.g. "200 000" */
+    public static String count(long n) {
+        return Figures.count(n);
     }
 
     /**
-     * Parses a number typed by the engineer: decimal point, optional exponent, "inf" or "∞" for infinity.
+     * Parses a number typed by the engineer, by the engine's number rule: a decimal point, or a decimal comma
+     * where it cannot be a thousands group ({@code 0,25}; {@code 1,002} is refused as ambiguous); an exponent;
+     * the forms the workbench shows (U+2212 minus, {@code × 10⁻⁵}); "inf" or "∞" for infinity.
      *
-     * @throws NumberFormatException with a message saying what was expected
+     * @throws NumberFormatException with a message saying what was wrong
      */
     public static double parse(String text) {
-        String t = text.trim().replace('\u2212', '-');
+        String t = Figures.plain(text);
         if (t.equalsIgnoreCase("inf") || t.equals("\u221e")) {
             return Double.POSITIVE_INFINITY;
         }
+        if (t.isEmpty()) {
+            throw new NumberFormatException("a number is needed here: write e.g. 0.25 or 2.5e-3");
+        }
         try {
-            double v = Double.parseDouble(t);
-            if (Double.isNaN(v) || t.matches("(?i).*[a-df-z].*")) {
-                throw new NumberFormatException();
-            }
-            return v;
-        } catch (NumberFormatException e) {
-            throw new NumberFormatException("'" + text.trim() + "' is not a number: write e.g. 0.25 or 2.5e-3");
+            return CsvReader.parse("typed value", t, CsvOptions.defaults().withHeader(false)
+                    .withSeparator(CsvOptions.Separator.TAB)).rows().get(0).number(0);
+        } catch (CsvException | RuntimeException e) {
+            String why = e instanceof CsvException ? ((CsvException) e).reason() : e.getMessage();
+            throw new NumberFormatException("'" + text.trim() + "': " + why);
         }
     }
 }

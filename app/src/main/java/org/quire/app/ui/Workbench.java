@@ -6,7 +6,7 @@ import com.formdev.flatlaf.FlatLightLaf;
 import java.awt.EventQueue;
 import java.nio.file.Path;
 import org.quire.app.Engine;
-import org.quire.app.ui.montecarlo.MonteCarloRunners;
+import org.quire.app.ui.montecarlo.MonteCarloRunner;
 
 /**
  * Starts the workbench in a fixed order: platform properties, the look and feel (light or dark from the
@@ -27,7 +27,7 @@ public final class Workbench {
         WorkbenchPrefs prefs = WorkbenchPrefs.user();
         installLookAndFeel(prefs.theme());
         EventQueue.invokeLater(() -> {
-            WorkbenchFrame frame = new WorkbenchFrame(prefs, Engine.library(), MonteCarloRunners.installed());
+            WorkbenchFrame frame = new WorkbenchFrame(prefs, Engine.library(), MonteCarloRunner.engine(Engine.library()));
             frame.showRestored();
             if (file == null) {
                 frame.openDemo();

@@ -63,7 +63,7 @@ public final class WorkbenchFrame extends JFrame {
 
     private final WorkbenchPrefs prefs;
     private final FunctionLibrary library;
-    private final Optional<MonteCarloRunner> runner;
+    private final MonteCarloRunner runner;
     private final JTabbedPane tabs = new JTabbedPane();
     private final CardLayout inspectorCards = new CardLayout();
     private final JPanel inspectors = new JPanel(inspectorCards);
@@ -76,7 +76,7 @@ public final class WorkbenchFrame extends JFrame {
     private final RecoveryKeeper recovery;
     private BiConsumer<String, Boolean> statusHook = (m, e) -> { };
 
-    public WorkbenchFrame(WorkbenchPrefs prefs, FunctionLibrary library, Optional<MonteCarloRunner> runner) {
+    public WorkbenchFrame(WorkbenchPrefs prefs, FunctionLibrary library, MonteCarloRunner runner) {
         super("Quire");
         this.prefs = prefs;
         this.library = library;

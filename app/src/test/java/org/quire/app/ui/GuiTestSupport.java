@@ -7,7 +7,6 @@ import java.awt.GraphicsEnvironment;
 import java.awt.Window;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.util.Optional;
 import java.util.concurrent.Callable;
 import java.util.concurrent.atomic.AtomicReference;
 import java.util.function.BooleanSupplier;
@@ -43,9 +42,9 @@ abstract class GuiTestSupport {
         }
     }
 
-    /** @return the Monte Carlo runner the workbench gets; none unless a test says otherwise */
-    Optional<MonteCarloRunner> runner() {
-        return Optional.empty();
+    /** @return the Monte Carlo runner the workbench gets: the engine's, unless a test says otherwise */
+    MonteCarloRunner runner() {
+        return MonteCarloRunner.engine(Engine.library());
     }
 
     @BeforeEach

@@ -440,7 +440,7 @@ public final class CalibrationEvaluator {
             throw new CalibrationException(loc, CalibrationMessages.at(at, 0, e.getMessage()), e);
         }
         OutputResult res = g.output(pm.output());
-        BudgetSimulation.Outcome mc = null;
+        org.quire.engine.montecarlo.MonteCarloOutcome mc = null;
         if (c.monteCarlo() != null) {
             MonteCarloSettings ms = MonteCarloSettings.defaults().withTrials(c.monteCarlo().trials())
                     .withSeed(c.monteCarlo().seed()).withCoverageProbability(res.coverageProbability())
@@ -489,8 +489,9 @@ public final class CalibrationEvaluator {
             for (String note : p.notes()) {
                 findings.add(phase.label() + ": " + note);
             }
-            if (p.monteCarlo() != null && !p.monteCarlo().comparisons().get(0).confirmed()) {
-                findings.add(CalibrationMessages.monteCarloNotConfirmed(phase.label(), p.label()));
+            if (p.monteCarlo() != null && !p.monteCarlo().output(0).comparison().validated()) {
+                findings.add(CalibrationMessages.monteCarloNotValidated(phase.label(), p.label(),
+                        p.monteCarlo().output(0).comparison().reason()));
             }
         }
         return new SeriesResult(phase, points, cov, PointCovariance.correlation(cov),

@@ -106,12 +106,13 @@ public final class CalibrationResultJson {
             b.add("budget", ResultJson.outputJson(p.result(), p.budget().settings().significantDigits()));
         }
         if (p.monteCarlo() != null) {
-            GumComparison g = p.monteCarlo().comparisons().get(0);
+            GumComparison g = p.monteCarlo().output(0).comparison();
             JsonObjectBuilder mc = JsonSupport.JSON.createObjectBuilder();
             num(mc, "low", g.monteCarloInterval().lower());
             num(mc, "high", g.monteCarloInterval().upper());
             num(mc, "tolerance", g.tolerance());
-            mc.add("confirmed", g.confirmed());
+            mc.add("verdict", g.verdict().word());
+            mc.add("validated", g.validated());
             b.add("monteCarlo", mc);
         }
         return b.build();

@@ -70,6 +70,7 @@ public final class ResultJson {
         BudgetJson.addNumber(b, "relativeExpandedUncertainty", out.relativeExpandedUncertainty());
         b.add("correlationVariance", out.correlationVariance());
         b.add("higherOrderVariance", out.higherOrderVariance());
+        b.add("higherOrderTerms", out.higherOrderTerms().text());
         b.add("rounded", JsonSupport.JSON.createObjectBuilder()
                 .add("estimate", Rounding.estimate(out.estimate(), out.expandedUncertainty(), digits).toPlainString())
                 .add("expandedUncertainty", Rounding.uncertainty(out.expandedUncertainty(), digits).toPlainString())

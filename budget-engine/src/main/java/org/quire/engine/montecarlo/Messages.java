@@ -106,6 +106,44 @@ final class Messages {
         return fmt("%s must be positive, not %s", what, v);
     }
 
+    static String uncertaintyNegative(String what, double v) {
+        return fmt("%s must be finite and not negative, not %s", what, v);
+    }
+
+    static String comparisonFirstOrderZero() {
+        return "the GUM result is not validated: every first-order sensitivity coefficient vanishes at the "
+                + "estimates, so the first-order law of propagation gives u(y) = 0 and no GUM interval to compare; "
+                + "use the Monte Carlo result (JCGM 101:2008 clause 9) or include the higher-order terms "
+                + "(JCGM 100:2008 5.1.2 note)";
+    }
+
+    static String comparisonValidated(double dLow, double dHigh, double delta) {
+        return fmt("the GUM result is validated: d_low = %s and d_high = %s are both within the numerical "
+                + "tolerance delta = %s (JCGM 101:2008 8.2)", g(dLow), g(dHigh), g(delta));
+    }
+
+    static String comparisonNotValidated(double dLow, double dHigh, double delta) {
+        return fmt("the GUM result is not validated: d_low = %s and d_high = %s, and %s the numerical tolerance "
+                + "delta = %s (JCGM 101:2008 8.2); report the Monte Carlo result", g(dLow), g(dHigh),
+                dLow > delta && dHigh > delta ? "both exceed" : dLow > delta ? "d_low exceeds" : "d_high exceeds",
+                g(delta));
+    }
+
+    static String standardUncertaintyUndefined(String input, double dof) {
+        return fmt("no standard uncertainty: input %s is drawn from a t distribution with %s degrees of freedom, "
+                + "which has no finite variance for nu <= 2 (JCGM 101:2008 6.4.9), so neither has the output; "
+                + "report the coverage interval only", input, g(dof));
+    }
+
+    /** @return {@code v} to 3 significant digits without trailing zeros: 0.0005, 0.0451, 2 */
+    private static String g(double v) {
+        double a = Math.abs(v);
+        if (!Double.isFinite(v) || a != 0 && (a < 1e-6 || a >= 1e9)) {
+            return String.format(Locale.ROOT, "%.3g", v);
+        }
+        return new java.math.BigDecimal(v).round(new java.math.MathContext(3)).stripTrailingZeros().toPlainString();
+    }
+
     static String valuesNotKept() {
         return "the trial values were not kept; run with MonteCarloSettings.withKeepValues(true)";
     }

@@ -66,7 +66,7 @@ public final class Validator {
             Budget b = budget.withSettings(settings);
             org.quire.engine.model.CompiledModel model = b.compile(library);
             org.quire.engine.gum.GumResult gum = GumEvaluator.evaluate(b, model, b.correlationMatrix(), settings);
-            org.quire.engine.montecarlo.BudgetSimulation.Outcome o = org.quire.engine.montecarlo.BudgetSimulation.run(
+            org.quire.engine.montecarlo.MonteCarloOutcome o = org.quire.engine.montecarlo.BudgetSimulation.run(
                     b, model, gum, org.quire.engine.montecarlo.BudgetSimulation.settings(settings, gum),
                     org.quire.engine.montecarlo.ProgressListener.NONE);
             return org.quire.engine.io.MonteCarloJson.toJson(o, false);

@@ -66,7 +66,7 @@ public final class BudgetEditor extends JPanel implements EditorContext {
         void status(String message, boolean error);
     }
 
-    public BudgetEditor(BudgetDocument doc, FunctionLibrary library, Optional<MonteCarloRunner> runner) {
+    public BudgetEditor(BudgetDocument doc, FunctionLibrary library, MonteCarloRunner runner) {
         super(new BorderLayout());
         this.doc = doc;
         this.library = library;
