@@ -444,7 +444,10 @@ public final class CalibrationEvaluator {
         if (c.monteCarlo() != null) {
             MonteCarloSettings ms = MonteCarloSettings.defaults().withTrials(c.monteCarlo().trials())
                     .withSeed(c.monteCarlo().seed()).withCoverageProbability(res.coverageProbability())
-                    .withSignificantDigits(pb.settings().significantDigits()).withThreads(monteCarloThreads);
+                    .withSignificantDigits(pb.settings().significantDigits());
+            if (monteCarloThreads > 0) {
+                ms = ms.withThreads(monteCarloThreads);
+            }
             mc = BudgetSimulation.run(pb, pm.model(), g, ms, listener);
         }
         double cmc = Double.NaN;
