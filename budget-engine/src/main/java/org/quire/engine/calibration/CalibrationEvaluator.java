@@ -179,6 +179,9 @@ public final class CalibrationEvaluator {
         SeriesResult asFound = series(c, SeriesResult.Phase.AS_FOUND, found, between, flowUnit, findings);
 
         AdjustmentResult adj = c.adjustment().changesConstant() ? adjust(c, asFound, flowUnit) : null;
+        if (adj != null && adj.fit() != null && adj.fit().consistency() == org.quire.engine.line.Consistency.INCONSISTENT) {
+            findings.add(CalibrationMessages.slopeInconsistent(adj.fit()));
+        }
         SeriesResult asLeft = null;
         if (!c.asLeft().isEmpty()) {
             List<PointResult> left = new ArrayList<>();

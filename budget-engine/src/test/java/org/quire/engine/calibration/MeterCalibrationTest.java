@@ -261,4 +261,29 @@ class MeterCalibrationTest {
         JsonArray refs = BudgetJson.parseObject(CalibrationJson.write(c, "")).getJsonArray("asFound");
         assertFalse(refs.isEmpty());
     }
+
+    @Test
+    void conformityAgainstAnOimlR117ClassDecidesEachPointWithItsReportedUncertainty() throws Exception {
+        // OIML R 117-1, meter MPE of accuracy class 0.5: 0.3 % (line B; read in a secondary copy). Errors of the
+        // points from the independent recomputation (worked example): 0.397, 0.326, 0.285, 0.232, 0.247 %.
+        String text = Files.readString(ROOT.resolve("budget-engine").resolve(HAND).toFile().exists()
+                ? ROOT.resolve("budget-engine").resolve(HAND) : HAND);
+        String from = text.substring(text.indexOf("\"mpeFormula\""), text.indexOf("\"rule\""));
+        Calibration c = CalibrationJson.read(text.replace(from, "\"mpe\": {\"liquidMeter\": \"0.5\", \"qMin\": 5, "
+                + "\"qMax\": 120}, \"flowUnit\": \"m^3/h\", ")).calibration();
+        CalibrationResult r = evaluate(c);
+        List<String> want = List.of("does not conform", "does not conform", "conforms", "conforms", "conforms");
+        Map<String, Expected> e = expected(false);
+        for (int p = 0; p < 5; p++) {
+            PointConformity pc = r.asFound().conformity().points().get(p);
+            assertEquals(want.get(p), pc.decision().decision().label(), "point " + (p + 1));
+            assertEquals(0.3, pc.mpe(), 1e-12);
+            assertEquals(e.get("asFound.points.P" + (p + 1) + ".reportedExpandedUncertainty").value(),
+                    pc.decision().expandedUncertainty(), 1e-6);
+            // U <= MPE / 3 = 0.1 % at every point (common practice ratio)
+            assertTrue(pc.ratioMet());
+        }
+        assertEquals("does not conform", r.asFound().conformity().overall().label());
+        assertTrue(r.asFound().conformity().limitsSource().contains("OIML R 117"));
+    }
 }
