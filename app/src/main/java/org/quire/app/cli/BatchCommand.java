@@ -15,7 +15,7 @@ import java.util.concurrent.atomic.AtomicInteger;
 import java.util.stream.IntStream;
 import org.apache.commons.csv.CSVFormat;
 import org.apache.commons.csv.CSVPrinter;
-import org.quire.app.Engine;
+import org.quire.app.common.Engine;
 import org.quire.engine.budget.Budget;
 import org.quire.engine.budget.EvaluationSettings;
 import org.quire.engine.csv.CsvException;
@@ -58,9 +58,9 @@ import picocli.CommandLine.Parameters;
                 + "evaluated, 1 when some failed, 2 for unusable files or arguments.",
             "On a terminal a progress line on stderr shows the rate and the time left."},
         footerHeading = "%nExamples:%n",
-        footer = {"  quire template list          # the templates and their parameters",
-            "  quire batch templates/tvfl-gravimetric-emf-point.json fleet.csv -o results.csv",
-            "  quire batch tvfl-gravimetric-emf-point fleet.csv -o results.csv --mc --trials 1e5 --seed 3"})
+        footer = {"  quire batch tvfl-volumetric-proving-tank fleet.csv -o results.csv",
+            "  quire batch my-template.json fleet.csv -o results.csv --mc --trials 1e5 --seed 3",
+            "  quire template list          # the templates and their parameters (the CSV's column names)"})
 final class BatchCommand implements Callable<Integer> {
     /** Largest data file read. */
     static final long MAX_CSV_BYTES = 256L * 1024 * 1024;
@@ -276,14 +276,14 @@ final class BatchCommand implements Callable<Integer> {
                 }
             }
             if (mc != null) {
-                BudgetSimulation.Outcome m = BudgetSimulation.run(b, model, r,
+                org.quire.engine.montecarlo.MonteCarloOutcome m = BudgetSimulation.run(b, model, r,
                         BudgetSimulation.settings(mc, r).withThreads(1), ProgressListener.NONE);
                 int per = 7;
                 for (int k = 0; k < r.outputs().size(); k++) {
-                    CoverageInterval ci = m.result().output(k).shortestInterval();
+                    CoverageInterval ci = m.output(k).symmetricInterval();
                     cells.set(k * per + 4, EvaluateCommand.num(ci.lower()));
                     cells.set(k * per + 5, EvaluateCommand.num(ci.upper()));
-                    cells.set(k * per + 6, m.comparisons().get(k).confirmed() ? "confirmed" : "not confirmed");
+                    cells.set(k * per + 6, m.output(k).comparison().verdict().word());
                 }
             }
             return new Outcome(cells, null);

@@ -80,7 +80,16 @@ public final class CommandLine {
         cmd.setParameterExceptionHandler(CommandLine::badUsage);
         cmd.setExecutionExceptionHandler((e, c, parsed) -> failure(e, c, err));
         cmd.setExitCodeExceptionMapper(e -> BUG);
+        versionEverywhere(cmd);
         return cmd;
+    }
+
+    /** Gives every command and action the version of {@code quire --version}, for its own {@code -V}. */
+    private static void versionEverywhere(picocli.CommandLine c) {
+        for (picocli.CommandLine sub : c.getSubcommands().values()) {
+            sub.getCommandSpec().versionProvider(new QuireCommand.Version());
+            versionEverywhere(sub);
+        }
     }
 
     private static int badUsage(picocli.CommandLine.ParameterException e, String[] args) {

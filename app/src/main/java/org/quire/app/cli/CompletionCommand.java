@@ -12,8 +12,8 @@ import picocli.CommandLine.Spec;
                 + "actions and options complete with TAB.",
             "The Linux package installs it; by hand: source <(quire completion)."},
         footerHeading = "%nExamples:%n",
-        footer = {"  source <(quire completion)",
-            "  quire completion > ~/.local/share/bash-completion/completions/quire"})
+        footer = {"  quire completion > ~/.local/share/bash-completion/completions/quire",
+            "  source <(quire completion)"})
 final class CompletionCommand implements Callable<Integer> {
     @Spec
     CommandSpec spec;

@@ -14,8 +14,9 @@ import picocli.CommandLine.Spec;
         description = {"Measurement-uncertainty budgets for flow metrology (JCGM 100 GUM, JCGM 101 Monte Carlo).",
             "Without a command, or with a budget file, the workbench opens."},
         subcommands = {EvaluateCommand.class, MonteCarloCommand.class, RangeCommand.class, FitCommand.class,
+            CalibrationCommand.class, CertificateCommand.class,
             ReportCommand.class, ReviewCommand.class, DiffCommand.class, TemplateCommand.class, BatchCommand.class,
-            ValidateCommand.class, BenchCommand.class, OpenCommand.class, HelpCommand.class,
+            ValidateCommand.class, ExamplesCommand.class, BenchCommand.class, OpenCommand.class, HelpCommand.class,
             CompletionCommand.class, QuireCommand.VersionCommand.class},
         footerHeading = "%n",
         footer = {"Exit status: 0 success; 1 a check failed, budgets differ or rows failed; 2 bad input or usage",
@@ -63,7 +64,11 @@ final class QuireCommand implements Callable<Integer> {
 
         @Override
         public Integer call() {
-            spec.root().commandLine().printVersionHelp(spec.commandLine().getOut());
+            java.io.PrintWriter out = spec.commandLine().getOut();
+            for (String line : new Version().getVersion()) {
+                out.println(line);
+            }
+            out.flush();
             return CommandLine.OK;
         }
     }

@@ -10,10 +10,11 @@ import java.nio.file.Path;
 import java.util.List;
 import java.util.Map;
 import java.util.Set;
-import org.quire.app.Engine;
+import org.quire.app.common.Engine;
 import org.quire.engine.validate.CheckOutcome;
 import org.quire.engine.validate.Validator;
 import java.util.concurrent.Callable;
+import org.quire.engine.document.TemplateLibrary;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.ParentCommand;
@@ -47,38 +48,16 @@ final class ValidateCommand implements Callable<Integer> {
                 throw new UsageException("no such folder: " + dir);
             }
             outcomes = v.runAll(folder);
-        } else if (java.nio.file.Files.isDirectory(Path.of("worked-examples"))) {
-            outcomes = new java.util.ArrayList<>(v.runAll(Path.of("worked-examples")));
-            if (java.nio.file.Files.isDirectory(Path.of("templates"))) {
-                outcomes.addAll(templates(Path.of("templates")));
-            }
         } else {
-            outcomes = bundled(v);
+            Path local = Path.of("worked-examples");
+            outcomes = new java.util.ArrayList<>(v.runAll(java.nio.file.Files.isDirectory(local) ? local
+                    : ExamplesCommand.bundled()));
+            Path shipped = TemplateLibrary.shippedFolder();
+            if (shipped != null) {
+                outcomes.addAll(templates(shipped));
+            }
         }
         return print(outcomes, out);
-    }
-
-    /** Runs the copy of the worked examples packed into the jar. */
-    private static List<CheckOutcome> bundled(Validator v) throws IOException, UsageException {
-        java.net.URL url = ValidateCommand.class.getResource("/worked-examples/");
-        if (url == null) {
-            throw new UsageException("no worked-examples folder here and none bundled; give one with --dir");
-        }
-        try {
-            URI uri = url.toURI();
-            if (uri.getScheme().equals("jar")) {
-                try (FileSystem fs = FileSystems.newFileSystem(uri, Map.of())) {
-                    List<CheckOutcome> all = new java.util.ArrayList<>(v.runAll(fs.getPath("/worked-examples")));
-                    if (java.nio.file.Files.isDirectory(fs.getPath("/templates"))) {
-                        all.addAll(templates(fs.getPath("/templates")));
-                    }
-                    return all;
-                }
-            }
-            return v.runAll(Path.of(uri));
-        } catch (URISyntaxException e) {
-            throw new IOException(e);
-        }
     }
 
     /**

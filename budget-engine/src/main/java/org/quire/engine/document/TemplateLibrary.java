@@ -63,27 +63,7 @@ public final class TemplateLibrary {
      * @return the folder (inside the jar's file system when packed), or null when this build ships none
      */
     public static Path shippedFolder() {
-        ClassLoader loader = TemplateLibrary.class.getClassLoader();
-        java.net.URL url = loader == null ? ClassLoader.getSystemResource(SHIPPED_RESOURCE)
-                : loader.getResource(SHIPPED_RESOURCE);
-        if (url == null) {
-            return null;
-        }
-        try {
-            java.net.URI uri = url.toURI();
-            if ("jar".equals(uri.getScheme())) {
-                java.nio.file.FileSystem fs;
-                try {
-                    fs = java.nio.file.FileSystems.newFileSystem(uri, Map.of());
-                } catch (java.nio.file.FileSystemAlreadyExistsException e) {
-                    fs = java.nio.file.FileSystems.getFileSystem(uri);
-                }
-                return fs.getPath("/" + SHIPPED_RESOURCE);
-            }
-            return Path.of(uri);
-        } catch (java.net.URISyntaxException | IOException | IllegalArgumentException e) {
-            return null;
-        }
+        return org.quire.engine.io.ResourceFolders.find(SHIPPED_RESOURCE);
     }
 
     /**
