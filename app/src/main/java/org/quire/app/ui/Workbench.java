@@ -28,6 +28,7 @@ public final class Workbench {
         installLookAndFeel(prefs.theme());
         EventQueue.invokeLater(() -> {
             WorkbenchFrame frame = new WorkbenchFrame(prefs, Engine.library(), MonteCarloRunners.installed());
+            frame.setIconImages(AppIcon.images());
             frame.showRestored();
             if (file == null) {
                 frame.openDemo();
