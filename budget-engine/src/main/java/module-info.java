@@ -22,6 +22,7 @@ module org.quire.engine {
     exports org.quire.engine.document;
     exports org.quire.engine.validate;
     exports org.quire.engine.io;
+    exports org.quire.engine.reference;
     exports org.quire.engine.csv;
     exports org.quire.engine.calibration;
 }

@@ -2,28 +2,27 @@ package org.quire.app.cli;
 
 import java.io.IOException;
 import java.io.PrintStream;
-import java.io.StringReader;
 import java.io.StringWriter;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.NoSuchFileException;
 import java.nio.file.Path;
 import java.util.ArrayList;
-import java.util.Arrays;
-import java.util.HashMap;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Set;
 import java.util.concurrent.atomic.AtomicInteger;
-import java.util.regex.Pattern;
 import java.util.stream.IntStream;
 import org.apache.commons.csv.CSVFormat;
-import org.apache.commons.csv.CSVParser;
 import org.apache.commons.csv.CSVPrinter;
-import org.apache.commons.csv.CSVRecord;
-import org.quire.app.Engine;
+import org.quire.app.common.Engine;
 import org.quire.engine.budget.Budget;
 import org.quire.engine.budget.EvaluationSettings;
+import org.quire.engine.csv.CsvException;
+import org.quire.engine.csv.CsvOptions;
+import org.quire.engine.csv.CsvReader;
+import org.quire.engine.csv.CsvRow;
+import org.quire.engine.csv.CsvTable;
 import org.quire.engine.montecarlo.BudgetSimulation;
 import org.quire.engine.montecarlo.CoverageInterval;
 import org.quire.engine.montecarlo.ProgressListener;
@@ -65,7 +64,6 @@ import picocli.CommandLine.Parameters;
 final class BatchCommand implements Callable<Integer> {
     /** Largest data file read. */
     static final long MAX_CSV_BYTES = 256L * 1024 * 1024;
-    private static final Pattern NUMBER = Pattern.compile("[-+]?(\\d+\\.?\\d*|\\.\\d+)([eE][-+]?\\d+)?");
 
     @ParentCommand
     QuireCommand quire;
@@ -92,7 +90,7 @@ final class BatchCommand implements Callable<Integer> {
     Options.Quiet quiet;
 
     /** One data row: where it is, its id and its cells by column. */
-    private record Row(long line, String id, Map<String, String> cells, String problem) {
+    private record Row(long line, String id, CsvRow cells) {
     }
 
     /** One row's result: the output cells, or the error. */
@@ -189,88 +187,61 @@ final class BatchCommand implements Callable<Integer> {
 
     private static List<Row> readRows(String name, Template template) throws UsageException, Files.FileProblem {
         Path p = Files.path(name);
-        String text;
+        CsvTable table;
         try {
-            if (java.nio.file.Files.size(p) > MAX_CSV_BYTES) {
-                throw new Files.FileProblem(name, "the file is larger than " + MAX_CSV_BYTES + " bytes");
-            }
-            text = java.nio.file.Files.readString(p, StandardCharsets.UTF_8);
+            table = CsvReader.read(p, CsvOptions.defaults().withMaxBytes(MAX_CSV_BYTES));
         } catch (NoSuchFileException e) {
             throw new UsageException("no such file: " + name);
-        } catch (java.nio.charset.MalformedInputException e) {
-            throw new Files.FileProblem(name, "the file is not UTF-8 text");
+        } catch (CsvException e) {
+            throw new Files.FileProblem(e);
         } catch (IOException e) {
             throw new Files.FileProblem(name, "cannot read the file: " + e.getMessage());
         }
-        if (text.startsWith("\ufeff")) {
-            text = text.substring(1);
-        }
-        int[] lineStarts = lineStarts(text);
-        CSVFormat format = CSVFormat.DEFAULT.builder().setHeader().setSkipHeaderRecord(true).setTrim(true)
-                .setIgnoreEmptyLines(true).get();
+        checkColumns(table, template);
         List<Row> rows = new ArrayList<>();
-        try (CSVParser parser = CSVParser.builder().setReader(new StringReader(text)).setFormat(format).get()) {
-            List<String> columns = parser.getHeaderNames();
-            checkColumns(name, columns, template);
-            for (CSVRecord r : parser) {
-                long line = lineOf(lineStarts, r.getCharacterPosition());
-                String id = r.isMapped("id") && r.isSet("id") ? r.get("id") : Long.toString(r.getRecordNumber());
-                if (!r.isConsistent()) {
-                    rows.add(new Row(line, id, Map.of(), "the row has " + r.size() + " cells, the header "
-                            + columns.size()));
-                    continue;
-                }
-                Map<String, String> cells = new HashMap<>();
-                for (String c : columns) {
-                    if (!c.equals("id")) {
-                        cells.put(c, r.get(c));
-                    }
-                }
-                rows.add(new Row(line, id, cells, null));
+        boolean hasId = table.hasColumn("id");
+        int n = 0;
+        for (CsvRow r : table.rows()) {
+            n++;
+            String id;
+            try {
+                id = hasId && !r.isBlank("id") ? r.text("id") : Integer.toString(n);
+            } catch (CsvException e) {
+                throw new Files.FileProblem(e);
             }
-        } catch (IOException | java.io.UncheckedIOException | IllegalArgumentException | IllegalStateException e) {
-            throw new Files.FileProblem(name, "not a readable CSV file: " + e.getMessage());
+            rows.add(new Row(r.line(), id, r));
         }
         return rows;
     }
 
-    private static void checkColumns(String name, List<String> columns, Template template)
-            throws Files.FileProblem {
+    private static void checkColumns(CsvTable table, Template template) throws Files.FileProblem {
         List<String> params = template.parameterNames();
-        for (String c : columns) {
-            if (!c.equals("id") && !params.contains(c)) {
-                throw new Files.FileProblem(name, "column '" + c + "' is not a parameter of template "
-                        + template.id() + "; its parameters are " + String.join(", ", params) + " (and 'id')");
-            }
-        }
+        List<String> columns = table.header();
+        List<String> required = new ArrayList<>();
         for (TemplateParameter tp : template.spec().parameters()) {
-            if (!tp.hasDefault() && !columns.contains(tp.name())) {
-                throw new Files.FileProblem(name, "parameter '" + tp.name() + "' has no default, so the file needs "
-                        + "a column '" + tp.name() + "'");
+            if (!tp.hasDefault()) {
+                required.add(tp.name());
             }
         }
-    }
-
-    private static int[] lineStarts(String text) {
-        int count = 1;
-        for (int i = 0; i < text.length(); i++) {
-            if (text.charAt(i) == '\n') {
-                count++;
+        try {
+            if (columns.size() == 1 && required.size() > 1) {
+                table.requireColumns(required.toArray(String[]::new));
             }
-        }
-        int[] starts = new int[count];
-        int k = 1;
-        for (int i = 0; i < text.length(); i++) {
-            if (text.charAt(i) == '\n') {
-                starts[k++] = i + 1;
+            for (int c = 0; c < columns.size(); c++) {
+                if (!columns.get(c).equals("id") && !params.contains(columns.get(c))) {
+                    throw table.headerProblem(c, "column '" + columns.get(c) + "' is not a parameter of template "
+                            + template.id() + "; its parameters are " + String.join(", ", params) + " (and 'id')");
+                }
             }
+            for (String r : required) {
+                if (!columns.contains(r)) {
+                    throw table.headerProblem(-1, "parameter '" + r + "' has no default, so the file needs a column '"
+                            + r + "'");
+                }
+            }
+        } catch (CsvException e) {
+            throw new Files.FileProblem(e);
         }
-        return starts;
-    }
-
-    private static long lineOf(int[] lineStarts, long position) {
-        int i = Arrays.binarySearch(lineStarts, (int) position);
-        return (i >= 0 ? i : -i - 2) + 1;
     }
 
     /**
@@ -278,20 +249,18 @@ final class BatchCommand implements Callable<Integer> {
      *     for the GUM only
      */
     private static Outcome evaluate(Template template, CompiledModel model, Row row, EvaluationSettings mc) {
-        if (row.problem() != null) {
-            return new Outcome(null, row.problem());
-        }
         Map<String, Double> values = new LinkedHashMap<>();
-        for (Map.Entry<String, String> c : row.cells().entrySet()) {
-            String v = c.getValue();
-            if (v.isEmpty()) {
-                continue;
+        List<String> header = row.cells().table().header();
+        for (int c = 0; c < header.size(); c++) {
+            String column = header.get(c);
+            try {
+                if (column.equals("id") || row.cells().isBlank(c)) {
+                    continue;
+                }
+                values.put(column, row.cells().number(c));
+            } catch (CsvException e) {
+                return new Outcome(null, "parameter '" + column + "': " + e.reason());
             }
-            if (!NUMBER.matcher(v).matches()) {
-                return new Outcome(null, "parameter '" + c.getKey() + "': '" + v + "' is not a number"
-                        + (v.matches("[-+]?\\d+,\\d+") ? " (use a point as the decimal separator)" : ""));
-            }
-            values.put(c.getKey(), Double.parseDouble(v));
         }
         try {
             Budget b = template.budgetFor(values);
@@ -307,14 +276,14 @@ final class BatchCommand implements Callable<Integer> {
                 }
             }
             if (mc != null) {
-                BudgetSimulation.Outcome m = BudgetSimulation.run(b, model, r,
+                org.quire.engine.montecarlo.MonteCarloOutcome m = BudgetSimulation.run(b, model, r,
                         BudgetSimulation.settings(mc, r).withThreads(1), ProgressListener.NONE);
                 int per = 7;
                 for (int k = 0; k < r.outputs().size(); k++) {
-                    CoverageInterval ci = m.result().output(k).shortestInterval();
+                    CoverageInterval ci = m.output(k).symmetricInterval();
                     cells.set(k * per + 4, EvaluateCommand.num(ci.lower()));
                     cells.set(k * per + 5, EvaluateCommand.num(ci.upper()));
-                    cells.set(k * per + 6, m.comparisons().get(k).confirmed() ? "confirmed" : "not confirmed");
+                    cells.set(k * per + 6, m.output(k).comparison().verdict().word());
                 }
             }
             return new Outcome(cells, null);

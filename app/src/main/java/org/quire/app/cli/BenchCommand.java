@@ -7,7 +7,7 @@ import java.nio.file.Path;
 import java.util.Arrays;
 import java.util.Locale;
 import java.util.Set;
-import org.quire.app.Engine;
+import org.quire.app.common.Engine;
 import org.quire.engine.budget.Budget;
 import org.quire.engine.gum.GumEvaluator;
 import org.quire.engine.gum.GumResult;
@@ -97,7 +97,8 @@ final class BenchCommand implements Callable<Integer> {
         double[] seconds = new double[(int) runs];
         for (int r = 0; r < runs; r++) {
             long t0 = System.nanoTime();
-            BudgetSimulation.Outcome o = BudgetSimulation.run(b, model, gum, base.withSeed(100 + r), ProgressListener.NONE);
+            org.quire.engine.montecarlo.MonteCarloOutcome o = BudgetSimulation.run(b, model, gum,
+                    base.withSeed(100 + r), ProgressListener.NONE);
             seconds[r] = (System.nanoTime() - t0) / 1e9;
             out.printf(Locale.ROOT, "run %d: %.3f s, u(E) = %.5g %%, u(q) = %.5g m^3/h%n", r + 1, seconds[r],
                     o.result().output(0).standardUncertainty(), o.result().output(1).standardUncertainty());

@@ -33,8 +33,10 @@ final class BudgetTableText {
                 s.append(String.format(Locale.ROOT, "  correlation term %s, %s (r = %s): %s to u_c^2%n", t.first(),
                         t.second(), g(t.r(), 3), g(t.variance(), 4)));
             }
-            if (o.higherOrderVariance() != 0) {
+            if (o.higherOrderTerms() == org.quire.engine.gum.HigherOrderTerms.INCLUDED) {
                 s.append(String.format(Locale.ROOT, "  higher-order terms: %s to u_c^2%n", g(o.higherOrderVariance(), 4)));
+            } else if (o.higherOrderTerms() == org.quire.engine.gum.HigherOrderTerms.NOT_INCLUDED) {
+                s.append("  higher-order terms: ").append(o.higherOrderTerms().text()).append('\n');
             }
             s.append(String.format(Locale.ROOT, "  estimate                          y = %s%s%n", g(o.estimate(), 12), unit));
             s.append(String.format(Locale.ROOT, "  combined standard uncertainty   u_c = %s%s%n", g(o.standardUncertainty(), 5), unit));

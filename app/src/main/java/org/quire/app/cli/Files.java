@@ -78,5 +78,10 @@ final class Files {
         FileProblem(String file, String message) {
             super(file + ": " + message);
         }
+
+        /** A CSV problem, whose message already names the file, line and column. */
+        FileProblem(org.quire.engine.csv.CsvException e) {
+            super(e.getMessage(), e);
+        }
     }
 }

@@ -2,13 +2,11 @@ package org.quire.app.cli;
 
 import java.io.IOException;
 import java.io.PrintStream;
-import java.io.Reader;
-import java.nio.charset.StandardCharsets;
 import java.nio.file.NoSuchFileException;
 import java.nio.file.Path;
 import java.util.Locale;
 import java.util.Set;
-import org.quire.engine.line.CalibrationCsv;
+import org.quire.engine.csv.CalibrationCsv;
 import org.quire.engine.line.CalibrationData;
 import org.quire.engine.line.CalibrationPoint;
 import org.quire.engine.line.LineEstimate;
@@ -124,14 +122,14 @@ final class FitCommand implements Callable<Integer> {
 
     private static CalibrationData load(String file) throws UsageException, Files.FileProblem {
         Path p = Files.path(file);
-        try (Reader r = java.nio.file.Files.newBufferedReader(p, StandardCharsets.UTF_8)) {
-            return CalibrationCsv.read(r, p.getFileName().toString(), "", "");
+        try {
+            return CalibrationCsv.read(p, "", "");
         } catch (NoSuchFileException e) {
             throw new UsageException("no such file: " + file);
-        } catch (IOException | java.io.UncheckedIOException e) {
+        } catch (org.quire.engine.csv.CsvException e) {
+            throw new Files.FileProblem(e);
+        } catch (IOException e) {
             throw new Files.FileProblem(file, "cannot read the file: " + e.getMessage());
-        } catch (IllegalArgumentException e) {
-            throw new Files.FileProblem(file, e.getMessage());
         }
     }
 

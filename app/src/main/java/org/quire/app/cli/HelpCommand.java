@@ -5,7 +5,7 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.concurrent.Callable;
-import org.quire.app.LanguageHelp;
+import org.quire.app.common.LanguageHelp;
 import org.quire.engine.model.LanguageReference;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Model.CommandSpec;

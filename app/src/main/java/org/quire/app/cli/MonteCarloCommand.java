@@ -4,8 +4,8 @@ import java.io.PrintStream;
 import java.util.Locale;
 import java.util.Set;
 import java.util.concurrent.Callable;
-import org.quire.app.Cautions;
-import org.quire.app.Engine;
+import org.quire.app.common.Cautions;
+import org.quire.app.common.Engine;
 import org.quire.engine.budget.Budget;
 import org.quire.engine.budget.EvaluationSettings;
 import org.quire.engine.gum.GumEvaluator;
@@ -15,9 +15,9 @@ import org.quire.engine.io.MonteCarloJson;
 import org.quire.engine.model.CompiledModel;
 import org.quire.engine.montecarlo.BudgetSimulation;
 import org.quire.engine.montecarlo.GumComparison;
+import org.quire.engine.montecarlo.MonteCarloOutcome;
 import org.quire.engine.montecarlo.MonteCarloResult;
 import org.quire.engine.montecarlo.MonteCarloSettings;
-import org.quire.engine.montecarlo.OutputSummary;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
@@ -82,7 +82,7 @@ final class MonteCarloCommand implements Callable<Integer> {
         }
         MonteCarloSettings ms = BudgetSimulation.settings(b.settings(), gum).withThreads(threadCount);
         ProgressLine progress = ProgressLine.forTerminal(quire.err, "Monte Carlo", "trials", quiet.quiet);
-        BudgetSimulation.Outcome o;
+        MonteCarloOutcome o;
         try {
             o = BudgetSimulation.run(b, model, gum, ms, progress);
         } finally {
@@ -98,7 +98,7 @@ final class MonteCarloCommand implements Callable<Integer> {
         return 0;
     }
 
-    static String text(String title, BudgetSimulation.Outcome o) {
+    static String text(String title, MonteCarloOutcome o) {
         MonteCarloResult r = o.result();
         StringBuilder s = new StringBuilder();
         s.append("Budget: ").append(title).append('\n');
@@ -106,25 +106,24 @@ final class MonteCarloCommand implements Callable<Integer> {
                 r.trials(), r.seed(), BudgetTableText.g(100 * r.coverageProbability(), 4),
                 r.settings().adaptive() ? ", adaptive: " + r.adaptiveRuns() + " runs"
                         + (r.stabilized() ? ", stabilized" : ", NOT stabilized") : ""));
-        for (int k = 0; k < r.outputCount(); k++) {
-            OutputSummary m = r.output(k);
-            GumComparison c = o.comparisons().get(k);
-            s.append('\n').append("Output ").append(o.outputNames().get(k)).append('\n');
-            s.append(String.format(Locale.ROOT, "  mean                     %s%n", BudgetTableText.g(m.mean(), 10)));
-            s.append(String.format(Locale.ROOT, "  standard uncertainty     %s%n", BudgetTableText.g(m.standardUncertainty(), 5)));
+        for (MonteCarloOutcome.Output m : o.outputs()) {
+            GumComparison c = m.comparison();
+            String unit = m.unit().isEmpty() ? "" : " " + m.unit();
+            s.append('\n').append("Output ").append(m.name()).append(unit.isEmpty() ? "" : " /" + unit).append('\n');
+            s.append(String.format(Locale.ROOT, "  mean                     %s%n", BudgetTableText.g(m.estimate(), 10)));
+            s.append(String.format(Locale.ROOT, "  standard uncertainty     %s%n", m.hasStandardUncertainty()
+                    ? BudgetTableText.g(m.standardUncertainty(), 5) : "not defined"));
             s.append(String.format(Locale.ROOT, "  symmetric interval       [%s, %s]%n",
                     BudgetTableText.g(m.symmetricInterval().lower(), 8), BudgetTableText.g(m.symmetricInterval().upper(), 8)));
             s.append(String.format(Locale.ROOT, "  shortest interval        [%s, %s]%n",
                     BudgetTableText.g(m.shortestInterval().lower(), 8), BudgetTableText.g(m.shortestInterval().upper(), 8)));
             s.append(String.format(Locale.ROOT, "  GUM interval             [%s, %s]%n",
-                    BudgetTableText.g(c.gumInterval()[0], 8), BudgetTableText.g(c.gumInterval()[1], 8)));
-            s.append(String.format(Locale.ROOT, "  comparison (JCGM 101 clause 8): delta = %s, d_low = %s, d_high = %s: %s%n",
-                    BudgetTableText.g(c.tolerance(), 2), BudgetTableText.g(c.lowerDifference(), 3),
-                    BudgetTableText.g(c.upperDifference(), 3),
-                    c.confirmed() ? "GUM result confirmed" : "GUM result NOT confirmed; report the Monte Carlo result"));
-            m.exclusionNote().ifPresent(n -> s.append("  note: ").append(n).append('\n'));
+                    BudgetTableText.g(m.gumInterval().lower(), 8), BudgetTableText.g(m.gumInterval().upper(), 8)));
+            s.append(String.format(Locale.ROOT, "  comparison (JCGM 101 clause 8): %s%n", c.verdict().word()));
+            s.append("  ").append(c.reason()).append('\n');
+            m.summary().exclusionNote().ifPresent(n -> s.append("  note: ").append(n).append('\n'));
         }
-        for (String n : r.notes()) {
+        for (String n : o.notes()) {
             s.append("note: ").append(n).append('\n');
         }
         return s.toString();

@@ -8,9 +8,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 import java.util.Set;
-import org.quire.app.Engine;
-import org.quire.app.report.MonteCarloReport;
-import org.quire.app.report.MonteCarloSummary;
+import org.quire.app.common.Engine;
 import org.quire.app.review.ChecklistText;
 import org.quire.app.review.DecisionRecorder;
 import org.quire.app.review.DocumentDecisionRecorder;
@@ -194,11 +192,11 @@ final class ReviewCommand implements Callable<Integer> {
     }
 
     /** Runs the Monte Carlo method with the budget's settings and --trials / --seed. */
-    static MonteCarloSummary monteCarlo(Options.Trials trials, String file, Budget b, CompiledModel model,
-            GumResult gum) throws Exception {
+    static org.quire.engine.montecarlo.MonteCarloOutcome monteCarlo(Options.Trials trials, String file, Budget b,
+            CompiledModel model, GumResult gum) throws Exception {
         Budget run = b.withSettings(trials.apply(b.settings()));
         try {
-            return MonteCarloReport.run(run, model, gum, BudgetSimulation.settings(run.settings(), gum)
+            return BudgetSimulation.run(run, model, gum, BudgetSimulation.settings(run.settings(), gum)
                     .withThreads(Runtime.getRuntime().availableProcessors()), ProgressListener.NONE);
         } catch (org.quire.engine.model.ModelException e) {
             throw Files.modelProblem(file, e);

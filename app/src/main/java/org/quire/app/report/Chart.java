@@ -8,7 +8,7 @@ import java.util.Objects;
  *
  * <p>Implementations are immutable and thread-safe.
  */
-public sealed interface Chart permits Chart.Bars, Chart.Histogram, Chart.Plot {
+public sealed interface Chart permits Chart.Bars, Chart.Histogram, Chart.Plot, Chart.Ranking {
 
     /** @return the caption shown under the chart */
     String caption();
@@ -235,5 +235,56 @@ public sealed interface Chart permits Chart.Bars, Chart.Histogram, Chart.Plot {
         @Override public double[] edges() { return edges.clone(); }
         @Override public long[] counts() { return counts.clone(); }
         @Override public double[] markers() { return markers.clone(); }
+    }
+
+    /**
+     * The ranking of an output's contributions: the inputs' contributions u_i(y) (JCGM 100:2008 5.1.3, eq. 11b) as
+     * bars, largest first, with the cumulative share of the combined variance u_c^2(y) (the sum of the engine's
+     * shares u_i^2(y)/u_c^2(y), largest first) as a line on a second axis; the workbench draws the same chart.
+     * Correlation terms are not an input's and so are not in the ranking.
+     *
+     * @param caption the caption
+     * @param axisLabel what the bars are, with the unit, e.g. "u_i(y) (%)"
+     * @param labels the inputs, largest contribution first
+     * @param contributions u_i(y), parallel to {@code labels}
+     * @param cumulativeShare the cumulative share in percent after each input, parallel to {@code labels}
+     */
+    record Ranking(String caption, String axisLabel, List<MathText> labels, List<Double> contributions,
+            List<Double> cumulativeShare) implements Chart {
+        public Ranking {
+            Objects.requireNonNull(caption, "caption");
+            Objects.requireNonNull(axisLabel, "axisLabel");
+            labels = List.copyOf(labels);
+            contributions = List.copyOf(contributions);
+            cumulativeShare = List.copyOf(cumulativeShare);
+            if (labels.size() != contributions.size() || labels.size() != cumulativeShare.size()) {
+                throw new IllegalArgumentException("a ranking needs one contribution and one cumulative share per "
+                        + "label: " + labels.size() + " labels, " + contributions.size() + " contributions, "
+                        + cumulativeShare.size() + " shares");
+            }
+        }
+
+        /**
+         * @param o the output's GUM result
+         * @param caption the caption
+         * @return the ranking of its inputs with a non-zero contribution
+         */
+        public static Ranking of(org.quire.engine.gum.OutputResult o, String caption) {
+            List<org.quire.engine.gum.Contribution> sorted = o.contributions().stream().filter(c -> c.contribution() > 0)
+                    .sorted(java.util.Comparator.comparingDouble(org.quire.engine.gum.Contribution::contribution)
+                            .reversed()).toList();
+            List<MathText> labels = new java.util.ArrayList<>();
+            List<Double> values = new java.util.ArrayList<>();
+            List<Double> cumulative = new java.util.ArrayList<>();
+            double sum = 0;
+            for (org.quire.engine.gum.Contribution c : sorted) {
+                labels.add(Typesetter.name(c.input()));
+                values.add(c.contribution());
+                sum += c.share();
+                cumulative.add(100 * sum);
+            }
+            String unit = o.unit() == null || o.unit().isBlank() ? "" : " (" + o.unit().strip().replace(' ', '*') + ")";
+            return new Ranking(caption, "u_i(y)" + unit, labels, values, cumulative);
+        }
     }
 }

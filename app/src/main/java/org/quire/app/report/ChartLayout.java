@@ -14,47 +14,51 @@ import org.quire.engine.gum.Figures;
  *
  * <p>Stateless and thread-safe.
  */
-final class ChartLayout {
-    static final float WIDTH = 480f;
+public final class ChartLayout {
+    public static final float WIDTH = 480f;
     static final float FONT = 7.5f;
-    static final int BAR = 0x2f5d8a;
-    static final int GRID = 0xd5dae1;
-    static final int AXIS = 0x5a6472;
-    static final int MARK = 0xb3261e;
-    static final int TEXT = 0x1d2430;
+    public static final int BAR = 0x2f5d8a;
+    public static final int GRID = 0xd5dae1;
+    public static final int AXIS = 0x5a6472;
+    public static final int MARK = 0xb3261e;
+    public static final int TEXT = 0x1d2430;
 
-    enum Anchor { START, MIDDLE, END }
+    public enum Anchor { START, MIDDLE, END }
 
-    sealed interface Shape permits Rect, Line, Label {
+    public sealed interface Shape permits Rect, Line, Label {
     }
 
-    record Rect(float x, float y, float w, float h, int rgb) implements Shape {
+    public record Rect(float x, float y, float w, float h, int rgb) implements Shape {
     }
 
-    record Line(float x1, float y1, float x2, float y2, int rgb, float width, boolean dashed) implements Shape {
+    public record Line(float x1, float y1, float x2, float y2, int rgb, float width, boolean dashed) implements Shape {
     }
 
-    record Label(float x, float y, MathText text, float size, Anchor anchor, int rgb) implements Shape {
+    public record Label(float x, float y, MathText text, float size, Anchor anchor, int rgb) implements Shape {
     }
 
-    record Layout(float width, float height, List<Shape> shapes) {
+    public record Layout(float width, float height, List<Shape> shapes) {
     }
 
     private ChartLayout() {
     }
 
-    static Layout of(Chart c) {
+    /** @return the shapes of a chart, in points from the top left */
+    public static Layout of(Chart c) {
         if (c instanceof Chart.Bars) {
             return bars((Chart.Bars) c);
         }
         if (c instanceof Chart.Plot) {
             return plot((Chart.Plot) c);
         }
+        if (c instanceof Chart.Ranking) {
+            return ranking((Chart.Ranking) c);
+        }
         return histogram((Chart.Histogram) c);
     }
 
     /** @return a rough width of {@code t} in points at {@code size}, for laying out label columns */
-    static float estimateWidth(MathText t, float size) {
+    public static float estimateWidth(MathText t, float size) {
         float w = 0;
         for (MathText.Run r : t.runs()) {
             float s = r.shift() == MathText.Shift.BASE ? size : size * 0.7f;
@@ -97,6 +101,71 @@ final class ChartLayout {
         s.add(new Line(x0, top - 2, x0, plotBottom, AXIS, 0.8f, false));
         s.add(new Label((x0 + x1) / 2, plotBottom + 22f, Typesetter.labelWithUnit(c.axisLabel()), FONT + 0.5f, Anchor.MIDDLE, AXIS));
         return new Layout(WIDTH, plotBottom + 28f, s);
+    }
+
+    /**
+     * Bars of u_i(y) against the lower axis, the cumulative share of u_c^2(y) as a line with points against the
+     * upper axis (0 to 100 %), the inputs' names on the left, both axis titles and a legend.
+     */
+    private static Layout ranking(Chart.Ranking c) {
+        List<Shape> s = new ArrayList<>();
+        float row = 15f;
+        float top = 30f;
+        float labelWidth = 30f;
+        for (MathText l : c.labels()) {
+            labelWidth = Math.max(labelWidth, estimateWidth(l, FONT + 1) + 10f);
+        }
+        float x0 = Math.min(labelWidth, 150f);
+        float x1 = WIDTH - 20f;
+        double max = 0;
+        for (double v : c.contributions()) {
+            max = Math.max(max, v);
+        }
+        int n = c.labels().size();
+        float bottom = top + row * Math.max(1, n);
+        double[] ticks = ticks(0, max > 0 ? max : 1, 5);
+        double end = ticks[ticks.length - 1];
+        for (double t : ticks) {
+            float x = (float) (x0 + (x1 - x0) * t / end);
+            s.add(new Line(x, top, x, bottom, GRID, 0.5f, false));
+            s.add(new Line(x, bottom, x, bottom + 3f, AXIS, 0.8f, false));
+            s.add(new Label(x, bottom + 11f, MathText.upright(tick(t, ticks)), FONT, Anchor.MIDDLE, AXIS));
+        }
+        double[] pct = {0, 20, 40, 60, 80, 100};
+        for (double t : pct) {
+            float x = (float) (x0 + (x1 - x0) * t / 100);
+            s.add(new Line(x, top - 3f, x, top, MARK, 0.8f, false));
+            s.add(new Label(x, top - 5f, MathText.upright(tick(t, pct)), FONT, Anchor.MIDDLE, MARK));
+        }
+        for (int i = 0; i < n; i++) {
+            float y = top + row * i;
+            double v = c.contributions().get(i);
+            float w = (float) ((x1 - x0) * v / end);
+            s.add(new Rect(x0, y + 2.5f, Math.max(w, 0.5f), row - 5f, BAR));
+            s.add(new Label(x0 - 5f, y + row - 4.5f, c.labels().get(i), FONT + 1, Anchor.END, TEXT));
+        }
+        float px = 0;
+        float py = 0;
+        for (int i = 0; i < n; i++) {
+            float x = (float) (x0 + (x1 - x0) * Math.min(100, c.cumulativeShare().get(i)) / 100);
+            float y = top + row * i + row / 2;
+            if (i > 0) {
+                s.add(new Line(px, py, x, y, MARK, 1.2f, false));
+            }
+            s.add(new Rect(x - 2f, y - 2f, 4f, 4f, MARK));
+            px = x;
+            py = y;
+        }
+        s.add(new Line(x0, top, x0, bottom, AXIS, 0.8f, false));
+        s.add(new Line(x0, bottom, x1, bottom, AXIS, 0.8f, false));
+        s.add(new Line(x0, top, x1, top, MARK, 0.8f, false));
+        s.add(new Label((x0 + x1) / 2, top - 16f, Typesetter.labelWithUnit("cumulative share of u_c^2(y) (%)"),
+                FONT + 0.5f, Anchor.MIDDLE, MARK));
+        s.add(new Label((x0 + x1) / 2, bottom + 24f, Typesetter.labelWithUnit(c.axisLabel()), FONT + 0.5f,
+                Anchor.MIDDLE, AXIS));
+        float endY = legend(s, List.of(new Entry("contribution u_i(y)", BAR, false, true),
+                new Entry("cumulative share of u_c^2(y)", MARK, false, false)), x0, x1, bottom + 38f);
+        return new Layout(WIDTH, endY + 7f, s);
     }
 
     static int rgb(Chart.Tone t) {

@@ -3,8 +3,8 @@ package org.quire.app.report;
 import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.List;
-import org.quire.app.Cautions;
-import org.quire.app.Engine;
+import org.quire.app.common.Cautions;
+import org.quire.app.common.Engine;
 import org.quire.app.report.ReportModel.Block;
 import org.quire.app.report.ReportModel.ChartBlock;
 import org.quire.app.report.ReportModel.Equations;
@@ -28,6 +28,9 @@ import org.quire.engine.gum.GumResult;
 import org.quire.engine.gum.OutputResult;
 import org.quire.engine.gum.Rounding;
 import org.quire.engine.io.EngineVersion;
+import org.quire.engine.montecarlo.CoverageInterval;
+import org.quire.engine.montecarlo.GumComparison;
+import org.quire.engine.montecarlo.MonteCarloOutcome;
 import org.quire.engine.model.CompiledModel;
 import org.quire.engine.model.Formula;
 import org.quire.engine.units.Units;
@@ -221,24 +224,20 @@ public final class ReportBuilder {
                     Column.of("r(x_i, x_j)", "r", Align.RIGHT, 1f),
                     Column.of("term in u_c^2(y)", "variance", Align.RIGHT, 1.5f)), terms)));
         }
-        if (o.higherOrderVariance() != 0) {
+        if (o.higherOrderTerms() == org.quire.engine.gum.HigherOrderTerms.INCLUDED) {
             blocks.add(new Paragraph("Higher-order terms (JCGM 100:2008 5.1.2, note) add "
                     + Figures.sig(o.higherOrderVariance(), 3) + (unit.isEmpty() ? "" : " (" + Units.display(unit) + ")²")
                     + " to the combined variance of " + y.plain() + "."));
+        } else if (o.higherOrderTerms() == org.quire.engine.gum.HigherOrderTerms.NOT_INCLUDED) {
+            blocks.add(new Paragraph("Higher-order terms (JCGM 100:2008 5.1.2, note) were asked for but are "
+                    + o.higherOrderTerms().text() + "; u_c(" + y.plain() + ") is the first-order result."));
         }
-        List<MathText> labels = new ArrayList<>();
-        List<Double> values = new ArrayList<>();
-        o.contributions().stream().filter(c -> c.share() > 0)
-                .sorted(Comparator.comparingDouble(Contribution::share).reversed())
-                .forEach(c -> {
-                    labels.add(Typesetter.name(c.input()));
-                    values.add(100 * c.share());
-                });
-        if (!labels.isEmpty()) {
-            blocks.add(new ChartBlock(new Chart.Bars("Share of each input in the combined variance of "
-                    + y.plain() + (o.correlationTerms().isEmpty() ? "" : "; the correlation terms are not shown"
-                    + (o.correlationVariance() < 0 ? ", and as they are negative the shares add up to more than 100 %" : "")),
-                    "share of u_c^2 (%)", labels, values)));
+        Chart.Ranking ranking = Chart.Ranking.of(o, "Contributions u_i(y) to the standard uncertainty of " + y.plain()
+                + ", largest first, with the cumulative share of the combined variance"
+                + (o.correlationTerms().isEmpty() ? "" : "; the correlation terms are not shown"
+                + (o.correlationVariance() < 0 ? ", and as they are negative the shares add up to more than 100 %" : "")));
+        if (!ranking.labels().isEmpty()) {
+            blocks.add(new ChartBlock(ranking));
         }
         double big = o.expandedUncertainty();
         String ru = Rounding.uncertainty(o.standardUncertainty(), digits).toPlainString();
@@ -342,7 +341,7 @@ public final class ReportBuilder {
                 "Correlation coefficients of the outputs (JCGM 102:2011 6.2.1.3)", cols, rows))));
     }
 
-    private static Part monteCarlo(MonteCarloSummary mc) {
+    private static Part monteCarlo(MonteCarloOutcome mc) {
         List<Block> blocks = new ArrayList<>();
         if (mc == null) {
             blocks.add(new Paragraph("The Monte Carlo method (JCGM 101:2008) was not run for this report, so the GUM "
@@ -352,58 +351,31 @@ public final class ReportBuilder {
         blocks.add(new Paragraph("Propagation of distributions with " + Figures.count(mc.trials()) + " trials"
                 + (mc.adaptive() ? " (number chosen by the adaptive procedure, JCGM 101:2008 7.9)" : "")
                 + ", seed " + mc.seed() + "."));
-        if (!mc.outputs().isEmpty() && mc.outputs().stream().allMatch(MonteCarloSummary.Output::complete)) {
-            monteCarloComplete(mc, blocks);
-            return new Part("Monte Carlo method", blocks);
-        }
-        List<List<Cell>> rows = new ArrayList<>();
-        for (MonteCarloSummary.Output o : mc.outputs()) {
-            rows.add(List.of(Cell.math(Typesetter.name(o.name())), Cell.number(Figures.compact(o.estimate(), 8), o.estimate()),
-                    Cell.number(Figures.sig(o.standardUncertainty(), 3), o.standardUncertainty()),
-                    Cell.number(Figures.compact(o.low(), 6), o.low()), Cell.number(Figures.compact(o.high(), 6), o.high()),
-                    Cell.number(Figures.probability(o.coverageProbability()), 100 * o.coverageProbability()),
-                    Cell.text(o.shortest() ? "shortest" : "symmetric"),
-                    Cell.text((o.agreesWithGum() ? "yes" : "no") + (o.comparison().isEmpty() ? "" : ": " + o.comparison()))));
-        }
-        blocks.add(new TableBlock(new Table("monte-carlo", "Monte Carlo results and comparison with the GUM "
-                + "(JCGM 101:2008 7.6, 7.7, 8)", List.of(
-                Column.of("Y", "output", Align.LEFT, 0.8f),
-                Column.of("y", "estimate", Align.RIGHT, 1.4f),
-                Column.of("u(y)", "standard_uncertainty", Align.RIGHT, 1.1f),
-                Column.of("y_{low}", "low", Align.RIGHT, 1.2f),
-                Column.of("y_{high}", "high", Align.RIGHT, 1.2f),
-                Column.of("p (%)", "coverage_percent", Align.RIGHT, 0.7f),
-                Column.of("Interval", "interval", Align.LEFT, 1f),
-                Column.of("GUM validated", "gum_validated", Align.LEFT, 2.4f)), rows)));
-        for (MonteCarloSummary.Output o : mc.outputs()) {
-            if (o.histogram() != null) {
-                blocks.add(new ChartBlock(o.histogram()));
-            }
-        }
-        return new Part("Monte Carlo method", blocks);
-    }
-
-    /** Both coverage intervals, the clause-8 comparison with its verdict, and the histograms. */
-    private static void monteCarloComplete(MonteCarloSummary mc, List<Block> blocks) {
         List<List<Cell>> rows = new ArrayList<>();
         List<List<Cell>> cmp = new ArrayList<>();
-        for (MonteCarloSummary.Output o : mc.outputs()) {
+        for (MonteCarloOutcome.Output o : mc.outputs()) {
             MathText y = Typesetter.name(o.name());
-            int d = decimals(o.standardUncertainty());
+            GumComparison c = o.comparison();
+            double uForDigits = o.hasStandardUncertainty() ? o.standardUncertainty() : c.gumStandardUncertainty();
+            int d = decimals(uForDigits);
+            CoverageInterval sym = o.symmetricInterval();
+            CoverageInterval sho = o.shortestInterval();
+            CoverageInterval gum = o.gumInterval();
             rows.add(List.of(Cell.math(y), Cell.number(fixed(o.estimate(), d), o.estimate()),
-                    Cell.number(Figures.sig(o.standardUncertainty(), 3), o.standardUncertainty()),
-                    Cell.number(fixed(o.symmetricLow(), d), o.symmetricLow()),
-                    Cell.number(fixed(o.symmetricHigh(), d), o.symmetricHigh()),
-                    Cell.number(fixed(o.shortestLow(), d), o.shortestLow()),
-                    Cell.number(fixed(o.shortestHigh(), d), o.shortestHigh()),
-                    Cell.number(Figures.probability(o.coverageProbability()), 100 * o.coverageProbability()),
+                    o.hasStandardUncertainty()
+                            ? Cell.number(Figures.sig(o.standardUncertainty(), 3), o.standardUncertainty())
+                            : Cell.text("not defined"),
+                    Cell.number(fixed(sym.lower(), d), sym.lower()), Cell.number(fixed(sym.upper(), d), sym.upper()),
+                    Cell.number(fixed(sho.lower(), d), sho.lower()), Cell.number(fixed(sho.upper(), d), sho.upper()),
+                    Cell.number(Figures.probability(sym.probability()), 100 * sym.probability()),
                     Cell.unit(o.unit())));
-            cmp.add(List.of(Cell.math(y), Cell.number(fixed(o.gumLow(), d), o.gumLow()),
-                    Cell.number(fixed(o.gumHigh(), d), o.gumHigh()),
-                    Cell.number(Figures.compact(o.tolerance(), 1), o.tolerance()),
-                    Cell.number(Figures.sig(o.lowerDifference(), 2), o.lowerDifference()),
-                    Cell.number(Figures.sig(o.upperDifference(), 2), o.upperDifference()),
-                    Cell.text(o.agreesWithGum() ? "confirmed" : "not confirmed")));
+            cmp.add(List.of(Cell.math(y), Cell.number(fixed(gum.lower(), d), gum.lower()),
+                    Cell.number(fixed(gum.upper(), d), gum.upper()),
+                    Double.isNaN(c.tolerance()) ? Cell.text("–")
+                            : Cell.number(Figures.compact(c.tolerance(), 1), c.tolerance()),
+                    Cell.number(Figures.sig(c.lowerDifference(), 2), c.lowerDifference()),
+                    Cell.number(Figures.sig(c.upperDifference(), 2), c.upperDifference()),
+                    Cell.text(c.verdict().word())));
         }
         blocks.add(new TableBlock(new Table("monte-carlo", "Monte Carlo estimate, standard uncertainty and coverage "
                 + "intervals (JCGM 101:2008 7.6, 7.7.1 probabilistically symmetric, 7.7.2 shortest)", List.of(
@@ -426,19 +398,21 @@ public final class ReportBuilder {
                 Column.of("d_{low}", "d_low", Align.RIGHT, 0.9f),
                 Column.of("d_{high}", "d_high", Align.RIGHT, 0.9f),
                 Column.of("GUM result", "verdict", Align.LEFT, 1.3f)), cmp)));
-        for (MonteCarloSummary.Output o : mc.outputs()) {
+        for (MonteCarloOutcome.Output o : mc.outputs()) {
             String y = Typesetter.name(o.name()).plain();
-            blocks.add(new Paragraph(o.agreesWithGum()
-                    ? "For " + y + " both ends of the GUM interval lie within δ of the Monte Carlo interval: the GUM "
-                            + "result is confirmed (JCGM 101:2008 8.2) and may be reported."
-                    : "For " + y + " an end of the GUM interval differs from the Monte Carlo interval by more than δ: "
-                            + "the GUM result is not confirmed (JCGM 101:2008 8.2); report the Monte Carlo result."));
+            String reason = o.comparison().reason();
+            blocks.add(new Paragraph("For " + y + ": " + reason + "."));
         }
-        for (MonteCarloSummary.Output o : mc.outputs()) {
-            if (o.histogram() != null) {
-                blocks.add(new ChartBlock(o.histogram()));
+        for (String n : mc.notes()) {
+            blocks.add(new Paragraph("Note: " + n + "."));
+        }
+        for (MonteCarloOutcome.Output o : mc.outputs()) {
+            Chart.Histogram h = MonteCarloReport.histogram(o);
+            if (h != null) {
+                blocks.add(new ChartBlock(h));
             }
         }
+        return new Part("Monte Carlo method", blocks);
     }
 
     /** @return the decimals that show two digits beyond the first significant digit of {@code u} */

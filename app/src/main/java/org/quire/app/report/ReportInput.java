@@ -5,23 +5,24 @@ import java.util.List;
 import java.util.Objects;
 import org.quire.engine.budget.Budget;
 import org.quire.engine.gum.GumResult;
+import org.quire.engine.montecarlo.MonteCarloOutcome;
 
 /**
  * Everything a report is built from: the budget, its GUM evaluation, the document facts, and what other parts
- * of Quire contribute when they have run: the Monte Carlo summary and further sections (calibration line and
+ * of Quire contribute when they have run: the engine's Monte Carlo outcome and further sections (calibration line and
  * conformity, flow-range table, comparison with another budget).
  *
  * @param budget the budget
  * @param gum its GUM evaluation
  * @param document header facts and revision history
- * @param monteCarlo the Monte Carlo summary, or null when the method was not run
+ * @param monteCarlo the engine's Monte Carlo outcome, or null when the method was not run
  * @param sections further sections, in the order they are to appear
  * @param authorNotes whether the inputs' notes (the author's guidance, a template's instructions) are added as an
  *     appendix; they are never in the report's body
  *
  * <p>Immutable and thread-safe.
  */
-public record ReportInput(Budget budget, GumResult gum, DocumentInfo document, MonteCarloSummary monteCarlo,
+public record ReportInput(Budget budget, GumResult gum, DocumentInfo document, MonteCarloOutcome monteCarlo,
         List<ReportSection> sections, boolean authorNotes) {
     public ReportInput {
         Objects.requireNonNull(budget, "budget");
@@ -34,7 +35,7 @@ public record ReportInput(Budget budget, GumResult gum, DocumentInfo document, M
         return new ReportInput(budget, gum, document, null, List.of(), false);
     }
 
-    public ReportInput withMonteCarlo(MonteCarloSummary mc) {
+    public ReportInput withMonteCarlo(MonteCarloOutcome mc) {
         return new ReportInput(budget, gum, document, mc, sections, authorNotes);
     }
 

@@ -5,7 +5,6 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 import java.util.regex.Pattern;
-import org.quire.app.report.MonteCarloSummary;
 import org.quire.app.report.ReportBuilder;
 import org.quire.engine.budget.Budget;
 import org.quire.engine.budget.Correlation;
@@ -177,7 +176,7 @@ public final class Checklist {
         return Pattern.compile("(?<![\\p{L}\\p{N}_])" + Pattern.quote(name) + "(?![\\p{L}\\p{N}_])").matcher(text).find();
     }
 
-    private static CheckItem monteCarlo(GumResult gum, MonteCarloSummary mc) {
+    private static CheckItem monteCarlo(GumResult gum, org.quire.engine.montecarlo.MonteCarloOutcome mc) {
         String title = "The Monte Carlo result agrees with the GUM result";
         String ref = "JCGM 101:2008 8";
         if (mc == null) {
@@ -187,15 +186,14 @@ public final class Checklist {
         List<String> details = new ArrayList<>();
         boolean all = true;
         for (OutputResult o : gum.outputs()) {
-            MonteCarloSummary.Output m = mc.output(o.name());
-            if (m == null) {
+            var m = mc.output(o.name());
+            if (m.isEmpty()) {
                 all = false;
                 details.add(o.name() + ": no Monte Carlo result");
                 continue;
             }
-            all &= m.agreesWithGum();
-            details.add(o.name() + ": " + (m.agreesWithGum() ? "agrees" : "does not agree")
-                    + (m.comparison().isEmpty() ? "" : " (" + m.comparison() + ")"));
+            all &= m.get().comparison().validated();
+            details.add(o.name() + ": " + m.get().comparison().reason());
         }
         return new CheckItem("monte-carlo", title, ref, all ? Outcome.MET : Outcome.NOT_MET, details, List.of());
     }

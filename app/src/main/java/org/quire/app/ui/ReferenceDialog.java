@@ -7,7 +7,7 @@ import javax.swing.JDialog;
 import javax.swing.JScrollPane;
 import javax.swing.JTabbedPane;
 import javax.swing.JTextArea;
-import org.quire.app.LanguageHelp;
+import org.quire.app.common.LanguageHelp;
 
 /**
  * Help &gt; Model language reference: the model language, the units and the functions, with the cautions; the

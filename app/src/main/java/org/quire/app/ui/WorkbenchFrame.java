@@ -1,5 +1,7 @@
 package org.quire.app.ui;
 
+import org.quire.app.ui.common.WorkbenchPrefs;
+import org.quire.app.ui.common.Colors;
 import java.awt.BorderLayout;
 import java.awt.CardLayout;
 import java.awt.Dimension;
@@ -63,7 +65,7 @@ public final class WorkbenchFrame extends JFrame {
 
     private final WorkbenchPrefs prefs;
     private final FunctionLibrary library;
-    private final Optional<MonteCarloRunner> runner;
+    private final MonteCarloRunner runner;
     private final JTabbedPane tabs = new JTabbedPane();
     private final CardLayout inspectorCards = new CardLayout();
     private final JPanel inspectors = new JPanel(inspectorCards);
@@ -76,7 +78,7 @@ public final class WorkbenchFrame extends JFrame {
     private final RecoveryKeeper recovery;
     private BiConsumer<String, Boolean> statusHook = (m, e) -> { };
 
-    public WorkbenchFrame(WorkbenchPrefs prefs, FunctionLibrary library, Optional<MonteCarloRunner> runner) {
+    public WorkbenchFrame(WorkbenchPrefs prefs, FunctionLibrary library, MonteCarloRunner runner) {
         super("Quire");
         this.prefs = prefs;
         this.library = library;
@@ -104,6 +106,7 @@ public final class WorkbenchFrame extends JFrame {
         getContentPane().add(status, BorderLayout.SOUTH);
         actions = new WorkbenchActions(this);
         setJMenuBar(actions.menuBar());
+        KeyBindings.yieldToMenu(getJMenuBar());
         setTransferHandler(new FileDropHandler(this::dropped));
         addWindowListener(new WindowAdapter() {
             @Override
@@ -206,13 +209,14 @@ public final class WorkbenchFrame extends JFrame {
             return false;
         }
         try {
-            double[] r = org.quire.engine.io.ReadingsCsv.read(file);
+            double[] r = org.quire.engine.csv.CsvReadings.read(file, org.quire.engine.csv.CsvOptions.defaults());
             org.quire.engine.budget.TypeA a = org.quire.engine.budget.TypeA.ofReadings(r);
             ed.get().edit("Import readings into " + name, "", b -> b.withInput(name,
                     b.input(name).withEvaluation(a)));
             return true;
         } catch (IOException | BudgetFormatException | IllegalArgumentException e) {
-            showError("Cannot import readings", file + ":\n" + e.getMessage());
+            showError("Cannot import readings", e instanceof org.quire.engine.csv.CsvException ? e.getMessage()
+                    : file + ":\n" + e.getMessage());
             return false;
         }
     }
@@ -532,11 +536,12 @@ public final class WorkbenchFrame extends JFrame {
             return;
         }
         GumResult gum = ed.latest().result();
+        org.quire.engine.montecarlo.MonteCarloOutcome mc = ed.monteCarloOutcome(content.budget());
         status("Writing the report to " + target + "\u2026", false);
         new SwingWorker<Void, Void>() {
             @Override
             protected Void doInBackground() throws Exception {
-                ReportExport.write(content, gum, target, LocalDate.now());
+                ReportExport.write(content, gum, mc, target, LocalDate.now());
                 return null;
             }
 

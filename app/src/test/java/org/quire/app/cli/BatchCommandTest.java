@@ -44,7 +44,7 @@ class BatchCommandTest {
         assertEquals(1, run(err, "batch", TEMPLATE.toString(), data.toString(), "-o", out.toString()));
         String messages = err.toString(StandardCharsets.UTF_8);
         assertTrue(messages.contains("runs.csv line 58: parameter 'T_tank' = 60.0 lies outside"), messages);
-        assertTrue(messages.contains("runs.csv line 202: parameter 'm_net': 'abc' is not a number"), messages);
+        assertTrue(messages.contains("runs.csv line 202: parameter 'm_net': \"abc\" is not a number"), messages);
         assertTrue(messages.contains("199 rows evaluated, 2 failed"), messages);
         List<String> lines = Files.readAllLines(out);
         assertEquals(202, lines.size());
@@ -97,7 +97,12 @@ class BatchCommandTest {
             // the Monte Carlo interval surrounds the estimate and is about as wide as the GUM interval
             assertTrue(low < y && y < high, lines.get(i));
             assertEquals(2 * bigU, high - low, 0.3 * bigU, lines.get(i));
-            assertTrue(c[7].equals("confirmed") || c[7].equals("not confirmed"), c[7]);
+            // the verdict follows from the row's own figures by JCGM 101:2008 8.2: d_low = |y - U - y_low| and
+            // d_high = |y + U - y_high| against delta from u at n_dig = 2 (7.9.2: u = c x 10^l, delta = 10^l / 2)
+            double u = Double.parseDouble(c[2]);
+            double delta = 0.5 * Math.pow(10, Math.floor(Math.log10(u)) - 1);
+            boolean validated = Math.abs(y - bigU - low) <= delta && Math.abs(y + bigU - high) <= delta;
+            assertEquals(validated ? "validated" : "not-validated", c[7], lines.get(i));
         }
         ByteArrayOutputStream err2 = new ByteArrayOutputStream();
         assertEquals(2, run(err2, "batch", TEMPLATE.toString(), data.toString(), "-o", out.toString(), "--trials", "5"));
@@ -123,5 +128,25 @@ class BatchCommandTest {
         assertEquals(0.0292704, Double.parseDouble(c[2]), 5e-8);
         assertTrue(lines.get(2).contains("t_tank"), lines.get(2));
         assertTrue(err.toString(StandardCharsets.UTF_8).contains("rows per second"));
+    }
+
+    @Test
+    void extraCellsAWrongSeparatorAndAmbiguousNumbersAreNeverIgnored(@TempDir Path dir) throws Exception {
+        Path data = dir.resolve("runs.csv");
+        Path out = dir.resolve("r.csv");
+        // issue 11/12: an extra cell in a row stops the run with the line, nothing written
+        Files.writeString(data, "id,m_net,T_tank,V_meter\nrun-1,1000,20.5,1002.6\nrun-2,500,20.5,501.2,7\n");
+        ByteArrayOutputStream err = new ByteArrayOutputStream();
+        assertEquals(2, run(err, "batch", TEMPLATE.toString(), data.toString(), "-o", out.toString()));
+        String m = err.toString(StandardCharsets.UTF_8);
+        assertTrue(m.contains("runs.csv, line 3: the row has 5 cells, but the header has 4"), m);
+        assertTrue(Files.notExists(out));
+        // a tab-separated table read as comma-separated would be one column; detection reads it right, and
+        // a decimal comma that could be a thousands group is refused for its row
+        Files.writeString(data, "id\tm_net\tT_tank\tV_meter\nrun-1\t1000\t20.5\t1002.6\nrun-2\t1,002\t20.5\t501.2\n");
+        err.reset();
+        assertEquals(1, run(err, "batch", TEMPLATE.toString(), data.toString(), "-o", out.toString()));
+        m = err.toString(StandardCharsets.UTF_8);
+        assertTrue(m.contains("runs.csv line 3: parameter 'm_net': \"1,002\" is ambiguous"), m);
     }
 }

@@ -58,7 +58,7 @@ class CalibrationCommandsTest {
         assertTrue(r.err().contains("all 3 points have x = 1.0"), r.err());
         r = run("fit", csv("text.csv", "x,y\n1,2\n2,abc\n3,4\n"));
         assertEquals(2, r.status());
-        assertTrue(r.err().contains("line 3, column 2 (y): 'abc' is not a number"), r.err());
+        assertTrue(r.err().contains("text.csv, line 3, column 2 (y): \"abc\" is not a number"), r.err());
         r = run("fit", csv("neg.csv", "x,y,u_y\n1,2,0.1\n2,3,0.1\n3,4,-0.1\n"));
         assertEquals(2, r.status());
         assertTrue(r.err().contains("line 4"), r.err());

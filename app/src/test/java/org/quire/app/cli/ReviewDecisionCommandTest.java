@@ -184,7 +184,8 @@ class ReviewDecisionCommandTest {
         assertTrue(out().contains("[not run]        The Monte Carlo result agrees with the GUM result"), out());
         assertEquals(1, run("review", f, "--mc", "--trials", "100000", "--seed", "7"));
         assertTrue(out().contains("[not met]        The Monte Carlo result agrees with the GUM result"), out());
-        assertTrue(out().contains("delta_m: does not agree (δ = 0.0005 mg"), out());
+        assertTrue(out().contains("delta_m: the GUM result is not validated: d_low = 0.04"), out());
+        assertTrue(out().contains("exceed the numerical tolerance delta = 0.0005 (JCGM 101:2008 8.2)"), out());
         assertEquals(2, run("review", f, "--trials", "1000"), "--trials without --mc");
     }
 }

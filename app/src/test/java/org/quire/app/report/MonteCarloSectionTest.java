@@ -1,66 +1,87 @@
 package org.quire.app.report;
 
+import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.io.ByteArrayOutputStream;
-import java.util.List;
-import java.util.SplittableRandom;
+import java.util.regex.Matcher;
+import java.util.regex.Pattern;
 import org.apache.pdfbox.Loader;
 import org.apache.pdfbox.pdmodel.PDDocument;
 import org.apache.pdfbox.text.PDFTextStripper;
 import org.junit.jupiter.api.Test;
+import org.quire.app.common.Engine;
 import org.quire.app.testing.Examples;
 import org.quire.engine.budget.Budget;
+import org.quire.engine.gum.GumResult;
+import org.quire.engine.montecarlo.BudgetSimulation;
+import org.quire.engine.montecarlo.MonteCarloOutcome;
+import org.quire.engine.montecarlo.ProgressListener;
 
 /**
- * The Monte Carlo seam of the report: a summary as the Monte Carlo engine will hand it over, with the figures
- * JCGM 101:2008 9.2.3 publishes (u(y) = 2.00, shortest 95 % interval [-3.88, 3.88], GUM validated), and a
- * histogram drawn from trials of the same model.
+ * The Monte Carlo part of the report from a real run of JCGM 101:2008 9.2.3 (Y = X_1 + X_2 + X_3 + X_4, each
+ * rectangular with u = 1), compared with the published figures: u(y) = 2.00, probabilistically symmetric 95 %
+ * interval [-3.88, 3.88], GUM interval [-3.92, 3.92] validated (JCGM 101:2008 9.2.3, from memory).
  */
 class MonteCarloSectionTest {
+    private static final long M = 1_000_000L;
 
-    private static Chart.Histogram histogram() {
-        SplittableRandom rnd = new SplittableRandom(20_261_202L);
-        double a = Math.sqrt(3);
-        int bins = 40;
-        double lo = -4 * a;
-        double width = 8 * a / bins;
-        long[] counts = new long[bins];
-        for (int t = 0; t < 100_000; t++) {
-            double y = 0;
-            for (int i = 0; i < 4; i++) {
-                y += rnd.nextDouble(-a, a);
-            }
-            counts[(int) Math.min(bins - 1, Math.floor((y - lo) / width))]++;
-        }
-        double[] edges = new double[bins + 1];
-        for (int i = 0; i <= bins; i++) {
-            edges[i] = lo + i * width;
-        }
-        return new Chart.Histogram("Distribution of Y from the trials", "Y", edges, counts, new double[] {-3.88, 3.88},
-                "shortest 95 % interval");
-    }
-
-    @Test
-    void reportShowsTheSummaryAndItsHistogram() throws Exception {
-        Budget b = Examples.budget("jcgm101-9.2.3-additive-rectangular.json");
-        MonteCarloSummary mc = new MonteCarloSummary(100_000, 20_261_202L, false, List.of(new MonteCarloSummary.Output(
-                "Y", "", 0.0, 2.00, -3.88, 3.88, 0.95, true, true, "JCGM 101:2008 8.2, delta = 0.05", histogram())));
-        ReportModel m = ReportBuilder.build(ReportInput.of(b, Examples.gum(b),
-                DocumentInfo.forPlainBudget(b, CanonicalSha256.INSTANCE, java.time.LocalDate.of(2026, 3, 2)))
-                .withMonteCarlo(mc));
-        String html = HtmlReport.render(m);
-        assertTrue(html.contains("<svg") && html.contains("shortest 95 % interval"));
+    private static String pdfText(ReportModel m) throws Exception {
         ByteArrayOutputStream out = new ByteArrayOutputStream();
         PdfReport.render(m, out);
         try (PDDocument d = Loader.loadPDF(out.toByteArray())) {
-            String text = new PDFTextStripper().getText(d).replaceAll("\\s+", " ");
-            // JCGM 101:2008 9.2.3: shortest 95 % coverage interval [-3.88, 3.88]
-            assertTrue(text.contains("−3.88") && text.contains("3.88"), text);
-            assertTrue(text.contains("yes: JCGM 101:2008 8.2"), text);
-            assertTrue(text.contains("Distribution of Y from the trials"), text);
+            return new PDFTextStripper().getText(d).replaceAll("\\s+", " ").replace('\u2212', '-');
         }
+    }
+
+    /**
+     * The density of the sum of four rectangular variables on [-sqrt 3, sqrt 3] at y: with S = y/(2 sqrt 3) + 2 the
+     * sum of four U(0, 1), the Irwin-Hall density f(s) = sum_k (-1)^k C(4, k) (s - k)^3 / 3! over k <= s
+     * (J. O. Irwin, Biometrika 19 (1927) 225-239), divided by 2 sqrt 3.
+     */
+    static double sumDensity(double y) {
+        double a = Math.sqrt(3);
+        double s = y / (2 * a) + 2;
+        int[] c = {1, 4, 6, 4, 1};
+        double f = 0;
+        for (int k = 0; k <= Math.floor(s) && k <= 4; k++) {
+            f += (k % 2 == 0 ? 1 : -1) * c[k] * Math.pow(s - k, 3) / 6;
+        }
+        return f / (2 * a);
+    }
+
+    @Test
+    void reportShowsTheEnginesOutcomeOfThePublishedExample() throws Exception {
+        Budget b = Examples.budget("jcgm101-9.2.3-additive-rectangular.json");
+        b = b.withSettings(b.settings().withTrials(M).withSeed(20_261_202L));
+        GumResult gum = Examples.gum(b);
+        MonteCarloOutcome mc = BudgetSimulation.run(b, b.compile(Engine.library()), gum,
+                BudgetSimulation.settings(b.settings(), gum).withThreads(2), ProgressListener.NONE);
+        ReportModel m = ReportBuilder.build(ReportInput.of(b, gum,
+                DocumentInfo.forPlainBudget(b, CanonicalSha256.INSTANCE, java.time.LocalDate.of(2026, 3, 2)))
+                .withMonteCarlo(mc));
+        String html = HtmlReport.render(m);
+        assertTrue(html.contains("<svg"), "the histogram is drawn");
+        String text = pdfText(m);
+        Matcher row = Pattern.compile("Y (-?\\d\\.\\d+) (\\d\\.\\d+) (-?\\d\\.\\d+) (-?\\d\\.\\d+) "
+                + "(-?\\d\\.\\d+) (-?\\d\\.\\d+) 95").matcher(text);
+        assertTrue(row.find(), text);
+        // u(y) = 2.00: half a unit plus 3 standard errors u sqrt((kurtosis - 1)/(4M)), kurtosis 2.7 (recomputed:
+        // four rectangulars have excess kurtosis -1.2/4 = -0.3)
+        assertEquals(2.00, Double.parseDouble(row.group(2)), 0.005 + 3 * 2.0 * Math.sqrt(1.7 / (4 * M)));
+        // symmetric interval ends +-3.88: half a unit plus 3 standard errors of a 2.5 % quantile,
+        // sqrt(p(1-p)/M)/g with g the density of the sum there (the Irwin-Hall density, computed below)
+        double endTol = 0.005 + 3 * Math.sqrt(0.025 * 0.975 / M) / sumDensity(3.88);
+        assertEquals(-3.88, Double.parseDouble(row.group(3)), endTol);
+        assertEquals(3.88, Double.parseDouble(row.group(4)), endTol);
+        // the comparison: GUM [-3.92, 3.92], delta = 0.05 (u = 2.0 at n_dig = 2), validated
+        Matcher cmp = Pattern.compile("Y (-?\\d\\.\\d+) (\\d\\.\\d+) 0\\.05 \\S+ \\S+ (\\S+)").matcher(text);
+        assertTrue(cmp.find(), text);
+        assertEquals(-3.92, Double.parseDouble(cmp.group(1)), 0.005);
+        assertEquals(3.92, Double.parseDouble(cmp.group(2)), 0.005);
+        assertEquals("validated", cmp.group(3));
+        assertTrue(text.contains("the GUM result is validated"), text);
     }
 
     @Test

@@ -9,7 +9,6 @@ import java.util.List;
 import java.util.Map;
 import org.junit.jupiter.api.Test;
 import org.quire.app.report.CanonicalSha256;
-import org.quire.app.report.MonteCarloSummary;
 import org.quire.app.testing.Examples;
 import org.quire.engine.budget.Budget;
 import org.quire.engine.budget.InputQuantity;
@@ -93,18 +92,26 @@ class ChecklistTest {
     }
 
     @Test
-    void monteCarloAgreementComesFromTheSummary() throws Exception {
+    void monteCarloAgreementComesFromTheEnginesComparison() throws Exception {
         // JCGM 101:2008 9.2.3: the GUM interval [-3.92, 3.92] is validated by the Monte Carlo one [-3.88, 3.88]
         Budget b = Examples.budget("jcgm101-9.2.3-additive-rectangular.json");
-        MonteCarloSummary mc = new MonteCarloSummary(1_000_000, 1, false, List.of(new MonteCarloSummary.Output("Y", "",
-                0, 2.00, -3.88, 3.88, 0.95, true, true, "validated at 2 significant digits", null)));
-        List<CheckItem> items = Checklist.evaluate(b, Examples.gum(b), ReviewContext.none().withMonteCarlo(mc));
+        List<CheckItem> items = Checklist.evaluate(b, Examples.gum(b), ReviewContext.none()
+                .withMonteCarlo(run(b, 1_000_000)));
         assertEquals(Outcome.MET, item(items, "monte-carlo").outcome());
-        // JCGM 101:2008 9.2.4: not validated
-        MonteCarloSummary bad = new MonteCarloSummary(1_000_000, 1, false, List.of(new MonteCarloSummary.Output("Y", "",
-                0, 10.1, -17.0, 17.0, 0.95, true, false, "", null)));
-        assertEquals(Outcome.NOT_MET, item(Checklist.evaluate(b, Examples.gum(b),
-                ReviewContext.none().withMonteCarlo(bad)), "monte-carlo").outcome());
+        // JCGM 101:2008 9.2.4: one dominant rectangular input; the GUM interval is not validated
+        Budget bad = Examples.budget("jcgm101-9.2.4-additive-dominant.json");
+        CheckItem notMet = item(Checklist.evaluate(bad, Examples.gum(bad), ReviewContext.none()
+                .withMonteCarlo(run(bad, 1_000_000))), "monte-carlo");
+        assertEquals(Outcome.NOT_MET, notMet.outcome());
+        assertTrue(notMet.details().get(0).contains("not validated"), notMet.details().toString());
+    }
+
+    private static org.quire.engine.montecarlo.MonteCarloOutcome run(Budget b, long trials) throws Exception {
+        Budget r = b.withSettings(b.settings().withTrials(trials));
+        var gum = Examples.gum(r);
+        return org.quire.engine.montecarlo.BudgetSimulation.run(r, r.compile(org.quire.app.common.Engine.library()), gum,
+                org.quire.engine.montecarlo.BudgetSimulation.settings(r.settings(), gum).withThreads(2),
+                org.quire.engine.montecarlo.ProgressListener.NONE);
     }
 
     @Test

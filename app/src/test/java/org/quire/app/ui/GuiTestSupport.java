@@ -1,5 +1,6 @@
 package org.quire.app.ui;
 
+import org.quire.app.ui.common.WorkbenchPrefs;
 import static org.junit.jupiter.api.Assertions.fail;
 
 import java.awt.EventQueue;
@@ -7,7 +8,6 @@ import java.awt.GraphicsEnvironment;
 import java.awt.Window;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.util.Optional;
 import java.util.concurrent.Callable;
 import java.util.concurrent.atomic.AtomicReference;
 import java.util.function.BooleanSupplier;
@@ -16,7 +16,7 @@ import org.junit.jupiter.api.AfterEach;
 import org.junit.jupiter.api.Assumptions;
 import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.BeforeEach;
-import org.quire.app.Engine;
+import org.quire.app.common.Engine;
 import org.quire.app.ui.montecarlo.MonteCarloRunner;
 import org.quire.app.ui.notebook.BudgetEditor;
 
@@ -43,9 +43,9 @@ abstract class GuiTestSupport {
         }
     }
 
-    /** @return the Monte Carlo runner the workbench gets; none unless a test says otherwise */
-    Optional<MonteCarloRunner> runner() {
-        return Optional.empty();
+    /** @return the Monte Carlo runner the workbench gets: the engine's, unless a test says otherwise */
+    MonteCarloRunner runner() {
+        return MonteCarloRunner.engine(Engine.library());
     }
 
     @BeforeEach

@@ -3,21 +3,14 @@ package org.quire.app.ui;
 import static org.junit.jupiter.api.Assertions.assertNull;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
-import java.util.Optional;
 import javax.swing.JButton;
 import javax.swing.JLabel;
 import org.junit.jupiter.api.Test;
-import org.quire.app.ui.montecarlo.MonteCarloRunner;
-import org.quire.app.ui.montecarlo.MonteCarloRunners;
+import org.quire.app.ui.montecarlo.MonteCarloSection;
 import org.quire.app.ui.notebook.BudgetEditor;
 
 /** The Monte Carlo section with the engine behind it, as the installed workbench runs it: a run, and a cancel. */
 class MonteCarloOnTheEngineGuiTest extends GuiTestSupport {
-
-    @Override
-    Optional<MonteCarloRunner> runner() {
-        return MonteCarloRunners.installed();
-    }
 
     @Test
     void theDemoRunsAndEveryOutputGetsAVerdict() throws Exception {
@@ -27,8 +20,17 @@ class MonteCarloOnTheEngineGuiTest extends GuiTestSupport {
                 && ed.latest().budget().equals(ed.document().budget()));
         onEdt(() -> { ed.runMonteCarlo(); return null; });
         waitFor("the verdict of E", () -> WorkbenchEditingTest.find(ed, "mcVerdict:E") != null);
-        String e = onEdt(() -> ((JLabel) WorkbenchEditingTest.find(ed, "mcVerdict:E")).getText());
-        assertTrue(e.contains("confirmed"), e);
+        JLabel label = onEdt(() -> (JLabel) WorkbenchEditingTest.find(ed, "mcVerdict:E"));
+        String e = onEdt(label::getText);
+        // the label shows the engine's verdict, in its one wording, with the engine's reason
+        var verdict = (org.quire.engine.montecarlo.GumComparison.Verdict) label.getClientProperty(
+                MonteCarloSection.VERDICT);
+        assertTrue(verdict != null, "the label carries the engine's verdict");
+        String shown = verdict == org.quire.engine.montecarlo.GumComparison.Verdict.VALIDATED
+                ? "GUM result validated" : "GUM result NOT validated";
+        assertTrue(e.contains(shown) && !e.contains(verdict == org.quire.engine.montecarlo.GumComparison.Verdict
+                .VALIDATED ? "NOT validated" : "GUM result validated"), e);
+        assertTrue(e.contains("JCGM 101:2008"), "the reason is shown: " + e);
         assertTrue(onEdt(() -> WorkbenchEditingTest.find(ed, "mcVerdict:q")) != null, "q has its own verdict");
         onEdt(() -> { ed.revealSection("Monte Carlo check"); return null; });
         Thread.sleep(400);

@@ -4,59 +4,52 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.ArrayList;
 import java.util.List;
-import java.util.Optional;
+import java.util.concurrent.CancellationException;
 import java.util.concurrent.CountDownLatch;
 import java.util.concurrent.TimeUnit;
 import javax.swing.JLabel;
 import org.junit.jupiter.api.Test;
-import org.quire.app.ui.montecarlo.MonteCarloOutcome;
+import org.quire.app.common.Engine;
 import org.quire.app.ui.montecarlo.MonteCarloRunner;
+import org.quire.app.ui.montecarlo.MonteCarloSection;
 import org.quire.app.ui.notebook.BudgetEditor;
 import org.quire.engine.budget.Budget;
-import org.quire.engine.gum.GumResult;
-import org.quire.engine.gum.OutputResult;
+import org.quire.engine.montecarlo.ProgressListener;
 
 /**
- * The Monte Carlo section against the {@link MonteCarloRunner} seam, with a stand-in runner that exists only in
- * this test: it reports progress in steps, honours Cancel, and returns an outcome shaped like the GUM result.
+ * The Monte Carlo section with a stand-in runner that exists only in this test: it reports progress in steps,
+ * honours Cancel, and then returns the engine's outcome of a short run.
  */
 class MonteCarloSectionTest extends GuiTestSupport {
     private final CountDownLatch started = new CountDownLatch(1);
     private volatile boolean hold;
     private final List<Long> reported = new ArrayList<>();
 
-    private final MonteCarloRunner standIn = new MonteCarloRunner() {
-        @Override
-        public MonteCarloOutcome run(Budget budget, GumResult gum, Progress progress) throws InterruptedException {
-            started.countDown();
-            long planned = budget.settings().trials();
-            for (int step = 1; step <= 10 || hold; step++) {
-                if (progress.cancelRequested()) {
-                    throw new InterruptedException("cancelled");
-                }
+    private final MonteCarloRunner standIn = (budget, gum, progress) -> {
+        started.countDown();
+        long planned = budget.settings().trials();
+        for (int step = 1; step <= 10 || hold; step++) {
+            if (progress.cancelRequested()) {
+                throw new CancellationException("cancelled by the test");
+            }
+            try {
                 Thread.sleep(10);
-                progress.trialsDone(Math.min(planned, planned * step / 10), planned);
-                synchronized (reported) {
-                    reported.add(planned * step / 10);
-                }
+            } catch (InterruptedException e) {
+                throw new CancellationException("interrupted");
             }
-            List<MonteCarloOutcome.OutputOutcome> outs = new ArrayList<>();
-            for (OutputResult o : gum.outputs()) {
-                double lo = o.estimate() - o.expandedUncertainty();
-                double hi = o.estimate() + o.expandedUncertainty();
-                long[] counts = {1, 4, 9, 14, 9, 4, 1};
-                outs.add(new MonteCarloOutcome.OutputOutcome(o.name(), o.unit(), o.estimate(), o.standardUncertainty(),
-                        o.coverageProbability(), lo, hi, false,
-                        new MonteCarloOutcome.Histogram(lo - o.standardUncertainty(), hi + o.standardUncertainty(), counts),
-                        new MonteCarloOutcome.GumComparison(o.standardUncertainty() / 20, 0, 0, true)));
+            progress.progress(Math.min(planned, planned * step / 10), planned);
+            synchronized (reported) {
+                reported.add(planned * step / 10);
             }
-            return new MonteCarloOutcome(planned, budget.settings().seed(), false, outs);
         }
+        // then the engine itself, with few trials, so that what is shown is the engine's outcome
+        Budget small = budget.withSettings(budget.settings().withTrials(2_000));
+        return MonteCarloRunner.engine(Engine.library()).run(small, gum, ProgressListener.NONE);
     };
 
     @Override
-    Optional<MonteCarloRunner> runner() {
-        return Optional.of(standIn);
+    MonteCarloRunner runner() {
+        return standIn;
     }
 
     @Test
@@ -64,8 +57,11 @@ class MonteCarloSectionTest extends GuiTestSupport {
         BudgetEditor ed = openDemo();
         onEdt(() -> { ed.runMonteCarlo(); return null; });
         waitFor("the verdict of E", () -> WorkbenchEditingTest.find(ed, "mcVerdict:E") != null);
-        String verdict = onEdt(() -> ((JLabel) WorkbenchEditingTest.find(ed, "mcVerdict:E")).getText());
-        assertTrue(verdict.contains("GUM result confirmed"), verdict);
+        JLabel label = onEdt(() -> (JLabel) WorkbenchEditingTest.find(ed, "mcVerdict:E"));
+        String verdict = onEdt(label::getText);
+        assertTrue(label.getClientProperty(MonteCarloSection.VERDICT) != null, "the engine's verdict is shown");
+        assertTrue(verdict.contains("symmetric") && verdict.contains("shortest") && verdict.contains("GUM y"),
+                "both Monte Carlo intervals and the GUM interval are shown: " + verdict);
         assertTrue(onEdt(() -> WorkbenchEditingTest.find(ed, "mcVerdict:q")) != null, "q has its own verdict");
         synchronized (reported) {
             assertTrue(reported.size() >= 10, "progress was reported");
@@ -79,7 +75,6 @@ class MonteCarloSectionTest extends GuiTestSupport {
         onEdt(() -> { ed.runMonteCarlo(); return null; });
         assertTrue(started.await(5, TimeUnit.SECONDS), "the run started");
         Thread.sleep(50);
-        JLabel[] state = new JLabel[1];
         onEdt(() -> {
             javax.swing.JButton cancel = (javax.swing.JButton) WorkbenchEditingTest.find(ed, "mcCancel");
             assertTrue(cancel.isEnabled(), "Cancel is enabled while running");
@@ -88,6 +83,7 @@ class MonteCarloSectionTest extends GuiTestSupport {
         });
         waitFor("the run to end", () -> !((javax.swing.JButton) WorkbenchEditingTest.find(ed, "mcCancel")).isEnabled());
         assertTrue(WorkbenchEditingTest.find(ed, "mcVerdict:E") == null, "no result shown after a cancel");
-        assertTrue(state.length == 1);
+        String state = onEdt(() -> ((JLabel) WorkbenchEditingTest.find(ed, "mcState")).getText());
+        assertTrue(state.startsWith("The run was cancelled"), state);
     }
 }

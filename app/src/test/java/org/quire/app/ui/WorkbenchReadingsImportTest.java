@@ -38,6 +38,11 @@ class WorkbenchReadingsImportTest extends GuiTestSupport {
         Files.writeString(csv, "reading\n1002.21\nabc\n");
         javax.swing.SwingUtilities.invokeLater(() -> frame.importReadings(csv));
         String bad = takeMessageBox();
-        assertTrue(bad.contains("line 3, column 1") && bad.contains("'abc' is not a number"), bad);
+        assertTrue(bad.contains("line 3, column 1") && bad.contains("\"abc\" is not a number"), bad);
+        // issue 11: readings 1,002 / 1,004 / 1,003 became 1.0, 1.0, 1.0; now they are refused, not guessed
+        Files.writeString(csv, "reading\n1,002\n1,004\n1,003\n");
+        javax.swing.SwingUtilities.invokeLater(() -> frame.importReadings(csv));
+        String ambiguous = takeMessageBox();
+        assertTrue(ambiguous.contains("line 2, column 1 (reading): \"1,002\" is ambiguous"), ambiguous);
     }
 }

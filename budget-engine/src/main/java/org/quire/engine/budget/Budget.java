@@ -1,6 +1,5 @@
 package org.quire.engine.budget;
 
-import org.quire.engine.io.JsonSupport;
 import jakarta.json.JsonObject;
 import java.util.ArrayList;
 import java.util.HashSet;
@@ -226,14 +225,17 @@ public final class Budget {
 
     /** @return the units stated for the inputs and outputs, and the outputs' display units */
     public ModelUnits units() {
-        ModelUnits u = ModelUnits.none();
+        java.util.Map<String, String> in = new java.util.LinkedHashMap<>();
         for (InputQuantity q : inputs) {
-            u = u.withInput(q.name(), q.unit());
+            in.put(q.name(), q.unit());
         }
+        java.util.Map<String, String> out = new java.util.LinkedHashMap<>();
+        java.util.Map<String, String> display = new java.util.LinkedHashMap<>();
         for (OutputQuantity q : outputs) {
-            u = u.withOutput(q.name(), q.unit(), q.displayUnit());
+            out.put(q.name(), q.unit());
+            display.put(q.name(), q.displayUnit());
         }
-        return u;
+        return ModelUnits.of(in, out, display);
     }
 
     /** @return the checked correlation matrix of the inputs */
@@ -243,7 +245,7 @@ public final class Budget {
 
     /** @return an empty JSON object, for callers that build extensions */
     public static JsonObject noExtensions() {
-        return JsonSupport.JSON.createObjectBuilder().build();
+        return jakarta.json.JsonValue.EMPTY_JSON_OBJECT;
     }
 
     @Override

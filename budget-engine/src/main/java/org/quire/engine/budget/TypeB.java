@@ -6,7 +6,6 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 import java.util.Set;
-import org.quire.engine.gum.CoverageFactor;
 
 /**
  * A Type B evaluation: a distribution stated from information other than repeated observations (a
@@ -59,6 +58,96 @@ public final class TypeB implements Evaluation {
         this.basis = basis;
     }
 
+    /**
+     * The parameters each distribution may carry, in the order a form shows them; the rules are those of
+     * {@link #of} (see the class description), which refuses any other.
+     *
+     * @param distribution one of {@link #DISTRIBUTIONS}
+     * @return the parameter names, file names as in {@link #parameterNames()}
+     * @throws InvalidParameterException for an unknown distribution
+     */
+    public static List<String> parametersOf(String distribution) {
+        List<String> limits = List.of("estimate", "halfWidth", "lower", "upper");
+        List<String> nu = List.of("dof", "relativeUncertaintyOfU");
+        switch (distribution == null ? "" : distribution) {
+            case "normal":
+                return List.of("estimate", "standardUncertainty", "expandedUncertainty", "coverageFactor",
+                        "coverageProbability", "dof", "relativeUncertaintyOfU");
+            case "rectangular":
+            case "triangular":
+            case "arcsine":
+                return concat(limits, nu);
+            case "trapezoidal":
+                return concat(limits, List.of("beta"), nu);
+            case "curvilinear-trapezoid":
+                return concat(limits, List.of("halfWidthUncertainty"), nu);
+            case "student-t":
+                return List.of("estimate", "scale", "dof");
+            case "exponential":
+                return concat(List.of("estimate"), nu);
+            case "constant":
+                return List.of("estimate");
+            default:
+                throw new InvalidParameterException("distribution", "unknown distribution '" + distribution
+                        + "'; expected one of " + String.join(", ", DISTRIBUTIONS));
+        }
+    }
+
+    @SafeVarargs
+    private static List<String> concat(List<String>... parts) {
+        List<String> out = new java.util.ArrayList<>();
+        for (List<String> p : parts) {
+            out.addAll(p);
+        }
+        return List.copyOf(out);
+    }
+
+    /**
+     * The name of a distribution on screens and in reports (one name per distribution: the file's
+     * {@code arcsine} is shown as "U-shaped", as in the evaluation's basis).
+     *
+     * @param distribution one of {@link #DISTRIBUTIONS}
+     * @return the screen name
+     */
+    public static String screenName(String distribution) {
+        switch (distribution) {
+            case "arcsine": return "U-shaped";
+            case "curvilinear-trapezoid": return "curvilinear trapezoid";
+            case "student-t": return "Student t";
+            default:
+                if (!DISTRIBUTIONS.contains(distribution)) {
+                    throw new InvalidParameterException("distribution", "unknown distribution '" + distribution + "'");
+                }
+                return distribution;
+        }
+    }
+
+    /**
+     * The name of a parameter on screens and in reports, with its symbol.
+     *
+     * @param parameter one of {@link #parameterNames()}
+     * @return the screen name, e.g. "Half-width a" for {@code halfWidth}
+     */
+    public static String parameterScreenName(String parameter) {
+        switch (parameter) {
+            case "estimate": return "Estimate";
+            case "standardUncertainty": return "Standard uncertainty u";
+            case "expandedUncertainty": return "Expanded uncertainty U";
+            case "coverageFactor": return "Coverage factor k of U";
+            case "coverageProbability": return "Coverage probability of U (0 to 1)";
+            case "halfWidth": return "Half-width a";
+            case "lower": return "Lower limit";
+            case "upper": return "Upper limit";
+            case "beta": return "Top-to-base ratio \u03b2";
+            case "halfWidthUncertainty": return "Inexactness d of the limits";
+            case "scale": return "Scale";
+            case "dof": return "Degrees of freedom \u03bd";
+            case "relativeUncertaintyOfU": return "Relative uncertainty of u (0 to 1)";
+            default: throw new InvalidParameterException(parameter, "'" + parameter
+                    + "' is not a parameter of a Type B evaluation");
+        }
+    }
+
     /** @return the names of all parameters a Type B evaluation may carry */
     public static Set<String> parameterNames() {
         return PARAMETERS;
@@ -84,6 +173,13 @@ public final class TypeB implements Evaluation {
             Double v = e.getValue();
             if (v == null || Double.isNaN(v) || (Double.isInfinite(v) && !e.getKey().equals("dof"))) {
                 throw new InvalidParameterException(e.getKey(), e.getKey() + " must be a finite number, not " + v);
+            }
+        }
+        List<String> own = parametersOf(distribution);
+        for (String k : p.keySet()) {
+            if (!own.contains(k)) {
+                throw new InvalidParameterException(k, "'" + k + "' does not belong to a " + distribution
+                        + " distribution; it takes " + String.join(", ", own));
             }
         }
         Params r = new Params(distribution, p);

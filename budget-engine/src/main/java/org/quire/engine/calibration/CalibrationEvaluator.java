@@ -159,13 +159,13 @@ public final class CalibrationEvaluator {
             throw new IllegalArgumentException(CalibrationMessages.missing("calibration"));
         }
         if (!c.method().equals(method.origin())) {
-            throw new IllegalArgumentException(CalibrationMessages.otherMethod(c.method(), method.origin()));
+            throw new CalibrationException("method", CalibrationMessages.otherMethod(c.method(), method.origin()));
         }
         Budget base = method.document().budget();
-        OutputQuantity errorQ = output(base, c.errorOutput(), "error");
-        OutputQuantity flowQ = output(base, c.flowOutput(), "flow");
+        OutputQuantity errorQ = output(base, c.errorOutput(), "error", "errorOutput");
+        OutputQuantity flowQ = output(base, c.flowOutput(), "flow", "flowOutput");
         if (!errorQ.shownUnit().strip().equals("%")) {
-            throw new IllegalArgumentException(CalibrationMessages.errorNotPercent(errorQ.name(), errorQ.shownUnit()));
+            throw new CalibrationException("errorOutput", CalibrationMessages.errorNotPercent(errorQ.name(), errorQ.shownUnit()));
         }
         String flowUnit = flowQ.shownUnit().strip();
         double[] between = declarations(c, base);
@@ -174,7 +174,7 @@ public final class CalibrationEvaluator {
 
         List<PointResult> found = new ArrayList<>();
         for (int p = 0; p < c.asFound().size(); p++) {
-            found.add(point(c, c.asFound().get(p), "as-found point " + (p + 1), pm, flowUnit, listener));
+            found.add(point(c, c.asFound().get(p), "as-found point " + (p + 1), "asFound[" + p + "]", pm, flowUnit, listener));
         }
         SeriesResult asFound = series(c, SeriesResult.Phase.AS_FOUND, found, between, flowUnit, findings);
 
@@ -183,7 +183,7 @@ public final class CalibrationEvaluator {
         if (!c.asLeft().isEmpty()) {
             List<PointResult> left = new ArrayList<>();
             for (int p = 0; p < c.asLeft().size(); p++) {
-                left.add(point(c, c.asLeft().get(p), "as-left point " + (p + 1), pm, flowUnit, listener));
+                left.add(point(c, c.asLeft().get(p), "as-left point " + (p + 1), "asLeft[" + p + "]", pm, flowUnit, listener));
             }
             asLeft = series(c, SeriesResult.Phase.AS_LEFT_MEASURED, left, between, flowUnit, findings);
         } else if (adj != null) {
@@ -193,13 +193,13 @@ public final class CalibrationEvaluator {
         return new CalibrationResult(c, method.title(), "%", flowUnit, asFound, adj, asLeft, findings);
     }
 
-    private static OutputQuantity output(Budget b, String name, String role) {
+    private static OutputQuantity output(Budget b, String name, String role, String field) {
         for (OutputQuantity o : b.outputs()) {
             if (o.name().equals(name)) {
                 return o;
             }
         }
-        throw new IllegalArgumentException(CalibrationMessages.noOutput(role, name, b.outputNames()));
+        throw new CalibrationException(field, CalibrationMessages.noOutput(role, name, b.outputNames()));
     }
 
     /** @return rho per input of the point budget (the method's inputs, then R) */
@@ -211,18 +211,18 @@ public final class CalibrationEvaluator {
             }
         }
         if (!missing.isEmpty()) {
-            throw new IllegalArgumentException(CalibrationMessages.undeclared(missing));
+            throw new CalibrationException("declarations", CalibrationMessages.undeclared(missing));
         }
         for (String n : c.declarations().keySet()) {
             if (base.input(n) == null) {
-                throw new IllegalArgumentException(CalibrationMessages.declaredUnknown(n, base.inputNames()));
+                throw new CalibrationException("declarations." + n, CalibrationMessages.declaredUnknown(n, base.inputNames()));
             }
         }
         for (Correlation r : base.correlations()) {
             InputDeclaration a = c.declarations().get(r.first());
             InputDeclaration b = c.declarations().get(r.second());
             if (a.coefficient() != b.coefficient()) {
-                throw new IllegalArgumentException(CalibrationMessages.mixedCorrelation(r.first(), r.second()));
+                throw new CalibrationException("declarations", CalibrationMessages.mixedCorrelation(r.first(), r.second()));
             }
         }
         double[] between = new double[base.inputs().size() + 1];
@@ -296,7 +296,7 @@ public final class CalibrationEvaluator {
     }
 
     /** Checks a run's readings against the method's parameters. */
-    private Map<String, Double> readings(Run r, String where) {
+    private Map<String, Double> readings(Run r, String where, String loc) {
         List<String> missing = new ArrayList<>();
         for (TemplateParameter tp : method.spec().parameters()) {
             if (r.reading(tp.name()) == null) {
@@ -304,18 +304,18 @@ public final class CalibrationEvaluator {
             }
         }
         if (!missing.isEmpty()) {
-            throw new IllegalArgumentException(CalibrationMessages.missingReadings(where, r.sourceRow(), missing));
+            throw new CalibrationException(loc, CalibrationMessages.missingReadings(where, r.sourceRow(), missing));
         }
         for (String k : r.readings().keySet()) {
             if (method.spec().parameter(k) == null) {
-                throw new IllegalArgumentException(CalibrationMessages.unknownReading(where, r.sourceRow(), k,
+                throw new CalibrationException(loc + ".readings." + k, CalibrationMessages.unknownReading(where, r.sourceRow(), k,
                         method.id(), method.parameterNames()));
             }
         }
         return r.readings();
     }
 
-    private PointResult point(Calibration c, FlowPoint fp, String where, PointModel pm, String flowUnit,
+    private PointResult point(Calibration c, FlowPoint fp, String where, String loc, PointModel pm, String flowUnit,
             ProgressListener listener) throws ModelException {
         String at = where + " '" + fp.label() + "'";
         int n = fp.runs().size();
@@ -326,16 +326,17 @@ public final class CalibrationEvaluator {
         for (int j = 0; j < n; j++) {
             Run r = fp.runs().get(j);
             String runAt = at + ", run " + (j + 1);
-            Map<String, Double> x = readings(r, runAt);
+            String runLoc = loc + ".runs[" + j + "]";
+            Map<String, Double> x = readings(r, runAt, runLoc);
             Budget rb;
             GumResult g;
             try {
                 rb = method.budgetFor(x);
                 g = GumEvaluator.evaluate(rb, runModel, rb.correlationMatrix(), rb.settings());
             } catch (IllegalArgumentException e) {
-                throw new IllegalArgumentException(CalibrationMessages.at(runAt, r.sourceRow(), e.getMessage()), e);
+                throw new CalibrationException(runLoc, CalibrationMessages.at(runAt, r.sourceRow(), e.getMessage()), e);
             } catch (ModelException e) {
-                throw new IllegalArgumentException(CalibrationMessages.at(runAt, r.sourceRow(), e.getMessage()), e);
+                throw new CalibrationException(runLoc, CalibrationMessages.at(runAt, r.sourceRow(), e.getMessage()), e);
             }
             OutputResult e = g.output(c.errorOutput());
             OutputResult q = g.output(c.flowOutput());
@@ -362,7 +363,7 @@ public final class CalibrationEvaluator {
             }
             errorAtMean = runModel.evaluate(xm)[runModel.outputNames().indexOf(c.errorOutput())];
         } catch (IllegalArgumentException | ModelException e) {
-            throw new IllegalArgumentException(CalibrationMessages.at(at + " at the mean readings", 0, e.getMessage()), e);
+            throw new CalibrationException(loc, CalibrationMessages.at(at + " at the mean readings", 0, e.getMessage()), e);
         }
         double[] d = new double[n];
         double sumD = 0;
@@ -390,10 +391,10 @@ public final class CalibrationEvaluator {
             notes.add(CalibrationMessages.statedNote(fp.label(), stated, n, s));
         } else {
             if (n < 2) {
-                throw new IllegalArgumentException(CalibrationMessages.oneRun(at, fp.runs().get(0).sourceRow()));
+                throw new CalibrationException(loc, CalibrationMessages.oneRun(at, fp.runs().get(0).sourceRow()));
             }
             if (!(s > 0)) {
-                throw new IllegalArgumentException(CalibrationMessages.noScatter(at, n));
+                throw new CalibrationException(loc, CalibrationMessages.noScatter(at, n));
             }
             rep = c.repeatability() == RepeatabilityBasis.MEAN_OF_RUNS ? TypeA.ofReadings(d)
                     : TypeA.ofMean(meanD, 1).withPooled(s, n - 1);
@@ -410,10 +411,10 @@ public final class CalibrationEvaluator {
         try {
             g = GumEvaluator.evaluate(pb, pm.model(), pb.correlationMatrix(), pb.settings());
         } catch (ModelException e) {
-            throw new IllegalArgumentException(CalibrationMessages.at(at, 0, e.getMessage()), e);
+            throw new CalibrationException(loc, CalibrationMessages.at(at, 0, e.getMessage()), e);
         }
         OutputResult res = g.output(pm.output());
-        BudgetSimulation.Outcome mc = null;
+        org.quire.engine.montecarlo.MonteCarloOutcome mc = null;
         if (c.monteCarlo() != null) {
             MonteCarloSettings ms = MonteCarloSettings.defaults().withTrials(c.monteCarlo().trials())
                     .withSeed(c.monteCarlo().seed()).withCoverageProbability(res.coverageProbability())
@@ -424,7 +425,11 @@ public final class CalibrationEvaluator {
         double reported = res.expandedUncertainty();
         boolean raised = false;
         if (c.cmc() != null) {
-            cmc = c.cmc().at(convert(flow, flowUnit, c.cmc().flowUnit(), "CMC table"));
+            try {
+                cmc = c.cmc().at(convert(flow, flowUnit, c.cmc().flowUnit(), "CMC table"));
+            } catch (IllegalArgumentException e) {
+                throw new CalibrationException("cmc", at + ": " + e.getMessage(), e);
+            }
             if (reported < cmc) {
                 notes.add(CalibrationMessages.raisedToCmc(fp.label(), reported, cmc, flow, flowUnit));
                 reported = cmc;
@@ -458,8 +463,9 @@ public final class CalibrationEvaluator {
             for (String note : p.notes()) {
                 findings.add(phase.label() + ": " + note);
             }
-            if (p.monteCarlo() != null && !p.monteCarlo().comparisons().get(0).confirmed()) {
-                findings.add(CalibrationMessages.monteCarloNotConfirmed(phase.label(), p.label()));
+            if (p.monteCarlo() != null && !p.monteCarlo().output(0).comparison().validated()) {
+                findings.add(CalibrationMessages.monteCarloNotValidated(phase.label(), p.label(),
+                        p.monteCarlo().output(0).comparison().reason()));
             }
         }
         return new SeriesResult(phase, points, cov, PointCovariance.correlation(cov),
@@ -501,7 +507,7 @@ public final class CalibrationEvaluator {
             }
             case FITTED_SLOPE: {
                 if (m < 3) {
-                    throw new IllegalArgumentException(CalibrationMessages.slopeNeedsPoints(m));
+                    throw new CalibrationException("adjustment", CalibrationMessages.slopeNeedsPoints(m));
                 }
                 List<CalibrationPoint> cp = new ArrayList<>();
                 double[][] uy = new double[m][m];
@@ -591,19 +597,24 @@ public final class CalibrationEvaluator {
             String zone = "";
             double flowInLimits;
             if (spec.envelope() != null) {
-                flowInLimits = convert(p.flow(), flowUnit, spec.envelope().flowUnit(), "limits");
                 MpeZone z;
                 try {
+                    flowInLimits = convert(p.flow(), flowUnit, spec.envelope().flowUnit(), "limits");
                     z = spec.envelope().zoneAt(flowInLimits);
                     limits = z.limitsAt(spec.temperature());
                 } catch (IllegalArgumentException e) {
-                    throw new IllegalArgumentException(CalibrationMessages.pointLimits(phase.label(), p.label(),
+                    throw new CalibrationException("conformity", CalibrationMessages.pointLimits(phase.label(), p.label(),
                             e.getMessage()), e);
                 }
                 zone = z.name();
             } else {
                 flowInLimits = p.flow();
-                limits = MpeLimits.symmetric(spec.formula().percentAt(p.flow(), flowUnit));
+                try {
+                    limits = MpeLimits.symmetric(spec.formula().percentAt(p.flow(), flowUnit));
+                } catch (IllegalArgumentException e) {
+                    throw new CalibrationException("conformity.mpeFormula", CalibrationMessages.pointLimits(
+                            phase.label(), p.label(), e.getMessage()), e);
+                }
             }
             MeasuredError me = new MeasuredError(flowInLimits, spec.temperature(), p.error(),
                     p.reportedStandardUncertainty(), p.coverageFactor(), p.effectiveDof());

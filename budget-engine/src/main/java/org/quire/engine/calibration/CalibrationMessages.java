@@ -25,9 +25,9 @@ final class CalibrationMessages {
         return new java.math.BigDecimal(v).round(new java.math.MathContext(6)).stripTrailingZeros().toPlainString();
     }
 
-    /** Two significant digits for an uncertainty or limit in %, at least to 0.001. */
+    /** Three significant digits for an uncertainty or limit in %. */
     static String pct(double v) {
-        return new java.math.BigDecimal(v).round(new java.math.MathContext(2)).stripTrailingZeros().toPlainString();
+        return new java.math.BigDecimal(v).round(new java.math.MathContext(3)).stripTrailingZeros().toPlainString();
     }
 
     static String negative(String what, double v) {
@@ -216,9 +216,8 @@ final class CalibrationMessages {
         return "the flows are in " + from + " but the " + what + " is in " + to + ": " + message;
     }
 
-    static String monteCarloNotConfirmed(String phase, String label) {
-        return phase + ": point '" + label + "': the Monte Carlo method does not confirm the GUM result "
-                + "(JCGM 101:2008 clause 8); report the Monte Carlo coverage interval or review the budget";
+    static String monteCarloNotValidated(String phase, String label, String reason) {
+        return phase + ": point '" + label + "': " + reason;
     }
 
     static String weightedMeanNote(int m) {

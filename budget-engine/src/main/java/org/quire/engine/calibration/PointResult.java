@@ -37,7 +37,7 @@ public record PointResult(String label, double flow, List<RunResult> runs, doubl
         double repeatabilityUncertainty, double repeatabilityDof, boolean statedRepeatability, Budget budget,
         OutputResult result, double standardUncertainty, double effectiveDof, double coverageFactor,
         double expandedUncertainty, double cmc, double reportedExpandedUncertainty, boolean raisedToCmc,
-        List<String> notes, BudgetSimulation.Outcome monteCarlo) {
+        List<String> notes, org.quire.engine.montecarlo.MonteCarloOutcome monteCarlo) {
 
     public PointResult {
         runs = List.copyOf(runs);

@@ -104,8 +104,8 @@ public final class ConformityAssessment {
      * @param rule the decision rule applied
      * @param limitsName the name of the maximum permissible errors applied
      * @param decisions the decisions at the points, at least one
-     * @return the rule's sentence with each point's own coverage factor and degrees of freedom, followed by the
-     *     name of the limits
+     * @return the rule's sentence for the points' own coverage factors (one k when they agree, else the k stated
+     *     with each point and the largest risk over the points), followed by the name of the limits
      */
     public static String statement(DecisionRule rule, String limitsName, List<PointDecision> decisions) {
         double[] k = new double[decisions.size()];

@@ -116,4 +116,11 @@ final class CsvMessages {
     static String underflow(String cell) {
         return fmt("%s is too small for a number and would become 0 (the smallest is about 4.9e-324)", quoted(cell));
     }
+
+    static String noReadingsColumn(List<String> header, int columns) {
+        return header.isEmpty()
+                ? fmt("%d columns and no header: give one column of readings, or a header naming the column "
+                        + "reading", columns)
+                : fmt("no column is named reading, readings, value or x; the columns are: %s", String.join(", ", header));
+    }
 }

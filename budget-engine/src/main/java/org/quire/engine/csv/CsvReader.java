@@ -39,7 +39,16 @@ public final class CsvReader {
      * @throws CsvException when the file is too large, not UTF-8, or not CSV as the options say
      */
     public static CsvTable read(Path file, CsvOptions options) throws IOException, CsvException {
-        String name = file.getFileName() == null ? file.toString() : file.getFileName().toString();
+        return parse(sourceName(file), readText(file, options), options);
+    }
+
+    static String sourceName(Path file) {
+        return file.getFileName() == null ? file.toString() : file.getFileName().toString();
+    }
+
+    /** @return the text of a file of at most {@link CsvOptions#maxBytes()} bytes, strict UTF-8 */
+    static String readText(Path file, CsvOptions options) throws IOException, CsvException {
+        String name = sourceName(file);
         long size = Files.size(file);
         if (size > options.maxBytes()) {
             throw new CsvException(name, 0, 0, null, CsvMessages.tooLarge(size, options.maxBytes()));
@@ -52,7 +61,7 @@ public final class CsvReader {
         } catch (CharacterCodingException e) {
             throw new CsvException(name, 0, 0, null, CsvMessages.notUtf8());
         }
-        return parse(name, text, options);
+        return text;
     }
 
     /**
@@ -126,7 +135,8 @@ public final class CsvReader {
                         CsvMessages.cellCount(cells.size(), expected, header, separatorHint(records, sep)));
             }
         }
-        return CsvTable.of(sourceName, sep, options.decimalMark(), header, records.subList(first, records.size()),
+        return CsvTable.of(sourceName, sep, options.decimalMark(), options.header() ? lines.get(0) : 0, header,
+                records.subList(first, records.size()),
                 lines.subList(first, lines.size()));
     }
 

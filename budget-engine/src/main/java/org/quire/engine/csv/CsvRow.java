@@ -18,6 +18,11 @@ public final class CsvRow {
         this.cells = cells;
     }
 
+    /** @return the table the row belongs to (its header, source name and decimal mark) */
+    public CsvTable table() {
+        return table;
+    }
+
     /** @return the 1-based line in the source at which the row starts */
     public int line() {
         return line;

@@ -16,9 +16,11 @@ public final class CsvTable {
     private final String proof;
     private final List<String> header;
     private final List<CsvRow> rows;
+    private final int headerLine;
 
     private CsvTable(String sourceName, CsvOptions.Separator separator, CsvOptions.DecimalMark decimalMark,
-            boolean markStated, String proof, List<String> header, List<List<String>> records, List<Integer> lines) {
+            boolean markStated, String proof, int headerLine, List<String> header, List<List<String>> records,
+            List<Integer> lines) {
         this.sourceName = sourceName;
         this.separator = separator;
         this.decimalMark = decimalMark;
@@ -30,6 +32,7 @@ public final class CsvTable {
             r.add(new CsvRow(this, lines.get(i), records.get(i)));
         }
         this.rows = List.copyOf(r);
+        this.headerLine = headerLine;
     }
 
     /**
@@ -38,15 +41,14 @@ public final class CsvTable {
      * no cell has a decimal point; otherwise a decimal point.
      */
     static CsvTable of(String sourceName, CsvOptions.Separator separator, CsvOptions.DecimalMark stated,
-            List<String> header, List<List<String>> records, List<Integer> lines) {
+            int headerLine, List<String> header, List<List<String>> records, List<Integer> lines) {
         if (stated != null) {
-            return new CsvTable(sourceName, separator, stated, true,
-                    stated == CsvOptions.DecimalMark.POINT ? " (the decimal mark is stated as a point)" : "",
-                    header, records, lines);
+            String note = stated == CsvOptions.DecimalMark.POINT ? " (the decimal mark is stated as a point)" : "";
+            return new CsvTable(sourceName, separator, stated, true, note, headerLine, header, records, lines);
         }
         if (separator == CsvOptions.Separator.COMMA) {
-            return new CsvTable(sourceName, separator, CsvOptions.DecimalMark.POINT, false, "", header, records,
-                    lines);
+            return new CsvTable(sourceName, separator, CsvOptions.DecimalMark.POINT, false, "", headerLine, header,
+                    records, lines);
         }
         String point = null;
         boolean comma = false;
@@ -60,11 +62,11 @@ public final class CsvTable {
             }
         }
         if (point == null && comma) {
-            return new CsvTable(sourceName, separator, CsvOptions.DecimalMark.COMMA, false, "", header, records,
-                    lines);
+            return new CsvTable(sourceName, separator, CsvOptions.DecimalMark.COMMA, false, "", headerLine, header,
+                    records, lines);
         }
         return new CsvTable(sourceName, separator, CsvOptions.DecimalMark.POINT, false, point == null ? "" : point,
-                header, records, lines);
+                headerLine, header, records, lines);
     }
 
     /** @return the name used in messages */
@@ -115,7 +117,7 @@ public final class CsvTable {
     public int columnIndex(String name) throws CsvException {
         int i = header.indexOf(name);
         if (i < 0) {
-            throw new CsvException(sourceName, 1, 0, null, CsvMessages.noColumn(name, header) + separatorNote());
+            throw new CsvException(sourceName, headerLine, 0, null, CsvMessages.noColumn(name, header) + separatorNote());
         }
         return i;
     }
@@ -133,7 +135,7 @@ public final class CsvTable {
                 missing |= !header.contains(n);
             }
             if (missing) {
-                throw new CsvException(sourceName, 1, 0, null,
+                throw new CsvException(sourceName, headerLine, 0, null,
                         CsvMessages.oneColumn(header.get(0), List.of(names)) + separatorNote());
             }
         }
@@ -145,6 +147,15 @@ public final class CsvTable {
     private String separatorNote() {
         Character other = header.isEmpty() ? null : CsvReader.otherSeparator(header, separator);
         return other == null ? "" : "; " + CsvMessages.wrongSeparator(other, separator);
+    }
+
+    /**
+     * @param column 0-based, or -1 for the header as a whole
+     * @return a problem with the header row (line of the header, column number and name), for checks the
+     *     caller makes on the column names
+     */
+    public CsvException headerProblem(int column, String reason) {
+        return new CsvException(sourceName, headerLine, column + 1, column < 0 ? null : columnName(column), reason);
     }
 
     String proof() {

@@ -21,7 +21,45 @@ public final class Figures {
     /** The separator of digit groups: U+202F narrow no-break space, so a number never breaks over two lines. */
     public static final char GROUP = '\u202f';
 
+    /**
+     * Significant digits of working figures in tables and charts (u(x_i), c_i, u_i(y), Monte Carlo statistics):
+     * one more than the two of a stated result (JCGM 100:2008 7.2.6), so that rounding is not compounded.
+     */
+    public static final int WORKING_DIGITS = 3;
+
     private Figures() {
+    }
+
+    /** @return a working figure to {@link #WORKING_DIGITS} significant digits, e.g. {@code 0.00289}, {@code 2.89 × 10⁻⁵} */
+    public static String working(double v) {
+        return sig(v, WORKING_DIGITS);
+    }
+
+    /**
+     * Reads back a number as {@link Figures} writes it: U+2212 minus, digit groups separated by U+202F, and
+     * powers of ten written {@code × 10⁻⁵}; anything else is left as it is.
+     *
+     * @param shown the text
+     * @return the same number in plain computer notation, e.g. {@code -2.89e-5}
+     */
+    public static String plain(String shown) {
+        String t = shown.strip().replace('\u2212', '-').replace(String.valueOf(GROUP), "");
+        int times = t.indexOf(" \u00d7 10");
+        if (times < 0) {
+            return t;
+        }
+        StringBuilder e = new StringBuilder();
+        for (char c : t.substring(times + 5).toCharArray()) {
+            int d = SUPERSCRIPTS.indexOf(c);
+            if (c == '\u207b') {
+                e.append('-');
+            } else if (d >= 0) {
+                e.append((char) ('0' + d));
+            } else {
+                return t;
+            }
+        }
+        return t.substring(0, times) + "e" + e;
     }
 
     /** @return {@code v} to {@code digits} significant digits, e.g. {@code 2.50 × 10⁻⁵}, {@code 0.0316}, {@code 575} */

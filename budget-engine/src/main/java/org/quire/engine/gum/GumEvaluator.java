@@ -7,6 +7,7 @@ import java.util.Locale;
 import java.util.Map;
 import org.apache.commons.math3.analysis.differentiation.DerivativeStructure;
 import org.quire.engine.budget.Budget;
+import org.quire.engine.budget.CoverageFactor;
 import org.quire.engine.budget.CorrelationMatrix;
 import org.quire.engine.budget.EvaluationSettings;
 import org.quire.engine.budget.Evaluation;
@@ -80,22 +81,25 @@ public final class GumEvaluator {
         double[] y = model.evaluate(x);
         int[] active = java.util.stream.IntStream.range(0, n).filter(i -> u[i] > 0).toArray();
         boolean correlated = !r.isIdentity();
-        boolean higher = settings.higherOrder() && !correlated;
+        boolean higher = settings.higherOrder() && !(correlated && correlatedNonNormal(inputs, r));
+        HigherOrderTerms higherTerms = !settings.higherOrder() ? HigherOrderTerms.NOT_REQUESTED
+                : higher ? HigherOrderTerms.INCLUDED : HigherOrderTerms.NOT_INCLUDED;
         List<String> globalWarnings = new ArrayList<>();
         for (ModelProblem w : model.warnings()) {
             globalWarnings.add(w.toString().replaceFirst("^warning: ", ""));
         }
-        if (settings.higherOrder() && correlated) {
-            globalWarnings.add("higher-order terms were not added: JCGM 100 5.1.2 gives them for uncorrelated "
-                    + "inputs only");
+        if (higherTerms == HigherOrderTerms.NOT_INCLUDED) {
+            globalWarnings.add("higher-order terms were not included: some correlated inputs are not normal, and "
+                    + "the terms of JCGM 100:2008 5.1.2 note need the higher moments of a normal distribution");
         }
-        DerivativeStructure[] ds = model.derivatives(x, active, higher ? 3 : 1);
+        DerivativeStructure[] ds = higher ? model.derivatives(x, active, 3) : null;
+        double[][] firstOrder = higher ? null : model.sensitivities(x, active);
         int m = y.length;
         Conversion[] shown = displayConversions(budget, model);
         double[][] c = new double[m][n];
         for (int k = 0; k < m; k++) {
             for (int a = 0; a < active.length; a++) {
-                c[k][active[a]] = partial(ds[k], active.length, a, -1, -1);
+                c[k][active[a]] = higher ? partial(ds[k], active.length, a, -1, -1) : firstOrder[k][a];
                 if (!Double.isFinite(c[k][active[a]])) {
                     throw new ModelException(new ModelProblem(0, 0, 0, ModelProblem.Severity.ERROR,
                             "the sensitivity coefficient of output '" + model.outputNames().get(k) + "' to input '"
@@ -109,8 +113,16 @@ public final class GumEvaluator {
             for (int l = 0; l < m; l++) {
                 double s = 0;
                 for (int i : active) {
+                    if (!correlated) {
+                        // r is the identity: only the terms i = j remain, so the cost is linear in the inputs
+                        s += c[k][i] * c[l][i] * u[i] * u[i];
+                        continue;
+                    }
                     for (int j : active) {
-                        s += c[k][i] * c[l][j] * u[i] * u[j] * r.get(i, j);
+                        double rij = r.get(i, j);
+                        if (rij != 0) {
+                            s += c[k][i] * c[l][j] * u[i] * u[j] * rij;
+                        }
                     }
                 }
                 cov[k][l] = s;
@@ -122,7 +134,7 @@ public final class GumEvaluator {
             List<String> warnings = new ArrayList<>();
             double higherVar = 0;
             if (higher) {
-                higherVar = higherOrderVariance(ds[k], active, u);
+                higherVar = correlated ? higherOrderVariance(ds[k], active, u, r) : higherOrderVariance(ds[k], active, u);
             }
             double variance = cov[k][k] + higherVar;
             double uc = Math.sqrt(Math.max(0, variance));
@@ -162,8 +174,16 @@ public final class GumEvaluator {
                 warnings.add("inputs are correlated; the Welch–Satterthwaite formula assumes independent inputs, "
                         + "so nu_eff is approximate");
             }
-            if (uc == 0) {
-                warnings.add("u_c(" + name + ") is zero: no input with an uncertainty affects this output");
+            boolean anySensitive = false;
+            for (int i : active) {
+                anySensitive |= c[k][i] != 0;
+            }
+            if (uc == 0 && active.length > 0 && !anySensitive) {
+                warnings.add(firstOrderZero(name, higher));
+            } else if (uc == 0 && active.length > 0) {
+                warnings.add("u_c(" + name + ") is zero: the correlated contributions cancel exactly");
+            } else if (uc == 0) {
+                warnings.add("u_c(" + name + ") is zero: no input has an uncertainty");
             }
             double dofUsed = nuEff;
             if (settings.dofRounding() == EvaluationSettings.DofRounding.TRUNCATE && !Double.isInfinite(nuEff)) {
@@ -178,7 +198,7 @@ public final class GumEvaluator {
                 p = settings.coverageProbability();
                 kFactor = CoverageFactor.of(p, dofUsed);
             }
-            OutputResult result = new OutputResult(name, unitOf(budget, name), y[k], uc, corrVar, higherVar, nuEff,
+            OutputResult result = new OutputResult(name, unitOf(budget, name), y[k], uc, corrVar, higherVar, higherTerms, nuEff,
                     dofUsed, kFactor, p, kFactor * uc, rows, terms, warnings);
             outs.add(shown[k] == null ? result : result.inUnit(shown[k].to().symbol(), shown[k]));
         }
@@ -282,6 +302,92 @@ public final class GumEvaluator {
             orders[c]++;
         }
         return f.getPartialDerivative(orders);
+    }
+
+    /**
+     * The warning for an output whose u_c is zero although inputs are uncertain: every first-order sensitivity
+     * coefficient vanishes at the estimates (a minimum or maximum of the model, as Y = X^2 at x = 0).
+     */
+    static String firstOrderZero(String output, boolean higherIncluded) {
+        return "u_c(" + output + ") is zero: the first-order law of propagation gives zero because every sensitivity "
+                + "coefficient vanishes at the estimates, although the output does vary"
+                + (higherIncluded ? "; the higher-order terms are zero too" : "; include the higher-order terms "
+                        + "(JCGM 100:2008 5.1.2 note)") + " or use the Monte Carlo method (JCGM 101:2008), which "
+                + "does not linearise the model";
+    }
+
+    /** @return true when a pair of correlated inputs has an input whose distribution is not normal */
+    private static boolean correlatedNonNormal(List<InputQuantity> inputs, CorrelationMatrix r) {
+        for (int i = 0; i < inputs.size(); i++) {
+            for (int j = 0; j < inputs.size(); j++) {
+                if (i != j && r.get(i, j) != 0 && !(inputs.get(i).evaluation().distribution()
+                        instanceof org.quire.engine.budget.Distribution.Normal)) {
+                    return true;
+                }
+            }
+        }
+        return false;
+    }
+
+    /**
+     * The higher-order terms for correlated normal inputs, the general form of JCGM 100:2008 5.1.2 note with the
+     * covariance matrix V (V_ij = u_i u_j r_ij), from the Taylor series to third order and the moments of a
+     * multivariate normal distribution (Isserlis' theorem: E[d_l d_i d_j d_k] = V_li V_jk + V_lj V_ik + V_lk V_ij):
+     * (1/2) tr(H V H V) + sum over l, i, j, k of g_l V_li f_ijk V_jk, with g the gradient, H the Hessian and f_ijk
+     * the third derivatives at the estimates. For a diagonal V it is the double sum of the note.
+     */
+    private static double higherOrderVariance(DerivativeStructure f, int[] active, double[] u, CorrelationMatrix r) {
+        int p = active.length;
+        double[][] v = new double[p][p];
+        double[][] h = new double[p][p];
+        double[] g = new double[p];
+        for (int a = 0; a < p; a++) {
+            g[a] = partial(f, p, a, -1, -1);
+            for (int b = 0; b < p; b++) {
+                v[a][b] = u[active[a]] * u[active[b]] * r.get(active[a], active[b]);
+                h[a][b] = partial(f, p, a, b, -1);
+            }
+        }
+        double[][] hv = new double[p][p];
+        for (int a = 0; a < p; a++) {
+            for (int c = 0; c < p; c++) {
+                double s = 0;
+                for (int b = 0; b < p; b++) {
+                    s += h[a][b] * v[b][c];
+                }
+                hv[a][c] = s;
+            }
+        }
+        double trace = 0;
+        for (int a = 0; a < p; a++) {
+            for (int b = 0; b < p; b++) {
+                trace += hv[a][b] * hv[b][a];
+            }
+        }
+        double[] gv = new double[p]; // (V g)_i
+        for (int i = 0; i < p; i++) {
+            double s = 0;
+            for (int l = 0; l < p; l++) {
+                s += v[i][l] * g[l];
+            }
+            gv[i] = s;
+        }
+        double third = 0;
+        for (int i = 0; i < p; i++) {
+            if (gv[i] == 0) {
+                continue;
+            }
+            double w = 0;
+            for (int j = 0; j < p; j++) {
+                for (int k = 0; k < p; k++) {
+                    if (v[j][k] != 0) {
+                        w += partial(f, p, i, j, k) * v[j][k];
+                    }
+                }
+            }
+            third += gv[i] * w;
+        }
+        return 0.5 * trace + third;
     }
 
     /** JCGM 100:2008 5.1.2 note, the double sum over all i and j. */

@@ -15,6 +15,7 @@ import org.quire.engine.units.Conversion;
  * @param standardUncertainty u_c(y), including correlation and (when chosen) higher-order terms
  * @param correlationVariance the sum of the correlation terms in u_c^2(y)
  * @param higherOrderVariance the higher-order terms added to u_c^2(y) (JCGM 100:2008 5.1.2 note), 0 if none
+ * @param higherOrderTerms whether those terms are included, or why not
  * @param effectiveDof nu_eff by Welch–Satterthwaite (JCGM 100:2008 G.4.1, eq. G.2b); infinite when every nu_i is
  * @param dofUsed the degrees of freedom used for k (nu_eff truncated to an integer unless settings say otherwise)
  * @param coverageFactor k
@@ -25,11 +26,14 @@ import org.quire.engine.units.Conversion;
  * @param warnings sentences about limits of the result (correlated inputs and Welch–Satterthwaite, ...)
  */
 public record OutputResult(String name, String unit, double estimate, double standardUncertainty,
-        double correlationVariance, double higherOrderVariance, double effectiveDof, double dofUsed,
+        double correlationVariance, double higherOrderVariance, HigherOrderTerms higherOrderTerms, double effectiveDof, double dofUsed,
         double coverageFactor, double coverageProbability, double expandedUncertainty,
         List<Contribution> contributions, List<CorrelationTerm> correlationTerms, List<String> warnings) {
 
     public OutputResult {
+        if (higherOrderTerms == null) {
+            throw new IllegalArgumentException("higherOrderTerms must be given");
+        }
         contributions = List.copyOf(contributions);
         correlationTerms = List.copyOf(correlationTerms);
         warnings = List.copyOf(warnings);
@@ -70,7 +74,7 @@ public record OutputResult(String name, String unit, double estimate, double sta
             terms.add(new CorrelationTerm(t.first(), t.second(), t.r(), c.variance(t.variance())));
         }
         return new OutputResult(name, shownUnit, c.point(estimate), c.difference(standardUncertainty),
-                c.variance(correlationVariance), c.variance(higherOrderVariance), effectiveDof, dofUsed,
+                c.variance(correlationVariance), c.variance(higherOrderVariance), higherOrderTerms, effectiveDof, dofUsed,
                 coverageFactor, coverageProbability, c.difference(expandedUncertainty), rows, terms, warnings);
     }
 

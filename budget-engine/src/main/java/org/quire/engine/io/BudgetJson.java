@@ -170,7 +170,7 @@ public final class BudgetJson {
         }
         List<CalibrationLine> dataSets = root.has("dataSets") ? DataSetJson.readAll(root.get("dataSets")) : List.of();
         List<InputQuantity> inputs = new ArrayList<>();
-        List<String> seen = new ArrayList<>();
+        java.util.Set<String> seen = new java.util.HashSet<>();
         for (JsonCursor in : root.get("inputs").elements()) {
             InputQuantity q = readInput(in, dataSets);
             if (seen.contains(q.name())) {
@@ -546,7 +546,8 @@ public final class BudgetJson {
         return b.build();
     }
 
-    static void addNumber(JsonObjectBuilder b, String key, double v) {
+    /** Adds {@code v} to {@code b}: infinity as the string "inf", NaN as null, otherwise as {@link #decimal}. */
+    public static void addNumber(JsonObjectBuilder b, String key, double v) {
         if (Double.isInfinite(v)) {
             b.add(key, "inf");
         } else if (Double.isNaN(v)) {

@@ -3,12 +3,11 @@ package org.quire.engine.io;
 import jakarta.json.JsonArrayBuilder;
 import jakarta.json.JsonObject;
 import jakarta.json.JsonObjectBuilder;
-import org.quire.engine.montecarlo.BudgetSimulation;
 import org.quire.engine.montecarlo.CoverageInterval;
 import org.quire.engine.montecarlo.GumComparison;
 import org.quire.engine.montecarlo.Histogram;
+import org.quire.engine.montecarlo.MonteCarloOutcome;
 import org.quire.engine.montecarlo.MonteCarloResult;
-import org.quire.engine.montecarlo.OutputSummary;
 
 /**
  * A Monte Carlo outcome as JSON, as {@code quire montecarlo --format json} prints it and worked examples point
@@ -18,16 +17,11 @@ public final class MonteCarloJson {
     private MonteCarloJson() {
     }
 
-    /** @return the JSON word of a verdict: {@code confirmed} or {@code not-confirmed} */
-    public static String verdict(GumComparison c) {
-        return c.confirmed() ? "confirmed" : "not-confirmed";
-    }
-
     /**
      * @param withHistogram whether to include each output's histogram (bin edges and counts)
      * @return the outcome as JSON
      */
-    public static JsonObject toJson(BudgetSimulation.Outcome o, boolean withHistogram) {
+    public static JsonObject toJson(MonteCarloOutcome o, boolean withHistogram) {
         MonteCarloResult r = o.result();
         JsonObjectBuilder b = JsonSupport.JSON.createObjectBuilder();
         b.add("format", "quire-montecarlo");
@@ -41,23 +35,32 @@ public final class MonteCarloJson {
         b.add("stabilized", r.stabilized());
         JsonArrayBuilder outs = JsonSupport.JSON.createArrayBuilder();
         for (int k = 0; k < r.outputCount(); k++) {
-            OutputSummary s = r.output(k);
-            GumComparison c = o.comparisons().get(k);
+            MonteCarloOutcome.Output s = o.output(k);
+            GumComparison c = s.comparison();
             JsonObjectBuilder ob = JsonSupport.JSON.createObjectBuilder();
-            ob.add("name", o.outputNames().get(k));
-            ob.add("mean", s.mean());
-            ob.add("standardUncertainty", s.standardUncertainty());
-            ob.add("validTrials", s.validTrials());
-            ob.add("excludedTrials", s.excludedTrials());
-            s.exclusionNote().ifPresent(n -> ob.add("exclusionNote", n));
+            ob.add("name", s.name());
+            ob.add("unit", s.unit());
+            ob.add("mean", s.estimate());
+            if (s.hasStandardUncertainty()) {
+                ob.add("standardUncertainty", s.standardUncertainty());
+            } else {
+                ob.addNull("standardUncertainty");
+                ob.add("standardUncertaintyNote", s.standardUncertaintyNote().orElseThrow());
+            }
+            ob.add("validTrials", s.summary().validTrials());
+            ob.add("excludedTrials", s.summary().excludedTrials());
+            s.summary().exclusionNote().ifPresent(n -> ob.add("exclusionNote", n));
             ob.add("symmetricInterval", interval(s.symmetricInterval()));
             ob.add("shortestInterval", interval(s.shortestInterval()));
-            ob.add("comparison", JsonSupport.JSON.createObjectBuilder()
-                    .add("tolerance", c.tolerance())
-                    .add("lowerDifference", c.lowerDifference())
+            ob.add("gumInterval", interval(s.gumInterval()));
+            JsonObjectBuilder cb = JsonSupport.JSON.createObjectBuilder();
+            BudgetJson.addNumber(cb, "tolerance", c.tolerance());
+            cb.add("lowerDifference", c.lowerDifference())
                     .add("upperDifference", c.upperDifference())
                     .add("significantDigits", c.significantDigits())
-                    .add("verdict", verdict(c)));
+                    .add("verdict", c.verdict().word())
+                    .add("reason", c.reason());
+            ob.add("comparison", cb);
             if (withHistogram) {
                 Histogram h = s.histogram();
                 JsonArrayBuilder edges = JsonSupport.JSON.createArrayBuilder();
@@ -68,7 +71,12 @@ public final class MonteCarloJson {
                 for (long n : h.counts()) {
                     counts.add(n);
                 }
-                ob.add("histogram", JsonSupport.JSON.createObjectBuilder().add("edges", edges).add("counts", counts));
+                JsonArrayBuilder gum = JsonSupport.JSON.createArrayBuilder();
+                for (double p : s.gumBinProbabilities()) {
+                    gum.add(p);
+                }
+                ob.add("histogram", JsonSupport.JSON.createObjectBuilder().add("edges", edges).add("counts", counts)
+                        .add("gumProbabilities", gum));
             }
             outs.add(ob);
         }
@@ -77,7 +85,7 @@ public final class MonteCarloJson {
             b.add("outputCorrelation", ResultJson.matrix(r.outputCorrelation()));
         }
         JsonArrayBuilder notes = JsonSupport.JSON.createArrayBuilder();
-        r.notes().forEach(notes::add);
+        o.notes().forEach(notes::add);
         b.add("notes", notes);
         return b.build();
     }

@@ -51,6 +51,11 @@ public final class ResultJson {
         return o.build();
     }
 
+    /** @return one output's result as in {@link #toJson}'s {@code outputs} list, rounded to {@code digits} */
+    public static JsonObject outputJson(OutputResult out, int digits) {
+        return output(out, digits);
+    }
+
     private static JsonObject output(OutputResult out, int digits) {
         JsonObjectBuilder b = JsonSupport.JSON.createObjectBuilder();
         b.add("name", out.name());
@@ -65,6 +70,7 @@ public final class ResultJson {
         BudgetJson.addNumber(b, "relativeExpandedUncertainty", out.relativeExpandedUncertainty());
         b.add("correlationVariance", out.correlationVariance());
         b.add("higherOrderVariance", out.higherOrderVariance());
+        b.add("higherOrderTerms", out.higherOrderTerms().text());
         b.add("rounded", JsonSupport.JSON.createObjectBuilder()
                 .add("estimate", Rounding.estimate(out.estimate(), out.expandedUncertainty(), digits).toPlainString())
                 .add("expandedUncertainty", Rounding.uncertainty(out.expandedUncertainty(), digits).toPlainString())
@@ -97,7 +103,8 @@ public final class ResultJson {
         return b.build();
     }
 
-    static JsonArrayBuilder matrix(double[][] m) {
+    /** @return the rows of {@code m} as JSON arrays, a non-finite entry as null */
+    public static JsonArrayBuilder matrix(double[][] m) {
         JsonArrayBuilder a = JsonSupport.JSON.createArrayBuilder();
         for (double[] row : m) {
             JsonArrayBuilder r = JsonSupport.JSON.createArrayBuilder();

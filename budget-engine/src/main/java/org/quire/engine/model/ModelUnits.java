@@ -31,6 +31,28 @@ public final class ModelUnits {
     }
 
     /**
+     * All units at once, in time linear in their number (the {@code with...} methods copy the maps each time).
+     *
+     * @param inputUnits unit text by input name; null or blank values for "not stated"
+     * @param outputUnits unit text by output name, the unit each equation computes in
+     * @param displayUnits display unit text by output name; null or blank to show an output in its unit
+     * @return the units
+     */
+    public static ModelUnits of(Map<String, String> inputUnits, Map<String, String> outputUnits,
+            Map<String, String> displayUnits) {
+        return new ModelUnits(texts(inputUnits, "input"), texts(outputUnits, "output"),
+                texts(displayUnits, "output"));
+    }
+
+    private static Map<String, String> texts(Map<String, String> m, String what) {
+        Map<String, String> r = new LinkedHashMap<>();
+        for (Map.Entry<String, String> e : Objects.requireNonNull(m, what + " units").entrySet()) {
+            r.put(Objects.requireNonNull(e.getKey(), what + " name"), text(e.getValue()));
+        }
+        return java.util.Collections.unmodifiableMap(r);
+    }
+
+    /**
      * @param name an input's name
      * @param unit its unit as text; null or blank for "not stated"
      * @return a copy with the input's unit set

@@ -26,20 +26,6 @@ public final class BudgetSimulation {
     private BudgetSimulation() {
     }
 
-    /**
-     * One Monte Carlo run of a budget with its GUM comparison.
-     *
-     * @param result the Monte Carlo result
-     * @param comparisons per output, in output order: the clause-8 comparison with the GUM result
-     * @param outputNames the output names
-     */
-    public record Outcome(MonteCarloResult result, List<GumComparison> comparisons, List<String> outputNames) {
-        public Outcome {
-            comparisons = List.copyOf(comparisons);
-            outputNames = List.copyOf(outputNames);
-        }
-    }
-
     /** @return the Monte Carlo settings that a budget's evaluation settings ask for */
     public static MonteCarloSettings settings(EvaluationSettings s, GumResult gum) {
         double p = s.coverageProbability();
@@ -66,7 +52,7 @@ public final class BudgetSimulation {
         if (r.isIdentity()) {
             return InputSampler.of(d);
         }
-        return InputSampler.of(d, CorrelationMatrix.of(r.toArray()));
+        return InputSampler.of(d, r);
     }
 
     /**
@@ -76,17 +62,39 @@ public final class BudgetSimulation {
      * @param listener progress and cancellation
      * @throws MonteCarloCancelledException when the listener asks to stop
      */
-    public static Outcome run(Budget budget, CompiledModel model, GumResult gum, MonteCarloSettings settings,
-            ProgressListener listener) throws org.quire.engine.model.ModelException {
+    public static MonteCarloOutcome run(Budget budget, CompiledModel model, GumResult gum,
+            MonteCarloSettings settings, ProgressListener listener) throws org.quire.engine.model.ModelException {
         Conversion[] shown = org.quire.engine.gum.GumEvaluator.displayConversions(budget, model);
         MonteCarloResult r = MonteCarlo.run(displayed(model, shown), sampler(budget), settings, listener);
-        List<GumComparison> cmp = new ArrayList<>();
+        List<MonteCarloOutcome.Output> outputs = new ArrayList<>();
         for (int k = 0; k < r.outputCount(); k++) {
             OutputResult g = gum.outputs().get(k);
-            cmp.add(GumComparison.of(r.output(k), g.estimate(), g.standardUncertainty(), g.expandedUncertainty(),
-                    settings.significantDigits()));
+            GumComparison c = GumComparison.of(r.output(k), g.estimate(), g.standardUncertainty(),
+                    g.expandedUncertainty(), settings.significantDigits());
+            double nu = g.dofUsed() > 0 ? g.dofUsed() : Double.POSITIVE_INFINITY;
+            outputs.add(MonteCarloOutcome.Output.of(model.outputNames().get(k), g.unit(), r.output(k), c, nu,
+                    undefinedStandardUncertainty(budget, g)));
         }
-        return new Outcome(r, cmp, model.outputNames());
+        return MonteCarloOutcome.of(r, outputs);
+    }
+
+    /**
+     * Why an output has no standard uncertainty, or null when it has one: it depends on an input drawn from a t
+     * distribution with nu &lt;= 2 degrees of freedom, which has no finite variance (JCGM 101:2008 6.4.9: the
+     * variance of t_nu(mu, s^2) is nu s^2 / (nu - 2), for nu &gt; 2 only), so the spread of the trial values
+     * settles on no value as M grows. An input counts when its sensitivity coefficient is not zero, or when
+     * every first-order coefficient vanishes (then which inputs matter is not known from the GUM result).
+     */
+    static String undefinedStandardUncertainty(Budget budget, OutputResult g) {
+        for (InputQuantity q : budget.inputs()) {
+            if (q.evaluation().distribution() instanceof Distribution.StudentT t && t.dof() <= 2) {
+                org.quire.engine.gum.Contribution c = g.contribution(q.name());
+                if (!(g.standardUncertainty() > 0) || c == null || c.sensitivity() != 0) {
+                    return Messages.standardUncertaintyUndefined(q.name(), t.dof());
+                }
+            }
+        }
+        return null;
     }
 
     /**

@@ -10,8 +10,16 @@ import java.math.RoundingMode;
  *
  * <p>The numerical tolerance delta is that of the GUM standard uncertainty u(y) at n_dig significant decimal
  * digits: u(y) written as c x 10^l with c an n_dig-digit integer gives delta = 10^l / 2. With
- * d_low = |y - U_p - y_low| and d_high = |y + U_p - y_high|, the GUM result is {@link Verdict#CONFIRMED} when
- * both are at most delta, otherwise {@link Verdict#NOT_CONFIRMED}.
+ * d_low = |y - U_p - y_low| and d_high = |y + U_p - y_high|, the GUM result is {@link Verdict#VALIDATED} when
+ * both are at most delta, otherwise {@link Verdict#NOT_VALIDATED}. {@link #reason()} says why in a sentence.
+ *
+ * <p>When the GUM standard uncertainty is zero although the inputs are uncertain (every first-order sensitivity
+ * coefficient vanishes at the estimates, as for a model like Y = X^2 with the estimate of X at zero), the GUM
+ * interval collapses to the point y: there is nothing to compare and no tolerance, the verdict is
+ * {@link Verdict#NOT_VALIDATED} and the reason says that the first-order law of propagation gave zero. This is
+ * the case for which JCGM 101:2008 clause 9 shows the Monte Carlo method matters most (from memory: 9.4, the
+ * comparison loss in microwave power meter calibration, Y = X_1^2 + X_2^2, where with the estimates of X_1 and
+ * X_2 at zero the first-order law gives u(y) = 0 although Y certainly varies).
  *
  * <p>Immutable and thread-safe.
  *
@@ -21,10 +29,18 @@ import java.math.RoundingMode;
 public final class GumComparison {
     /** The outcome of the comparison. */
     public enum Verdict {
-        /** Both interval ends agree within the numerical tolerance: the GUM result stands. */
-        CONFIRMED,
-        /** An interval end differs by more than the tolerance: use the Monte Carlo result. */
-        NOT_CONFIRMED
+        /**
+         * Both interval ends agree within the numerical tolerance: the use of the GUM uncertainty framework is
+         * validated in this instance (JCGM 101:2008 8.2 c).
+         */
+        VALIDATED,
+        /** An interval end differs by more than the tolerance, or there is no GUM interval: use Monte Carlo. */
+        NOT_VALIDATED;
+
+        /** @return the word used in JSON and tables: {@code validated} or {@code not-validated} */
+        public String word() {
+            return this == VALIDATED ? "validated" : "not-validated";
+        }
     }
 
     private final double gumEstimate;
@@ -42,7 +58,7 @@ public final class GumComparison {
         this.gumExpandedUncertainty = expanded;
         this.monteCarloInterval = mc;
         this.significantDigits = digits;
-        this.tolerance = numericalTolerance(u, digits);
+        this.tolerance = u > 0 ? numericalTolerance(u, digits) : Double.NaN;
         this.lowerDifference = Math.abs(y - expanded - mc.lower());
         this.upperDifference = Math.abs(y + expanded - mc.upper());
     }
@@ -57,8 +73,10 @@ public final class GumComparison {
      *
      * @param monteCarlo the output's Monte Carlo summary
      * @param gumEstimate the GUM estimate y
-     * @param gumStandardUncertainty the GUM standard uncertainty u(y), positive
-     * @param gumExpandedUncertainty the GUM expanded uncertainty U_p for the run's coverage probability
+     * @param gumStandardUncertainty the GUM standard uncertainty u(y), positive, or zero when the first-order law
+     *     of propagation gives zero (the verdict is then {@link Verdict#NOT_VALIDATED})
+     * @param gumExpandedUncertainty the GUM expanded uncertainty U_p for the run's coverage probability (zero
+     *     with u(y))
      * @param significantDigits n_dig, 1 .. 15
      */
     public static GumComparison of(OutputSummary monteCarlo, double gumEstimate, double gumStandardUncertainty,
@@ -81,13 +99,14 @@ public final class GumComparison {
         if (!Double.isFinite(gumEstimate)) {
             throw new IllegalArgumentException(Messages.notFinite("GUM estimate", gumEstimate));
         }
-        if (!(gumStandardUncertainty > 0) || !Double.isFinite(gumStandardUncertainty)) {
+        if (!(gumStandardUncertainty >= 0) || !Double.isFinite(gumStandardUncertainty)) {
             throw new IllegalArgumentException(
-                    Messages.uncertaintyNotPositive("GUM standard uncertainty", gumStandardUncertainty));
+                    Messages.uncertaintyNegative("GUM standard uncertainty", gumStandardUncertainty));
         }
-        if (!(gumExpandedUncertainty > 0) || !Double.isFinite(gumExpandedUncertainty)) {
+        if (!(gumExpandedUncertainty >= 0) || !Double.isFinite(gumExpandedUncertainty)
+                || (gumExpandedUncertainty > 0) != (gumStandardUncertainty > 0)) {
             throw new IllegalArgumentException(
-                    Messages.uncertaintyNotPositive("GUM expanded uncertainty", gumExpandedUncertainty));
+                    Messages.uncertaintyNegative("GUM expanded uncertainty", gumExpandedUncertainty));
         }
         if (significantDigits < 1 || significantDigits > 15) {
             throw new IllegalArgumentException(Messages.significantDigitsOutside(significantDigits));
@@ -119,16 +138,30 @@ public final class GumComparison {
 
     /** @return the verdict */
     public Verdict verdict() {
-        return lowerDifference <= tolerance && upperDifference <= tolerance ? Verdict.CONFIRMED
-                : Verdict.NOT_CONFIRMED;
+        return lowerDifference <= tolerance && upperDifference <= tolerance ? Verdict.VALIDATED
+                : Verdict.NOT_VALIDATED;
     }
 
-    /** @return true when the verdict is {@link Verdict#CONFIRMED} */
-    public boolean confirmed() {
-        return verdict() == Verdict.CONFIRMED;
+    /** @return true when the verdict is {@link Verdict#VALIDATED} */
+    public boolean validated() {
+        return verdict() == Verdict.VALIDATED;
     }
 
-    /** @return the numerical tolerance delta */
+    /** @return true when the GUM standard uncertainty is zero: the first-order law of propagation gave zero */
+    public boolean firstOrderZero() {
+        return !(gumStandardUncertainty > 0);
+    }
+
+    /** @return one sentence saying why the verdict is what it is, with the figures compared */
+    public String reason() {
+        if (firstOrderZero()) {
+            return Messages.comparisonFirstOrderZero();
+        }
+        return validated() ? Messages.comparisonValidated(lowerDifference, upperDifference, tolerance)
+                : Messages.comparisonNotValidated(lowerDifference, upperDifference, tolerance);
+    }
+
+    /** @return the numerical tolerance delta, NaN when the GUM standard uncertainty is zero */
     public double tolerance() {
         return tolerance;
     }

@@ -16,6 +16,8 @@ import java.util.Optional;
  * standard uncertainty, eqs. (20) and (21)), 7.7 (coverage intervals from the sorted values).
  */
 public final class OutputSummary {
+    /** Percentiles that set the histogram's range (central 99.9 %) and bin width (the interquartile range). */
+    private static final double[] HISTOGRAM_CUTS = {0.0005, 0.25, 0.75, 0.9995};
     private final int index;
     private final long trials;
     private final long validTrials;
@@ -67,9 +69,8 @@ public final class OutputSummary {
         double[] a = values;
         int q = coverageCount(m, p);
         int tail = m - q; // JCGM 101:2008 7.7.3: the shortest interval starts at one of the m - q smallest values
-        double[] histProbabilities = {0.0005, 0.25, 0.75, 0.9995};
-        int[] more = concat(Percentiles.ranks(Percentiles.STANDARD, m), Percentiles.ranks(histProbabilities, m));
-        Selection.sortTails(a, m, Math.max(tail, 1), Math.max(tail, 1), more);
+        int[] more = concat(Percentiles.ranks(Percentiles.STANDARD, m), Percentiles.ranks(HISTOGRAM_CUTS, m));
+        OrderStatistics sorted = OrderStatistics.of(a, m, Math.max(tail, 1), more);
         double min = a[0];
         double max = a[m - 1];
 
@@ -96,8 +97,8 @@ public final class OutputSummary {
             shortest = CoverageInterval.of(a[best], a[best + q], p, CoverageInterval.Kind.SHORTEST);
         }
 
-        Percentiles percentiles = Percentiles.fromSelected(a, m, Percentiles.STANDARD);
-        Percentiles cuts = Percentiles.fromSelected(a, m, histProbabilities);
+        Percentiles percentiles = Percentiles.fromOrderStatistics(sorted, m, Percentiles.STANDARD);
+        Percentiles cuts = Percentiles.fromOrderStatistics(sorted, m, HISTOGRAM_CUTS);
         Histogram histogram = histogram(a, m, min, max, cuts);
         return new OutputSummary(index, trials, m, moments.mean[index], moments.standardUncertainty(index), min,
                 max, symmetric, shortest, histogram, percentiles);

@@ -60,14 +60,15 @@ public final class Percentiles {
         return r;
     }
 
-    /** The percentiles of a[0..size-1], whose order statistics at {@link #ranks} are in place. */
-    static Percentiles fromSelected(double[] a, int size, double[] probabilities) {
+    /** The percentiles of {@code size} values whose order statistics at {@link #ranks} {@code s} gives. */
+    static Percentiles fromOrderStatistics(OrderStatistics s, int size, double[] probabilities) {
         double[] v = new double[probabilities.length];
         for (int i = 0; i < probabilities.length; i++) {
             double h = probabilities[i] * (size - 1);
             int lo = (int) Math.floor(h);
             int hi = (int) Math.ceil(h);
-            v[i] = a[lo] + (h - lo) * (a[hi] - a[lo]);
+            double low = s.value(lo);
+            v[i] = low + (h - lo) * (s.value(hi) - low);
             if (i > 0 && v[i] < v[i - 1]) {
                 v[i] = v[i - 1]; // guard against rounding in the interpolation
             }

@@ -32,6 +32,9 @@ import org.quire.engine.model.FunctionLibrary;
  *     {@code dof}, returning {@code probabilityOfConformity}; or {@code flowUnit}, {@code mpe}, {@code rule}
  *     and {@code errors}, returning the decisions ({@link ConformityJson#assessmentJson}).</li>
  * <li>{@code flow-range}: the budget at its {@code flowPoints} ({@link FlowPointsJson#resultJson}).</li>
+ * <li>{@code calibration}: argument {@code file}, a calibration file relative to the example's folder, and
+ *     optionally {@code asLeft: "predicted"} to drop its measured as-left runs; the calibration evaluated
+ *     with its method template ({@link org.quire.engine.calibration.CalibrationResultJson}).</li>
  * </ul>
  * Stateless and thread-safe.
  */
@@ -123,5 +126,35 @@ final class CalibrationComputations {
             throw new IllegalArgumentException("the 'flow-range' computation needs a budget with flow points in the file");
         }
         return FlowPointsJson.resultJson(FlowRange.evaluate(budget, library));
+    }
+
+    /** @return the {@code calibration} computation */
+    static Computation meterCalibration(FunctionLibrary library) {
+        return new Computation() {
+            @Override
+            public JsonObject compute(Budget budget, JsonObject arguments, org.quire.engine.budget.EvaluationSettings s) {
+                throw new IllegalArgumentException("the 'calibration' computation needs the example's folder");
+            }
+
+            @Override
+            public JsonObject compute(Budget budget, JsonObject arguments, org.quire.engine.budget.EvaluationSettings s,
+                    java.nio.file.Path folder) throws Exception {
+                JsonCursor a = JsonCursor.root(arguments);
+                a.onlyFields(Set.of("file", "asLeft"));
+                java.nio.file.Path dir = folder == null ? java.nio.file.Path.of("") : folder;
+                java.nio.file.Path file = dir.resolve(a.get("file").string());
+                org.quire.engine.calibration.CalibrationJson.Loaded loaded = org.quire.engine.calibration.CalibrationJson.read(file);
+                org.quire.engine.calibration.Calibration c = loaded.calibration();
+                if (a.has("asLeft")) {
+                    if (!a.get("asLeft").string().equals("predicted")) {
+                        throw a.get("asLeft").error("the only choice is \"predicted\"");
+                    }
+                    c = c.withAsLeft(List.of());
+                }
+                org.quire.engine.document.Template method = org.quire.engine.calibration.CalibrationJson.method(file, loaded);
+                return org.quire.engine.calibration.CalibrationResultJson.toJson(
+                        org.quire.engine.calibration.CalibrationEvaluator.of(method, library).evaluate(c));
+            }
+        };
     }
 }

@@ -19,4 +19,15 @@ public interface Computation {
      * @throws Exception with a message saying what went wrong
      */
     JsonObject compute(Budget budget, JsonObject arguments, EvaluationSettings settings) throws Exception;
+
+    /**
+     * As {@link #compute(Budget, JsonObject, EvaluationSettings)}, for computations that read files named
+     * relative to the example file.
+     *
+     * @param folder the example file's folder
+     */
+    default JsonObject compute(Budget budget, JsonObject arguments, EvaluationSettings settings,
+            java.nio.file.Path folder) throws Exception {
+        return compute(budget, arguments, settings);
+    }
 }

@@ -18,7 +18,7 @@ import java.util.stream.Collectors;
 import java.util.stream.Stream;
 import org.quire.engine.budget.Budget;
 import org.quire.engine.budget.EvaluationSettings;
-import org.quire.engine.gum.CoverageFactor;
+import org.quire.engine.budget.CoverageFactor;
 import org.quire.engine.gum.GumEvaluator;
 import org.quire.engine.io.BudgetFormatException;
 import org.quire.engine.io.BudgetJson;
@@ -66,7 +66,7 @@ public final class Validator {
             Budget b = budget.withSettings(settings);
             org.quire.engine.model.CompiledModel model = b.compile(library);
             org.quire.engine.gum.GumResult gum = GumEvaluator.evaluate(b, model, b.correlationMatrix(), settings);
-            org.quire.engine.montecarlo.BudgetSimulation.Outcome o = org.quire.engine.montecarlo.BudgetSimulation.run(
+            org.quire.engine.montecarlo.MonteCarloOutcome o = org.quire.engine.montecarlo.BudgetSimulation.run(
                     b, model, gum, org.quire.engine.montecarlo.BudgetSimulation.settings(settings, gum),
                     org.quire.engine.montecarlo.ProgressListener.NONE);
             return org.quire.engine.io.MonteCarloJson.toJson(o, false);
@@ -81,6 +81,7 @@ public final class Validator {
         m.put("conformity", (budget, args, settings) -> CalibrationComputations.conformity(args));
         m.put("flow-range", (budget, args, settings) ->
                 CalibrationComputations.flowRange(budget == null ? null : budget.withSettings(settings), library));
+        m.put("calibration", CalibrationComputations.meterCalibration(library));
         return new Validator(m, library);
     }
 
@@ -114,7 +115,7 @@ public final class Validator {
         String name = file.getFileName().toString();
         try {
             JsonObject root = BudgetJson.parseObject(BudgetJson.readText(file));
-            return run(name, root);
+            return run(name, root, file.toAbsolutePath().getParent());
         } catch (IOException | BudgetFormatException e) {
             return List.of(new CheckOutcome(name, "", "(file)", "", "", "", false, e.getMessage()));
         }
@@ -122,6 +123,14 @@ public final class Validator {
 
     /** Runs the checks of one parsed example. */
     public List<CheckOutcome> run(String name, JsonObject root) {
+        return run(name, root, null);
+    }
+
+    /**
+     * Runs the checks of one parsed example whose files (for the {@code calibration} computation) are named
+     * relative to {@code folder} (null: the working folder).
+     */
+    public List<CheckOutcome> run(String name, JsonObject root, Path folder) {
         JsonCursor c = JsonCursor.root(root);
         List<CheckOutcome> out = new ArrayList<>();
         Budget budget = null;
@@ -138,13 +147,13 @@ public final class Validator {
         }
         Map<String, Object> cache = new HashMap<>();
         for (JsonCursor check : checks) {
-            out.add(check(name, fileSource, budget, check, cache));
+            out.add(check(name, fileSource, budget, check, cache, folder));
         }
         return out;
     }
 
     private CheckOutcome check(String name, String fileSource, Budget budget, JsonCursor check,
-            Map<String, Object> cache) {
+            Map<String, Object> cache, Path folder) {
         String figure = "";
         String source = fileSource;
         String expectedText = "";
@@ -167,7 +176,7 @@ public final class Validator {
             Object result = cache.get(key);
             if (result == null) {
                 try {
-                    result = comp.compute(budget, args, settings);
+                    result = comp.compute(budget, args, settings, folder);
                 } catch (Exception e) {
                     result = e;
                 }

@@ -5,16 +5,18 @@ import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import org.junit.jupiter.api.Test;
+import org.quire.engine.csv.CalibrationCsv;
+import org.quire.engine.csv.CsvException;
 
-/** The strict CSV reader of calibration data sets: format rules and errors naming line and column. */
+/** Calibration data sets through the one CSV reader: format rules and errors naming line and column. */
 class CalibrationCsvTest {
 
-    private static CalibrationCsvException failure(String text) {
-        return assertThrows(CalibrationCsvException.class, () -> CalibrationCsv.parse(text, "t", "L/s", "Hz"));
+    private static CsvException failure(String text) {
+        return assertThrows(CsvException.class, () -> CalibrationCsv.parse(text, "t", "L/s", "Hz"));
     }
 
     @Test
-    void readsColumnsInAnyOrderWithSemicolons() {
+    void readsColumnsInAnyOrderWithSemicolons() throws Exception {
         CalibrationData d = CalibrationCsv.parse("u_y; y; X\n0.2;10.5;1\n0.2;21.0;2\n0.3;31.4;3e0\n", "TV-PD-02",
                 "L/s", "Hz");
         assertEquals(3, d.size());
@@ -24,7 +26,7 @@ class CalibrationCsvTest {
     }
 
     @Test
-    void skipsCommentsAndBlankLinesAndAByteOrderMark() {
+    void skipsCommentsAndBlankLinesAndAByteOrderMark() throws Exception {
         CalibrationData d = CalibrationCsv.parse("\uFEFF# Tarrow Vale rig B\n\nx,y,u_x,u_y\n1,2,0.1,0.1\n\n"
                 + "2,4.5,0.1,0.1\n# end\n3,6,0.1,0.1\n", "t", "", "");
         assertEquals(3, d.size());
@@ -32,51 +34,69 @@ class CalibrationCsvTest {
     }
 
     @Test
-    void roundTripsThroughFormat() {
+    void roundTripsThroughFormat() throws Exception {
         CalibrationData d = CalibrationCsv.parse("x,y,u_x,u_y\n1,2.5,0.001,1e-4\n2,4.25,0,0.5\n3.125,6,0,0.5\n",
                 "rt", "", "");
         assertEquals(d.points(), CalibrationCsv.parse(CalibrationCsv.format(d), "rt", "", "").points());
     }
 
     @Test
-    void decimalCommaIsReportedWithLineAndColumn() {
-        CalibrationCsvException e = failure("x;y\n1;2\n2;4,5\n3;6\n");
+    void decimalCommaInAFileWithDecimalPointsIsReportedWithLineAndColumn() {
+        CsvException e = failure("x;y\n1;2.5\n2;4,5\n3;6\n");
         assertEquals(3, e.line());
         assertEquals(2, e.column());
-        assertEquals("line 3, column 2 (y): '4,5' is not a number (use a decimal point, not a decimal comma)",
-                e.getMessage());
+        assertEquals("y", e.columnName());
+        assertTrue(e.getMessage().startsWith("t, line 3, column 2 (y): \"4,5\" has a decimal comma"), e.getMessage());
+    }
+
+    @Test
+    void provenDecimalCommaIsRead() throws Exception {
+        CalibrationData d = CalibrationCsv.parse("x;y\n1;2,5\n2;4,5\n3;6,25\n", "t", "", "");
+        assertEquals(6.25, d.points().get(2).y());
     }
 
     @Test
     void nonNumbersAndEmptyCellsAreReportedWithLineAndColumn() {
-        CalibrationCsvException e = failure("x,y,u_y\n1,2,0.1\n2,4,NaN\n");
-        assertEquals("line 3, column 3 (u_y): 'NaN' is not a number", e.getMessage());
-        CalibrationCsvException empty = failure("x,y\n1,2\n,4\n3,5\n");
-        assertEquals("line 3, column 1 (x): is empty", empty.getMessage());
+        CsvException e = failure("x,y,u_y\n1,2,0.1\n2,4,NaN\n");
+        assertEquals("t, line 3, column 3 (u_y): \"NaN\" is not a number", e.getMessage());
+        CsvException empty = failure("x,y\n1,2\n,4\n3,5\n");
+        assertEquals(3, empty.line());
         assertEquals(1, empty.column());
+        assertTrue(empty.reason().contains("empty"), empty.getMessage());
     }
 
     @Test
     void wrongFieldCountIsReported() {
-        CalibrationCsvException e = failure("x,y\n1,2\n2,4,7\n");
+        CsvException e = failure("x,y\n1,2\n2,4,7\n");
         assertEquals(3, e.line());
-        assertEquals("line 3: 3 fields, but the header has 2", e.getMessage());
+        assertTrue(e.reason().startsWith("the row has 3 cells, but the header has 2 (x, y)"), e.getMessage());
     }
 
     @Test
     void headerErrorsAreReported() {
-        assertEquals("line 1, column 2: unknown column name 'flow'; expected x, y, u_x, u_y",
+        assertEquals("t, line 1, column 2 (flow): unknown column name 'flow'; expected x, y, u_x, u_y",
                 failure("x,flow\n1,2\n").getMessage());
-        assertEquals("line 2, column 3: column 'x' is named twice", failure("# c\nx,y,x\n1,2,3\n").getMessage());
-        assertTrue(failure("x,u_y\n1,2\n").getMessage().startsWith("line 1: the header has no column 'y'"));
-        assertTrue(failure("# only a comment\n").getMessage().contains("no header line"));
+        CsvException twice = failure("# c\nx,y,X\n1,2,3\n");
+        assertEquals(2, twice.line());
+        assertEquals(3, twice.column());
+        assertTrue(failure("x,u_y\n1,2\n").reason().startsWith("there is no column \"y\""));
+        assertTrue(failure("# only a comment\n").reason().contains("no rows"));
+    }
+
+    @Test
+    void wrongSeparatorIsSaidSo() {
+        // a semicolon file read as one column shows as the single column "x;y"
+        CsvException e = assertThrows(CsvException.class, () -> CalibrationCsv.of(
+                org.quire.engine.csv.CsvReader.parse("t", "x;y\n1;2\n", org.quire.engine.csv.CsvOptions.defaults()
+                        .withSeparator(org.quire.engine.csv.CsvOptions.Separator.COMMA)), "t", "", ""));
+        assertTrue(e.reason().contains("separated by ';'"), e.getMessage());
     }
 
     @Test
     void invalidPointsAndTooFewPointsAreReported() {
-        CalibrationCsvException neg = failure("x,y,u_y\n1,2,0.1\n2,4,-0.1\n3,6,0.1\n");
-        assertEquals("line 3: u(y) must not be negative, not -0.1", neg.getMessage());
-        CalibrationCsvException few = failure("x,y\n1,2\n2,4\n");
-        assertTrue(few.getMessage().endsWith("a calibration line needs at least 3 points, got 2"), few.getMessage());
+        CsvException neg = failure("x,y,u_y\n1,2,0.1\n2,4,-0.1\n3,6,0.1\n");
+        assertEquals("t, line 3: u(y) must not be negative, not -0.1", neg.getMessage());
+        CsvException few = failure("x,y\n1,2\n2,4\n");
+        assertTrue(few.getMessage().contains("a calibration line needs at least 3 points, got 2"), few.getMessage());
     }
 }

@@ -2,10 +2,9 @@ package org.quire.engine.line;
 
 import java.io.IOException;
 import java.io.InputStream;
-import java.io.InputStreamReader;
-import java.io.Reader;
 import java.io.UncheckedIOException;
 import java.nio.charset.StandardCharsets;
+import org.quire.engine.csv.CalibrationCsv;
 
 /** Loads the calibration data sets kept beside the tests. */
 final class LineTestData {
@@ -17,11 +16,11 @@ final class LineTestData {
             if (in == null) {
                 throw new IllegalStateException("test resource " + resource + " is missing");
             }
-            try (Reader r = new InputStreamReader(in, StandardCharsets.UTF_8)) {
-                return CalibrationCsv.read(r, resource, xUnit, yUnit);
-            }
+            return CalibrationCsv.parse(new String(in.readAllBytes(), StandardCharsets.UTF_8), resource, xUnit, yUnit);
         } catch (IOException e) {
             throw new UncheckedIOException(e);
+        } catch (org.quire.engine.csv.CsvException e) {
+            throw new IllegalStateException("test resource " + resource + ": " + e.getMessage(), e);
         }
     }
 }

@@ -43,7 +43,7 @@ class Jcgm101AdditiveModelTest {
         // JCGM 101:2008 9.2.2 and 8.2: the GUM result [-3.92, 3.92] is validated; n_dig = 2 gives delta = 0.05
         GumComparison c = GumComparison.of(y, 0.0, 2.0, K95 * 2.0, 2);
         assertEquals(0.05, c.tolerance(), 1e-15);
-        assertEquals(GumComparison.Verdict.CONFIRMED, c.verdict());
+        assertEquals(GumComparison.Verdict.VALIDATED, c.verdict());
     }
 
     @Test
@@ -63,7 +63,7 @@ class Jcgm101AdditiveModelTest {
         assertEquals(-3.8794, y.symmetricInterval().lower(), 0.017);
         assertEquals(3.8794, y.symmetricInterval().upper(), 0.017);
         GumComparison c = GumComparison.of(y, 0.0, 2.0, K95 * 2.0, 2);
-        assertEquals(GumComparison.Verdict.CONFIRMED, c.verdict());
+        assertEquals(GumComparison.Verdict.VALIDATED, c.verdict());
         assertEquals(0.04, c.lowerDifference(), 0.017);
         assertEquals(0.04, c.upperDifference(), 0.017);
     }
@@ -85,10 +85,10 @@ class Jcgm101AdditiveModelTest {
         // the verdict of the standard needs n_dig = 2 (7.9.2 and 8.2, recomputed here).
         GumComparison c2 = GumComparison.of(y, 0.0, gumU, K95 * gumU, 2);
         assertEquals(0.5, c2.tolerance(), 1e-15);
-        assertEquals(GumComparison.Verdict.NOT_CONFIRMED, c2.verdict());
+        assertEquals(GumComparison.Verdict.NOT_VALIDATED, c2.verdict());
         assertEquals(19.89 - 17.016, c2.lowerDifference(), 0.06);
         GumComparison c1 = GumComparison.of(y, 0.0, gumU, K95 * gumU, 1);
         assertEquals(5.0, c1.tolerance(), 1e-15);
-        assertEquals(GumComparison.Verdict.CONFIRMED, c1.verdict());
+        assertEquals(GumComparison.Verdict.VALIDATED, c1.verdict());
     }
 }

@@ -54,7 +54,7 @@ class Jcgm101MassCalibrationTest {
         // JCGM 101:2008 9.3: GUM first order 1.2340 mg, u 0.0539 mg, [1.1285, 1.3395]; n_dig = 2, delta = 0.0005
         GumComparison c = GumComparison.of(y, 1.2340, 0.0539, 1.3395 - 1.2340, 2);
         assertEquals(0.0005, c.tolerance(), 1e-15);
-        assertEquals(GumComparison.Verdict.NOT_CONFIRMED, c.verdict());
+        assertEquals(GumComparison.Verdict.NOT_VALIDATED, c.verdict());
         assertEquals(1.1285 - 1.0834, c.lowerDifference(), 0.0015);
     }
 
@@ -65,9 +65,9 @@ class Jcgm101MassCalibrationTest {
         // but not delta = 0.005 (n_dig = 1, u = 8 x 10^-2); recomputed from 7.9.2 and 8.2.
         GumComparison two = GumComparison.of(y, 1.2340, 0.0750, 1.3810 - 1.2340, 2);
         assertEquals(0.0005, two.tolerance(), 1e-15);
-        assertEquals(GumComparison.Verdict.NOT_CONFIRMED, two.verdict());
+        assertEquals(GumComparison.Verdict.NOT_VALIDATED, two.verdict());
         GumComparison one = GumComparison.of(y, 1.2340, 0.0750, 1.3810 - 1.2340, 1);
         assertEquals(0.005, one.tolerance(), 1e-15);
-        assertEquals(GumComparison.Verdict.CONFIRMED, one.verdict());
+        assertEquals(GumComparison.Verdict.VALIDATED, one.verdict());
     }
 }

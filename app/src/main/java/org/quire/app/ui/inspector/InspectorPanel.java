@@ -7,7 +7,7 @@ import javax.swing.JLabel;
 import javax.swing.JPanel;
 import javax.swing.JScrollPane;
 import javax.swing.ScrollPaneConstants;
-import org.quire.app.ui.Fmt;
+import org.quire.app.ui.common.Fmt;
 import org.quire.app.ui.notebook.BudgetEditor;
 import org.quire.engine.budget.Budget;
 import org.quire.engine.budget.EvaluationSettings;
@@ -50,6 +50,7 @@ public final class InspectorPanel extends JPanel {
         Budget b = editor.document().budget();
         InputQuantity q = name == null ? null : b.input(name);
         if (q == null) {
+            input.leave();
             EvaluationSettings s = b.settings();
             String text = ("<html><b>" + esc(b.title().isEmpty() ? editor.document().name() : b.title()) + "</b><br><br>"
                     + (editor.document().file() == null ? "Not saved to a file yet." : esc(String.valueOf(editor.document().file())))

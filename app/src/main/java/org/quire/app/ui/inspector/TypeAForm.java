@@ -4,13 +4,14 @@ import java.awt.BorderLayout;
 import java.awt.Dimension;
 import java.awt.FlowLayout;
 import java.awt.GridLayout;
+import java.util.List;
 import java.util.function.Consumer;
 import javax.swing.JButton;
 import javax.swing.JLabel;
 import javax.swing.JPanel;
 import javax.swing.JScrollPane;
 import javax.swing.JTextField;
-import org.quire.app.ui.Fmt;
+import org.quire.app.ui.common.Fmt;
 import org.quire.engine.budget.TypeA;
 
 /**
@@ -29,8 +30,25 @@ final class TypeAForm extends JPanel {
     private final JButton useSummary = new JButton("Use summary");
     private final JButton importCsv = new JButton("Import CSV\u2026");
 
-    TypeAForm(Consumer<TypeA> apply, Consumer<String> problem) {
+    /**
+     * @param apply told of the evaluation when the engineer presses Use readings or Use summary
+     * @param problem told of a refusal (null when there is none)
+     * @param typed told when the engineer changes a reading or a summary text
+     */
+    TypeAForm(Consumer<TypeA> apply, Consumer<String> problem, Runnable typed) {
         super(new BorderLayout(4, 4));
+        javax.swing.event.DocumentListener onText = new javax.swing.event.DocumentListener() {
+            @Override public void insertUpdate(javax.swing.event.DocumentEvent e) { typed.run(); }
+            @Override public void removeUpdate(javax.swing.event.DocumentEvent e) { typed.run(); }
+            @Override public void changedUpdate(javax.swing.event.DocumentEvent e) { }
+        };
+        for (JTextField f : new JTextField[] {mean, s, n, pooledS, pooledDof}) {
+            f.getDocument().addDocumentListener(onText);
+        }
+        grid.getModel().addTableModelListener(e -> typed.run());
+        mean.setName("summary:mean");
+        s.setName("summary:s");
+        n.setName("summary:n");
         JScrollPane sp = new JScrollPane(grid);
         sp.setPreferredSize(new Dimension(200, 150));
         JPanel top = new JPanel(new BorderLayout(2, 2));
@@ -55,7 +73,7 @@ final class TypeAForm extends JPanel {
         buttons.add(useReadings);
         buttons.add(useSummary);
         buttons.add(importCsv);
-        importCsv.setToolTipText("Readings from a CSV file: the column named reading, or the first column");
+        importCsv.setToolTipText("Readings from a CSV file: the column named reading, or a file of one column");
         importCsv.addActionListener(e -> {
             javax.swing.JFileChooser c = new javax.swing.JFileChooser();
             c.setDialogTitle("Import readings");
@@ -64,9 +82,12 @@ final class TypeAForm extends JPanel {
                 return;
             }
             try {
-                grid.setReadings(org.quire.engine.io.ReadingsCsv.read(c.getSelectedFile().toPath()));
+                grid.setReadings(org.quire.engine.csv.CsvReadings.read(c.getSelectedFile().toPath(),
+                        org.quire.engine.csv.CsvOptions.defaults()));
                 problem.accept(null);
-            } catch (java.io.IOException | org.quire.engine.io.BudgetFormatException x) {
+            } catch (org.quire.engine.csv.CsvException x) {
+                problem.accept(x.getMessage());
+            } catch (java.io.IOException x) {
                 problem.accept(c.getSelectedFile().getName() + ": " + x.getMessage());
             }
         });
@@ -126,6 +147,33 @@ final class TypeAForm extends JPanel {
         n.setText(String.valueOf(a.count()));
         pooledS.setText(a.isPooled() ? Fmt.num(a.pooledStandardDeviation()) : "");
         pooledDof.setText(a.isPooled() ? Fmt.dof(a.dof()) : "");
+    }
+
+    /** The text of the form, kept while it is not applied. */
+    record Texts(List<String> readings, List<String> summary) {
+    }
+
+    /** @return the present text of the readings and the summary */
+    Texts texts() {
+        List<String> r = new java.util.ArrayList<>();
+        for (int i = 0; i < grid.getRowCount(); i++) {
+            Object v = grid.getModel().getValueAt(i, 1);
+            r.add(v == null ? "" : v.toString());
+        }
+        List<String> f = new java.util.ArrayList<>();
+        for (JTextField t : new JTextField[] {mean, s, n, pooledS, pooledDof}) {
+            f.add(t.getText());
+        }
+        return new Texts(List.copyOf(r), List.copyOf(f));
+    }
+
+    /** Puts back text taken by {@link #texts()}. */
+    void restore(Texts t) {
+        grid.setReadingTexts(t.readings());
+        JTextField[] fs = {mean, s, n, pooledS, pooledDof};
+        for (int i = 0; i < fs.length; i++) {
+            fs[i].setText(t.summary().get(i));
+        }
     }
 
     void setEditable(boolean on) {

@@ -6,27 +6,25 @@ import java.awt.Graphics;
 import java.awt.Graphics2D;
 import java.awt.RenderingHints;
 import javax.swing.JComponent;
-import org.quire.app.ui.Colors;
-import org.quire.app.ui.Fmt;
+import org.quire.app.ui.common.Colors;
+import org.quire.app.ui.common.Fmt;
+import org.quire.engine.montecarlo.MonteCarloOutcome;
 
 /**
- * Draws the engine's histogram of an output's model values with the GUM distribution over it, both Monte Carlo
- * coverage intervals (solid: the one compared with the GUM; dotted: the other) and the GUM interval y ± U (dashed)
- * marked. Drawing only: bins, curve and intervals come from the engine.
+ * Draws the engine's histogram of an output's model values with the GUM distribution over it (the engine's
+ * expected count per bin), both Monte Carlo coverage intervals (solid: the probabilistically symmetric one, which
+ * the GUM interval is compared with; dotted: the shortest) and the GUM interval y ± U (dashed) marked. Drawing
+ * only: bins, curve and intervals come from the engine.
  */
 final class HistogramPlot extends JComponent {
-    private MonteCarloOutcome.OutputOutcome outcome;
-    private double gumLow = Double.NaN;
-    private double gumHigh = Double.NaN;
+    private MonteCarloOutcome.Output outcome;
 
     HistogramPlot() {
         setPreferredSize(new Dimension(420, 170));
     }
 
-    void show(MonteCarloOutcome.OutputOutcome o, double gumLow, double gumHigh) {
+    void show(MonteCarloOutcome.Output o) {
         this.outcome = o;
-        this.gumLow = gumLow;
-        this.gumHigh = gumHigh;
         repaint();
     }
 
@@ -40,13 +38,16 @@ final class HistogramPlot extends JComponent {
             g.dispose();
             return;
         }
-        MonteCarloOutcome.Histogram h = outcome.histogram();
+        org.quire.engine.montecarlo.Histogram h = outcome.histogram();
+        double[] edges = h.edges();
+        double lower = edges[0];
+        double upper = edges[edges.length - 1];
         long[] counts = h.counts();
         long max = 1;
         for (long c : counts) {
             max = Math.max(max, c);
         }
-        double[] curve = outcome.gumCounts();
+        double[] curve = outcome.gumExpectedCounts();
         if (curve != null && curve.length == counts.length) {
             for (double c : curve) {
                 max = Math.max(max, (long) Math.ceil(c));
@@ -56,7 +57,7 @@ final class HistogramPlot extends JComponent {
         int right = getWidth() - 10;
         int top = 10;
         int bottom = getHeight() - 22;
-        double span = h.upper() - h.lower();
+        double span = upper > lower ? upper - lower : 1;
         g.setColor(Colors.get("Quire.plot.fill"));
         for (int i = 0; i < counts.length; i++) {
             int x0 = left + (int) Math.round((right - left) * (double) i / counts.length);
@@ -66,8 +67,8 @@ final class HistogramPlot extends JComponent {
         }
         g.setColor(Colors.get("Quire.plot.axis"));
         g.drawLine(left, bottom, right, bottom);
-        g.drawString(Fmt.short4(h.lower()), left, bottom + 15);
-        String hi = Fmt.short4(h.upper());
+        g.drawString(Fmt.working(lower), left, bottom + 15);
+        String hi = Fmt.working(upper);
         g.drawString(hi, right - g.getFontMetrics().stringWidth(hi), bottom + 15);
         if (curve != null && curve.length == counts.length) {
             g.setColor(Colors.get("Quire.plot.gumInterval"));
@@ -84,12 +85,14 @@ final class HistogramPlot extends JComponent {
                 py = y;
             }
         }
-        markDotted(g, outcome.otherLower(), h.lower(), span, left, right, top, bottom);
-        markDotted(g, outcome.otherUpper(), h.lower(), span, left, right, top, bottom);
-        mark(g, outcome.lower(), h.lower(), span, left, right, top, bottom, "Quire.plot.mcInterval", false);
-        mark(g, outcome.upper(), h.lower(), span, left, right, top, bottom, "Quire.plot.mcInterval", false);
-        mark(g, gumLow, h.lower(), span, left, right, top, bottom, "Quire.plot.gumInterval", true);
-        mark(g, gumHigh, h.lower(), span, left, right, top, bottom, "Quire.plot.gumInterval", true);
+        markDotted(g, outcome.shortestInterval().lower(), lower, span, left, right, top, bottom);
+        markDotted(g, outcome.shortestInterval().upper(), lower, span, left, right, top, bottom);
+        mark(g, outcome.symmetricInterval().lower(), lower, span, left, right, top, bottom, "Quire.plot.mcInterval",
+                false);
+        mark(g, outcome.symmetricInterval().upper(), lower, span, left, right, top, bottom, "Quire.plot.mcInterval",
+                false);
+        mark(g, outcome.gumInterval().lower(), lower, span, left, right, top, bottom, "Quire.plot.gumInterval", true);
+        mark(g, outcome.gumInterval().upper(), lower, span, left, right, top, bottom, "Quire.plot.gumInterval", true);
         g.dispose();
     }
 

@@ -2,7 +2,6 @@ package org.quire.app.ui.montecarlo;
 
 import java.awt.BorderLayout;
 import java.awt.FlowLayout;
-import java.util.Optional;
 import java.util.concurrent.CancellationException;
 import java.util.concurrent.ExecutionException;
 import javax.swing.BoxLayout;
@@ -11,26 +10,31 @@ import javax.swing.JComponent;
 import javax.swing.JLabel;
 import javax.swing.JPanel;
 import javax.swing.JProgressBar;
-import org.quire.app.ui.Colors;
-import org.quire.app.ui.Fmt;
+import org.quire.app.ui.common.Colors;
+import org.quire.app.ui.common.Fmt;
 import org.quire.app.ui.document.Recalculation;
-import org.quire.app.ui.notebook.Section;
+import org.quire.app.ui.common.Section;
 import org.quire.engine.budget.Budget;
 import org.quire.engine.gum.GumResult;
-import org.quire.engine.gum.OutputResult;
 import org.quire.engine.gum.Rounding;
+import org.quire.engine.montecarlo.CoverageInterval;
+import org.quire.engine.montecarlo.GumComparison;
+import org.quire.engine.montecarlo.MonteCarloOutcome;
 
 /**
  * The Monte Carlo check of the budget: Run and Cancel, progress, and per output the histogram, the coverage
- * interval and the verdict on the GUM result, all from the installed {@link MonteCarloRunner}.
+ * intervals and the verdict on the GUM result with its reason, all from the engine's {@link MonteCarloOutcome}.
  */
 public final class MonteCarloSection implements Section {
-    private final Optional<MonteCarloRunner> runner;
+    private final MonteCarloRunner runner;
     private final JPanel body = new JPanel(new BorderLayout(4, 4));
     private final JButton run = new JButton("Run Monte Carlo");
     private final JButton cancel = new JButton("Cancel");
     private final JProgressBar progress = new JProgressBar(0, 1000);
     private final JLabel state = new JLabel(" ");
+    {
+        state.setName("mcState");
+    }
     private final JPanel outputs = new JPanel();
     private Budget budget;
     private Recalculation latest;
@@ -38,8 +42,8 @@ public final class MonteCarloSection implements Section {
     private MonteCarloOutcome shown;
     private Budget shownFor;
 
-    /** @param runner the installed runner, or empty when this build has none */
-    public MonteCarloSection(Optional<MonteCarloRunner> runner) {
+    /** @param runner the runner, {@link MonteCarloRunner#engine} in the application */
+    public MonteCarloSection(MonteCarloRunner runner) {
         this.runner = runner;
         run.setName("mcRun");
         cancel.setName("mcCancel");
@@ -56,17 +60,20 @@ public final class MonteCarloSection implements Section {
         body.add(state, BorderLayout.SOUTH);
         run.addActionListener(e -> start());
         cancel.addActionListener(e -> stop());
-        if (runner.isEmpty()) {
-            run.setEnabled(false);
-            state.setText("This build has no Monte Carlo engine installed, so the GUM result cannot be checked "
-                    + "against JCGM 101 here.");
-        } else {
-            state.setText("Propagates the distributions (JCGM 101:2008) and checks the GUM result against them.");
-        }
+        state.setText("Propagates the distributions (JCGM 101:2008) and checks the GUM result against them.");
     }
 
     @Override public String title() { return "Monte Carlo check"; }
     @Override public JComponent body() { return body; }
+
+    /**
+     * @param b the budget a report is made of
+     * @return the outcome of the last run when it was made for exactly {@code b}, else null (a run of an earlier
+     *     state of the budget never goes into a report of the present one)
+     */
+    public MonteCarloOutcome outcomeFor(Budget b) {
+        return shown != null && b != null && b.equals(shownFor) ? shown : null;
+    }
 
     @Override
     public void budgetChanged(Budget b) {
@@ -87,13 +94,13 @@ public final class MonteCarloSection implements Section {
     private void updateButtons() {
         boolean running = worker != null && !worker.isDone();
         boolean ready = latest != null && latest.result() != null && latest.budget().equals(budget);
-        run.setEnabled(runner.isPresent() && !running && ready);
+        run.setEnabled(!running && ready);
         cancel.setEnabled(running);
     }
 
     /** Starts a run on the present budget; does nothing when one is running or the budget has errors. */
     public void start() {
-        if (runner.isEmpty() || (worker != null && !worker.isDone()) || latest == null || latest.result() == null
+        if ((worker != null && !worker.isDone()) || latest == null || latest.result() == null
                 || !latest.budget().equals(budget)) {
             return;
         }
@@ -103,13 +110,13 @@ public final class MonteCarloSection implements Section {
         progress.setString("starting");
         state.setText("Running " + b.settings().trials() + " trials with seed " + b.settings().seed() + " ...");
         state.setForeground(Colors.get("Label.foreground"));
-        worker = new MonteCarloWorker(runner.get(), b, gum, p -> {
+        worker = new MonteCarloWorker(runner, b, gum, p -> {
             progress.setValue((int) Math.min(1000, 1000 * p[0] / Math.max(1, p[1])));
             progress.setString(p[0] + " / " + p[1] + " trials");
         });
         worker.addPropertyChangeListener(e -> {
             if ("state".equals(e.getPropertyName()) && e.getNewValue() == javax.swing.SwingWorker.StateValue.DONE) {
-                finished(worker, gum);
+                finished(worker);
             }
         });
         worker.execute();
@@ -123,7 +130,7 @@ public final class MonteCarloSection implements Section {
         }
     }
 
-    private void finished(MonteCarloWorker w, GumResult gum) {
+    private void finished(MonteCarloWorker w) {
         if (w != worker) {
             return;
         }
@@ -131,7 +138,7 @@ public final class MonteCarloSection implements Section {
             MonteCarloOutcome o = w.get();
             shown = o;
             shownFor = w.budget();
-            showOutcome(o, gum, w.budget().settings().significantDigits());
+            showOutcome(o, w.budget().settings().significantDigits());
             progress.setValue(1000);
             progress.setString(o.trials() + " trials");
             state.setText("Done: " + o.trials() + " trials, seed " + o.seed() + (o.adaptive() ? ", adaptive" : "")
@@ -145,26 +152,31 @@ public final class MonteCarloSection implements Section {
             Thread.currentThread().interrupt();
         } catch (ExecutionException e) {
             Throwable c = e.getCause();
+            if (c instanceof CancellationException) {
+                progress.setString("cancelled");
+                state.setText("The run was cancelled; no Monte Carlo result.");
+                state.setForeground(Colors.get("Quire.warning"));
+                updateButtons();
+                return;
+            }
             progress.setString("failed");
-            state.setText("<html>The Monte Carlo run failed: " + (c instanceof InterruptedException ? "cancelled"
-                    : String.valueOf(c.getMessage()).replace("<", "&lt;")) + "</html>");
+            state.setText("<html>The Monte Carlo run failed: " + String.valueOf(c.getMessage()).replace("<", "&lt;") + "</html>");
             state.setForeground(Colors.get("Quire.error"));
         }
         updateButtons();
     }
 
-    private void showOutcome(MonteCarloOutcome o, GumResult gum, int digits) {
+    private void showOutcome(MonteCarloOutcome o, int digits) {
         outputs.removeAll();
-        for (MonteCarloOutcome.OutputOutcome out : o.outputs()) {
-            OutputResult g = gum.output(out.name());
+        for (MonteCarloOutcome.Output out : o.outputs()) {
             JPanel p = new JPanel(new BorderLayout(8, 2));
             p.setName("mc:" + out.name());
             HistogramPlot plot = new HistogramPlot();
-            plot.show(out, g == null ? Double.NaN : g.estimate() - g.expandedUncertainty(),
-                    g == null ? Double.NaN : g.estimate() + g.expandedUncertainty());
+            plot.show(out);
             p.add(plot, BorderLayout.CENTER);
             JLabel text = new JLabel(describe(out, digits));
             text.setName("mcVerdict:" + out.name());
+            text.putClientProperty(VERDICT, out.comparison().verdict());
             p.add(text, BorderLayout.EAST);
             p.setBorder(javax.swing.BorderFactory.createEmptyBorder(4, 0, 8, 0));
             outputs.add(p);
@@ -173,28 +185,39 @@ public final class MonteCarloSection implements Section {
         outputs.repaint();
     }
 
-    static String describe(MonteCarloOutcome.OutputOutcome o, int digits) {
+    /** The client property of an output's verdict label that holds the engine's {@link GumComparison.Verdict}. */
+    public static final String VERDICT = "quire.mcVerdict";
+
+    static String describe(MonteCarloOutcome.Output o, int digits) {
         String unit = o.unit().isEmpty() ? "" : " " + o.unit();
-        StringBuilder s = new StringBuilder("<html><b>").append(o.name()).append(unit).append("</b><br>")
-                .append("y = ").append(Rounding.format(o.estimate(), o.standardUncertainty(), digits)).append(unit)
-                .append(" (u)<br>").append(o.shortest() ? "shortest " : "symmetric ")
-                .append(Fmt.probability(o.coverageProbability())).append(" interval:<br>[")
-                .append(Fmt.num(o.lower())).append(", ").append(Fmt.num(o.upper())).append("]").append(unit);
-        if (!Double.isNaN(o.otherLower())) {
-            s.append("<br>").append(o.shortest() ? "symmetric: [" : "shortest: [").append(Fmt.num(o.otherLower()))
-                    .append(", ").append(Fmt.num(o.otherUpper())).append("]");
+        StringBuilder s = new StringBuilder("<html><b>").append(esc(o.name())).append(esc(unit)).append("</b><br>");
+        if (o.hasStandardUncertainty()) {
+            s.append("y = ").append(Rounding.format(o.estimate(), o.standardUncertainty(), digits)).append(esc(unit))
+                    .append(" (u)<br>");
+        } else {
+            s.append("y = ").append(Fmt.num(o.estimate())).append(esc(unit)).append("<br>u(y) not defined<br>");
         }
-        MonteCarloOutcome.GumComparison c = o.comparison();
-        if (c != null) {
-            String colour = String.format("#%06x", Colors.get(c.gumValidated() ? "Quire.ok" : "Quire.error")
-                    .getRGB() & 0xffffff);
-            s.append("<br><b style='color:").append(colour).append("'>")
-                    .append(c.gumValidated() ? "GUM result confirmed" : "GUM result NOT confirmed")
-                    .append("</b><br>d_low = ").append(Fmt.short4(c.lowDifference()))
-                    .append(", d_high = ").append(Fmt.short4(c.highDifference()))
-                    .append("<br>tolerance \u03b4 = ").append(Fmt.short4(c.numericalTolerance()));
-        }
+        interval(s, "symmetric", o.symmetricInterval(), unit);
+        interval(s, "shortest", o.shortestInterval(), unit);
+        interval(s, "GUM y \u00b1 U", o.gumInterval(), unit);
+        GumComparison c = o.comparison();
+        String colour = String.format("#%06x", Colors.get(c.validated() ? "Quire.ok" : "Quire.error")
+                .getRGB() & 0xffffff);
+        s.append("<b style='color:").append(colour).append("'>")
+                .append(c.validated() ? "GUM result validated" : "GUM result NOT validated").append("</b><br>")
+                .append("<div style='width:220px'>").append(esc(c.reason())).append("</div>");
+        o.standardUncertaintyNote().ifPresent(n -> s.append("<div style='width:220px'>").append(esc(n))
+                .append("</div>"));
         return s.append("</html>").toString();
+    }
+
+    private static void interval(StringBuilder s, String label, CoverageInterval i, String unit) {
+        s.append(label).append(' ').append(Fmt.probability(i.probability())).append(": [").append(Fmt.num(i.lower()))
+                .append(", ").append(Fmt.num(i.upper())).append("]").append(esc(unit)).append("<br>");
+    }
+
+    private static String esc(String t) {
+        return t.replace("&", "&amp;").replace("<", "&lt;");
     }
 
     /** @return whether a run is in progress */

@@ -6,10 +6,12 @@ import java.util.function.Consumer;
 import javax.swing.SwingWorker;
 import org.quire.engine.budget.Budget;
 import org.quire.engine.gum.GumResult;
+import org.quire.engine.montecarlo.MonteCarloOutcome;
+import org.quire.engine.montecarlo.ProgressListener;
 
 /**
- * Runs a {@link MonteCarloRunner} off the event thread, publishing progress and passing Cancel to the runner
- * through its {@link MonteCarloRunner.Progress}.
+ * Runs a {@link MonteCarloRunner} off the event thread, publishing progress and passing Cancel to the engine
+ * through its {@link ProgressListener}.
  */
 final class MonteCarloWorker extends SwingWorker<MonteCarloOutcome, long[]> {
     private final MonteCarloRunner runner;
@@ -27,15 +29,15 @@ final class MonteCarloWorker extends SwingWorker<MonteCarloOutcome, long[]> {
 
     @Override
     protected MonteCarloOutcome doInBackground() throws Exception {
-        return runner.run(budget, gum, new MonteCarloRunner.Progress() {
+        return runner.run(budget, gum, new ProgressListener() {
             @Override
-            public void trialsDone(long done, long planned) {
+            public void progress(long done, long planned) {
                 publish(new long[] {done, planned});
             }
 
             @Override
             public boolean cancelRequested() {
-                return cancel.get() || isCancelled();
+                return cancel.get() || isCancelled() || Thread.currentThread().isInterrupted();
             }
         });
     }

@@ -2,31 +2,112 @@ package org.quire.app.ui.notebook;
 
 import java.util.List;
 import javax.swing.table.AbstractTableModel;
+import org.quire.app.ui.common.Fmt;
 import org.quire.engine.gum.Contribution;
+import org.quire.engine.gum.OutputResult;
+import org.quire.engine.units.Units;
 
-/** The budget table of one output: the engine's contribution rows, as they are. */
+/**
+ * The budget table of one output: the engine's contribution rows, as they are, with their units; or, as the
+ * total row under it, the combined figures.
+ */
 final class ContributionTableModel extends AbstractTableModel {
+    static final int INPUT = 0;
+    static final int ESTIMATE = 3;
+    static final int U = 4;
+    static final int SENSITIVITY = 5;
+    static final int CONTRIBUTION = 6;
+    static final int DOF = 7;
     static final int SHARE = 8;
-    private static final String[] COLUMNS = {"Input", "Evaluation", "Distribution", "Estimate x\u1d62",
-        "u(x\u1d62)", "Sensitivity c\u1d62", "Contribution u\u1d62(y)", "\u03bd\u1d62", "Share of u\u1d9c\u00b2(y)"};
     private List<Contribution> rows = List.of();
+    private OutputResult total;
+    private String outputUnit = "";
+    private final boolean totalRow;
 
-    void set(List<Contribution> c) {
-        rows = c;
+    /** @param totalRow whether this model is the one-row total under the table */
+    ContributionTableModel(boolean totalRow) {
+        this.totalRow = totalRow;
+    }
+
+    void set(OutputResult o) {
+        rows = o.contributions();
+        total = o;
+        outputUnit = o.unit();
         fireTableDataChanged();
     }
 
-    @Override public int getRowCount() { return rows.size(); }
-    @Override public int getColumnCount() { return COLUMNS.length; }
-    @Override public String getColumnName(int c) { return COLUMNS[c]; }
+    @Override public int getRowCount() { return totalRow ? (total == null ? 0 : 1) : rows.size(); }
+    @Override public int getColumnCount() { return 9; }
+
+    @Override
+    public String getColumnName(int c) {
+        String yu = outputUnit.isBlank() ? "" : " / " + Units.display(outputUnit);
+        switch (c) {
+            case 0: return "Input";
+            case 1: return "Evaluation";
+            case 2: return "Distribution";
+            case 3: return "Estimate x\u1d62";
+            case 4: return "Std. uncertainty u(x\u1d62)";
+            case 5: return "Sensitivity c\u1d62";
+            case 6: return "Contribution u\u1d62(y)" + yu;
+            case 7: return "\u03bd\u1d62";
+            default: return "Share of u_c\u00b2(y) / %";
+        }
+    }
 
     @Override
     public Class<?> getColumnClass(int c) {
         return c <= 2 ? String.class : Double.class;
     }
 
+    Contribution row(int r) { return rows.get(r); }
+
+    /** @return the text of a cell as shown, with the unit where it varies from row to row */
+    String shown(int r, int c) {
+        if (totalRow) {
+            switch (c) {
+                case 0: return "Combined, u_c(y)";
+                case 6: return Fmt.working(total.standardUncertainty());
+                case 7: return Fmt.dof(total.effectiveDof());
+                case 8: return Fmt.percent(1.0).replace(" %", "");
+                default: return "";
+            }
+        }
+        Contribution k = rows.get(r);
+        switch (c) {
+            case 0: return k.input();
+            case 1: return "Type " + k.type();
+            case 2: return org.quire.engine.budget.TypeB.DISTRIBUTIONS.contains(k.distribution())
+                    ? org.quire.engine.budget.TypeB.screenName(k.distribution()) : k.distribution();
+            case 3: return withUnit(Fmt.num(k.estimate()), k.unit());
+            case 4: return withUnit(Fmt.working(k.standardUncertainty()), k.unit());
+            case 5: return withUnit(Fmt.working(k.sensitivity()), sensitivityUnit(k.unit()));
+            case 6: return Fmt.working(k.contribution());
+            case 7: return Fmt.dof(k.dof());
+            default: return Fmt.percent(k.share()).replace(" %", "");
+        }
+    }
+
+    /** @return the unit of c_i = unit(y) / unit(x_i), by the engine's unit algebra; "" when a unit is not one */
+    private String sensitivityUnit(String inputUnit) {
+        try {
+            return Units.display(Units.parse(outputUnit.isBlank() ? "1" : outputUnit)
+                    .divide(Units.parse(inputUnit.isBlank() ? "1" : inputUnit)).symbol());
+        } catch (RuntimeException e) {
+            return "";
+        }
+    }
+
+    private static String withUnit(String v, String unit) {
+        String u = unit == null || unit.isBlank() || unit.equals("1") ? "" : Units.display(unit);
+        return u.isEmpty() || v.isEmpty() ? v : v + " " + u;
+    }
+
     @Override
     public Object getValueAt(int r, int c) {
+        if (totalRow) {
+            return shown(r, c);
+        }
         Contribution k = rows.get(r);
         switch (c) {
             case 0: return k.input();

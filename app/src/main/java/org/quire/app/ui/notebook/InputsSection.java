@@ -1,5 +1,7 @@
 package org.quire.app.ui.notebook;
 
+import org.quire.app.ui.common.EditorContext;
+import org.quire.app.ui.common.Section;
 import java.awt.BorderLayout;
 import java.awt.Dimension;
 import java.awt.FlowLayout;
@@ -15,6 +17,7 @@ import javax.swing.JScrollPane;
 import javax.swing.JTable;
 import javax.swing.ListSelectionModel;
 import javax.swing.table.DefaultTableCellRenderer;
+import org.quire.app.ui.table.SpreadsheetTable;
 import org.quire.engine.budget.Budget;
 import org.quire.engine.budget.Correlation;
 import org.quire.engine.budget.InputQuantity;
@@ -32,10 +35,25 @@ final class InputsSection implements Section {
     InputsSection(EditorContext ctx) {
         this.ctx = ctx;
         this.model = new InputsTableModel(ctx);
-        this.table = new JTable(model);
+        this.table = new JTable(model) {
+            @Override
+            public boolean editCellAt(int row, int column, java.util.EventObject e) {
+                boolean started = super.editCellAt(row, column, e);
+                if (started) {
+                    SpreadsheetTable.overtype(this, e);
+                }
+                return started;
+            }
+        };
         table.setName("inputs");
-        table.setSelectionMode(ListSelectionModel.SINGLE_SELECTION);
-        table.setSurrendersFocusOnKeystroke(true);
+        table.setSelectionMode(ListSelectionModel.SINGLE_INTERVAL_SELECTION);
+        table.setCellSelectionEnabled(true);
+        SpreadsheetTable.install(table, c -> c == InputsTableModel.ESTIMATE || c == InputsTableModel.U
+                || c == InputsTableModel.DOF, model::asOneEdit, m -> {
+                    if (m != null) {
+                        ctx.status(m, true);
+                    }
+                });
         table.putClientProperty("terminateEditOnFocusLost", Boolean.TRUE);
         table.setAutoResizeMode(JTable.AUTO_RESIZE_SUBSEQUENT_COLUMNS);
         int[] widths = {80, 230, 55, 95, 70, 95, 110, 80, 200};
@@ -51,8 +69,12 @@ final class InputsSection implements Section {
         }
         table.getSelectionModel().addListSelectionListener(e -> {
             if (!e.getValueIsAdjusting()) {
-                int r = table.getSelectedRow();
-                ctx.selectInput(r < 0 ? null : model.input(r).name());
+                int r = table.getSelectionModel().getLeadSelectionIndex();
+                if (table.getSelectedRowCount() == 0 || r < 0 || r >= model.getRowCount()) {
+                    ctx.selectInput(null);
+                } else {
+                    ctx.selectInput(model.input(r).name());
+                }
             }
         });
         JScrollPane sp = new JScrollPane(table);
@@ -104,7 +126,12 @@ final class InputsSection implements Section {
     void select(String name) {
         for (int r = 0; r < model.getRowCount(); r++) {
             if (model.input(r).name().equals(name)) {
-                table.getSelectionModel().setSelectionInterval(r, r);
+                if (table.getSelectionModel().getLeadSelectionIndex() != r || table.getSelectedRowCount() != 1) {
+                    table.getSelectionModel().setSelectionInterval(r, r);
+                }
+                if (table.getSelectedColumnCount() == 0) {
+                    table.getColumnModel().getSelectionModel().setSelectionInterval(0, 0);
+                }
                 return;
             }
         }

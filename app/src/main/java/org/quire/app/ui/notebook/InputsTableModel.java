@@ -1,8 +1,9 @@
 package org.quire.app.ui.notebook;
 
+import org.quire.app.ui.common.EditorContext;
 import java.util.List;
 import javax.swing.table.AbstractTableModel;
-import org.quire.app.ui.Fmt;
+import org.quire.app.ui.common.Fmt;
 import org.quire.engine.budget.Budget;
 import org.quire.engine.budget.Correlation;
 import org.quire.engine.budget.Evaluation;
@@ -26,8 +27,23 @@ final class InputsTableModel extends AbstractTableModel {
     private final EditorContext ctx;
     private List<InputQuantity> rows = List.of();
 
+    /** The merge key of the edits made now: "" for none, one key for all the cells of one paste. */
+    private String mergeKey = "";
+
     InputsTableModel(EditorContext ctx) {
         this.ctx = ctx;
+    }
+
+    /** Runs the writes of one paste as one undo step. */
+    void asOneEdit(Runnable writes) {
+        String before = mergeKey;
+        mergeKey = "paste@" + System.nanoTime();
+        try {
+            writes.run();
+        } finally {
+            mergeKey = before;
+            ctx.document().history().breakMerge();
+        }
     }
 
     void budgetChanged(Budget b) {
@@ -92,37 +108,37 @@ final class InputsTableModel extends AbstractTableModel {
         try {
             switch (c) {
                 case NAME:
-                    ctx.edit("Rename " + name + " to " + text, "", b -> rename(b, name, text));
+                    ctx.edit("Rename " + name + " to " + text, mergeKey, b -> rename(b, name, text));
                     break;
                 case DESCRIPTION:
-                    ctx.edit("Edit description of " + name, "", b -> b.withInput(name, q.withDescription(text)));
+                    ctx.edit("Edit description of " + name, mergeKey, b -> b.withInput(name, q.withDescription(text)));
                     break;
                 case UNIT:
-                    ctx.edit("Edit unit of " + name, "", b -> b.withInput(name, q.withUnit(text)));
+                    ctx.edit("Edit unit of " + name, mergeKey, b -> b.withInput(name, q.withUnit(text)));
                     break;
                 case SOURCE:
-                    ctx.edit("Edit source of " + name, "", b -> b.withInput(name, q.withSource(text)));
+                    ctx.edit("Edit source of " + name, mergeKey, b -> b.withInput(name, q.withSource(text)));
                     break;
                 case ESTIMATE: {
                     double x = Fmt.parse(text);
-                    ctx.edit("Change estimate of " + name, "", b -> b.withInput(name,
+                    ctx.edit("Change estimate of " + name, mergeKey, b -> b.withInput(name,
                             q.withEvaluation(EvaluationEdits.withEstimate(q.evaluation(), x))));
                     break;
                 }
                 case U: {
                     double u = Fmt.parse(text);
-                    ctx.edit("Change u of " + name, "", b -> b.withInput(name,
+                    ctx.edit("Change u of " + name, mergeKey, b -> b.withInput(name,
                             q.withEvaluation(EvaluationEdits.withStandardUncertainty(q.evaluation(), u))));
                     break;
                 }
                 case DOF: {
                     double nu = text.isEmpty() ? Double.POSITIVE_INFINITY : Fmt.parse(text);
-                    ctx.edit("Change degrees of freedom of " + name, "", b -> b.withInput(name,
+                    ctx.edit("Change degrees of freedom of " + name, mergeKey, b -> b.withInput(name,
                             q.withEvaluation(EvaluationEdits.withDof(q.evaluation(), nu))));
                     break;
                 }
                 case DISTRIBUTION:
-                    ctx.edit("Change distribution of " + name + " to " + text, "", b -> b.withInput(name,
+                    ctx.edit("Change distribution of " + name + " to " + text, mergeKey, b -> b.withInput(name,
                             q.withEvaluation(EvaluationEdits.withDistribution((TypeB) q.evaluation(), text))));
                     break;
                 default:

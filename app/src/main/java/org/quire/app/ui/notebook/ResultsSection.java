@@ -1,5 +1,7 @@
 package org.quire.app.ui.notebook;
 
+import org.quire.app.ui.common.EditorContext;
+import org.quire.app.ui.common.Section;
 import java.awt.BorderLayout;
 import java.awt.FlowLayout;
 import java.util.LinkedHashMap;
@@ -14,8 +16,8 @@ import javax.swing.JRadioButton;
 import javax.swing.JSpinner;
 import javax.swing.JTextField;
 import javax.swing.SpinnerNumberModel;
-import org.quire.app.ui.Colors;
-import org.quire.app.ui.Fmt;
+import org.quire.app.ui.common.Colors;
+import org.quire.app.ui.common.Fmt;
 import org.quire.app.ui.document.Recalculation;
 import org.quire.engine.budget.Budget;
 import org.quire.engine.budget.EvaluationSettings;
@@ -59,10 +61,14 @@ final class ResultsSection implements Section {
         higher.setToolTipText("Add the higher-order terms of JCGM 100:2008 5.1.2 note (uncorrelated inputs only)");
         truncate.setToolTipText("Truncate the effective degrees of freedom to an integer before looking up k "
                 + "(JCGM 100:2008 G.4.1 note 1)");
-        body.add(settings, BorderLayout.NORTH);
+        JPanel north = new JPanel(new BorderLayout());
+        state.setName("resultsState");
+        state.setFont(state.getFont().deriveFont(java.awt.Font.BOLD));
+        north.add(state, BorderLayout.NORTH);
+        north.add(settings, BorderLayout.SOUTH);
+        body.add(north, BorderLayout.NORTH);
         outputs.setLayout(new BoxLayout(outputs, BoxLayout.Y_AXIS));
         body.add(outputs, BorderLayout.CENTER);
-        body.add(state, BorderLayout.SOUTH);
         p.addActionListener(e -> commitSettings());
         k.addActionListener(e -> commitSettings());
         p.addFocusListener(new java.awt.event.FocusAdapter() {
@@ -127,9 +133,12 @@ final class ResultsSection implements Section {
     @Override
     public void recalculated(Recalculation r) {
         if (r.result() == null) {
-            state.setText(last == null ? "No results: the budget has errors (see the problems list)."
-                    : "The budget has errors (see the problems list); the results shown are from the last budget "
-                            + "that could be evaluated.");
+            long errors = r.problems().stream().filter(x -> x.severity()
+                    == org.quire.app.ui.document.Problem.Severity.ERROR).count();
+            String count = errors + (errors == 1 ? " error" : " errors");
+            state.setText(last == null ? "No results: the budget has " + count + " (see the Problems panel)."
+                    : "Not current: the budget has " + count + " (see the Problems panel); the results below are "
+                            + "those of the last budget that could be evaluated.");
             state.setForeground(Colors.get("Quire.error"));
             return;
         }

@@ -1,0 +1,162 @@
+package org.quire.app.ui;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.awt.Toolkit;
+import java.awt.datatransfer.DataFlavor;
+import java.awt.datatransfer.StringSelection;
+import java.awt.event.KeyEvent;
+import javax.swing.JComponent;
+import javax.swing.JTable;
+import javax.swing.KeyStroke;
+import org.junit.jupiter.api.Test;
+import org.quire.app.ui.notebook.BudgetEditor;
+import org.quire.engine.budget.Budget;
+
+/**
+ * The inputs table and the readings grid behave like a spreadsheet: a block pasted with tabs or semicolons, a
+ * decimal comma where it is unambiguous, typing replaces a cell, Copy writes the headers and the numbers as shown.
+ */
+class WorkbenchSpreadsheetTest extends GuiTestSupport {
+
+    private static int row(JTable t, String input) {
+        for (int r = 0; r < t.getRowCount(); r++) {
+            if (t.getModel().getValueAt(r, 0).equals(input)) {
+                return r;
+            }
+        }
+        throw new AssertionError("no input " + input);
+    }
+
+    private static void press(JComponent c, int key, int modifiers) {
+        KeyStroke k = KeyStroke.getKeyStroke(key, modifiers);
+        Object name = c.getInputMap(JComponent.WHEN_FOCUSED).get(k);
+        if (name == null) {
+            name = c.getInputMap(JComponent.WHEN_ANCESTOR_OF_FOCUSED_COMPONENT).get(k);
+        }
+        c.getActionMap().get(name).actionPerformed(new java.awt.event.ActionEvent(c, 0, String.valueOf(name)));
+    }
+
+    private static int menu() {
+        return Toolkit.getDefaultToolkit().getMenuShortcutKeyMaskEx();
+    }
+
+    @Test
+    void aBlockPastedIntoTheInputsTableIsOneEditReadByTheNumberRule() throws Exception {
+        BudgetEditor ed = openDemo();
+        Budget before = ed.document().budget();
+        JTable t = ed.inputsTable();
+        onEdt(() -> {
+            int r = row(t, "T_tank");
+            assertEquals("T_meter", t.getModel().getValueAt(r + 1, 0), "T_meter follows T_tank in the demo");
+            t.changeSelection(r, 3, false, false);
+            // estimate to standard uncertainty of two inputs, tab-separated with decimal commas
+            Toolkit.getDefaultToolkit().getSystemClipboard().setContents(
+                    new StringSelection("20,55\tType B\tnormal\t0,04\n20,25\tType B\tnormal\t0,06\n"), null);
+            press(t, KeyEvent.VK_V, menu());
+            return null;
+        });
+        Budget after = ed.document().budget();
+        assertEquals(20.55, after.input("T_tank").evaluation().estimate(), 0.0);
+        assertEquals(0.04, after.input("T_tank").evaluation().standardUncertainty(), 0.0);
+        assertEquals(20.25, after.input("T_meter").evaluation().estimate(), 0.0);
+        assertEquals(0.06, after.input("T_meter").evaluation().standardUncertainty(), 0.0);
+        onEdt(() -> { ed.document().undo(); return null; });
+        assertEquals(before, ed.document().budget(), "one Undo takes the whole paste back");
+    }
+
+    @Test
+    void anAmbiguousPastedNumberIsRefusedWithItsPlace() throws Exception {
+        BudgetEditor ed = openDemo();
+        Budget before = ed.document().budget();
+        JTable t = ed.inputsTable();
+        onEdt(() -> {
+            t.changeSelection(row(t, "T_tank"), 3, false, false);
+            Toolkit.getDefaultToolkit().getSystemClipboard().setContents(new StringSelection("1,002\n"), null);
+            press(t, KeyEvent.VK_V, menu());
+            return null;
+        });
+        assertEquals(before, ed.document().budget(), "1,002 may be one thousand and two: not taken");
+        String status = onEdt(frame::statusText);
+        assertTrue(status.contains("1,002") && status.contains("line 1"), status);
+    }
+
+    @Test
+    void typingIntoASelectedCellReplacesItsValue() throws Exception {
+        BudgetEditor ed = openDemo();
+        JTable t = ed.inputsTable();
+        onEdt(() -> {
+            int r = row(t, "T_tank");
+            t.changeSelection(r, 3, false, false);
+            t.requestFocusInWindow();
+            return null;
+        });
+        waitFor("the table focused", t::isFocusOwner);
+        onEdt(() -> {
+            for (char ch : "21.5".toCharArray()) {
+                KeyEvent typed = new KeyEvent(t, KeyEvent.KEY_PRESSED, System.currentTimeMillis(), 0,
+                        KeyEvent.getExtendedKeyCodeForChar(ch), ch);
+                java.awt.Component target = t.isEditing() ? t.getEditorComponent() : t;
+                target.dispatchEvent(typed);
+                target = t.isEditing() ? t.getEditorComponent() : t;
+                target.dispatchEvent(new KeyEvent(target, KeyEvent.KEY_TYPED, System.currentTimeMillis(), 0,
+                        KeyEvent.VK_UNDEFINED, ch));
+            }
+            t.getCellEditor().stopCellEditing();
+            return null;
+        });
+        assertEquals(21.5, ed.document().budget().input("T_tank").evaluation().estimate(), 0.0,
+                "the typed value replaced 20.42 instead of being appended to it");
+    }
+
+    @Test
+    void copyWritesHeadersAndTheNumbersAsShown() throws Exception {
+        BudgetEditor ed = openDemo();
+        String copied = onEdt(() -> {
+            JTable t = named(ed.resultsPanel(), "budget:E");
+            t.changeSelection(0, 0, false, false);
+            t.changeSelection(1, t.getColumnCount() - 1, false, true);
+            press(t, KeyEvent.VK_C, menu());
+            return (String) Toolkit.getDefaultToolkit().getSystemClipboard().getData(DataFlavor.stringFlavor);
+        });
+        String[] lines = copied.split("\n");
+        assertEquals(3, lines.length, copied);
+        assertTrue(lines[0].startsWith("Input\tEvaluation\tDistribution"), lines[0]);
+        assertTrue(lines[0].endsWith("Share of u_c\u00b2(y) / %"), lines[0]);
+        String[] first = lines[1].split("\t");
+        // the share as a percentage with one decimal, as the table shows it (not a fraction such as 0.62)
+        assertTrue(first[first.length - 1].matches("\\d{1,3}\\.\\d"), lines[1]);
+        assertTrue(!lines[1].contains("E-") && !lines[1].contains("e-"), "no raw doubles: " + lines[1]);
+    }
+
+    @Test
+    void aRowPastedIntoTheReadingsGridFillsItFromTheSelectedReading() throws Exception {
+        BudgetEditor ed = openDemo();
+        onEdt(() -> {
+            ed.revealSection("Inputs");
+            ed.selectInput("V_ind");
+            return null;
+        });
+        JTable grid = onEdt(() -> named(frame.getContentPane(), "readings"));
+        waitFor("the readings grid shown", grid::isShowing);
+        onEdt(() -> {
+            grid.clearSelection();
+            Toolkit.getDefaultToolkit().getSystemClipboard().setContents(
+                    new StringSelection("1002,1;1002,4\n"), null);
+            press(grid, KeyEvent.VK_V, menu());
+            javax.swing.JLabel pr = named(frame.getContentPane(), "inspectorProblem");
+            assertEquals(3, grid.getRowCount(), pr.getText() + " two readings and the empty row to type the next into");
+            assertEquals("1002.4", grid.getValueAt(1, 1));
+            grid.changeSelection(1, 1, false, false);
+            Toolkit.getDefaultToolkit().getSystemClipboard().setContents(
+                    new StringSelection("1002,4\t1002,3\t1002,6\n"), null);
+            press(grid, KeyEvent.VK_V, menu());
+            return null;
+        });
+        assertEquals("1002.1", onEdt(() -> grid.getValueAt(0, 1)));
+        assertEquals("1002.4", onEdt(() -> grid.getValueAt(1, 1)));
+        assertEquals("1002.3", onEdt(() -> grid.getValueAt(2, 1)));
+        assertEquals("1002.6", onEdt(() -> grid.getValueAt(3, 1)));
+    }
+}
