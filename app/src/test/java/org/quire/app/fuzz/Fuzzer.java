@@ -290,7 +290,8 @@ final class Fuzzer {
             }
             default:
                 if (v.getValueType() == JsonValue.ValueType.NUMBER) {
-                    return Json.createValue(((jakarta.json.JsonNumber) v).doubleValue() * (rnd.nextBoolean() ? -1 : 1e150));
+                    double d = ((jakarta.json.JsonNumber) v).doubleValue() * (rnd.nextBoolean() ? -1 : 1e150);
+                    return Json.createValue(Double.isFinite(d) ? d : 1e308);
                 }
                 if (v.getValueType() == JsonValue.ValueType.STRING) {
                     String s = ((jakarta.json.JsonString) v).getString();

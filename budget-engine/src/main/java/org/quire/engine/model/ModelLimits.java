@@ -12,7 +12,7 @@ final class ModelLimits {
     /** The most nodes a compiled model may have, once every call of a model function is expanded. */
     static final int MAX_NODES = 500_000;
     /** The deepest compiled expression, calls of model functions expanded. */
-    static final int MAX_NODE_DEPTH = 1_000;
+    static final int MAX_NODE_DEPTH = 400;
 
     private ModelLimits() {
     }
