@@ -336,6 +336,25 @@ final class CalibrationCommand implements Callable<Integer> {
         return 0;
     }
 
+    /**
+     * Reads a calibration file and its method (the template the file names) and evaluates it.
+     *
+     * @throws UsageException when the file does not exist
+     * @throws Files.FileProblem naming the file and the JSON path of what is wrong
+     */
+    static CalibrationResult readAndEvaluate(String name) throws UsageException, Files.FileProblem, IOException {
+        Path file = Files.path(name);
+        if (!java.nio.file.Files.isRegularFile(file)) {
+            throw new UsageException("no such calibration file: " + name);
+        }
+        try {
+            CalibrationJson.Loaded loaded = CalibrationJson.read(file);
+            return evaluate(name, CalibrationJson.method(file, loaded), loaded);
+        } catch (BudgetFormatException e) {
+            throw new Files.FileProblem(name, e.getMessage());
+        }
+    }
+
     private static CalibrationResult evaluate(String name, Template method, CalibrationJson.Loaded loaded)
             throws Files.FileProblem {
         try {

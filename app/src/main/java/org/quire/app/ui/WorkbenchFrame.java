@@ -536,11 +536,12 @@ public final class WorkbenchFrame extends JFrame {
             return;
         }
         GumResult gum = ed.latest().result();
+        org.quire.engine.montecarlo.MonteCarloOutcome mc = ed.monteCarloOutcome(content.budget());
         status("Writing the report to " + target + "\u2026", false);
         new SwingWorker<Void, Void>() {
             @Override
             protected Void doInBackground() throws Exception {
-                ReportExport.write(content, gum, target, LocalDate.now());
+                ReportExport.write(content, gum, mc, target, LocalDate.now());
                 return null;
             }
 

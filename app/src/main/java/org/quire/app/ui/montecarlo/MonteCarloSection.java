@@ -66,6 +66,15 @@ public final class MonteCarloSection implements Section {
     @Override public String title() { return "Monte Carlo check"; }
     @Override public JComponent body() { return body; }
 
+    /**
+     * @param b the budget a report is made of
+     * @return the outcome of the last run when it was made for exactly {@code b}, else null (a run of an earlier
+     *     state of the budget never goes into a report of the present one)
+     */
+    public MonteCarloOutcome outcomeFor(Budget b) {
+        return shown != null && b != null && b.equals(shownFor) ? shown : null;
+    }
+
     @Override
     public void budgetChanged(Budget b) {
         budget = b;

@@ -321,6 +321,11 @@ public final class BudgetEditor extends JPanel implements EditorContext {
     /** Starts a Monte Carlo run, when one can start. */
     public void runMonteCarlo() { monteCarlo.start(); }
 
+    /** @return the Monte Carlo outcome of exactly {@code b} from the last run, or null when there is none */
+    public org.quire.engine.montecarlo.MonteCarloOutcome monteCarloOutcome(org.quire.engine.budget.Budget b) {
+        return monteCarlo.outcomeFor(b);
+    }
+
     /** Stops the background work of this editor. */
     public void dispose() {
         monteCarlo.stop();
