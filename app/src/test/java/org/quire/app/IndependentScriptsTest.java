@@ -21,7 +21,8 @@ import org.junit.jupiter.api.TestFactory;
 /**
  * Runs every independent recomputation kept in the repository, with python3 and NumPy, in the normal test run:
  * each {@code *.py} in {@code budget-engine/src/test/resources/independent-checks/},
- * {@code app/src/test/resources/templates-check/} and {@code worked-examples/scripts/}, from the repository root.
+ * {@code app/src/test/resources/templates-check/}, {@code app/src/test/scripts/} and {@code worked-examples/scripts/},
+ * from the repository root.
  * A script passes when it exits 0 (a script that compares its figures with a committed file itself, such as the
  * worked-example and template checks, exits 1 on a difference) and, when a file {@code NAME.expected} lies beside
  * {@code NAME.py}, its output agrees with that committed file: the same words, and every number within one unit
@@ -31,7 +32,7 @@ import org.junit.jupiter.api.TestFactory;
 class IndependentScriptsTest {
     private static final Pattern NUMBER = Pattern.compile("[-+]?(?:\\d+\\.?\\d*|\\.\\d+)(?:[eE][-+]?\\d+)?");
     private static final List<String> FOLDERS = List.of("budget-engine/src/test/resources/independent-checks",
-            "app/src/test/resources/templates-check", "worked-examples/scripts");
+            "app/src/test/resources/templates-check", "app/src/test/scripts", "worked-examples/scripts");
 
     private static Path root() {
         return Path.of(System.getProperty("quire.projectRoot", "..")).toAbsolutePath().normalize();
