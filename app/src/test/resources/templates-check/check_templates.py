@@ -159,7 +159,10 @@ def input_estimate(ev):
             mean = sum(r) / n
             s = math.sqrt(sum((v - mean) ** 2 for v in r) / (n - 1))
             return mean, s / math.sqrt(n), n - 1
-        raise ValueError("only Type A with readings is used by the templates")
+        if "mean" in ev and "s" in ev and "n" in ev:
+            # a Type A evaluation given by its summary: u = s/sqrt(n), nu = n - 1 (JCGM 100:2008 4.2.3, G.3.3)
+            return ev["mean"], ev["s"] / math.sqrt(ev["n"]), ev["n"] - 1
+        raise ValueError("a Type A evaluation needs its readings or mean, s and n")
     dist = ev["distribution"]
     if dist == "constant":
         return ev["estimate"], 0.0, math.inf
@@ -225,7 +228,16 @@ def main():
                         % (file, out, "%#.9g" % y, "%.0e" % ey, "%#.6g" % uc, "%.0e" % eu))
     print()
     print("\n".join(java))
+    # the committed expected figures: every line above must stand, as printed, in ShippedTemplatesTest
+    test = os.path.join(here, "..", "..", "java", "org", "quire", "app", "ShippedTemplatesTest.java")
+    with open(test, encoding="utf-8") as fh:
+        committed = fh.read()
+    missing = [line for line in java if line not in committed]
+    for line in missing:
+        print("FAIL not in ShippedTemplatesTest.java: " + line)
+    print("%d figures compared with ShippedTemplatesTest.java, %d differ" % (len(java), len(missing)))
+    return 1 if missing else 0
 
 
 if __name__ == "__main__":
-    main()
+    sys.exit(main())

@@ -42,7 +42,7 @@ final class BudgetTableText {
             s.append(String.format(Locale.ROOT, "  combined standard uncertainty   u_c = %s%s%n", g(o.standardUncertainty(), 5), unit));
             String used = Double.isInfinite(o.effectiveDof()) || o.dofUsed() == o.effectiveDof() ? ""
                     : " (" + dof(o.dofUsed()) + " used)";
-            s.append(String.format(Locale.ROOT, "  effective degrees of freedom nu_eff = %s%s%n", dofLong(o.effectiveDof()), used));
+            s.append(String.format(Locale.ROOT, "  effective degrees of freedom nu_eff = %s%s%n", dof(o.effectiveDof()), used));
             s.append(String.format(Locale.ROOT, "  coverage factor                   k = %s (p = %s %%)%n",
                     g(o.coverageFactor(), 4), g(100 * o.coverageProbability(), 4)));
             s.append(String.format(Locale.ROOT, "  expanded uncertainty              U = %s%s%s%n", g(o.expandedUncertainty(), 5), unit,
@@ -84,13 +84,8 @@ final class BudgetTableText {
     }
 
     static String dof(double nu) {
-        if (Double.isInfinite(nu)) {
-            return "inf";
-        }
-        return nu == Math.rint(nu) ? String.format(Locale.ROOT, "%.0f", nu) : String.format(Locale.ROOT, "%.1f", nu);
+        return org.quire.engine.gum.Figures.dofPlain(nu);
     }
 
-    static String dofLong(double nu) {
-        return Double.isInfinite(nu) ? "inf" : String.format(Locale.ROOT, "%.1f", nu);
-    }
+
 }

@@ -174,6 +174,6 @@ final class FitCommand implements Callable<Integer> {
     }
 
     static String dof(double v) {
-        return Double.isInfinite(v) ? "inf" : String.format(Locale.ROOT, "%.1f", v);
+        return BudgetTableText.dof(v);
     }
 }

@@ -112,7 +112,13 @@ public final class Figures {
         return sig(v, Math.min(10, r.precision()));
     }
 
-    /** @return degrees of freedom: ∞, a whole number, or one decimal */
+    /**
+     * The one rule for showing degrees of freedom: a whole number as such, otherwise one decimal (nu_eff is
+     * truncated for k, JCGM 100:2008 G.4.1 note 1, but shown as computed); infinite as ∞ and not defined (NaN) as
+     * –. {@link #dofPlain(double)} is the same rule in ASCII for command-line text.
+     *
+     * @return degrees of freedom for screens and reports: ∞, –, a whole number, or one decimal
+     */
     public static String dof(double nu) {
         if (Double.isInfinite(nu)) {
             return "∞";
@@ -120,6 +126,21 @@ public final class Figures {
         if (Double.isNaN(nu)) {
             return "–";
         }
+        return dofNumber(nu);
+    }
+
+    /** @return degrees of freedom for plain text, by the rule of {@link #dof(double)}: inf, -, or the number */
+    public static String dofPlain(double nu) {
+        if (Double.isInfinite(nu)) {
+            return "inf";
+        }
+        if (Double.isNaN(nu)) {
+            return "-";
+        }
+        return dofNumber(nu);
+    }
+
+    private static String dofNumber(double nu) {
         return nu == Math.rint(nu) ? String.format(Locale.ROOT, "%.0f", nu) : String.format(Locale.ROOT, "%.1f", nu);
     }
 
