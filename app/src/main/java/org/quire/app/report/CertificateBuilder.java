@@ -7,7 +7,7 @@ import java.util.LinkedHashSet;
 import java.util.List;
 import java.util.Locale;
 import java.util.Set;
-import org.quire.app.Cautions;
+import org.quire.app.common.Cautions;
 import org.quire.app.report.ReportModel.Block;
 import org.quire.app.report.ReportModel.ChartBlock;
 import org.quire.app.report.ReportModel.Notices;

@@ -1,5 +1,7 @@
 package org.quire.app.ui;
 
+import org.quire.app.ui.common.WorkbenchPrefs;
+import org.quire.app.ui.common.Colors;
 import java.awt.BorderLayout;
 import java.awt.CardLayout;
 import java.awt.Dimension;

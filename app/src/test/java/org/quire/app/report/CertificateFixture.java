@@ -7,7 +7,7 @@ import java.time.LocalDate;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
-import org.quire.app.Engine;
+import org.quire.app.common.Engine;
 import org.quire.engine.calibration.Adjustment;
 import org.quire.engine.calibration.Calibration;
 import org.quire.engine.calibration.CalibrationConstant;

@@ -19,13 +19,13 @@ import org.apache.pdfbox.Loader;
 import org.apache.pdfbox.pdmodel.PDDocument;
 import org.apache.pdfbox.text.PDFTextStripper;
 import org.junit.jupiter.api.Test;
-import org.quire.app.Engine;
+import org.quire.app.common.Engine;
 import org.quire.engine.calibration.Calibration;
 import org.quire.engine.calibration.CalibrationEvaluator;
 import org.quire.engine.calibration.CalibrationResult;
 import org.quire.engine.calibration.CertificateDetails;
 import org.quire.engine.io.BudgetJson;
-import org.quire.engine.io.CalibrationJson;
+import org.quire.engine.calibration.CalibrationJson;
 import org.quire.engine.io.ReferenceRegisterJson;
 import org.quire.engine.reference.ReferenceRegister;
 

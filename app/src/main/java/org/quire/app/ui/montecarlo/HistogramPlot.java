@@ -6,8 +6,8 @@ import java.awt.Graphics;
 import java.awt.Graphics2D;
 import java.awt.RenderingHints;
 import javax.swing.JComponent;
-import org.quire.app.ui.Colors;
-import org.quire.app.ui.Fmt;
+import org.quire.app.ui.common.Colors;
+import org.quire.app.ui.common.Fmt;
 import org.quire.engine.montecarlo.MonteCarloOutcome;
 
 /**
