@@ -30,6 +30,7 @@ public final class Workbench {
         installLookAndFeel(prefs.theme());
         EventQueue.invokeLater(() -> {
             WorkbenchFrame frame = new WorkbenchFrame(prefs, Engine.library(), MonteCarloRunner.engine(Engine.library()));
+            frame.setIconImages(AppIcon.images());
             // the budget first, then the window: its first paint shows the content, not an empty grey frame
             if (file == null) {
                 frame.openDemo();

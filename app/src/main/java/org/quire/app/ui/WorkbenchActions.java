@@ -123,6 +123,7 @@ final class WorkbenchActions {
         file.add(action("Open the demo budget", 0, 0, e -> frame.openDemo()));
         file.add(open);
         file.add(openReview);
+        file.add(action("Open calibration\u2026", 0, 0, e -> frame.openCalibration()));
         updateRecent();
         file.add(recent);
         file.addSeparator();
@@ -157,6 +158,8 @@ final class WorkbenchActions {
         budget.add(compareWith);
         bar.add(budget);
         JMenu help = menu("Help", KeyEvent.VK_H);
+        help.add(action("Model language reference", 0, 0, e -> ReferenceDialog.show(frame)));
+        help.addSeparator();
         help.add(action("About Quire", 0, 0, e -> AboutDialog.show(frame)));
         bar.add(help);
         return bar;
