@@ -92,7 +92,7 @@ public final class CertificatePdf {
                     PdfReport.ACCENT, r.bold, r.bold));
             h.setSpacingBefore(10f);
             h.setSpacingAfter(3f);
-            float need = 34f + (p.blocks().isEmpty() ? 0f : Math.min(150f, r.height(p.blocks().get(0), doc)));
+            float need = 34f + (p.blocks().isEmpty() ? 0f : Math.min(doc.top() - doc.bottom() - 40f, r.height(p.blocks().get(0), doc)));
             if (w.getVerticalPosition(true) - doc.bottom() < need) {
                 doc.newPage();
             }

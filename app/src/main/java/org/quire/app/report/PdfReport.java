@@ -51,6 +51,8 @@ public final class PdfReport {
     private static final Color WARN = new Color(0x7a4b00);
     private static final Color DRAFT_BAND = new Color(0xa0361c);
     static final float BODY = 9f;
+    /** A table of at most this many rows is not split over two pages. */
+    private static final int KEEP_TOGETHER_ROWS = 14;
     private static final float TABLE = 7.6f;
 
     final BaseFont regular;
@@ -152,7 +154,7 @@ public final class PdfReport {
             h.setSpacingAfter(4f);
             // A heading stays with what follows: when the heading and the start of its first block do not fit on
             // what is left of the page, both go to the next page.
-            float need = 34f + (p.blocks().isEmpty() ? 0f : Math.min(150f, height(p.blocks().get(0), doc)));
+            float need = 34f + (p.blocks().isEmpty() ? 0f : Math.min(doc.top() - doc.bottom() - 40f, height(p.blocks().get(0), doc)));
             if (w.getVerticalPosition(true) - doc.bottom() < need) {
                 doc.newPage();
             }
@@ -277,7 +279,9 @@ public final class PdfReport {
         }
         t.setTotalWidth(width);
         t.setLockedWidth(true);
-        return t.getTotalHeight();
+        // a table that may split over pages needs only its start on this page; one kept together needs all of it
+        boolean whole = !(b instanceof TableBlock) || ((TableBlock) b).table().rows().size() <= KEEP_TOGETHER_ROWS;
+        return whole ? t.getTotalHeight() : Math.min(150f, t.getTotalHeight());
     }
 
     private PdfPTable table(Table t) throws DocumentException {
@@ -292,7 +296,7 @@ public final class PdfReport {
         p.setSpacingAfter(8f);
         p.setHeaderRows(2);
         // a short table is not split over two pages
-        p.setKeepTogether(t.rows().size() <= 14);
+        p.setKeepTogether(t.rows().size() <= KEEP_TOGETHER_ROWS);
         PdfPCell cap = new PdfPCell(math(t.caption(), TABLE + 0.4f, MUTED, bold, bold));
         cap.setColspan(n);
         cap.setBorder(Rectangle.NO_BORDER);

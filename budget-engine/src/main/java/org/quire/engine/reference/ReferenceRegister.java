@@ -103,22 +103,4 @@ public final class ReferenceRegister {
         }
         return out;
     }
-
-    /**
-     * @param ids the ids of the references used, each in the register
-     * @return the references of these ids, in the order given
-     * @throws IllegalArgumentException naming the first id the register does not hold
-     */
-    public List<ReferenceStandard> resolve(List<String> ids) {
-        List<ReferenceStandard> out = new ArrayList<>();
-        for (String id : ids) {
-            ReferenceStandard r = references.get(id);
-            if (r == null) {
-                throw new IllegalArgumentException("reference '" + id + "' is not in the reference register of "
-                        + laboratory);
-            }
-            out.add(r);
-        }
-        return out;
-    }
 }
