@@ -1,11 +1,8 @@
 package org.quire.app.ui;
 
-import java.awt.Graphics2D;
-import java.awt.image.BufferedImage;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.concurrent.atomic.AtomicReference;
-import javax.imageio.ImageIO;
 import javax.swing.JRootPane;
 import org.junit.jupiter.api.Test;
 import org.quire.app.ui.calibration.CalibrationWindow;
@@ -85,14 +82,6 @@ class ScreenshotsLightDarkTest extends GuiTestSupport {
     }
 
     private static void shot(JRootPane root, String name) throws Exception {
-        BufferedImage img = onEdt(() -> {
-            root.validate();
-            BufferedImage i = new BufferedImage(root.getWidth(), root.getHeight(), BufferedImage.TYPE_INT_RGB);
-            Graphics2D g = i.createGraphics();
-            root.printAll(g);
-            g.dispose();
-            return i;
-        });
-        ImageIO.write(img, "png", OUT.resolve(name + ".png").toFile());
+        ScreenshotsTest.shot(root, name);
     }
 }
