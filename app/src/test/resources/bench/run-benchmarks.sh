@@ -9,7 +9,8 @@
 # machine's load hits all of them alike. REPEATS rounds (default 3); the table gives the median of the rounds.
 # JAVA_OPTS is passed to every java command (e.g. JAVA_OPTS=-XX:SharedArchiveFile=app/target/quire.jsa).
 # A jar given as JAR@OPTS is run with the extra java options OPTS (spaces as commas), so one run can compare
-# app/target/quire.jar with app/target/quire.jar@-XX:SharedArchiveFile=app/target/quire.jsa.
+# app/target/quire.jar with app/target/quire.jar@-XX:SharedArchiveFile=app/target/quire.jsa; CDS=1 does that
+# for every jar with an archive it makes first.
 #
 # Targets (issue 16): bench trials/s and its ratio to the matched NumPy peer; montecarlo of the gravimetric
 # template with 10^6 trials end to end against its NumPy peer; evaluate of a worked example end to end; GUM
@@ -86,6 +87,19 @@ workbench_ms() {
     wait 2> /dev/null
     field workbench_content_painted_ms < "$log"
 }
+
+# CDS=1 adds, for each jar, the same jar run with an application class-data-sharing archive made first by
+# one montecarlo run with -XX:ArchiveClassesAtExit (DEVELOPERS.md, "Start-up")
+if [ "${CDS:-0}" = 1 ]; then
+    with_cds=()
+    for spec in "${jars[@]}"; do
+        jar=${spec%%@*}
+        archive="$work/$(basename "$jar" .jar)-$(echo "$jar" | md5sum | cut -c1-8).jsa"
+        java -XX:ArchiveClassesAtExit="$archive" -jar "$jar" montecarlo "$example" --trials 20000 > /dev/null 2>&1
+        with_cds+=("$spec" "$jar@-XX:SharedArchiveFile=$archive")
+    done
+    jars=("${with_cds[@]}")
+fi
 
 for round in $(seq 1 "$repeats"); do
     echo "round $round of $repeats" >&2

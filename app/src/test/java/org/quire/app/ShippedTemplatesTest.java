@@ -1,5 +1,6 @@
 package org.quire.app;
 
+import org.quire.app.common.Engine;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertNotNull;

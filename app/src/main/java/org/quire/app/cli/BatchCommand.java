@@ -15,7 +15,7 @@ import java.util.concurrent.atomic.AtomicInteger;
 import java.util.stream.IntStream;
 import org.apache.commons.csv.CSVFormat;
 import org.apache.commons.csv.CSVPrinter;
-import org.quire.app.Engine;
+import org.quire.app.common.Engine;
 import org.quire.engine.budget.Budget;
 import org.quire.engine.budget.EvaluationSettings;
 import org.quire.engine.csv.CsvException;

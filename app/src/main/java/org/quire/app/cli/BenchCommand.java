@@ -7,7 +7,7 @@ import java.nio.file.Path;
 import java.util.Arrays;
 import java.util.Locale;
 import java.util.Set;
-import org.quire.app.Engine;
+import org.quire.app.common.Engine;
 import org.quire.engine.budget.Budget;
 import org.quire.engine.gum.GumEvaluator;
 import org.quire.engine.gum.GumResult;

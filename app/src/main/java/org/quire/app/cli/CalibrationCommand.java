@@ -19,8 +19,8 @@ import picocli.CommandLine.Parameters;
 import jakarta.json.JsonObject;
 import org.apache.commons.csv.CSVFormat;
 import org.apache.commons.csv.CSVPrinter;
-import org.quire.app.Cautions;
-import org.quire.app.Engine;
+import org.quire.app.common.Cautions;
+import org.quire.app.common.Engine;
 import org.quire.engine.calibration.AdjustmentResult;
 import org.quire.engine.calibration.CalibrationEvaluator;
 import org.quire.engine.calibration.CalibrationException;
@@ -37,8 +37,8 @@ import org.quire.engine.document.DocumentStore;
 import org.quire.engine.document.Template;
 import org.quire.engine.io.BudgetFormatException;
 import org.quire.engine.io.BudgetJson;
-import org.quire.engine.io.CalibrationJson;
-import org.quire.engine.io.CalibrationResultJson;
+import org.quire.engine.calibration.CalibrationJson;
+import org.quire.engine.calibration.CalibrationResultJson;
 import org.quire.engine.io.JsonCursor;
 import org.quire.engine.model.ModelException;
 
@@ -334,6 +334,25 @@ final class CalibrationCommand implements Callable<Integer> {
             out.print(text);
         }
         return 0;
+    }
+
+    /**
+     * Reads a calibration file and its method (the template the file names) and evaluates it.
+     *
+     * @throws UsageException when the file does not exist
+     * @throws Files.FileProblem naming the file and the JSON path of what is wrong
+     */
+    static CalibrationResult readAndEvaluate(String name) throws UsageException, Files.FileProblem, IOException {
+        Path file = Files.path(name);
+        if (!java.nio.file.Files.isRegularFile(file)) {
+            throw new UsageException("no such calibration file: " + name);
+        }
+        try {
+            CalibrationJson.Loaded loaded = CalibrationJson.read(file);
+            return evaluate(name, CalibrationJson.method(file, loaded), loaded);
+        } catch (BudgetFormatException e) {
+            throw new Files.FileProblem(name, e.getMessage());
+        }
     }
 
     private static CalibrationResult evaluate(String name, Template method, CalibrationJson.Loaded loaded)

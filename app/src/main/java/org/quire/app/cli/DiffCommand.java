@@ -5,7 +5,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Optional;
 import java.util.Set;
-import org.quire.app.Engine;
+import org.quire.app.common.Engine;
 import org.quire.app.compare.BudgetComparison;
 import org.quire.app.compare.Comparison;
 import org.quire.app.compare.ComparisonText;

@@ -6,7 +6,7 @@ import java.nio.file.NoSuchFileException;
 import java.nio.file.Path;
 import java.util.Locale;
 import java.util.Set;
-import org.quire.engine.line.CalibrationCsv;
+import org.quire.engine.csv.CalibrationCsv;
 import org.quire.engine.line.CalibrationData;
 import org.quire.engine.line.CalibrationPoint;
 import org.quire.engine.line.LineEstimate;

@@ -6,7 +6,7 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
-import org.quire.app.Cautions;
+import org.quire.app.common.Cautions;
 import org.quire.app.report.AtomicFile;
 import org.quire.engine.io.EngineVersion;
 import picocli.CommandLine.Model.CommandSpec;

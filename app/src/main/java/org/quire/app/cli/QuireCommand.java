@@ -14,7 +14,7 @@ import picocli.CommandLine.Spec;
         description = {"Measurement-uncertainty budgets for flow metrology (JCGM 100 GUM, JCGM 101 Monte Carlo).",
             "Without a command, or with a budget file, the workbench opens."},
         subcommands = {EvaluateCommand.class, MonteCarloCommand.class, RangeCommand.class, FitCommand.class,
-            CalibrationCommand.class,
+            CalibrationCommand.class, CertificateCommand.class,
             ReportCommand.class, ReviewCommand.class, DiffCommand.class, TemplateCommand.class, BatchCommand.class,
             ValidateCommand.class, ExamplesCommand.class, BenchCommand.class, OpenCommand.class, HelpCommand.class,
             CompletionCommand.class, QuireCommand.VersionCommand.class},

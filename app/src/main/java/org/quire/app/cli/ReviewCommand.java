@@ -8,7 +8,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 import java.util.Set;
-import org.quire.app.Engine;
+import org.quire.app.common.Engine;
 import org.quire.app.review.ChecklistText;
 import org.quire.app.review.DecisionRecorder;
 import org.quire.app.review.DocumentDecisionRecorder;

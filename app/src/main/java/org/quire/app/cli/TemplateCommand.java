@@ -9,7 +9,7 @@ import java.util.List;
 import java.util.Map;
 import java.util.Optional;
 import java.util.concurrent.Callable;
-import org.quire.app.ui.WorkbenchPrefs;
+import org.quire.app.ui.common.WorkbenchPrefs;
 import org.quire.engine.document.BudgetDocument;
 import org.quire.engine.document.DocumentStore;
 import org.quire.engine.document.IncompleteTemplateException;

@@ -10,7 +10,7 @@ import java.nio.file.Path;
 import java.util.List;
 import java.util.Map;
 import java.util.Set;
-import org.quire.app.Engine;
+import org.quire.app.common.Engine;
 import org.quire.engine.validate.CheckOutcome;
 import org.quire.engine.validate.Validator;
 import java.util.concurrent.Callable;

@@ -62,7 +62,7 @@ public final class MonteCarloReport {
         }
         String name = Typesetter.name(o.name()).plain();
         String label = name + (o.unit().isEmpty() ? "" : " (" + o.unit() + ")");
-        return new Chart.Histogram("Distribution of " + name + " from " + h.total()
+        return new Chart.Histogram("Distribution of " + name + " from " + Figures.count(h.total())
                 + " trials, with the distribution the GUM assigns to it and the coverage intervals",
                 label, e, h.counts(), null, "", x, y, curve, intervals);
     }

@@ -43,21 +43,21 @@ import org.quire.app.report.ReportModel.TableBlock;
  */
 public final class PdfReport {
     private static final String FONT_DIR = "/org/quire/app/report/fonts/";
-    private static final Color INK = new Color(0x1d2430);
-    private static final Color MUTED = new Color(0x5a6472);
-    private static final Color ACCENT = new Color(0x2f5d8a);
-    private static final Color RULE = new Color(0xc9cfd8);
-    private static final Color BAND = new Color(0xeef1f5);
+    static final Color INK = new Color(0x1d2430);
+    static final Color MUTED = new Color(0x5a6472);
+    static final Color ACCENT = new Color(0x2f5d8a);
+    static final Color RULE = new Color(0xc9cfd8);
+    static final Color BAND = new Color(0xeef1f5);
     private static final Color WARN = new Color(0x7a4b00);
     private static final Color DRAFT_BAND = new Color(0xa0361c);
-    private static final float BODY = 9f;
+    static final float BODY = 9f;
     private static final float TABLE = 7.6f;
 
-    private final BaseFont regular;
-    private final BaseFont bold;
-    private final BaseFont italic;
+    final BaseFont regular;
+    final BaseFont bold;
+    final BaseFont italic;
 
-    private PdfReport() throws IOException {
+    PdfReport() throws IOException {
         regular = Fonts.get("DejaVuSans.ttf");
         bold = Fonts.get("DejaVuSans-Bold.ttf");
         italic = Fonts.get("DejaVuSans-Oblique.ttf");
@@ -193,7 +193,7 @@ public final class PdfReport {
         }
     }
 
-    private void block(Document doc, PdfWriter w, Block b) throws DocumentException {
+    void block(Document doc, PdfWriter w, Block b) throws DocumentException {
         if (b instanceof ReportModel.Paragraph) {
             Paragraph p = new Paragraph(math(((ReportModel.Paragraph) b).text(), BODY, INK));
             p.setLeading(BODY * 1.35f);
@@ -255,7 +255,7 @@ public final class PdfReport {
     }
 
     /** @return the height a block takes on the page, for keeping a heading with it (an estimate for text) */
-    private float height(Block b, Document doc) {
+    float height(Block b, Document doc) {
         float width = doc.right() - doc.left();
         PdfPTable t = null;
         if (b instanceof TableBlock) {
@@ -332,11 +332,11 @@ public final class PdfReport {
         c.setHorizontalAlignment(a == Table.Align.RIGHT ? Element.ALIGN_RIGHT : Element.ALIGN_LEFT);
     }
 
-    private Phrase math(MathText m, float size, Color colour) {
+    Phrase math(MathText m, float size, Color colour) {
         return math(m, size, colour, regular, italic);
     }
 
-    private static Phrase math(MathText m, float size, Color colour, BaseFont upright, BaseFont slanted) {
+    static Phrase math(MathText m, float size, Color colour, BaseFont upright, BaseFont slanted) {
         Phrase p = new Phrase(size * 1.45f, "", new Font(upright, size, Font.NORMAL, colour));
         for (MathText.Run r : m.runs()) {
             float s = r.shift() == MathText.Shift.BASE ? size : size * 0.72f;
@@ -485,7 +485,7 @@ public final class PdfReport {
     }
 
     /** Keeps the caller's stream open: the PDF writer closes its stream when the document closes. */
-    private static final class NonClosing extends java.io.FilterOutputStream {
+    static final class NonClosing extends java.io.FilterOutputStream {
         NonClosing(OutputStream out) {
             super(out);
         }

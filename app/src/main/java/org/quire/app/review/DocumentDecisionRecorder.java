@@ -64,6 +64,13 @@ public final class DocumentDecisionRecorder implements DecisionRecorder {
             throw new IllegalArgumentException("revision " + doc.revision() + " of '" + doc.title() + "' is "
                     + doc.status().label() + " already; a decision needs a draft or a document in review");
         }
+        if (d.verdict() == Verdict.ENDORSED) {
+            String duties = org.quire.engine.document.SeparationOfDuties.problem("'" + doc.title() + "'", doc.author(),
+                    d.assessor());
+            if (duties != null) {
+                throw new IllegalArgumentException(duties);
+            }
+        }
         List<Recorded> earlier = decisions(review.contentHash());
         if (!earlier.isEmpty()) {
             Recorded r = earlier.get(0);

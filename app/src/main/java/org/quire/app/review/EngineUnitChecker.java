@@ -2,7 +2,7 @@ package org.quire.app.review;
 
 import java.util.ArrayList;
 import java.util.List;
-import org.quire.app.Engine;
+import org.quire.app.common.Engine;
 import org.quire.engine.budget.Budget;
 import org.quire.engine.model.ModelCompiler;
 import org.quire.engine.model.ModelProblem;

@@ -2,7 +2,7 @@ package org.quire.app.ui;
 
 import javax.swing.JOptionPane;
 import javax.swing.JTextArea;
-import org.quire.app.Cautions;
+import org.quire.app.common.Cautions;
 import org.quire.engine.io.EngineVersion;
 
 /** The About box: what Quire is, its version, and the cautions. */

@@ -1,5 +1,6 @@
 package org.quire.app.ui;
 
+import org.quire.app.ui.common.WorkbenchPrefs;
 import java.awt.Component;
 import javax.swing.JSplitPane;
 

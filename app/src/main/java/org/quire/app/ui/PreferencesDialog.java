@@ -1,5 +1,7 @@
 package org.quire.app.ui;
 
+import org.quire.app.ui.common.WorkbenchPrefs;
+import org.quire.app.ui.common.Fmt;
 import java.awt.GridBagConstraints;
 import java.awt.GridBagLayout;
 import java.awt.Insets;

@@ -1,5 +1,6 @@
 package org.quire.app.ui;
 
+import org.quire.app.ui.common.Colors;
 import java.awt.BorderLayout;
 import java.awt.Component;
 import java.awt.event.MouseAdapter;

@@ -1,16 +1,18 @@
 package org.quire.app.ui;
 
+import org.quire.app.ui.common.WorkbenchPrefs;
 import com.formdev.flatlaf.FlatDarkLaf;
 import com.formdev.flatlaf.FlatLaf;
 import com.formdev.flatlaf.FlatLightLaf;
 import java.awt.EventQueue;
 import java.nio.file.Path;
-import org.quire.app.Engine;
+import org.quire.app.common.Engine;
 import org.quire.app.ui.montecarlo.MonteCarloRunner;
 
 /**
  * Starts the workbench in a fixed order: platform properties, the look and feel (light or dark from the
- * preferences, with Quire's own theme files), then the window, built on the event thread.
+ * preferences, with Quire's own theme files), then the window, built on the event thread with the budget
+ * opened in it before it is shown.
  */
 public final class Workbench {
     private Workbench() {
@@ -29,12 +31,13 @@ public final class Workbench {
         Thread.setDefaultUncaughtExceptionHandler(Workbench::uncaught);
         EventQueue.invokeLater(() -> {
             WorkbenchFrame frame = new WorkbenchFrame(prefs, Engine.library(), MonteCarloRunner.engine(Engine.library()));
-            frame.showRestored();
+            // the budget first, then the window: its first paint shows the content, not an empty grey frame
             if (file == null) {
                 frame.openDemo();
             } else {
                 frame.open(file).ifPresent(ed -> ed.document().setReadOnly(review));
             }
+            frame.showRestored();
             if (Boolean.getBoolean(TIMING_PROPERTY)) {
                 EventQueue.invokeLater(() -> reportPainted(frame));
             }

@@ -1,5 +1,7 @@
 package org.quire.app.ui;
 
+import org.quire.app.ui.common.WorkbenchPrefs;
+import org.quire.app.ui.common.Colors;
 import java.awt.BorderLayout;
 import java.awt.CardLayout;
 import java.awt.Dimension;
@@ -609,11 +611,12 @@ public final class WorkbenchFrame extends JFrame {
             return;
         }
         GumResult gum = ed.latest().result();
+        org.quire.engine.montecarlo.MonteCarloOutcome mc = ed.monteCarloOutcome(content.budget());
         status("Writing the report to " + target + "\u2026", false);
         new SwingWorker<Void, Void>() {
             @Override
             protected Void doInBackground() throws Exception {
-                ReportExport.write(content, gum, target, LocalDate.now());
+                ReportExport.write(content, gum, mc, target, LocalDate.now());
                 return null;
             }
 

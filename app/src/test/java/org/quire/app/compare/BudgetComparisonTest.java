@@ -7,7 +7,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import java.nio.file.Path;
 import java.util.List;
 import org.junit.jupiter.api.Test;
-import org.quire.app.Engine;
+import org.quire.app.common.Engine;
 import org.quire.app.report.ReportSection;
 import org.quire.app.testing.Examples;
 import org.quire.engine.budget.Budget;

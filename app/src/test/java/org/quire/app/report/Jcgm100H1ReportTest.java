@@ -24,7 +24,7 @@ import org.apache.pdfbox.text.PDFTextStripper;
 import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
-import org.quire.app.Cautions;
+import org.quire.app.common.Cautions;
 import org.quire.app.testing.Examples;
 
 /**

@@ -13,7 +13,7 @@ import org.apache.pdfbox.pdmodel.PDDocument;
 import org.apache.pdfbox.text.PDFTextStripper;
 import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
-import org.quire.app.Engine;
+import org.quire.app.common.Engine;
 import org.quire.app.testing.Examples;
 import org.quire.engine.budget.Budget;
 import org.quire.engine.document.BudgetDocument;

@@ -6,7 +6,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.List;
 import org.junit.jupiter.api.Test;
-import org.quire.app.Engine;
+import org.quire.app.common.Engine;
 import org.quire.engine.model.CompiledModel;
 import org.quire.engine.model.ModelCompiler;
 import org.quire.engine.model.ModelException;

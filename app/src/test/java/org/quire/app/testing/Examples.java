@@ -3,7 +3,7 @@ package org.quire.app.testing;
 import java.io.IOException;
 import java.nio.file.Path;
 import java.time.LocalDate;
-import org.quire.app.Engine;
+import org.quire.app.common.Engine;
 import org.quire.app.report.CanonicalSha256;
 import org.quire.app.report.DocumentInfo;
 import org.quire.app.report.ReportBuilder;

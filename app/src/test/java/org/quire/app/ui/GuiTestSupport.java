@@ -1,5 +1,6 @@
 package org.quire.app.ui;
 
+import org.quire.app.ui.common.WorkbenchPrefs;
 import static org.junit.jupiter.api.Assertions.fail;
 
 import java.awt.EventQueue;
@@ -15,7 +16,7 @@ import org.junit.jupiter.api.AfterEach;
 import org.junit.jupiter.api.Assumptions;
 import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.BeforeEach;
-import org.quire.app.Engine;
+import org.quire.app.common.Engine;
 import org.quire.app.ui.montecarlo.MonteCarloRunner;
 import org.quire.app.ui.notebook.BudgetEditor;
 

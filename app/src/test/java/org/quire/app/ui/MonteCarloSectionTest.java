@@ -9,7 +9,7 @@ import java.util.concurrent.CountDownLatch;
 import java.util.concurrent.TimeUnit;
 import javax.swing.JLabel;
 import org.junit.jupiter.api.Test;
-import org.quire.app.Engine;
+import org.quire.app.common.Engine;
 import org.quire.app.ui.montecarlo.MonteCarloRunner;
 import org.quire.app.ui.montecarlo.MonteCarloSection;
 import org.quire.app.ui.notebook.BudgetEditor;

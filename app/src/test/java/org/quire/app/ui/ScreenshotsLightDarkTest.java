@@ -20,7 +20,7 @@ class ScreenshotsLightDarkTest extends GuiTestSupport {
     void lightAndDark() throws Exception {
         Files.createDirectories(OUT);
         try {
-            for (WorkbenchPrefs.Theme theme : WorkbenchPrefs.Theme.values()) {
+            for (org.quire.app.ui.common.WorkbenchPrefs.Theme theme : org.quire.app.ui.common.WorkbenchPrefs.Theme.values()) {
                 String t = theme.name().toLowerCase(java.util.Locale.ROOT);
                 onEdt(() -> { Workbench.installLookAndFeel(theme); return null; });
                 WorkbenchFrame f = newFrameOnSamePreferences();
@@ -37,7 +37,7 @@ class ScreenshotsLightDarkTest extends GuiTestSupport {
                 }
             }
         } finally {
-            onEdt(() -> { Workbench.installLookAndFeel(WorkbenchPrefs.Theme.LIGHT); return null; });
+            onEdt(() -> { Workbench.installLookAndFeel(org.quire.app.ui.common.WorkbenchPrefs.Theme.LIGHT); return null; });
         }
     }
 

@@ -1,6 +1,5 @@
 package org.quire.engine.budget;
 
-import org.quire.engine.io.JsonSupport;
 import jakarta.json.JsonObject;
 import java.util.ArrayList;
 import java.util.HashSet;
@@ -246,7 +245,7 @@ public final class Budget {
 
     /** @return an empty JSON object, for callers that build extensions */
     public static JsonObject noExtensions() {
-        return JsonSupport.JSON.createObjectBuilder().build();
+        return jakarta.json.JsonValue.EMPTY_JSON_OBJECT;
     }
 
     @Override

@@ -1,6 +1,7 @@
 package org.quire.engine.budget;
 
 import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.HashMap;
 import java.util.List;
 import java.util.Locale;
@@ -10,18 +11,27 @@ import org.apache.commons.math3.linear.EigenDecomposition;
 import org.apache.commons.math3.linear.RealVector;
 
 /**
- * The correlation matrix of a budget's inputs, built from its stated and computed coefficients and checked:
- * symmetric by construction, unit diagonal, every coefficient in [-1, 1], each pair given once, and positive
- * semi-definite, without which no covariance matrix (and no Monte Carlo sampling) exists.
+ * The one correlation matrix type of the engine, used by the GUM evaluation and by the Monte Carlo method alike:
+ * a budget's inputs with its stated and computed coefficients ({@link #of(List, List)}), or any quantities
+ * ({@link #of(double[][])}, {@link #identity(int)}, {@link #withCoefficient(int, int, double)}). Every factory
+ * checks: square, symmetric, unit diagonal, every coefficient in [-1, 1], each pair given once, and positive
+ * semi-definite by the one rule {@link #SEMIDEFINITE_TOLERANCE}, without which no covariance matrix (and no
+ * Monte Carlo sampling) exists. A matrix accepted here can always be sampled: {@link #samplingFactor(int[])}.
  *
  * <p>References: JCGM 100:2008 5.2.2 (eq. 14), 5.2.3 and C.3.6 (coefficients from simultaneous observations,
- * eq. 17); JCGM 101:2008 6.4.8.1 (a covariance matrix must be positive semi-definite).
+ * eq. 17); JCGM 101:2008 6.4.8.1 (a covariance matrix must be positive semi-definite) and 6.4.8.4 (sampling with
+ * a factor R with V = R R^T).
  *
  * <p>Immutable and thread-safe.
  */
 public final class CorrelationMatrix {
-    /** Eigenvalues above -EPS count as zero: rounding in stated coefficients must not refuse a valid matrix. */
-    private static final double EPS = 1e-9;
+    /**
+     * The positive semi-definiteness rule: the smallest eigenvalue must be at least -1e-9 (the matrix has a unit
+     * diagonal, so this is relative to its scale). Coefficients stated to 9 or more decimals, or computed from
+     * readings, can make an exactly singular matrix (r12 = r13 = r23 = -0.5, or a perfect correlation of three
+     * inputs) a few 1e-10 negative; such a matrix is accepted, and sampled as the nearest semi-definite one.
+     */
+    public static final double SEMIDEFINITE_TOLERANCE = 1e-9;
     private final List<String> names;
     private final double[][] r;
     private final boolean identity;
@@ -79,6 +89,100 @@ public final class CorrelationMatrix {
         CorrelationMatrix m = new CorrelationMatrix(List.copyOf(names), r, correlations.isEmpty() && !fitPairs);
         m.checkPositiveSemiDefinite();
         return m;
+    }
+
+    /**
+     * @param size the number of quantities
+     * @return the identity: no quantity correlated with another
+     */
+    public static CorrelationMatrix identity(int size) {
+        if (size < 1) {
+            throw new IllegalArgumentException("size of a correlation matrix must be at least 1, not " + size);
+        }
+        double[][] m = new double[size][size];
+        for (int i = 0; i < size; i++) {
+            m[i][i] = 1.0;
+        }
+        return new CorrelationMatrix(numbered(size), m, true);
+    }
+
+    /**
+     * @param coefficients a square, symmetric matrix with unit diagonal; copied. The quantities are named by
+     *     their position, 1 .. n, in messages.
+     * @return the checked matrix
+     * @throws IllegalArgumentException naming the offending entry, or the smallest eigenvalue and the pairs
+     *     involved when the matrix is not positive semi-definite
+     */
+    public static CorrelationMatrix of(double[][] coefficients) {
+        if (coefficients == null) {
+            throw new IllegalArgumentException("correlation matrix must not be null");
+        }
+        int n = coefficients.length;
+        if (n < 1) {
+            throw new IllegalArgumentException("size of a correlation matrix must be at least 1, not 0");
+        }
+        double[][] m = new double[n][];
+        for (int i = 0; i < n; i++) {
+            if (coefficients[i] == null || coefficients[i].length != n) {
+                throw new IllegalArgumentException(String.format(Locale.ROOT, "correlation matrix must be square: "
+                        + "it has %d rows but row %d has %d entries", n, i + 1,
+                        coefficients[i] == null ? 0 : coefficients[i].length));
+            }
+            m[i] = coefficients[i].clone();
+        }
+        return checked(numbered(n), m);
+    }
+
+    /**
+     * @return a copy with r(i, j) = r(j, i) = {@code coefficient}
+     * @throws IllegalArgumentException when an index is outside the matrix, i == j with a coefficient other than
+     *     1, or the result is not positive semi-definite
+     */
+    public CorrelationMatrix withCoefficient(int i, int j, double coefficient) {
+        int n = r.length;
+        if (i < 0 || i >= n || j < 0 || j >= n) {
+            throw new IllegalArgumentException(String.format(Locale.ROOT, "%s index %d is outside 0..%d",
+                    i < 0 || i >= n ? "row" : "column", i < 0 || i >= n ? i : j, n - 1));
+        }
+        double[][] m = toArray();
+        m[i][j] = coefficient;
+        m[j][i] = coefficient;
+        return checked(names, m);
+    }
+
+    private static List<String> numbered(int n) {
+        List<String> names = new ArrayList<>();
+        for (int i = 0; i < n; i++) {
+            names.add(String.valueOf(i + 1));
+        }
+        return List.copyOf(names);
+    }
+
+    private static CorrelationMatrix checked(List<String> names, double[][] m) {
+        int n = m.length;
+        boolean identity = true;
+        for (int i = 0; i < n; i++) {
+            if (m[i][i] != 1.0) {
+                throw new IllegalArgumentException(String.format(Locale.ROOT, "correlation matrix entry (%d, %d) "
+                        + "on the diagonal must be 1, not %s", i + 1, i + 1, m[i][i]));
+            }
+            for (int j = 0; j < n; j++) {
+                double v = m[i][j];
+                if (!(v >= -1.0 && v <= 1.0)) {
+                    throw new IllegalArgumentException(String.format(Locale.ROOT, "correlation coefficient (%d, %d) "
+                            + "must lie in [-1, 1], not %s", i + 1, j + 1, v));
+                }
+                if (m[j][i] != v) {
+                    throw new IllegalArgumentException(String.format(Locale.ROOT, "correlation matrix is not "
+                            + "symmetric: entry (%d, %d) is %s but entry (%d, %d) is %s", i + 1, j + 1, v, j + 1,
+                            i + 1, m[j][i]));
+                }
+                identity &= i == j || v == 0;
+            }
+        }
+        CorrelationMatrix c = new CorrelationMatrix(names, m, identity);
+        c.checkPositiveSemiDefinite();
+        return c;
     }
 
     /**
@@ -171,7 +275,7 @@ public final class CorrelationMatrix {
                 worst = k;
             }
         }
-        if (ev[worst] >= -EPS) {
+        if (ev[worst] >= -SEMIDEFINITE_TOLERANCE) {
             return;
         }
         RealVector v = e.getEigenvector(worst);
@@ -192,8 +296,107 @@ public final class CorrelationMatrix {
             }
         }
         throw new IllegalArgumentException(String.format(Locale.ROOT,
-                "the correlation matrix is not positive semi-definite (smallest eigenvalue %.3g): these coefficients "
-                        + "cannot hold together: %s", ev[worst], String.join(", ", pairs)));
+                "the correlation matrix is not positive semi-definite (smallest eigenvalue %.3g, below the "
+                        + "tolerance -1e-9): these coefficients cannot hold together: %s", ev[worst],
+                String.join(", ", pairs)));
+    }
+
+    /**
+     * A lower-triangular factor L of the correlation matrix of the quantities {@code members} (in that order),
+     * L L^T = R_members, for drawing correlated standard normals z = L e (JCGM 101:2008 6.4.8.4). Zero pivots
+     * of a singular matrix are allowed. A matrix within {@link #SEMIDEFINITE_TOLERANCE} of semi-definite but with a
+     * slightly negative eigenvalue is first replaced by the nearest semi-definite correlation matrix (negative
+     * eigenvalues set to zero, then rescaled to a unit diagonal), which changes no coefficient by more than about
+     * the tolerance.
+     *
+     * <p>References: G. H. Golub, C. F. Van Loan, Matrix Computations, 4th ed., 4.2 (Cholesky, outer-product
+     * form); N. J. Higham, Computing the nearest correlation matrix, IMA J. Numer. Anal. 22 (2002) 329-343 (the
+     * eigenvalue clipping is its first step).
+     *
+     * @param members indices of the quantities, each once
+     * @return the factor, {@code members.length} square
+     */
+    public double[][] samplingFactor(int[] members) {
+        int k = members.length;
+        double[][] sub = new double[k][k];
+        for (int a = 0; a < k; a++) {
+            for (int b = 0; b < k; b++) {
+                sub[a][b] = r[members[a]][members[b]];
+            }
+        }
+        double[][] l = choleskyOrNull(sub);
+        if (l != null) {
+            return l;
+        }
+        EigenDecomposition e = new EigenDecomposition(new Array2DRowRealMatrix(sub, false));
+        double[] ev = e.getRealEigenvalues();
+        double[][] clipped = new double[k][k];
+        for (int q = 0; q < k; q++) {
+            double lambda = Math.max(0.0, ev[q]);
+            RealVector v = e.getEigenvector(q);
+            for (int a = 0; a < k; a++) {
+                for (int b = 0; b < k; b++) {
+                    clipped[a][b] += lambda * v.getEntry(a) * v.getEntry(b);
+                }
+            }
+        }
+        for (int a = 0; a < k; a++) {
+            for (int b = 0; b < k; b++) {
+                clipped[a][b] = a == b ? 1.0 : clipped[a][b] / Math.sqrt(clipped[a][a] * clipped[b][b]);
+            }
+        }
+        for (int a = 0; a < k; a++) {
+            clipped[a][a] = 1.0;
+        }
+        l = choleskyOrNull(clipped);
+        if (l == null) {
+            throw new IllegalStateException("no sampling factor for a correlation matrix accepted as positive "
+                    + "semi-definite: " + Arrays.deepToString(sub));
+        }
+        return l;
+    }
+
+    /** Lower-triangular L with L L^T = m, allowing zero pivots of a semi-definite matrix; null when there is none. */
+    private static double[][] choleskyOrNull(double[][] m) {
+        int n = m.length;
+        double[][] l = new double[n][n];
+        double tol = 1e-10 * n;
+        for (int j = 0; j < n; j++) {
+            double d = m[j][j];
+            for (int k = 0; k < j; k++) {
+                d -= l[j][k] * l[j][k];
+            }
+            if (d < -tol) {
+                return null;
+            }
+            if (d <= tol) {
+                for (int i = j + 1; i < n; i++) {
+                    double v = m[i][j];
+                    for (int k = 0; k < j; k++) {
+                        v -= l[i][k] * l[j][k];
+                    }
+                    if (Math.abs(v) > Math.sqrt(tol)) {
+                        return null;
+                    }
+                }
+                continue;
+            }
+            double ljj = Math.sqrt(d);
+            l[j][j] = ljj;
+            for (int i = j + 1; i < n; i++) {
+                double v = m[i][j];
+                for (int k = 0; k < j; k++) {
+                    v -= l[i][k] * l[j][k];
+                }
+                l[i][j] = v / ljj;
+            }
+        }
+        return l;
+    }
+
+    /** @return the number of quantities */
+    public int size() {
+        return r.length;
     }
 
     /** @return the input names in matrix order */
@@ -213,6 +416,21 @@ public final class CorrelationMatrix {
             c[i] = r[i].clone();
         }
         return c;
+    }
+
+    @Override
+    public boolean equals(Object o) {
+        return o instanceof CorrelationMatrix c && Arrays.deepEquals(r, c.r);
+    }
+
+    @Override
+    public int hashCode() {
+        return Arrays.deepHashCode(r);
+    }
+
+    @Override
+    public String toString() {
+        return "CorrelationMatrix" + Arrays.deepToString(r);
     }
 
     /** @return whether no two inputs are correlated */

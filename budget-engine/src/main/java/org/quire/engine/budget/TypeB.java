@@ -6,7 +6,6 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 import java.util.Set;
-import org.quire.engine.gum.CoverageFactor;
 
 /**
  * A Type B evaluation: a distribution stated from information other than repeated observations (a

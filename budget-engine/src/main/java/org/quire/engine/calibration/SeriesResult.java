@@ -1,6 +1,7 @@
 package org.quire.engine.calibration;
 
 import java.util.List;
+import org.quire.engine.gum.Matrices;
 
 /**
  * One series of point results: as found, as left (measured), or as left (predicted from the as-found results and
@@ -33,25 +34,18 @@ public record SeriesResult(Phase phase, List<PointResult> points, double[][] cov
 
     public SeriesResult {
         points = List.copyOf(points);
-        covariance = copy(covariance);
-        correlation = copy(correlation);
+        covariance = Matrices.copy(covariance);
+        correlation = Matrices.copy(correlation);
     }
 
     @Override
     public double[][] covariance() {
-        return copy(covariance);
+        return Matrices.copy(covariance);
     }
 
     @Override
     public double[][] correlation() {
-        return copy(correlation);
+        return Matrices.copy(correlation);
     }
 
-    private static double[][] copy(double[][] m) {
-        double[][] c = new double[m.length][];
-        for (int i = 0; i < m.length; i++) {
-            c[i] = m[i].clone();
-        }
-        return c;
-    }
 }

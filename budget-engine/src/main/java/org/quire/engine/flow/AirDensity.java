@@ -138,6 +138,25 @@ public final class AirDensity extends FlowFunction {
         return cipm2007(a[0], a[1], a[2], a.length > 3 ? a[3] : X_CO2_REFERENCE);
     }
 
+    /** The domain of {@link #problem}: t in [15, 27] °C, p in [60000, 110000] Pa, h in [0, 1], x_co2 in [0, 0.01]. */
+    @Override
+    boolean computeBlock(double[][] args, int n, double[] out) {
+        double[] p = args[0];
+        double[] t = args[1];
+        double[] h = args[2];
+        double[] x = args.length > 3 ? args[3] : null;
+        for (int i = 0; i < n; i++) {
+            double pi = p[i];
+            double ti = t[i];
+            double hi = h[i];
+            double xi = x == null ? X_CO2_REFERENCE : x[i];
+            boolean ok = ti >= 15.0 && ti <= 27.0 && pi >= 60000.0 && pi <= 110000.0 && hi >= 0.0 && hi <= 1.0
+                    && xi >= 0.0 && xi <= 0.01;
+            out[i] = ok ? cipm2007(pi, ti, hi, xi) : Double.NaN;
+        }
+        return true;
+    }
+
     @Override
     DerivativeStructure compute(DerivativeStructure[] a) {
         DerivativeStructure p = a[0];

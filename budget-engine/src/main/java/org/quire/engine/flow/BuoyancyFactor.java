@@ -83,6 +83,29 @@ public final class BuoyancyFactor extends FlowFunction {
         return a.length > 2 ? factor(a[0], a[1], a[2]) : factor(a[0], a[1]);
     }
 
+    /** The domain of {@link #problem}: 0 &lt;= rho_a &lt; rho_w, rho_w finite; rho_a &lt; rho_ref, rho_ref finite, &gt; 1.2. */
+    @Override
+    boolean computeBlock(double[][] args, int n, double[] out) {
+        double[] a = args[0];
+        double[] w = args[1];
+        double[] ref = args.length > 2 ? args[2] : null;
+        for (int i = 0; i < n; i++) {
+            double rhoA = a[i];
+            double rhoW = w[i];
+            boolean ok = rhoA >= 0.0 && rhoA < rhoW && rhoW <= Double.MAX_VALUE;
+            double f;
+            if (ref == null) {
+                f = factor(rhoA, rhoW);
+            } else {
+                double rhoRef = ref[i];
+                ok &= rhoRef > RHO_AIR_CONVENTIONAL && rhoA < rhoRef && rhoRef <= Double.MAX_VALUE;
+                f = factor(rhoA, rhoW, rhoRef);
+            }
+            out[i] = ok ? f : Double.NaN;
+        }
+        return true;
+    }
+
     @Override
     DerivativeStructure compute(DerivativeStructure[] a) {
         DerivativeStructure rhoA = a[0];

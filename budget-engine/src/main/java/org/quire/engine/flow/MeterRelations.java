@@ -120,6 +120,20 @@ public final class MeterRelations {
             return a[0] / a[1];
         }
 
+        /** The domain of {@link #problem}: pulses finite and &gt;= 0, k_factor finite and &gt; 0. */
+        @Override
+        boolean computeBlock(double[][] args, int n, double[] out) {
+            double[] pulses = args[0];
+            double[] k = args[1];
+            for (int i = 0; i < n; i++) {
+                double x = pulses[i];
+                double ki = k[i];
+                boolean ok = x >= 0.0 && x <= Double.MAX_VALUE && positiveFinite(ki);
+                out[i] = ok ? x / ki : Double.NaN;
+            }
+            return true;
+        }
+
         @Override
         DerivativeStructure compute(DerivativeStructure[] a) {
             return a[0].divide(a[1]);

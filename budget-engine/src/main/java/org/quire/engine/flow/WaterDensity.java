@@ -128,6 +128,28 @@ public final class WaterDensity extends FlowFunction {
         return airSaturated ? rho + dissolvedAirCorrection(t) : rho;
     }
 
+    /** The domain of {@link #problem}: t in [0, 25 or 40] °C (so finite), p finite and positive. */
+    @Override
+    boolean computeBlock(double[][] args, int n, double[] out) {
+        double[] t = args[0];
+        double[] p = args.length > 1 ? args[1] : null;
+        double high = airSaturated ? 25.0 : 40.0;
+        for (int i = 0; i < n; i++) {
+            double ti = t[i];
+            double rho = tanaka(ti);
+            boolean ok = ti >= 0.0 && ti <= high;
+            if (p != null) {
+                rho *= compressionFactor(ti, p[i]);
+                ok &= positiveFinite(p[i]);
+            }
+            if (airSaturated) {
+                rho += dissolvedAirCorrection(ti);
+            }
+            out[i] = ok ? rho : Double.NaN;
+        }
+        return true;
+    }
+
     @Override
     DerivativeStructure compute(DerivativeStructure[] a) {
         DerivativeStructure t = a[0];

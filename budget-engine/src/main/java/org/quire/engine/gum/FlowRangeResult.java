@@ -21,27 +21,20 @@ public record FlowRangeResult(String output, String unit, String flowUnit, List<
 
     public FlowRangeResult {
         points = List.copyOf(points);
-        covariance = copy(covariance);
-        correlation = copy(correlation);
+        covariance = Matrices.copy(covariance);
+        correlation = Matrices.copy(correlation);
     }
 
     @Override
     public double[][] covariance() {
-        return copy(covariance);
+        return Matrices.copy(covariance);
     }
 
     @Override
     public double[][] correlation() {
-        return copy(correlation);
+        return Matrices.copy(correlation);
     }
 
-    private static double[][] copy(double[][] m) {
-        double[][] c = new double[m.length][];
-        for (int i = 0; i < m.length; i++) {
-            c[i] = m[i].clone();
-        }
-        return c;
-    }
 
     /**
      * One row of the table.

@@ -7,6 +7,7 @@ import java.util.Locale;
 import java.util.Map;
 import org.apache.commons.math3.analysis.differentiation.DerivativeStructure;
 import org.quire.engine.budget.Budget;
+import org.quire.engine.budget.CoverageFactor;
 import org.quire.engine.budget.CorrelationMatrix;
 import org.quire.engine.budget.EvaluationSettings;
 import org.quire.engine.budget.Evaluation;
@@ -173,8 +174,14 @@ public final class GumEvaluator {
                 warnings.add("inputs are correlated; the Welch–Satterthwaite formula assumes independent inputs, "
                         + "so nu_eff is approximate");
             }
-            if (uc == 0 && active.length > 0) {
+            boolean anySensitive = false;
+            for (int i : active) {
+                anySensitive |= c[k][i] != 0;
+            }
+            if (uc == 0 && active.length > 0 && !anySensitive) {
                 warnings.add(firstOrderZero(name, higher));
+            } else if (uc == 0 && active.length > 0) {
+                warnings.add("u_c(" + name + ") is zero: the correlated contributions cancel exactly");
             } else if (uc == 0) {
                 warnings.add("u_c(" + name + ") is zero: no input has an uncertainty");
             }

@@ -15,14 +15,40 @@ import org.quire.engine.budget.EvaluationSettings;
  *     units the model computes in (display units are not applied here)
  * @param warnings sentences about the budget as a whole (model warnings, unused inputs)
  * @param settings the settings used
+ *
+ * <p>Immutable and thread-safe: the matrices are copied in and out.
  */
 public record GumResult(List<OutputResult> outputs, double[][] covariance, double[][] correlation,
         Map<String, Double> quantities, List<String> warnings, EvaluationSettings settings) {
 
     public GumResult {
         outputs = List.copyOf(outputs);
+        covariance = Matrices.copy(covariance);
+        correlation = Matrices.copy(correlation);
         quantities = Map.copyOf(quantities);
         warnings = List.copyOf(warnings);
+    }
+
+    /** @return a copy of the covariance matrix of the outputs: changing it changes nothing here */
+    @Override
+    public double[][] covariance() {
+        return Matrices.copy(covariance);
+    }
+
+    /** @return a copy of the correlation matrix of the outputs: changing it changes nothing here */
+    @Override
+    public double[][] correlation() {
+        return Matrices.copy(correlation);
+    }
+
+    /** @return the covariance of outputs {@code k} and {@code l} */
+    public double covariance(int k, int l) {
+        return covariance[k][l];
+    }
+
+    /** @return the correlation coefficient of outputs {@code k} and {@code l} (NaN where one has zero uncertainty) */
+    public double correlation(int k, int l) {
+        return correlation[k][l];
     }
 
     /** @return the result of the output named, or null */

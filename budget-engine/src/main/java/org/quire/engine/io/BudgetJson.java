@@ -546,7 +546,8 @@ public final class BudgetJson {
         return b.build();
     }
 
-    static void addNumber(JsonObjectBuilder b, String key, double v) {
+    /** Adds {@code v} to {@code b}: infinity as the string "inf", NaN as null, otherwise as {@link #decimal}. */
+    public static void addNumber(JsonObjectBuilder b, String key, double v) {
         if (Double.isInfinite(v)) {
             b.add(key, "inf");
         } else if (Double.isNaN(v)) {

@@ -103,7 +103,8 @@ public final class ResultJson {
         return b.build();
     }
 
-    static JsonArrayBuilder matrix(double[][] m) {
+    /** @return the rows of {@code m} as JSON arrays, a non-finite entry as null */
+    public static JsonArrayBuilder matrix(double[][] m) {
         JsonArrayBuilder a = JsonSupport.JSON.createArrayBuilder();
         for (double[] row : m) {
             JsonArrayBuilder r = JsonSupport.JSON.createArrayBuilder();

@@ -8,7 +8,7 @@
  * {@link org.quire.engine.line.LineFit} gives u(a), u(b), cov(a, b), residuals and the chi-squared check, and
  * is used forwards ({@link org.quire.engine.line.LineFit#valueAt}) and backwards, to turn a new indication
  * into a flow ({@link org.quire.engine.line.LineFit#inverse(double, double, double)}).
- * {@link org.quire.engine.line.CalibrationCsv} reads data sets from CSV text through the one CSV reader.
+ * {@link org.quire.engine.csv.CalibrationCsv} reads data sets from CSV text through the one CSV reader.
  *
  * <p>All types are immutable and thread-safe.
  *

@@ -52,7 +52,7 @@ public final class BudgetSimulation {
         if (r.isIdentity()) {
             return InputSampler.of(d);
         }
-        return InputSampler.of(d, CorrelationMatrix.of(r.toArray()));
+        return InputSampler.of(d, r);
     }
 
     /**

@@ -5,6 +5,7 @@ import java.util.List;
 import org.apache.commons.rng.UniformRandomProvider;
 import org.apache.commons.rng.sampling.distribution.NormalizedGaussianSampler;
 import org.apache.commons.rng.sampling.distribution.ZigguratSampler;
+import org.quire.engine.budget.CorrelationMatrix;
 import org.quire.engine.budget.Distribution;
 
 /**
@@ -61,7 +62,7 @@ public final class InputSampler {
             for (int k = 0; k < members.size(); k++) {
                 int m = members.get(k);
                 for (int j = 0; j < n; j++) {
-                    if (j != m && groupOf[j] < 0 && correlation.coefficient(m, j) != 0.0) {
+                    if (j != m && groupOf[j] < 0 && correlation.get(m, j) != 0.0) {
                         groupOf[j] = found.size();
                         members.add(j);
                     }
@@ -80,22 +81,18 @@ public final class InputSampler {
         this.copula = new boolean[groups.length];
         for (int g = 0; g < groups.length; g++) {
             int[] members = groups[g];
-            double[][] sub = new double[members.length][members.length];
             boolean allNormal = true;
             for (int a = 0; a < members.length; a++) {
-                for (int b = 0; b < members.length; b++) {
-                    sub[a][b] = correlation.coefficient(members[a], members[b]);
-                }
                 allNormal &= marginals[members[a]].isNormal();
             }
-            cholesky[g] = CorrelationMatrix.choleskyOrNull(sub);
+            cholesky[g] = correlation.samplingFactor(members);
             copula[g] = !allNormal;
         }
     }
 
     private boolean linked(int i, int n) {
         for (int j = 0; j < n; j++) {
-            if (j != i && correlation.coefficient(i, j) != 0.0) {
+            if (j != i && correlation.get(i, j) != 0.0) {
                 return true;
             }
         }
@@ -125,7 +122,7 @@ public final class InputSampler {
         for (org.quire.engine.budget.InputQuantity q : budget.inputs()) {
             d.add(q.evaluation().distribution());
         }
-        return of(d, CorrelationMatrix.of(budget.correlationMatrix().toArray()));
+        return of(d, budget.correlationMatrix());
     }
 
     /**

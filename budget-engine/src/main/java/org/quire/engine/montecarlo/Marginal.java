@@ -4,7 +4,6 @@ import org.apache.commons.math3.distribution.TDistribution;
 import org.apache.commons.math3.special.Erf;
 import org.apache.commons.rng.UniformRandomProvider;
 import org.apache.commons.rng.sampling.distribution.NormalizedGaussianSampler;
-import org.apache.commons.rng.sampling.distribution.TSampler;
 import org.apache.commons.rng.sampling.distribution.ZigguratSampler;
 import org.quire.engine.budget.Distribution;
 
@@ -414,12 +413,29 @@ public abstract class Marginal {
     }
 
     /**
-     * t_nu(mu, s^2): xi = mu + s t, t drawn from Student's t with nu degrees of freedom; JCGM 101:2008 6.4.9.5.
-     * The standard t variate is drawn by Bailey's polar method (R. W. Bailey, Math. Comp. 62 (1994) 779-781,
-     * as implemented by Commons RNG {@code TSampler}), which gives the same distribution as the ratio of a normal
-     * and the square root of a chi-squared variate over nu that 6.4.9.5 describes.
+     * t_nu(mu, s^2): xi = mu + s t, t = z / sqrt(w / nu) with z standard normal and w chi-squared with nu degrees
+     * of freedom, drawn independently; JCGM 101:2008 6.4.9.5. The chi-squared variate w = 2 G, G gamma with
+     * shape nu/2 and unit scale, is drawn
+     * <ul>
+     * <li>for whole nu up to {@value #SUM_LIMIT}: as -2 ln(r_1 ... r_k), the sum of k = floor(nu/2) unit
+     *     exponentials doubled, plus the square of a further standard normal when nu is odd (Devroye 1986,
+     *     IX.3: a gamma variate of whole shape k is the sum of k exponentials; a chi-squared variate with one
+     *     degree of freedom is a squared normal);</li>
+     * <li>otherwise by the method of Marsaglia and Tsang (ACM Trans. Math. Softw. 26 (2000) 363-372): for shape
+     *     a &gt;= 1, d = a - 1/3, c = 1/sqrt(9d), draw a normal x and v = (1 + c x)^3 until v &gt; 0 and
+     *     r &lt; 1 - 0.0331 x^4 or ln r &lt; x^2/2 + d - d v + d ln v, giving d v; for a &lt; 1, the variate of
+     *     shape a + 1 times r^(1/a) (their section 6).</li>
+     * </ul>
+     * The normals are drawn by the Ziggurat method, and the generator is read in the caller's block, so the
+     * values depend only on the stream.
+     *
+     * <p>References: L. Devroye, Non-Uniform Random Variate Generation, Springer 1986, chapter IX; G. Marsaglia,
+     * W. W. Tsang, A simple method for generating gamma variables, ACM Trans. Math. Softw. 26 (2000) 363-372.
      */
     private static final class StudentTMarginal extends Marginal {
+        /** Largest whole nu drawn through a product of uniforms. */
+        static final int SUM_LIMIT = 30;
+
         private final double mu;
         private final double s;
         private final double nu;
@@ -435,10 +451,68 @@ public abstract class Marginal {
 
         @Override
         public void fill(UniformRandomProvider rng, double[] out, int from, int n) {
-            TSampler sampler = TSampler.of(rng, nu);
-            for (int i = from, end = from + n; i < end; i++) {
-                out[i] = mu + s * sampler.sample();
+            NormalizedGaussianSampler g = ZigguratSampler.NormalizedGaussian.of(rng);
+            int end = from + n;
+            if (Double.isInfinite(nu)) {
+                for (int i = from; i < end; i++) {
+                    out[i] = mu + s * g.sample(); // the limit of t as nu grows: the standard normal
+                }
+                return;
             }
+            if (nu == Math.rint(nu) && nu <= SUM_LIMIT) {
+                int k = (int) nu / 2;
+                boolean odd = ((int) nu & 1) == 1;
+                double twoOverNu = 2.0 / nu;
+                for (int i = from; i < end; i++) {
+                    double z = g.sample();
+                    double product = 1.0;
+                    for (int j = 0; j < k; j++) {
+                        product *= openUniform(rng);
+                    }
+                    double w = -Math.log(product); // half the chi-squared variate from the exponentials
+                    double scaled = w * twoOverNu;
+                    if (odd) {
+                        double y = g.sample();
+                        scaled += y * y / nu;
+                    }
+                    out[i] = mu + s * (z / Math.sqrt(scaled));
+                }
+                return;
+            }
+            double a = 0.5 * nu;
+            boolean boost = a < 1.0;
+            double shape = boost ? a + 1.0 : a;
+            double d = shape - 1.0 / 3.0;
+            double c = 1.0 / Math.sqrt(9.0 * d);
+            double inverseA = 1.0 / a;
+            double twoOverNu = 2.0 / nu;
+            for (int i = from; i < end; i++) {
+                double z = g.sample();
+                double gamma;
+                while (true) {
+                    double x = g.sample();
+                    double v = 1.0 + c * x;
+                    if (v <= 0.0) {
+                        continue;
+                    }
+                    v = v * v * v;
+                    double r = openUniform(rng);
+                    double x2 = x * x;
+                    if (r < 1.0 - 0.0331 * x2 * x2 || Math.log(r) < 0.5 * x2 + d * (1.0 - v + Math.log(v))) {
+                        gamma = d * v;
+                        break;
+                    }
+                }
+                if (boost) {
+                    gamma *= Math.pow(openUniform(rng), inverseA);
+                }
+                out[i] = mu + s * (z / Math.sqrt(gamma * twoOverNu));
+            }
+        }
+
+        /** @return a uniform variate in the open interval (0, 1): 53 random bits, offset by half a step */
+        private static double openUniform(UniformRandomProvider rng) {
+            return ((rng.nextLong() >>> 11) + 0.5) * 0x1.0p-53;
         }
 
         @Override public double cdf(double x) { return t.cumulativeProbability((x - mu) / s); }

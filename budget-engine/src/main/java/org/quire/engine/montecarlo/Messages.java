@@ -59,35 +59,8 @@ final class Messages {
         return name + " must not be null";
     }
 
-    static String matrixNotSquare(int rows, int row, int length) {
-        return fmt("correlation matrix must be square: it has %d rows but row %d has %d entries", rows, row + 1, length);
-    }
-
     static String matrixSizeMismatch(int matrixSize, int inputs) {
         return fmt("correlation matrix is %d x %d but there are %d input(s)", matrixSize, matrixSize, inputs);
-    }
-
-    static String diagonalNotOne(int i, double v) {
-        return fmt("correlation matrix entry (%d, %d) on the diagonal must be 1, not %s", i + 1, i + 1, v);
-    }
-
-    static String coefficientOutside(int i, int j, double v) {
-        return fmt("correlation coefficient (%d, %d) must lie in [-1, 1], not %s", i + 1, j + 1, v);
-    }
-
-    static String notSymmetric(int i, int j, double a, double b) {
-        return fmt("correlation matrix is not symmetric: entry (%d, %d) is %s but entry (%d, %d) is %s",
-                i + 1, j + 1, a, j + 1, i + 1, b);
-    }
-
-    static String notPositiveSemiDefinite(double smallestEigenvalue) {
-        return fmt("correlation matrix is not positive semi-definite (smallest eigenvalue %.6g): no set of "
-                + "quantities can have these correlation coefficients together; check the coefficients for "
-                + "consistency (for example r12 = r23 = 0.9 forces r13 > 0.62)", smallestEigenvalue);
-    }
-
-    static String indexOutside(String what, int index, int size) {
-        return fmt("%s index %d is outside 0..%d", what, index, size - 1);
     }
 
     static String constantCorrelated(int input) {
@@ -111,8 +84,9 @@ final class Messages {
     }
 
     static String comparisonFirstOrderZero() {
-        return "the GUM result is not validated: every first-order sensitivity coefficient vanishes at the "
-                + "estimates, so the first-order law of propagation gives u(y) = 0 and no GUM interval to compare; "
+        return "the GUM result is not validated: the first-order law of propagation gives u(y) = 0 (every "
+                + "sensitivity coefficient vanishes at the estimates, or correlated contributions cancel), so there "
+                + "is no GUM interval to compare; "
                 + "use the Monte Carlo result (JCGM 101:2008 clause 9) or include the higher-order terms "
                 + "(JCGM 100:2008 5.1.2 note)";
     }

@@ -92,6 +92,18 @@ public final class ReferenceRegister {
         return List.copyOf(out);
     }
 
+    /** @return the references of these ids that the register holds, in the order given */
+    public List<ReferenceStandard> resolveKnown(List<String> ids) {
+        List<ReferenceStandard> out = new ArrayList<>();
+        for (String id : ids) {
+            ReferenceStandard r = references.get(id);
+            if (r != null) {
+                out.add(r);
+            }
+        }
+        return out;
+    }
+
     /**
      * @param ids the ids of the references used, each in the register
      * @return the references of these ids, in the order given

@@ -34,7 +34,7 @@ import org.quire.engine.model.FunctionLibrary;
  * <li>{@code flow-range}: the budget at its {@code flowPoints} ({@link FlowPointsJson#resultJson}).</li>
  * <li>{@code calibration}: argument {@code file}, a calibration file relative to the example's folder, and
  *     optionally {@code asLeft: "predicted"} to drop its measured as-left runs; the calibration evaluated
- *     with its method template ({@link org.quire.engine.io.CalibrationResultJson}).</li>
+ *     with its method template ({@link org.quire.engine.calibration.CalibrationResultJson}).</li>
  * </ul>
  * Stateless and thread-safe.
  */
@@ -143,7 +143,7 @@ final class CalibrationComputations {
                 a.onlyFields(Set.of("file", "asLeft"));
                 java.nio.file.Path dir = folder == null ? java.nio.file.Path.of("") : folder;
                 java.nio.file.Path file = dir.resolve(a.get("file").string());
-                org.quire.engine.io.CalibrationJson.Loaded loaded = org.quire.engine.io.CalibrationJson.read(file);
+                org.quire.engine.calibration.CalibrationJson.Loaded loaded = org.quire.engine.calibration.CalibrationJson.read(file);
                 org.quire.engine.calibration.Calibration c = loaded.calibration();
                 if (a.has("asLeft")) {
                     if (!a.get("asLeft").string().equals("predicted")) {
@@ -151,8 +151,8 @@ final class CalibrationComputations {
                     }
                     c = c.withAsLeft(List.of());
                 }
-                org.quire.engine.document.Template method = org.quire.engine.io.CalibrationJson.method(file, loaded);
-                return org.quire.engine.io.CalibrationResultJson.toJson(
+                org.quire.engine.document.Template method = org.quire.engine.calibration.CalibrationJson.method(file, loaded);
+                return org.quire.engine.calibration.CalibrationResultJson.toJson(
                         org.quire.engine.calibration.CalibrationEvaluator.of(method, library).evaluate(c));
             }
         };

@@ -18,7 +18,7 @@ import java.util.stream.Collectors;
 import java.util.stream.Stream;
 import org.quire.engine.budget.Budget;
 import org.quire.engine.budget.EvaluationSettings;
-import org.quire.engine.gum.CoverageFactor;
+import org.quire.engine.budget.CoverageFactor;
 import org.quire.engine.gum.GumEvaluator;
 import org.quire.engine.io.BudgetFormatException;
 import org.quire.engine.io.BudgetJson;

@@ -5,6 +5,7 @@ import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import org.junit.jupiter.api.Test;
+import org.quire.engine.csv.CalibrationCsv;
 import org.quire.engine.csv.CsvException;
 
 /** Calibration data sets through the one CSV reader: format rules and errors naming line and column. */

@@ -4,6 +4,7 @@ import java.io.IOException;
 import java.io.InputStream;
 import java.io.UncheckedIOException;
 import java.nio.charset.StandardCharsets;
+import org.quire.engine.csv.CalibrationCsv;
 
 /** Loads the calibration data sets kept beside the tests. */
 final class LineTestData {

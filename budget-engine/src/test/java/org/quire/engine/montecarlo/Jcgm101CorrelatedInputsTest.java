@@ -8,6 +8,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import java.util.Arrays;
 import java.util.List;
 import org.junit.jupiter.api.Test;
+import org.quire.engine.budget.CorrelationMatrix;
 import org.quire.engine.budget.Distribution;
 
 /**

@@ -171,6 +171,31 @@ class Jcgm101SamplingTest {
     }
 
     @Test
+    void studentTDrawsFollowTheDistributionFunctionForWholeAndFractionalDegreesOfFreedom() {
+        // JCGM 101:2008 6.4.9.5: t = z / sqrt(chi2_nu / nu). Kolmogorov-Smirnov against Commons Math's t
+        // distribution function: sup |F_n - F| stays below 1.95 / sqrt(n), the 0.1 % critical value (Smirnov's
+        // asymptotic distribution; from memory), for each nu drawn through whole-shape sums (1, 2, 4, 7, 30) and
+        // through the Marsaglia-Tsang gamma (0.6, 2.5, 31.5, 200)
+        int n = 40_000;
+        for (double nu : new double[] {1, 2, 4, 7, 30, 0.6, 2.5, 31.5, 200}) {
+            double[] v = draw(Distribution.StudentT.of(0, 1, nu), n, 11);
+            Arrays.sort(v);
+            TDistribution ref = new TDistribution(null, nu);
+            double sup = 0;
+            for (int i = 0; i < n; i++) {
+                double f = ref.cumulativeProbability(v[i]);
+                sup = Math.max(sup, Math.max(Math.abs(f - (double) i / n), Math.abs(f - (i + 1.0) / n)));
+            }
+            assertTrue(sup < 1.95 / Math.sqrt(n), "nu = " + nu + ": KS distance " + sup);
+        }
+        // nu without bound is the normal
+        double[] v = draw(Distribution.StudentT.of(0, 1, Double.POSITIVE_INFINITY), n, 12);
+        for (double x : v) {
+            assertTrue(Double.isFinite(x));
+        }
+    }
+
+    @Test
     void exponentialMatchesMeanVarianceAndDistributionFunction() {
         // JCGM 101:2008 6.4.10: Ex(x), E = x, V = x^2
         Distribution d = Distribution.Exponential.of(3.0);

@@ -11,6 +11,7 @@ import java.util.List;
 import java.util.concurrent.atomic.AtomicInteger;
 import java.util.concurrent.atomic.AtomicLong;
 import org.junit.jupiter.api.Test;
+import org.quire.engine.budget.CorrelationMatrix;
 import org.quire.engine.budget.Distribution;
 import org.quire.engine.model.BlockEvaluator;
 

@@ -23,8 +23,8 @@ class ReferenceRegisterTest {
     @Test
     void theDemonstrationRegisterReads() throws Exception {
         ReferenceRegister r = ReferenceRegisterJson.read(FILE);
-        assertEquals("Tarrow Vale Flow Laboratory (invented)", r.laboratory());
-        ReferenceStandard bal = r.find("TV-BAL-02");
+        assertEquals("Tarrow Vale Flow Laboratory", r.laboratory());
+        ReferenceStandard bal = r.find("TVFL-BAL-02");
         assertEquals("HRC-M-26-0412", bal.certificateNumber());
         assertEquals(LocalDate.of(2027, 3, 8), bal.due());
     }
@@ -32,12 +32,12 @@ class ReferenceRegisterTest {
     @Test
     void aReferenceIsValidUpToAndIncludingItsDueDate() throws Exception {
         ReferenceRegister r = ReferenceRegisterJson.read(FILE);
-        // TV-MM-05 is due on 2026-11-17 in the register file
-        assertTrue(r.check(List.of("TV-MM-05"), LocalDate.of(2026, 11, 17)).isEmpty());
-        List<TraceabilityFinding> late = r.check(List.of("TV-BAL-02", "TV-MM-05"), LocalDate.of(2026, 11, 18));
+        // TVFL-MM-05 is due on 2026-11-17 in the register file
+        assertTrue(r.check(List.of("TVFL-MM-05"), LocalDate.of(2026, 11, 17)).isEmpty());
+        List<TraceabilityFinding> late = r.check(List.of("TVFL-BAL-02", "TVFL-MM-05"), LocalDate.of(2026, 11, 18));
         assertEquals(1, late.size());
         assertEquals(TraceabilityFinding.Kind.EXPIRED, late.get(0).kind());
-        assertEquals("TV-MM-05", late.get(0).referenceId());
+        assertEquals("TVFL-MM-05", late.get(0).referenceId());
         assertTrue(late.get(0).message().contains("2026-11-17") && late.get(0).message().contains("2026-11-18"),
                 late.get(0).message());
         assertTrue(late.get(0).message().contains("1 day(s) after its due date"), late.get(0).message());
@@ -46,7 +46,7 @@ class ReferenceRegisterTest {
     @Test
     void unknownAndNotYetCalibratedReferencesAreFindings() throws Exception {
         ReferenceRegister r = ReferenceRegisterJson.read(FILE);
-        List<TraceabilityFinding> f = r.check(List.of("TV-XX-99", "TV-MM-05"), LocalDate.of(2026, 5, 1));
+        List<TraceabilityFinding> f = r.check(List.of("TVFL-XX-99", "TVFL-MM-05"), LocalDate.of(2026, 5, 1));
         assertEquals(List.of(TraceabilityFinding.Kind.UNKNOWN, TraceabilityFinding.Kind.NOT_YET_CALIBRATED),
                 f.stream().map(TraceabilityFinding::kind).toList());
     }

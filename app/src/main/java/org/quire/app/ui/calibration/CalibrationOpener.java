@@ -7,7 +7,7 @@ import java.util.function.Consumer;
 import javax.swing.SwingWorker;
 import org.quire.engine.calibration.PointResult;
 import org.quire.engine.document.Template;
-import org.quire.engine.io.CalibrationJson;
+import org.quire.engine.calibration.CalibrationJson;
 import org.quire.engine.model.FunctionLibrary;
 
 /** Opens a calibration file ({@code quire-calibration}) and its method template off the event thread. */

@@ -14,7 +14,7 @@ import javax.swing.JComponent;
 import org.quire.app.report.Chart;
 import org.quire.app.report.ChartLayout;
 import org.quire.app.report.MathText;
-import org.quire.app.ui.Colors;
+import org.quire.app.ui.common.Colors;
 
 /**
  * Draws a report {@link Chart} on screen from the same shapes ({@link ChartLayout}) the PDF and SVG reports

@@ -22,7 +22,7 @@ import org.quire.app.compare.FieldChange;
 import org.quire.app.compare.LineEdit;
 import org.quire.app.compare.OutputEffect;
 import org.quire.app.compare.QuantityChange;
-import org.quire.app.ui.Colors;
+import org.quire.app.ui.common.Colors;
 import org.quire.engine.gum.Figures;
 import org.quire.engine.gum.Rounding;
 import org.quire.engine.budget.InputQuantity;

@@ -11,6 +11,7 @@ import org.quire.app.report.HtmlReport;
 import org.quire.app.report.PdfReport;
 import org.quire.app.report.ReportBuilder;
 import org.quire.app.report.ReportInput;
+import org.quire.engine.montecarlo.MonteCarloOutcome;
 import org.quire.app.report.ReportModel;
 import org.quire.engine.document.BudgetDocument;
 import org.quire.engine.gum.GumResult;
@@ -57,12 +58,19 @@ public final class ReportExport {
      * Writes the report of {@code doc}.
      *
      * @param gum the GUM result of {@code doc}'s budget
+     * @param monteCarlo the Monte Carlo outcome of that same budget from the workbench's last run, or null when it
+     *     was not run (the report then says so)
      * @throws IOException naming the file when it cannot be written
      * @throws IllegalArgumentException when the file name ends in neither .pdf nor .html
      */
-    public static void write(BudgetDocument doc, GumResult gum, Path target, LocalDate date) throws IOException {
+    public static void write(BudgetDocument doc, GumResult gum, MonteCarloOutcome monteCarlo, Path target,
+            LocalDate date) throws IOException {
         Format f = formatOf(target);
-        ReportModel m = ReportBuilder.build(ReportInput.of(doc.budget(), gum, info(doc, date)));
+        ReportInput in = ReportInput.of(doc.budget(), gum, info(doc, date));
+        if (monteCarlo != null) {
+            in = in.withMonteCarlo(monteCarlo);
+        }
+        ReportModel m = ReportBuilder.build(in);
         if (f == Format.PDF) {
             AtomicFile.write(target, out -> PdfReport.render(m, out));
         } else {

@@ -7,8 +7,8 @@ import java.awt.Graphics2D;
 import java.awt.RenderingHints;
 import java.awt.geom.Path2D;
 import javax.swing.JComponent;
-import org.quire.app.ui.Colors;
-import org.quire.app.ui.Fmt;
+import org.quire.app.ui.common.Colors;
+import org.quire.app.ui.common.Fmt;
 import org.quire.engine.budget.Distribution;
 
 /**

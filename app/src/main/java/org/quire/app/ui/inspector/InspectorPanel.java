@@ -7,7 +7,7 @@ import javax.swing.JLabel;
 import javax.swing.JPanel;
 import javax.swing.JScrollPane;
 import javax.swing.ScrollPaneConstants;
-import org.quire.app.ui.Fmt;
+import org.quire.app.ui.common.Fmt;
 import org.quire.app.ui.notebook.BudgetEditor;
 import org.quire.engine.budget.Budget;
 import org.quire.engine.budget.EvaluationSettings;

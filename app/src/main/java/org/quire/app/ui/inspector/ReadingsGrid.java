@@ -11,7 +11,7 @@ import javax.swing.JComponent;
 import javax.swing.JTable;
 import javax.swing.KeyStroke;
 import javax.swing.table.DefaultTableModel;
-import org.quire.app.ui.Fmt;
+import org.quire.app.ui.common.Fmt;
 import org.quire.engine.csv.CsvException;
 import org.quire.engine.csv.CsvOptions;
 import org.quire.engine.csv.CsvReadings;

@@ -11,7 +11,7 @@ import javax.swing.JLabel;
 import javax.swing.JPanel;
 import javax.swing.JScrollPane;
 import javax.swing.JTextField;
-import org.quire.app.ui.Fmt;
+import org.quire.app.ui.common.Fmt;
 import org.quire.engine.budget.TypeA;
 
 /**

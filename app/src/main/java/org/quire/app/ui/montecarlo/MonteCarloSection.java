@@ -10,10 +10,10 @@ import javax.swing.JComponent;
 import javax.swing.JLabel;
 import javax.swing.JPanel;
 import javax.swing.JProgressBar;
-import org.quire.app.ui.Colors;
-import org.quire.app.ui.Fmt;
+import org.quire.app.ui.common.Colors;
+import org.quire.app.ui.common.Fmt;
 import org.quire.app.ui.document.Recalculation;
-import org.quire.app.ui.notebook.Section;
+import org.quire.app.ui.common.Section;
 import org.quire.engine.budget.Budget;
 import org.quire.engine.gum.GumResult;
 import org.quire.engine.gum.Rounding;
@@ -42,7 +42,7 @@ public final class MonteCarloSection implements Section {
     private MonteCarloOutcome shown;
     private Budget shownFor;
 
-    private final org.quire.app.ui.notebook.EditorContext ctx;
+    private final org.quire.app.ui.common.EditorContext ctx;
     private final javax.swing.JTextField trials = new javax.swing.JTextField(8);
     private final javax.swing.JTextField seed = new javax.swing.JTextField(10);
     private final javax.swing.JCheckBox adaptive = new javax.swing.JCheckBox("Adaptive (JCGM 101:2008 7.9)");
@@ -52,7 +52,7 @@ public final class MonteCarloSection implements Section {
      * @param runner the runner, {@link MonteCarloRunner#engine} in the application
      * @param ctx the editor, whose budget's Monte Carlo settings (trials, seed, adaptive) this section edits
      */
-    public MonteCarloSection(MonteCarloRunner runner, org.quire.app.ui.notebook.EditorContext ctx) {
+    public MonteCarloSection(MonteCarloRunner runner, org.quire.app.ui.common.EditorContext ctx) {
         this.runner = runner;
         this.ctx = ctx;
         run.setName("mcRun");
@@ -60,7 +60,7 @@ public final class MonteCarloSection implements Section {
         trials.setName("mcTrials");
         seed.setName("mcSeed");
         adaptive.setName("mcAdaptive");
-        JPanel settings = new JPanel(new org.quire.app.ui.WrapLayout(FlowLayout.LEFT, 6, 2));
+        JPanel settings = new JPanel(new org.quire.app.ui.common.WrapLayout(FlowLayout.LEFT, 6, 2));
         javax.swing.JLabel tl = new javax.swing.JLabel("Trials");
         tl.setLabelFor(trials);
         javax.swing.JLabel sl = new javax.swing.JLabel("Seed");
@@ -82,7 +82,7 @@ public final class MonteCarloSection implements Section {
             });
         }
         adaptive.addActionListener(e -> commitSettings());
-        JPanel bar = new JPanel(new org.quire.app.ui.WrapLayout(FlowLayout.LEFT, 6, 2));
+        JPanel bar = new JPanel(new org.quire.app.ui.common.WrapLayout(FlowLayout.LEFT, 6, 2));
         bar.add(run);
         bar.add(cancel);
         bar.add(progress);
@@ -133,6 +133,15 @@ public final class MonteCarloSection implements Section {
         if (!n.equals(s)) {
             ctx.edit("Change Monte Carlo settings", "mcSettings", b -> b.withSettings(n));
         }
+    }
+
+    /**
+     * @param b the budget a report is made of
+     * @return the outcome of the last run when it was made for exactly {@code b}, else null (a run of an earlier
+     *     state of the budget never goes into a report of the present one)
+     */
+    public MonteCarloOutcome outcomeFor(Budget b) {
+        return shown != null && b != null && b.equals(shownFor) ? shown : null;
     }
 
     @Override

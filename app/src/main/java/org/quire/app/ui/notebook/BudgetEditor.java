@@ -1,5 +1,7 @@
 package org.quire.app.ui.notebook;
 
+import org.quire.app.ui.common.EditorContext;
+import org.quire.app.ui.common.Section;
 import java.awt.BorderLayout;
 import java.awt.EventQueue;
 import java.awt.FlowLayout;
@@ -19,7 +21,7 @@ import javax.swing.JPanel;
 import javax.swing.JScrollPane;
 import javax.swing.Scrollable;
 import javax.swing.SwingConstants;
-import org.quire.app.ui.Colors;
+import org.quire.app.ui.common.Colors;
 import org.quire.app.ui.document.BudgetDocument;
 import org.quire.app.ui.document.Problem;
 import org.quire.app.ui.document.Recalculation;
@@ -79,7 +81,7 @@ public final class BudgetEditor extends JPanel implements EditorContext {
         monteCarlo = new MonteCarloSection(runner, this);
         review = new ReviewPanel(this, java.time.Clock.systemUTC());
         page.setLayout(new BoxLayout(page, BoxLayout.Y_AXIS));
-        JPanel outline = new JPanel(new org.quire.app.ui.WrapLayout(FlowLayout.LEFT, 2, 2));
+        JPanel outline = new JPanel(new org.quire.app.ui.common.WrapLayout(FlowLayout.LEFT, 2, 2));
         outline.add(new JLabel("Go to:"));
         for (Section s : List.of(purpose, model, inputs, correlations, results, monteCarlo, review)) {
             NotebookSection ns = new NotebookSection(s);
@@ -318,6 +320,11 @@ public final class BudgetEditor extends JPanel implements EditorContext {
 
     /** Starts a Monte Carlo run, when one can start. */
     public void runMonteCarlo() { monteCarlo.start(); }
+
+    /** @return the Monte Carlo outcome of exactly {@code b} from the last run, or null when there is none */
+    public org.quire.engine.montecarlo.MonteCarloOutcome monteCarloOutcome(org.quire.engine.budget.Budget b) {
+        return monteCarlo.outcomeFor(b);
+    }
 
     /** Stops the background work of this editor. */
     public void dispose() {

@@ -2,7 +2,7 @@ package org.quire.app.ui.notebook;
 
 import java.util.List;
 import javax.swing.table.AbstractTableModel;
-import org.quire.app.ui.Fmt;
+import org.quire.app.ui.common.Fmt;
 import org.quire.engine.gum.Contribution;
 import org.quire.engine.gum.OutputResult;
 import org.quire.engine.units.Units;

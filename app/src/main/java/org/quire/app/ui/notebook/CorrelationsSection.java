@@ -1,5 +1,7 @@
 package org.quire.app.ui.notebook;
 
+import org.quire.app.ui.common.EditorContext;
+import org.quire.app.ui.common.Section;
 import java.awt.BorderLayout;
 import java.awt.Component;
 import java.awt.Dimension;
@@ -16,8 +18,8 @@ import javax.swing.JScrollPane;
 import javax.swing.JTable;
 import javax.swing.table.AbstractTableModel;
 import javax.swing.table.DefaultTableCellRenderer;
-import org.quire.app.ui.Colors;
-import org.quire.app.ui.Fmt;
+import org.quire.app.ui.common.Colors;
+import org.quire.app.ui.common.Fmt;
 import org.quire.app.ui.document.Problem;
 import org.quire.app.ui.document.Recalculation;
 import org.quire.engine.budget.Budget;

@@ -1,8 +1,9 @@
 package org.quire.app.ui.notebook;
 
+import org.quire.app.ui.common.EditorContext;
 import java.util.List;
 import javax.swing.table.AbstractTableModel;
-import org.quire.app.ui.Fmt;
+import org.quire.app.ui.common.Fmt;
 import org.quire.engine.budget.Budget;
 import org.quire.engine.budget.Correlation;
 import org.quire.engine.budget.Evaluation;

@@ -8,7 +8,7 @@ import java.util.regex.Pattern;
 import javax.swing.text.SimpleAttributeSet;
 import javax.swing.text.StyleConstants;
 import javax.swing.text.StyledDocument;
-import org.quire.app.ui.Colors;
+import org.quire.app.ui.common.Colors;
 
 /**
  * Syntax colouring of model text: comments, numbers, operators, names of calls, and the names an equation

@@ -1,5 +1,7 @@
 package org.quire.app.ui.notebook;
 
+import org.quire.app.ui.common.EditorContext;
+import org.quire.app.ui.common.Section;
 import java.awt.BorderLayout;
 import java.awt.Dimension;
 import java.awt.EventQueue;
@@ -15,7 +17,7 @@ import javax.swing.JTextPane;
 import javax.swing.text.BadLocationException;
 import javax.swing.text.DefaultStyledDocument;
 import javax.swing.text.Element;
-import org.quire.app.ui.Colors;
+import org.quire.app.ui.common.Colors;
 import org.quire.app.ui.document.Problem;
 import org.quire.app.ui.document.Recalculation;
 import org.quire.engine.budget.Budget;

@@ -1,5 +1,6 @@
 package org.quire.app.ui.notebook;
 
+import org.quire.app.ui.common.Section;
 import java.awt.BorderLayout;
 import java.awt.Cursor;
 import java.awt.Dimension;
@@ -9,7 +10,7 @@ import java.awt.event.MouseEvent;
 import javax.swing.BorderFactory;
 import javax.swing.JLabel;
 import javax.swing.JPanel;
-import org.quire.app.ui.Colors;
+import org.quire.app.ui.common.Colors;
 
 /** A collapsible frame around one {@link Section}: a heading that folds and unfolds the body. */
 final class NotebookSection extends JPanel {

@@ -1,5 +1,6 @@
 package org.quire.app.ui.notebook;
 
+import org.quire.app.ui.common.EditorContext;
 import java.awt.BorderLayout;
 import java.awt.Dimension;
 import java.awt.FlowLayout;

@@ -1,5 +1,7 @@
 package org.quire.app.ui.notebook;
 
+import org.quire.app.ui.common.EditorContext;
+import org.quire.app.ui.common.Section;
 import java.awt.BorderLayout;
 import java.awt.GridBagConstraints;
 import java.awt.GridBagLayout;

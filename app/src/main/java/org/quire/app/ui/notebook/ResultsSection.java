@@ -1,5 +1,7 @@
 package org.quire.app.ui.notebook;
 
+import org.quire.app.ui.common.EditorContext;
+import org.quire.app.ui.common.Section;
 import java.awt.BorderLayout;
 import java.awt.FlowLayout;
 import java.util.LinkedHashMap;
@@ -14,8 +16,8 @@ import javax.swing.JRadioButton;
 import javax.swing.JSpinner;
 import javax.swing.JTextField;
 import javax.swing.SpinnerNumberModel;
-import org.quire.app.ui.Colors;
-import org.quire.app.ui.Fmt;
+import org.quire.app.ui.common.Colors;
+import org.quire.app.ui.common.Fmt;
 import org.quire.app.ui.document.Recalculation;
 import org.quire.engine.budget.Budget;
 import org.quire.engine.budget.EvaluationSettings;
@@ -43,7 +45,7 @@ final class ResultsSection implements Section {
         this.ctx = ctx;
         p.setName("coverageProbability");
         digits.setName("significantDigits");
-        JPanel settings = new JPanel(new org.quire.app.ui.WrapLayout(FlowLayout.LEFT, 6, 2));
+        JPanel settings = new JPanel(new org.quire.app.ui.common.WrapLayout(FlowLayout.LEFT, 6, 2));
         ButtonGroup g = new ButtonGroup();
         g.add(byP);
         g.add(byK);

@@ -98,6 +98,11 @@ public final class DocumentDecisionRecorder implements DecisionRecorder {
         DocumentStatus s = document.status();
         BudgetDocument next;
         if (d.verdict() == Verdict.ENDORSED) {
+            String duties = org.quire.engine.document.SeparationOfDuties.problem("'" + document.title() + "'",
+                    document.author(), who);
+            if (duties != null) {
+                throw new IllegalArgumentException(duties);
+            }
             if (s == DocumentStatus.DRAFT) {
                 next = document.moveTo(DocumentStatus.IN_REVIEW, who, when, "taken into review by " + who)
                         .moveTo(DocumentStatus.APPROVED, who, when, note);

@@ -1,4 +1,4 @@
-package org.quire.engine.gum;
+package org.quire.engine.budget;
 
 import org.apache.commons.math3.distribution.NormalDistribution;
 import org.apache.commons.math3.distribution.TDistribution;
@@ -10,10 +10,18 @@ import org.apache.commons.math3.distribution.TDistribution;
  * the fraction p of the t-distribution); for nu = infinity the normal distribution, JCGM 100:2008 G.2.
  * Non-integer nu are allowed (the t-distribution is defined for any nu > 0).
  *
- * <p>Stateless and thread-safe.
+ * <p>Thread-safe. The factors last computed are remembered (a pure function of p and nu), so that a batch of
+ * many evaluations with the same nu inverts the t-distribution once per nu.
  */
 public final class CoverageFactor {
     private static final double TOLERANCE = 1e-12;
+    /** Remembered factors beyond this many are forgotten all at once. */
+    private static final int REMEMBERED = 4096;
+    private static final java.util.concurrent.ConcurrentHashMap<Key, Double> FACTORS =
+            new java.util.concurrent.ConcurrentHashMap<>();
+
+    private record Key(double p, double dof) {
+    }
 
     private CoverageFactor() {
     }
@@ -30,11 +38,20 @@ public final class CoverageFactor {
         if (!(dof > 0) || Double.isNaN(dof)) {
             throw new IllegalArgumentException("degrees of freedom must be positive, not " + dof);
         }
-        double q = 0.5 * (1 + p);
-        if (Double.isInfinite(dof) || dof > 1e7) {
-            return new NormalDistribution(null, 0, 1, TOLERANCE).inverseCumulativeProbability(q);
+        Key key = new Key(p, dof);
+        Double known = FACTORS.get(key);
+        if (known != null) {
+            return known;
         }
-        return new TDistribution(null, dof, TOLERANCE).inverseCumulativeProbability(q);
+        double q = 0.5 * (1 + p);
+        double k = Double.isInfinite(dof) || dof > 1e7
+                ? new NormalDistribution(null, 0, 1, TOLERANCE).inverseCumulativeProbability(q)
+                : new TDistribution(null, dof, TOLERANCE).inverseCumulativeProbability(q);
+        if (FACTORS.size() >= REMEMBERED) {
+            FACTORS.clear();
+        }
+        FACTORS.put(key, k);
+        return k;
     }
 
     /**

@@ -1,4 +1,4 @@
-package org.quire.app.ui.notebook;
+package org.quire.app.ui.common;
 
 import javax.swing.JComponent;
 import org.quire.app.ui.document.Recalculation;

@@ -1,4 +1,4 @@
-package org.quire.app.ui.notebook;
+package org.quire.app.ui.common;
 
 import java.util.function.UnaryOperator;
 import org.quire.app.ui.document.BudgetDocument;

@@ -1,17 +1,15 @@
-package org.quire.engine.io;
+package org.quire.engine.calibration;
 
+import org.quire.engine.io.BudgetJson;
+import org.quire.engine.io.EngineVersion;
+import org.quire.engine.io.JsonSupport;
+import org.quire.engine.io.LineFitJson;
+import org.quire.engine.io.ResultJson;
 import jakarta.json.JsonArrayBuilder;
 import jakarta.json.JsonObject;
 import jakarta.json.JsonObjectBuilder;
 import java.util.List;
 import java.util.Map;
-import org.quire.engine.calibration.AdjustmentResult;
-import org.quire.engine.calibration.CalibrationResult;
-import org.quire.engine.calibration.ConformityResult;
-import org.quire.engine.calibration.PointConformity;
-import org.quire.engine.calibration.PointResult;
-import org.quire.engine.calibration.RunResult;
-import org.quire.engine.calibration.SeriesResult;
 import org.quire.engine.montecarlo.GumComparison;
 
 /**

@@ -1,4 +1,4 @@
-package org.quire.app;
+package org.quire.app.common;
 
 import org.quire.engine.flow.FlowFunctions;
 import org.quire.engine.model.FunctionLibrary;

@@ -1,4 +1,4 @@
-package org.quire.app.ui;
+package org.quire.app.ui.common;
 
 import org.quire.engine.csv.CsvException;
 import org.quire.engine.csv.CsvOptions;

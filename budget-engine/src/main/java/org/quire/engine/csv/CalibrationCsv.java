@@ -1,15 +1,12 @@
-package org.quire.engine.line;
+package org.quire.engine.csv;
 
 import java.io.IOException;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
-import org.quire.engine.csv.CsvException;
-import org.quire.engine.csv.CsvOptions;
-import org.quire.engine.csv.CsvReader;
-import org.quire.engine.csv.CsvRow;
-import org.quire.engine.csv.CsvTable;
+import org.quire.engine.line.CalibrationData;
+import org.quire.engine.line.CalibrationPoint;
 
 /**
  * Calibration data sets in CSV form, read by the one CSV reader ({@link CsvReader}, so separator, decimal mark
@@ -52,7 +49,7 @@ public final class CalibrationCsv {
      */
     public static CalibrationData parse(String text, String name, String xUnit, String yUnit) throws CsvException {
         if (text == null) {
-            throw new IllegalArgumentException(LineMessages.missing("CSV text"));
+            throw new IllegalArgumentException("CSV text is missing");
         }
         return of(CsvReader.parse(name, text, CsvOptions.defaults()), name, xUnit, yUnit);
     }
@@ -71,8 +68,8 @@ public final class CalibrationCsv {
                     t.requireColumns("x", "y");
                 }
                 throw problem(t, f, idx < 0
-                        ? LineMessages.fmt("unknown column name '%s'; expected x, y, u_x, u_y", header.get(f))
-                        : LineMessages.fmt("column '%s' is named twice", nm));
+                        ? String.format(Locale.ROOT, "unknown column name '%s'; expected x, y, u_x, u_y", header.get(f))
+                        : String.format(Locale.ROOT, "column '%s' is named twice", nm));
             }
             columnOf[idx] = f;
         }

@@ -1,4 +1,4 @@
-package org.quire.app;
+package org.quire.app.common;
 
 /** The cautions every report, the About box and the README state, in one place. */
 public final class Cautions {
