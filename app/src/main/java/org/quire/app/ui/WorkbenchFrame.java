@@ -2,6 +2,7 @@ package org.quire.app.ui;
 
 import org.quire.app.ui.common.WorkbenchPrefs;
 import org.quire.app.ui.common.Colors;
+import org.quire.app.ui.common.FileDropHandler;
 import java.awt.BorderLayout;
 import java.awt.CardLayout;
 import java.awt.Dimension;
