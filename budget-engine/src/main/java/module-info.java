@@ -5,8 +5,8 @@
  */
 module org.quire.engine {
     requires transitive jakarta.json;
-    requires commons.math3;
-    requires org.apache.commons.rng.api;
+    requires transitive commons.math3;
+    requires transitive org.apache.commons.rng.api;
     requires org.apache.commons.rng.simple;
     requires org.apache.commons.rng.sampling;
     requires org.apache.commons.csv;

@@ -6,7 +6,6 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.concurrent.Callable;
 import java.util.stream.Stream;
-import org.quire.app.report.AtomicFile;
 import org.quire.engine.io.ResourceFolders;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Parameters;
@@ -56,7 +55,7 @@ final class ExamplesCommand implements Callable<Integer> {
             try (InputStream in = java.nio.file.Files.newInputStream(f)) {
                 bytes = in.readAllBytes();
             }
-            AtomicFile.write(target.resolve(f.getFileName().toString()), o -> o.write(bytes));
+            org.quire.engine.document.DocumentStore.writeAtomically(target.resolve(f.getFileName().toString()), o -> o.write(bytes));
         }
         quire.out.println("copied " + files.size() + " worked examples to " + target);
         return CommandLine.OK;

@@ -5,8 +5,7 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.concurrent.Callable;
-import org.quire.app.common.Cautions;
-import org.quire.app.common.Engine;
+import org.quire.app.common.LanguageHelp;
 import org.quire.engine.model.LanguageReference;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Model.CommandSpec;
@@ -29,7 +28,7 @@ import picocli.CommandLine.Spec;
             "  quire help --man man/  &&  man -l man/quire-evaluate.1"})
 final class HelpCommand implements Callable<Integer> {
     /** The reference topics, in the order listed. */
-    static final List<String> TOPICS = List.of("model", "units", "functions");
+    static final List<String> TOPICS = LanguageHelp.TOPICS;
 
     @Spec
     CommandSpec spec;
@@ -59,7 +58,7 @@ final class HelpCommand implements Callable<Integer> {
             return CommandLine.OK;
         }
         if (topic.size() == 1 && TOPICS.contains(topic.get(0))) {
-            out.print(reference(topic.get(0)));
+            out.print(LanguageHelp.text(topic.get(0)));
             out.flush();
             return CommandLine.OK;
         }
@@ -74,24 +73,5 @@ final class HelpCommand implements Callable<Integer> {
         }
         c.usage(out);
         return CommandLine.OK;
-    }
-
-    /** @return the reference text of a topic, with the cautions */
-    static String reference(String topic) {
-        String text;
-        switch (topic) {
-            case "model":
-                text = LanguageReference.model();
-                break;
-            case "units":
-                text = LanguageReference.units();
-                break;
-            case "functions":
-                text = LanguageReference.functions(Engine.library());
-                break;
-            default:
-                throw new IllegalArgumentException("topic must be one of " + TOPICS + ", not '" + topic + "'");
-        }
-        return text + "\n" + Cautions.TEXT + "\n";
     }
 }

@@ -31,6 +31,7 @@ public final class Workbench {
         Thread.setDefaultUncaughtExceptionHandler(Workbench::uncaught);
         EventQueue.invokeLater(() -> {
             WorkbenchFrame frame = new WorkbenchFrame(prefs, Engine.library(), MonteCarloRunner.engine(Engine.library()));
+            frame.setIconImages(AppIcon.images());
             // the budget first, then the window: its first paint shows the content, not an empty grey frame
             if (file == null) {
                 frame.openDemo();

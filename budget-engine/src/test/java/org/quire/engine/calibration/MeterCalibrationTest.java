@@ -22,7 +22,6 @@ import org.quire.engine.csv.CsvReader;
 import org.quire.engine.document.Template;
 import org.quire.engine.io.BudgetFormatException;
 import org.quire.engine.io.BudgetJson;
-import org.quire.engine.calibration.CalibrationJson;
 import org.quire.engine.model.FunctionLibrary;
 
 /**
