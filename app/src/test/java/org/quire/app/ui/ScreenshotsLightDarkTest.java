@@ -1,11 +1,5 @@
 package org.quire.app.ui;
 
-<<<<<<< HEAD
-=======
-import org.quire.app.ui.common.WorkbenchPrefs;
-import java.awt.Graphics2D;
-import java.awt.image.BufferedImage;
->>>>>>> main
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.concurrent.atomic.AtomicReference;

@@ -22,15 +22,9 @@ import javax.swing.SwingWorker;
 import javax.swing.table.AbstractTableModel;
 import org.quire.app.report.CalibrationCharts;
 import org.quire.app.ui.common.Colors;
-<<<<<<< HEAD
 import org.quire.app.ui.common.FileDropHandler;
 import org.quire.app.ui.common.Fmt;
 import org.quire.app.ui.common.Windows;
-=======
-import org.quire.app.ui.FileDropHandler;
-import org.quire.app.ui.common.Fmt;
-import org.quire.app.ui.Windows;
->>>>>>> main
 import org.quire.app.ui.chart.ChartView;
 import org.quire.app.ui.table.SpreadsheetTable;
 import org.quire.engine.calibration.Adjustment;

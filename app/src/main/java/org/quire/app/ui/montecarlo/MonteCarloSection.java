@@ -107,18 +107,6 @@ public final class MonteCarloSection implements Section {
     @Override public String title() { return "Monte Carlo check"; }
     @Override public JComponent body() { return body; }
 
-<<<<<<< HEAD
-=======
-    /**
-     * @param b the budget a report is made of
-     * @return the outcome of the last run when it was made for exactly {@code b}, else null (a run of an earlier
-     *     state of the budget never goes into a report of the present one)
-     */
-    public MonteCarloOutcome outcomeFor(Budget b) {
-        return shown != null && b != null && b.equals(shownFor) ? shown : null;
-    }
-
->>>>>>> main
     private static String progressText(long done, long of) {
         return Fmt.count(done) + " of " + Fmt.count(of) + " trials";
     }
@@ -145,7 +133,6 @@ public final class MonteCarloSection implements Section {
         if (!n.equals(s)) {
             ctx.edit("Change Monte Carlo settings", "mcSettings", b -> b.withSettings(n));
         }
-<<<<<<< HEAD
     }
 
     /**
@@ -155,8 +142,6 @@ public final class MonteCarloSection implements Section {
      */
     public MonteCarloOutcome outcomeFor(Budget b) {
         return shown != null && b != null && b.equals(shownFor) ? shown : null;
-=======
->>>>>>> main
     }
 
     @Override
