@@ -86,27 +86,14 @@ public final class CalibrationCharts {
     }
 
     private static boolean positive(double[] v) {
-        for (double d : v) {
-            if (!(d > 0)) {
-                return false;
-            }
-        }
-        return v.length > 0;
+        return CalibrationSections.positive(v);
     }
 
     private static double min(double[] v) {
-        double m = Double.POSITIVE_INFINITY;
-        for (double d : v) {
-            m = Math.min(m, d);
-        }
-        return m;
+        return CalibrationSections.min(v);
     }
 
     private static double max(double[] v) {
-        double m = Double.NEGATIVE_INFINITY;
-        for (double d : v) {
-            m = Math.max(m, d);
-        }
-        return m;
+        return CalibrationSections.max(v);
     }
 }

@@ -374,7 +374,7 @@ public final class CalibrationSections {
         return unit == null || unit.isBlank() ? "" : " (" + unit + ")";
     }
 
-    private static boolean positive(double[] v) {
+    static boolean positive(double[] v) {
         for (double d : v) {
             if (!(d > 0)) {
                 return false;
@@ -383,7 +383,7 @@ public final class CalibrationSections {
         return v.length > 0;
     }
 
-    private static double min(double[] v) {
+    static double min(double[] v) {
         double m = Double.POSITIVE_INFINITY;
         for (double d : v) {
             m = Math.min(m, d);
@@ -391,7 +391,7 @@ public final class CalibrationSections {
         return m;
     }
 
-    private static double max(double[] v) {
+    static double max(double[] v) {
         double m = Double.NEGATIVE_INFINITY;
         for (double d : v) {
             m = Math.max(m, d);

@@ -28,6 +28,7 @@ public final class Workbench {
         System.setProperty("flatlaf.uiScale.allowScaleDown", "true");
         WorkbenchPrefs prefs = WorkbenchPrefs.user();
         installLookAndFeel(prefs.theme());
+        Thread.setDefaultUncaughtExceptionHandler(Workbench::uncaught);
         EventQueue.invokeLater(() -> {
             WorkbenchFrame frame = new WorkbenchFrame(prefs, Engine.library(), MonteCarloRunner.engine(Engine.library()));
             frame.setIconImages(AppIcon.images());
@@ -59,6 +60,23 @@ public final class Workbench {
         if (started != null) {
             System.err.println("workbench_content_painted_ms="
                     + java.time.Duration.between(started, java.time.Instant.now()).toMillis());
+        }
+    }
+
+    /**
+     * The last resort for a fault of Quire itself: the message is shown and the workbench stays open with every
+     * budget as it was (recovery copies keep being written), so that the engineer can save the work.
+     */
+    static void uncaught(Thread t, Throwable e) {
+        e.printStackTrace();
+        Runnable show = () -> javax.swing.JOptionPane.showMessageDialog(null, "<html>Quire met an internal error and "
+                + "stopped what it was doing:<br><br>" + String.valueOf(e).replace("<", "&lt;") + "<br><br>Your budgets "
+                + "are still open; save them, and report the error with what you were doing.</html>",
+                "Internal error", javax.swing.JOptionPane.ERROR_MESSAGE);
+        if (EventQueue.isDispatchThread()) {
+            show.run();
+        } else {
+            EventQueue.invokeLater(show);
         }
     }
 

@@ -2,6 +2,7 @@ package org.quire.app.ui;
 
 import org.quire.app.ui.common.WorkbenchPrefs;
 import org.quire.app.ui.common.Colors;
+import org.quire.app.ui.common.FileDropHandler;
 import java.awt.BorderLayout;
 import java.awt.CardLayout;
 import java.awt.Dimension;
@@ -418,14 +419,22 @@ public final class WorkbenchFrame extends JFrame {
         }
     }
 
+    /** The answers of a prompt about unsaved changes, in the order shown. */
+    static final String[] SAVE_CHOICES = {"Save", "Don't save", "Cancel"};
+
+    /** @return 0 to save, 1 not to save, 2 to cancel (also when the prompt is closed) */
+    private int askToSave(BudgetEditor ed, String title) {
+        tabs.setSelectedComponent(ed);
+        int a = JOptionPane.showOptionDialog(this, "Save the changes to " + ed.document().name() + "?", title,
+                JOptionPane.YES_NO_CANCEL_OPTION, JOptionPane.WARNING_MESSAGE, null, SAVE_CHOICES, SAVE_CHOICES[0]);
+        return a < 0 ? 2 : a;
+    }
+
     /** Closes an editor, offering to save changes first; @return whether it closed */
     public boolean close(BudgetEditor ed) {
         if (ed.document().isDirty() && !ed.document().isReadOnly()) {
-            tabs.setSelectedComponent(ed);
-            int a = JOptionPane.showConfirmDialog(this, "Save the changes to " + ed.document().name() + "?",
-                    "Close budget", JOptionPane.YES_NO_CANCEL_OPTION);
-            if (a == JOptionPane.CANCEL_OPTION || a == JOptionPane.CLOSED_OPTION || (a == JOptionPane.YES_OPTION
-                    && !save(ed, false))) {
+            int a = askToSave(ed, "Close budget");
+            if (a == 2 || (a == 0 && !save(ed, false))) {
                 return false;
             }
         }
@@ -443,11 +452,30 @@ public final class WorkbenchFrame extends JFrame {
         activeChanged();
     }
 
+    /**
+     * Quits: asks about every changed budget first (Save, Don't save, Cancel) and closes none when the engineer
+     * cancels or a save fails; then closes them all.
+     */
     void quit() {
+        List<BudgetEditor> toSave = new ArrayList<>();
         for (BudgetEditor e : editors()) {
-            if (!close(e)) {
+            if (e.document().isDirty() && !e.document().isReadOnly()) {
+                int a = askToSave(e, "Quit Quire");
+                if (a == 2) {
+                    return;
+                }
+                if (a == 0) {
+                    toSave.add(e);
+                }
+            }
+        }
+        for (BudgetEditor e : toSave) {
+            if (!save(e, false)) {
                 return;
             }
+        }
+        for (BudgetEditor e : editors()) {
+            forceClose(e);
         }
         prefs.setWindowBounds(getBounds(), getExtendedState() == MAXIMIZED_BOTH);
         panes.save();

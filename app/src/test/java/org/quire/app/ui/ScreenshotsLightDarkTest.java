@@ -1,12 +1,8 @@
 package org.quire.app.ui;
 
-import org.quire.app.ui.common.WorkbenchPrefs;
-import java.awt.Graphics2D;
-import java.awt.image.BufferedImage;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.concurrent.atomic.AtomicReference;
-import javax.imageio.ImageIO;
 import javax.swing.JRootPane;
 import org.junit.jupiter.api.Test;
 import org.quire.app.ui.calibration.CalibrationWindow;
@@ -24,7 +20,7 @@ class ScreenshotsLightDarkTest extends GuiTestSupport {
     void lightAndDark() throws Exception {
         Files.createDirectories(OUT);
         try {
-            for (WorkbenchPrefs.Theme theme : WorkbenchPrefs.Theme.values()) {
+            for (org.quire.app.ui.common.WorkbenchPrefs.Theme theme : org.quire.app.ui.common.WorkbenchPrefs.Theme.values()) {
                 String t = theme.name().toLowerCase(java.util.Locale.ROOT);
                 onEdt(() -> { Workbench.installLookAndFeel(theme); return null; });
                 WorkbenchFrame f = newFrameOnSamePreferences();
@@ -41,7 +37,7 @@ class ScreenshotsLightDarkTest extends GuiTestSupport {
                 }
             }
         } finally {
-            onEdt(() -> { Workbench.installLookAndFeel(WorkbenchPrefs.Theme.LIGHT); return null; });
+            onEdt(() -> { Workbench.installLookAndFeel(org.quire.app.ui.common.WorkbenchPrefs.Theme.LIGHT); return null; });
         }
     }
 
@@ -86,14 +82,6 @@ class ScreenshotsLightDarkTest extends GuiTestSupport {
     }
 
     private static void shot(JRootPane root, String name) throws Exception {
-        BufferedImage img = onEdt(() -> {
-            root.validate();
-            BufferedImage i = new BufferedImage(root.getWidth(), root.getHeight(), BufferedImage.TYPE_INT_RGB);
-            Graphics2D g = i.createGraphics();
-            root.printAll(g);
-            g.dispose();
-            return i;
-        });
-        ImageIO.write(img, "png", OUT.resolve(name + ".png").toFile());
+        ScreenshotsTest.shot(root, name);
     }
 }

@@ -93,7 +93,7 @@ class ScreenshotsTest extends GuiTestSupport {
         shot(frame.getRootPane(), name);
     }
 
-    private void shot(JRootPane root, String name) throws Exception {
+    static void shot(JRootPane root, String name) throws Exception {
         BufferedImage img = onEdt(() -> {
             root.validate();
             BufferedImage i = new BufferedImage(root.getWidth(), root.getHeight(), BufferedImage.TYPE_INT_RGB);

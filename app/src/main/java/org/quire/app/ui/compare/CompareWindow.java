@@ -51,7 +51,7 @@ public final class CompareWindow extends JDialog {
         this.comparison = c;
         setName("compare");
         setDefaultCloseOperation(DISPOSE_ON_CLOSE);
-        org.quire.app.ui.Windows.closeOnEscapeAndCtrlW(getRootPane(), this);
+        org.quire.app.ui.common.Windows.closeOnEscapeAndCtrlW(getRootPane(), this);
         JLabel head = new JLabel("<html><b>A</b> " + esc(nameA) + " \u2014 " + esc(c.titleA()) + "<br><b>B</b> "
                 + esc(nameB) + " \u2014 " + esc(c.titleB())
                 + (c.problemA().isEmpty() ? "" : "<br>A cannot be evaluated: " + esc(c.problemA()))

@@ -107,15 +107,6 @@ public final class MonteCarloSection implements Section {
     @Override public String title() { return "Monte Carlo check"; }
     @Override public JComponent body() { return body; }
 
-    /**
-     * @param b the budget a report is made of
-     * @return the outcome of the last run when it was made for exactly {@code b}, else null (a run of an earlier
-     *     state of the budget never goes into a report of the present one)
-     */
-    public MonteCarloOutcome outcomeFor(Budget b) {
-        return shown != null && b != null && b.equals(shownFor) ? shown : null;
-    }
-
     private static String progressText(long done, long of) {
         return Fmt.count(done) + " of " + Fmt.count(of) + " trials";
     }
@@ -142,6 +133,15 @@ public final class MonteCarloSection implements Section {
         if (!n.equals(s)) {
             ctx.edit("Change Monte Carlo settings", "mcSettings", b -> b.withSettings(n));
         }
+    }
+
+    /**
+     * @param b the budget a report is made of
+     * @return the outcome of the last run when it was made for exactly {@code b}, else null (a run of an earlier
+     *     state of the budget never goes into a report of the present one)
+     */
+    public MonteCarloOutcome outcomeFor(Budget b) {
+        return shown != null && b != null && b.equals(shownFor) ? shown : null;
     }
 
     @Override
@@ -264,8 +264,9 @@ public final class MonteCarloSection implements Section {
         for (MonteCarloOutcome.Output out : o.outputs()) {
             JPanel p = new JPanel(new BorderLayout(8, 2));
             p.setName("mc:" + out.name());
-            HistogramPlot plot = new HistogramPlot();
-            plot.show(out);
+            org.quire.app.ui.chart.ChartView plot = new org.quire.app.ui.chart.ChartView();
+            plot.setName("mcHistogram:" + out.name());
+            plot.setChart(org.quire.app.report.MonteCarloReport.histogram(out));
             p.add(plot, BorderLayout.CENTER);
             JLabel text = new JLabel(describe(out, digits));
             text.setName("mcVerdict:" + out.name());
@@ -282,7 +283,8 @@ public final class MonteCarloSection implements Section {
     public static final String VERDICT = "quire.mcVerdict";
 
     static String describe(MonteCarloOutcome.Output o, int digits) {
-        String unit = o.unit().isEmpty() ? "" : " " + o.unit();
+        String unit = o.unit().isEmpty() ? "" : " " + org.quire.engine.units.Units.display(o.unit());
+        double u = o.hasStandardUncertainty() ? o.standardUncertainty() : Double.NaN;
         StringBuilder s = new StringBuilder("<html><b>").append(esc(o.name())).append(esc(unit)).append("</b><br>");
         if (o.hasStandardUncertainty()) {
             s.append("y = ").append(Rounding.format(o.estimate(), o.standardUncertainty(), digits)).append(esc(unit))
@@ -290,9 +292,9 @@ public final class MonteCarloSection implements Section {
         } else {
             s.append("y = ").append(Fmt.num(o.estimate())).append(esc(unit)).append("<br>u(y) not defined<br>");
         }
-        interval(s, "symmetric", o.symmetricInterval(), unit);
-        interval(s, "shortest", o.shortestInterval(), unit);
-        interval(s, "GUM y \u00b1 U", o.gumInterval(), unit);
+        interval(s, "symmetric", o.symmetricInterval(), unit, u, digits);
+        interval(s, "shortest", o.shortestInterval(), unit, u, digits);
+        interval(s, "GUM y \u00b1 U", o.gumInterval(), unit, u, digits);
         GumComparison c = o.comparison();
         String colour = String.format("#%06x", Colors.get(c.validated() ? "Quire.ok" : "Quire.error")
                 .getRGB() & 0xffffff);
@@ -304,9 +306,15 @@ public final class MonteCarloSection implements Section {
         return s.append("</html>").toString();
     }
 
-    private static void interval(StringBuilder s, String label, CoverageInterval i, String unit) {
-        s.append(label).append(' ').append(Fmt.probability(i.probability())).append(": [").append(Fmt.working(i.lower()))
-                .append(", ").append(Fmt.working(i.upper())).append("]").append(esc(unit)).append("<br>");
+    /** An interval's ends to the decimal place of u at the budget's digits (JCGM 100:2008 7.2.6), else 6 digits. */
+    private static String end(double v, double u, int digits) {
+        return Double.isFinite(u) && u > 0 ? Rounding.estimate(v, u, digits).toPlainString().replace('-', '\u2212')
+                : org.quire.engine.gum.Figures.compact(v, 6);
+    }
+
+    private static void interval(StringBuilder s, String label, CoverageInterval i, String unit, double u, int digits) {
+        s.append(label).append(' ').append(Fmt.probability(i.probability())).append(": [").append(end(i.lower(), u, digits))
+                .append(", ").append(end(i.upper(), u, digits)).append("]").append(esc(unit)).append("<br>");
     }
 
     private static String esc(String t) {

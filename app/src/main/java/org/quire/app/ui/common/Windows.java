@@ -1,4 +1,4 @@
-package org.quire.app.ui;
+package org.quire.app.ui.common;
 
 import java.awt.Toolkit;
 import java.awt.event.ActionEvent;
