@@ -128,12 +128,23 @@ def proving_tank(x):
     return {"E": 100 * ((x["V_ind"] + x["dV_res"]) / v_ref - 1)}
 
 
+def gravimetric_run(x):
+    rho_tank = tanaka(x["t_tank"], air_saturated=True) + x["drho_w"]
+    rho_meter = tanaka(x["t_meter"], x["p_meter"], air_saturated=True) + x["drho_w"]
+    m = (x["I_full"] - x["I_empty"] + x["dI_bal"] + x["dI_res"]) * buoyancy(x["rho_a"], rho_tank, x["rho_ref"]) \
+        + x["dm_evap"]
+    v_ref = m / rho_meter * x["t_c"] / (x["t_c"] + x["dt_div"])
+    v_meter = (x["N_p"] + x["dN_res"]) / x["k_pulse"] / 1000.0 * (1 + x["d_inst"])
+    return {"E": 100 * (v_meter / v_ref - 1), "q": 3600 * m / rho_meter / (x["t_c"] + x["dt_div"])}
+
+
 MODELS = {
     "gravimetric-emf-flow-point.json": gravimetric,
     "master-meter-comparison.json": master,
     "field-verification-clamp-on.json": clamp_on,
     "emf-electronics-low-velocity.json": emf_electronics,
     "volumetric-proving-tank.json": proving_tank,
+    "tvfl-emf-gravimetric-calibration-run.json": gravimetric_run,
 }
 
 # ---------------------------------------------------------------- inputs: x_i, u(x_i), nu_i

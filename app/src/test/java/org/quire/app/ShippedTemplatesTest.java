@@ -57,6 +57,9 @@ class ShippedTemplatesTest {
         expect("emf-electronics-low-velocity.json", "q_lo", 8.53884883, 5e-09, 0.109361, 5e-07);
         expect("emf-electronics-low-velocity.json", "q_hi", 84.8795503, 5e-08, 0.126953, 5e-07);
         expect("volumetric-proving-tank.json", "E", -0.326646861, 5e-10, 0.0145596, 5e-08);
+        // the same script's gravimetric_run model (one run of a calibration across the range; gum() on this file)
+        expect("tvfl-emf-gravimetric-calibration-run.json", "E", -0.274140983, 5e-10, 0.0250434, 5e-08);
+        expect("tvfl-emf-gravimetric-calibration-run.json", "q", 60.1649367, 5e-08, 0.00524755, 5e-09);
     }
 
     /** The templates folder: the test's working directory is app/, so ../templates, else templates. */

@@ -465,7 +465,7 @@ final class CalibrationCommand implements Callable<Integer> {
                     PointResult pt = ser.points().get(i);
                     for (RunResult run : pt.runs()) {
                         p.printRecord(ser.phase().label(), pt.label(), run.sourceRow(), EvaluateCommand.num(run.flow()),
-                                EvaluateCommand.num(run.error()), "", "", "", EvaluateCommand.num(run.standardUncertainty()),
+                                EvaluateCommand.num(run.error()), "", "", "", "",
                                 "", "", "", "", "", "", "", "", "", "");
                     }
                     PointConformity pc = ser.conformity() == null ? null : ser.conformity().points().get(i);

@@ -5,7 +5,6 @@ import java.nio.file.Path;
 import java.time.LocalDate;
 import java.util.Locale;
 import java.util.concurrent.Callable;
-import org.quire.app.report.AtomicFile;
 import org.quire.app.report.Certificate;
 import org.quire.app.report.CertificateBuilder;
 import org.quire.app.report.CertificateIssue;
@@ -99,7 +98,7 @@ final class CertificateCommand implements Callable<Integer> {
         ByteArrayOutputStream buf = new ByteArrayOutputStream(64 * 1024);
         CertificatePdf.render(c, buf);
         byte[] bytes = buf.toByteArray();
-        AtomicFile.write(target, o -> o.write(bytes));
+        org.quire.engine.document.DocumentStore.writeAtomically(target, o -> o.write(bytes));
         quire.out.println("wrote certificate " + c.number() + " to " + target);
         return 0;
     }

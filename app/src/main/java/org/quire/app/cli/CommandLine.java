@@ -54,6 +54,11 @@ public final class CommandLine {
         int status;
         try {
             status = cmd.execute(args);
+        } catch (StackOverflowError | OutOfMemoryError e) {
+            // every input limit is checked with a message before this could happen; reaching here is a bug
+            err.println("quire: internal error (a bug in Quire; please report it with the command and file): "
+                    + (e instanceof StackOverflowError ? "stack overflow" : "out of memory: " + e.getMessage()));
+            status = BUG;
         } finally {
             cmd.getOut().flush();
             cmd.getErr().flush();

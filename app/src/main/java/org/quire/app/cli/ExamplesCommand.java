@@ -6,7 +6,6 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.concurrent.Callable;
 import java.util.stream.Stream;
-import org.quire.app.report.AtomicFile;
 import org.quire.engine.io.ResourceFolders;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Parameters;
@@ -57,7 +56,7 @@ final class ExamplesCommand implements Callable<Integer> {
             }
             Path to = target.resolve(source.relativize(f).toString());
             java.nio.file.Files.createDirectories(to.getParent());
-            AtomicFile.write(to, o -> o.write(bytes));
+            org.quire.engine.document.DocumentStore.writeAtomically(to, o -> o.write(bytes));
         }
         quire.out.println("copied " + files.size() + " worked examples to " + target);
         return CommandLine.OK;

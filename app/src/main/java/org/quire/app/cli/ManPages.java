@@ -7,7 +7,6 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 import org.quire.app.common.Cautions;
-import org.quire.app.report.AtomicFile;
 import org.quire.engine.io.EngineVersion;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Model.OptionSpec;
@@ -40,7 +39,7 @@ final class ManPages {
         String name = spec.qualifiedName("-");
         Path file = dir.resolve(name + ".1");
         byte[] bytes = page(c).getBytes(StandardCharsets.UTF_8);
-        AtomicFile.write(file, o -> o.write(bytes));
+        org.quire.engine.document.DocumentStore.writeAtomically(file, o -> o.write(bytes));
         written.add(file);
         for (picocli.CommandLine sub : c.getSubcommands().values()) {
             if (sub.getParent() == c && sub.getCommandName().equals(sub.getCommandSpec().name())) {

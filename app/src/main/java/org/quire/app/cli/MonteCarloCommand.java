@@ -80,11 +80,18 @@ final class MonteCarloCommand implements Callable<Integer> {
         } catch (IllegalArgumentException e) {
             throw new Files.FileProblem(file, e.getMessage());
         }
-        MonteCarloSettings ms = BudgetSimulation.settings(b.settings(), gum).withThreads(threadCount);
+        MonteCarloSettings ms;
+        try {
+            ms = BudgetSimulation.settings(b.settings(), gum).withThreads(threadCount);
+        } catch (IllegalArgumentException e) {
+            throw new Files.FileProblem(file, e.getMessage());
+        }
         ProgressLine progress = ProgressLine.forTerminal(quire.err, "Monte Carlo", "trials", quiet.quiet);
         MonteCarloOutcome o;
         try {
             o = BudgetSimulation.run(b, model, gum, ms, progress);
+        } catch (org.quire.engine.montecarlo.MonteCarloProblem e) {
+            throw new Files.FileProblem(file, e.getMessage());
         } finally {
             progress.finish();
         }

@@ -13,7 +13,6 @@ import org.quire.app.common.Engine;
 import org.quire.app.compare.BudgetComparison;
 import org.quire.app.compare.Comparison;
 import org.quire.app.compare.ComparisonSection;
-import org.quire.app.report.AtomicFile;
 import org.quire.app.report.CalibrationSections;
 import org.quire.app.report.CsvTables;
 import org.quire.app.report.DocumentInfo;
@@ -201,6 +200,6 @@ final class ReportCommand implements Callable<Integer> {
     }
 
     private static void write(Path target, byte[] bytes) throws IOException {
-        AtomicFile.write(target, o -> o.write(bytes));
+        org.quire.engine.document.DocumentStore.writeAtomically(target, o -> o.write(bytes));
     }
 }

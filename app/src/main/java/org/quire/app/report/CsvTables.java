@@ -60,7 +60,7 @@ public final class CsvTables {
             }
             Path f = dir.resolve(name + ".csv");
             byte[] bytes = render(t).getBytes(StandardCharsets.UTF_8);
-            AtomicFile.write(f, out -> out.write(bytes));
+            org.quire.engine.document.DocumentStore.writeAtomically(f, out -> out.write(bytes));
             written.add(f);
         }
         return written;

@@ -8,10 +8,10 @@ import java.util.function.Consumer;
 import javax.swing.TransferHandler;
 
 /** Opens budget files dropped on the window. */
-final class FileDropHandler extends TransferHandler {
+public final class FileDropHandler extends TransferHandler {
     private final Consumer<Path> open;
 
-    FileDropHandler(Consumer<Path> open) {
+    public FileDropHandler(Consumer<Path> open) {
         this.open = open;
     }
 

@@ -123,6 +123,7 @@ final class WorkbenchActions {
         file.add(action("Open the demo budget", 0, 0, e -> frame.openDemo()));
         file.add(open);
         file.add(openReview);
+        file.add(action("Open calibration\u2026", 0, 0, e -> frame.openCalibration()));
         updateRecent();
         file.add(recent);
         file.addSeparator();

@@ -117,7 +117,7 @@ public final class WorkbenchFrame extends JFrame {
         recovery = new RecoveryKeeper(RecoveryStore.of(prefs.recoveryFolder()), autosavePeriod(),
                 (id, e) -> EventQueue.invokeLater(() -> status("Recovery copy not written: " + e.getMessage(), true)));
         refreshNavigator();
-        setMinimumSize(new Dimension(800, 520));
+        setMinimumSize(new Dimension(760, 500));
     }
 
     WorkbenchPrefs prefs() { return prefs; }
@@ -125,13 +125,14 @@ public final class WorkbenchFrame extends JFrame {
 
     /** Restores the window bounds (clamped to the screens) and the pane layout, then shows the window. */
     public void showRestored() {
+        java.awt.Rectangle screen = usableScreen();
         java.awt.Rectangle r = prefs.windowBounds();
-        if (r != null) {
-            setBounds(r);
-        } else {
-            setSize(1440, 900);
-            setLocationRelativeTo(null);
+        if (r == null) {
+            r = new java.awt.Rectangle(0, 0, Math.min(1440, screen.width), Math.min(900, screen.height));
+            r.setLocation(screen.x + (screen.width - r.width) / 2, screen.y + (screen.height - r.height) / 2);
         }
+        setBounds(r.intersection(screen).isEmpty() ? new java.awt.Rectangle(screen.x, screen.y,
+                Math.min(r.width, screen.width), Math.min(r.height, screen.height)) : clamp(r, screen));
         if (prefs.windowMaximized()) {
             setExtendedState(MAXIMIZED_BOTH);
         }
@@ -139,6 +140,25 @@ public final class WorkbenchFrame extends JFrame {
         validate();
         panes.restore();
         java.awt.EventQueue.invokeLater(panes::restore);
+    }
+
+    /** @return the part of the default screen that windows may use (without task bars) */
+    private java.awt.Rectangle usableScreen() {
+        java.awt.GraphicsConfiguration gc = java.awt.GraphicsEnvironment.getLocalGraphicsEnvironment()
+                .getDefaultScreenDevice().getDefaultConfiguration();
+        java.awt.Rectangle b = gc.getBounds();
+        java.awt.Insets in = java.awt.Toolkit.getDefaultToolkit().getScreenInsets(gc);
+        return new java.awt.Rectangle(b.x + in.left, b.y + in.top, b.width - in.left - in.right,
+                b.height - in.top - in.bottom);
+    }
+
+    /** @return {@code r} made to fit inside {@code screen}: no larger, and moved inside */
+    static java.awt.Rectangle clamp(java.awt.Rectangle r, java.awt.Rectangle screen) {
+        int w = Math.min(r.width, screen.width);
+        int h = Math.min(r.height, screen.height);
+        int x = Math.max(screen.x, Math.min(r.x, screen.x + screen.width - w));
+        int y = Math.max(screen.y, Math.min(r.y, screen.y + screen.height - h));
+        return new java.awt.Rectangle(x, y, w, h);
     }
 
     /** @return the editor of the selected tab */
@@ -515,6 +535,34 @@ public final class WorkbenchFrame extends JFrame {
             showError("Cannot restore the recovery copy", p.file() + ":\n" + e.getMessage());
             return Optional.empty();
         }
+    }
+
+    // ----- calibration -----------------------------------------------------------------------------------------
+
+    /** File &gt; Open calibration: asks for a calibration file and shows it in its own window. */
+    void openCalibration() {
+        Path p = FileChooser.openTarget(this, "Open calibration");
+        if (p != null) {
+            openCalibration(p, w -> { });
+        }
+    }
+
+    /**
+     * Opens a calibration file off the event thread and shows it; a point's budget opens here as a review copy.
+     *
+     * @param shown told of the window once it is shown
+     */
+    public void openCalibration(Path file, java.util.function.Consumer<org.quire.app.ui.calibration.CalibrationWindow> shown) {
+        status("Opening " + file.getFileName() + "\u2026", false);
+        org.quire.app.ui.calibration.CalibrationOpener.open(file, library, p -> {
+            BudgetEditor ed = open(BudgetDocument.ofBudget(p.budget(), "point " + p.label() + " of "
+                    + file.getFileName(), prefs.userName()));
+            ed.document().setReadOnly(true);
+            toFront();
+        }, w -> {
+            status("Opened the calibration " + file.getFileName(), false);
+            shown.accept(w);
+        }, this::showError);
     }
 
     // ----- report and comparison ------------------------------------------------------------------------------

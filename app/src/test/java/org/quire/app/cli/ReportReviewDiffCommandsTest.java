@@ -74,7 +74,7 @@ class ReportReviewDiffCommandsTest {
     void unwritableOutputFolderIsAClearError(@TempDir Path dir) throws Exception {
         Path target = dir.resolve("no-such-folder").resolve("r.pdf");
         assertEquals(2, run("report", h1(), "-o", target.toString()));
-        assertTrue(err().contains("cannot write") && err().contains("does not exist"), err());
+        assertTrue(err().contains("cannot save r.pdf") && err().contains("does not exist"), err());
         assertFalse(Files.exists(target));
     }
 

@@ -134,15 +134,15 @@ public final class TypeB implements Evaluation {
             case "standardUncertainty": return "Standard uncertainty u";
             case "expandedUncertainty": return "Expanded uncertainty U";
             case "coverageFactor": return "Coverage factor k of U";
-            case "coverageProbability": return "Coverage probability of U (0 to 1)";
+            case "coverageProbability": return "Coverage probability of U";
             case "halfWidth": return "Half-width a";
             case "lower": return "Lower limit";
             case "upper": return "Upper limit";
             case "beta": return "Top-to-base ratio \u03b2";
-            case "halfWidthUncertainty": return "Inexactness d of the limits";
+            case "halfWidthUncertainty": return "Inexactness d of limits";
             case "scale": return "Scale";
             case "dof": return "Degrees of freedom \u03bd";
-            case "relativeUncertaintyOfU": return "Relative uncertainty of u (0 to 1)";
+            case "relativeUncertaintyOfU": return "Relative uncertainty of u";
             default: throw new InvalidParameterException(parameter, "'" + parameter
                     + "' is not a parameter of a Type B evaluation");
         }

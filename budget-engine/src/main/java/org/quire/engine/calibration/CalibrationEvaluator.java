@@ -41,9 +41,9 @@ import org.quire.engine.units.Units;
  *
  * <h2>Per run</h2>
  * The method template's parameters are the per-run quantities: every run gives each of them (a missing or
- * unknown reading is an error naming the run's source row). The run's budget is the template with the run's
- * readings applied ({@link Template#budgetFor}); its GUM evaluation through the method's compiled model gives
- * the run's error E_j and flow q_j.
+ * unknown reading is an error naming the run's source row). The method's compiled model, at the template's
+ * estimates with the run's readings applied (as {@link Template#budgetFor} applies them), gives the run's error
+ * E_j and flow q_j.
  *
  * <h2>Per point</h2>
  * The point's error is the mean of its runs' errors, E = (1/n) sum E_j, and its flow the mean of their flows.
@@ -179,6 +179,9 @@ public final class CalibrationEvaluator {
         SeriesResult asFound = series(c, SeriesResult.Phase.AS_FOUND, found, between, flowUnit, findings);
 
         AdjustmentResult adj = c.adjustment().changesConstant() ? adjust(c, asFound, flowUnit) : null;
+        if (adj != null && adj.fit() != null && adj.fit().consistency() == org.quire.engine.line.Consistency.INCONSISTENT) {
+            findings.add(CalibrationMessages.slopeInconsistent(adj.fit()));
+        }
         SeriesResult asLeft = null;
         if (!c.asLeft().isEmpty()) {
             List<PointResult> left = new ArrayList<>();
@@ -295,6 +298,36 @@ public final class CalibrationEvaluator {
         return "";
     }
 
+    private int errorIndex(Calibration c) {
+        return runModel.outputNames().indexOf(c.errorOutput());
+    }
+
+    /**
+     * The input estimates of the method with a run's readings applied: for parameters that set an estimate,
+     * the reading itself (range-checked, as {@link Template#budgetFor} does); otherwise through
+     * {@link Template#budgetFor}.
+     */
+    private double[] runVector(Map<String, Double> x) {
+        Budget base = method.document().budget();
+        boolean direct = true;
+        for (TemplateParameter tp : method.spec().parameters()) {
+            direct &= tp.field().equals("estimate");
+        }
+        Budget b = direct ? base : method.budgetFor(x);
+        double[] v = new double[b.inputs().size()];
+        for (int i = 0; i < v.length; i++) {
+            v[i] = b.inputs().get(i).evaluation().estimate();
+        }
+        if (direct) {
+            for (TemplateParameter tp : method.spec().parameters()) {
+                double value = x.get(tp.name());
+                tp.checkValue(value);
+                v[base.inputNames().indexOf(tp.input())] = value;
+            }
+        }
+        return v;
+    }
+
     /** Checks a run's readings against the method's parameters. */
     private Map<String, Double> readings(Run r, String where, String loc) {
         List<String> missing = new ArrayList<>();
@@ -328,21 +361,17 @@ public final class CalibrationEvaluator {
             String runAt = at + ", run " + (j + 1);
             String runLoc = loc + ".runs[" + j + "]";
             Map<String, Double> x = readings(r, runAt, runLoc);
-            Budget rb;
-            GumResult g;
+            double[] y;
             try {
-                rb = method.budgetFor(x);
-                g = GumEvaluator.evaluate(rb, runModel, rb.correlationMatrix(), rb.settings());
-            } catch (IllegalArgumentException e) {
-                throw new CalibrationException(runLoc, CalibrationMessages.at(runAt, r.sourceRow(), e.getMessage()), e);
-            } catch (ModelException e) {
+                y = runModel.evaluate(runVector(x));
+            } catch (IllegalArgumentException | ModelException e) {
                 throw new CalibrationException(runLoc, CalibrationMessages.at(runAt, r.sourceRow(), e.getMessage()), e);
             }
-            OutputResult e = g.output(c.errorOutput());
-            OutputResult q = g.output(c.flowOutput());
-            runs.add(new RunResult(r.sourceRow(), x, e.estimate(), e.standardUncertainty(), q.estimate()));
-            sumE += e.estimate();
-            sumQ += q.estimate();
+            double e = y[errorIndex(c)];
+            double q = y[runModel.outputNames().indexOf(c.flowOutput())];
+            runs.add(new RunResult(r.sourceRow(), x, e, q));
+            sumE += e;
+            sumQ += q;
             for (Map.Entry<String, Double> v : x.entrySet()) {
                 sums.merge(v.getKey(), v.getValue(), Double::sum);
             }
@@ -418,7 +447,10 @@ public final class CalibrationEvaluator {
         if (c.monteCarlo() != null) {
             MonteCarloSettings ms = MonteCarloSettings.defaults().withTrials(c.monteCarlo().trials())
                     .withSeed(c.monteCarlo().seed()).withCoverageProbability(res.coverageProbability())
-                    .withSignificantDigits(pb.settings().significantDigits()).withThreads(monteCarloThreads);
+                    .withSignificantDigits(pb.settings().significantDigits());
+            if (monteCarloThreads > 0) {
+                ms = ms.withThreads(monteCarloThreads);
+            }
             mc = BudgetSimulation.run(pb, pm.model(), g, ms, listener);
         }
         double cmc = Double.NaN;
@@ -547,8 +579,7 @@ public final class CalibrationEvaluator {
         for (PointResult p : found.points()) {
             List<RunResult> runs = new ArrayList<>();
             for (RunResult r : p.runs()) {
-                runs.add(new RunResult(r.sourceRow(), r.readings(), scaled(r.error(), s), r.standardUncertainty() * s,
-                        r.flow()));
+                runs.add(new RunResult(r.sourceRow(), r.readings(), scaled(r.error(), s), r.flow()));
             }
             double u = p.standardUncertainty() * s;
             double bigU = p.expandedUncertainty() * s;

@@ -246,6 +246,13 @@ final class CalibrationMessages {
                 .replace('_', ' ') + ")";
     }
 
+    static String slopeInconsistent(LineFit fit) {
+        return "adjustment: the points do not lie on a straight line within their uncertainties (chi-squared "
+                + num(fit.chiSquared()) + " above the 95 % quantile " + num(fit.chiSquaredQuantile()) + " for "
+                + fit.dof() + " degrees of freedom, ISO/TS 28037:2010 clause 8); review the line before relying on "
+                + "its slope, or adjust by the weighted mean error";
+    }
+
     static String chosenNote() {
         return "the new constant is the one chosen by the user; it is exactly known as dialled";
     }

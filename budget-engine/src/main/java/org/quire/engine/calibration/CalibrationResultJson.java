@@ -15,7 +15,7 @@ import org.quire.engine.montecarlo.GumComparison;
 /**
  * Writes the evaluation of a calibration as JSON: {@code asFound}, {@code adjustment}, {@code asLeft} (each
  * series with {@code points}, {@code covariance}, {@code correlation} and {@code conformity}) and
- * {@code findings}. A point lists its {@code runs} (row, error, u, flow), {@code error}, {@code runStandardDeviation},
+ * {@code findings}. A point lists its {@code runs} (row, error, flow, readings), {@code error}, {@code runStandardDeviation},
  * {@code repeatabilityUncertainty}, {@code repeatabilityDof}, {@code standardUncertainty}, {@code effectiveDof},
  * {@code coverageFactor}, {@code expandedUncertainty}, {@code cmc}, {@code reportedExpandedUncertainty},
  * {@code raisedToCmc}, {@code notes} and, when run, {@code monteCarlo}. Numbers that are not finite are written
@@ -78,7 +78,6 @@ public final class CalibrationResultJson {
         for (RunResult r : p.runs()) {
             JsonObjectBuilder rb = JsonSupport.JSON.createObjectBuilder().add("row", r.sourceRow());
             num(rb, "error", r.error());
-            num(rb, "standardUncertainty", r.standardUncertainty());
             num(rb, "flow", r.flow());
             JsonObjectBuilder rd = JsonSupport.JSON.createObjectBuilder();
             for (Map.Entry<String, Double> e : r.readings().entrySet()) {

@@ -83,8 +83,9 @@ public final class RecoveryStore {
         JsonObject o = JSON.createObjectBuilder().add("format", FORMAT).add("formatVersion", 1).add("id", id)
                 .add("originalPath", originalPath == null ? "" : originalPath.toAbsolutePath().toString())
                 .add("saved", now.toString()).add("document", DocumentJson.toJson(doc)).build();
-        DocumentStore.writeAtomically(folder.resolve(id + SUFFIX), BudgetJson.pretty(o)
-                .getBytes(StandardCharsets.UTF_8), false);
+        // a copy of unsaved work stays the user's own (mode 0600), unlike saved files, which take the umask's mode
+        DocumentStore.writePrivately(folder.resolve(id + SUFFIX), BudgetJson.pretty(o)
+                .getBytes(StandardCharsets.UTF_8));
     }
 
     /** A recovery copy found in the folder. */

@@ -137,6 +137,13 @@ public final class GumEvaluator {
                 higherVar = correlated ? higherOrderVariance(ds[k], active, u, r) : higherOrderVariance(ds[k], active, u);
             }
             double variance = cov[k][k] + higherVar;
+            if (!Double.isFinite(y[k]) || !Double.isFinite(variance)) {
+                throw new ModelException(new ModelProblem(0, 0, 0, ModelProblem.Severity.ERROR, Double.isFinite(y[k])
+                        ? "the variance u_c^2 of output '" + name + "' overflows: the inputs' standard uncertainties "
+                                + "times their sensitivity coefficients are too large to square (beyond about 1e154)"
+                        : "the estimate of output '" + name + "' is not a finite number (" + y[k] + ") at the inputs' "
+                                + "estimates: a value overflows"));
+            }
             double uc = Math.sqrt(Math.max(0, variance));
             cov[k][k] = variance;
             double corrVar = 0;
@@ -165,11 +172,14 @@ public final class GumEvaluator {
                 rows.add(new Contribution(q.name(), q.unit(), x[i], u[i], c[k][i], ui, nu[i], share,
                         q.evaluation().type(), q.evaluation().distribution().shape()));
                 if (ui > 0 && !Double.isInfinite(nu[i]) && !(q.evaluation() instanceof FitParameter)) {
-                    wsDenominator += Math.pow(ui, 4) / nu[i];
+                    // JCGM 100 G.2b, written as sum of (u_i/u_c)^4 / nu_i so that neither overflows nor underflows
+                    wsDenominator += Math.pow(ui / uc, 4) / nu[i];
                 }
             }
-            wsDenominator += fittedLineTerms(inputs, c[k], u, nu, r);
-            double nuEff = wsDenominator > 0 ? Math.pow(uc, 4) / wsDenominator : Double.POSITIVE_INFINITY;
+            if (uc > 0) {
+                wsDenominator += fittedLineTerms(inputs, c[k], u, nu, r, uc * uc);
+            }
+            double nuEff = wsDenominator > 0 ? 1 / wsDenominator : Double.POSITIVE_INFINITY;
             if (correlated && !terms.isEmpty() && !Double.isInfinite(nuEff)) {
                 warnings.add("inputs are correlated; the Welch–Satterthwaite formula assumes independent inputs, "
                         + "so nu_eff is approximate");
@@ -261,10 +271,11 @@ public final class GumEvaluator {
     /**
      * The Welch-Satterthwaite terms of fitted-line parameters: the intercept and slope of one line share one
      * residual scatter s, so their joint contribution u_L^2(y) = sum_ij c_i c_j u_i u_j r_ij is one component
-     * with nu = n - 2 (JCGM 100:2008 H.3.4: b(t) from y1 and y2 has nu = n - 2; G.4.1, eq. G.2b).
+     * with nu = n - 2 (JCGM 100:2008 H.3.4: b(t) from y1 and y2 has nu = n - 2; G.4.1, eq. G.2b). Returned
+     * relative to u_c^4, as (u_L^2 / u_c^2)^2 / nu, so that it neither overflows nor underflows.
      */
     private static double fittedLineTerms(List<InputQuantity> inputs, double[] c, double[] u, double[] nu,
-            CorrelationMatrix r) {
+            CorrelationMatrix r, double ucSquared) {
         double sum = 0;
         boolean[] done = new boolean[inputs.size()];
         for (int i = 0; i < inputs.size(); i++) {
@@ -286,7 +297,8 @@ public final class GumEvaluator {
                     v += c[a] * c[b] * u[a] * u[b] * r.get(a, b);
                 }
             }
-            sum += v * v / nu[i];
+            double share = v / ucSquared;
+            sum += share * share / nu[i];
         }
         return sum;
     }

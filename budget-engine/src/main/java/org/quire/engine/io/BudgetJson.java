@@ -112,6 +112,7 @@ public final class BudgetJson {
         if (text.isBlank()) {
             throw new BudgetFormatException("", "the file is empty");
         }
+        JsonLimits.check(text);
         JsonValue v;
         try (JsonReader r = JSON.createReader(new StringReader(text))) {
             v = r.readValue();
@@ -121,17 +122,24 @@ public final class BudgetJson {
             throw new BudgetFormatException(where, "malformed JSON: " + cleanMessage(e.getMessage()), e);
         } catch (JsonException e) {
             throw new BudgetFormatException("", "malformed or truncated JSON: " + cleanMessage(e.getMessage()), e);
-        } catch (StackOverflowError e) {
-            throw new BudgetFormatException("", "the JSON is nested too deeply");
+        } catch (RuntimeException e) {
+            // the parser's own limits (nesting, number length) are checked above with a path; anything else
+            // the parser refuses is still a malformed file, not a bug
+            throw new BudgetFormatException("", "malformed JSON: " + cleanMessage(e.getMessage()), e);
         }
         if (v.getValueType() != JsonValue.ValueType.OBJECT) {
             throw new BudgetFormatException("$", "a budget file holds one JSON object, not " + v.getValueType()
                     .toString().toLowerCase(java.util.Locale.ROOT));
         }
         if (JsonCursor.depth(v, MAX_DEPTH + 1) > MAX_DEPTH) {
-            throw new BudgetFormatException("$", "the JSON is nested more than " + MAX_DEPTH + " levels deep");
+            throw new BudgetFormatException("$", tooDeep());
         }
         return v.asJsonObject();
+    }
+
+    /** @return the message for JSON nested deeper than {@link #MAX_DEPTH} (the path is given with it) */
+    static String tooDeep() {
+        return "the JSON is nested more than " + MAX_DEPTH + " levels deep";
     }
 
     private static String cleanMessage(String m) {

@@ -112,6 +112,9 @@ public final class JsonCursor {
         if (!Double.isFinite(d)) {
             throw error("number is out of range: " + value);
         }
+        if (d == 0 && ((JsonNumber) value).bigDecimalValue().signum() != 0) {
+            throw error("number is too small to hold, it would become 0: " + value);
+        }
         return d;
     }
 

@@ -34,7 +34,17 @@ public final class ModelCompiler {
     private final List<Equation> quantities = new ArrayList<>();
     private final Set<String> usedInputs = new LinkedHashSet<>();
     private int nextId;
+    private int nodeDepth;
     private List<Node> consts = new ArrayList<>();
+
+    /** Stops compiling when a limit of {@link ModelLimits} is passed; the problem is already recorded. */
+    private static final class TooLarge extends RuntimeException {
+        private static final long serialVersionUID = 1L;
+
+        TooLarge() {
+            super(null, null, false, false);
+        }
+    }
 
     private ModelCompiler(String text, List<String> inputs, List<String> outputs, FunctionLibrary library,
             ModelUnits units) {
@@ -147,10 +157,14 @@ public final class ModelCompiler {
         }
         Node[] roots = new Node[quantities.size()];
         List<Set<Integer>> deps = new ArrayList<>();
-        for (int j = 0; j < quantities.size(); j++) {
-            Set<Integer> d = new LinkedHashSet<>();
-            roots[j] = node(quantities.get(j).expression(), Map.of(), new ArrayDeque<>(), d);
-            deps.add(d);
+        try {
+            for (int j = 0; j < quantities.size(); j++) {
+                Set<Integer> d = new LinkedHashSet<>();
+                roots[j] = node(quantities.get(j).expression(), Map.of(), new ArrayDeque<>(), d);
+                deps.add(d);
+            }
+        } catch (TooLarge e) {
+            throw new ModelException(problems);
         }
         int[] order = order(deps);
         if (problems.stream().noneMatch(ModelProblem::isError)) {
@@ -226,46 +240,66 @@ public final class ModelCompiler {
         return new Formula.Call(c.name(), kind, args);
     }
 
-    /** Topological order of the quantities; reports each circular definition once. */
+    /**
+     * Topological order of the quantities (depth-first, with an explicit stack so that a chain of any length
+     * cannot overflow the call stack); reports each circular definition once.
+     */
     private int[] order(List<Set<Integer>> deps) {
         int n = deps.size();
         int[] state = new int[n];
         List<Integer> out = new ArrayList<>();
-        Deque<Integer> path = new ArrayDeque<>();
+        List<java.util.Iterator<Integer>> iterators = new ArrayList<>(n);
         for (int j = 0; j < n; j++) {
-            visit(j, deps, state, out, path);
+            iterators.add(null);
+        }
+        Deque<Integer> path = new ArrayDeque<>();
+        for (int start = 0; start < n; start++) {
+            if (state[start] != 0) {
+                continue;
+            }
+            state[start] = 1;
+            path.push(start);
+            iterators.set(start, deps.get(start).iterator());
+            while (!path.isEmpty()) {
+                int j = path.peek();
+                java.util.Iterator<Integer> it = iterators.get(j);
+                if (it.hasNext()) {
+                    int k = it.next();
+                    if (state[k] == 1) {
+                        cycle(k, path);
+                    } else if (state[k] == 0) {
+                        state[k] = 1;
+                        path.push(k);
+                        iterators.set(k, deps.get(k).iterator());
+                    }
+                } else {
+                    path.pop();
+                    state[j] = 2;
+                    iterators.set(j, null);
+                    out.add(j);
+                }
+            }
         }
         return out.stream().mapToInt(Integer::intValue).toArray();
     }
 
-    private void visit(int j, List<Set<Integer>> deps, int[] state, List<Integer> out, Deque<Integer> path) {
-        if (state[j] == 2) {
-            return;
-        }
-        if (state[j] == 1) {
-            List<String> cycle = new ArrayList<>();
-            boolean in = false;
-            for (java.util.Iterator<Integer> it = path.descendingIterator(); it.hasNext();) {
-                int k = it.next();
-                if (k == j) {
-                    in = true;
-                }
-                if (in) {
-                    cycle.add(quantities.get(k).name());
-                }
+    private void cycle(int j, Deque<Integer> path) {
+        List<String> cycle = new ArrayList<>();
+        boolean in = false;
+        for (java.util.Iterator<Integer> it = path.descendingIterator(); it.hasNext();) {
+            int k = it.next();
+            if (k == j) {
+                in = true;
             }
-            cycle.add(quantities.get(j).name());
-            error(quantities.get(j).at(), "circular definition: " + String.join(" -> ", cycle));
-            return;
+            if (in) {
+                cycle.add(quantities.get(k).name());
+            }
         }
-        state[j] = 1;
-        path.push(j);
-        for (int k : deps.get(j)) {
-            visit(k, deps, state, out, path);
-        }
-        path.pop();
-        state[j] = 2;
-        out.add(j);
+        cycle.add(quantities.get(j).name());
+        String text = cycle.size() <= 12 ? String.join(" -> ", cycle)
+                : String.join(" -> ", cycle.subList(0, 5)) + " -> ... (" + (cycle.size() - 10) + " more) -> "
+                        + String.join(" -> ", cycle.subList(cycle.size() - 5, cycle.size()));
+        error(quantities.get(j).at(), "circular definition: " + text);
     }
 
     private Node constant(SourcePosition at, String text, double v) {
@@ -275,6 +309,23 @@ public final class ModelCompiler {
     }
 
     private Node node(Expr e, Map<String, Node> params, Deque<String> calling, Set<Integer> deps) {
+        if (nextId > ModelLimits.MAX_NODES) {
+            error(e.at(), ModelLimits.tooManyNodes(ModelLimits.MAX_NODES));
+            throw new TooLarge();
+        }
+        if (nodeDepth >= ModelLimits.MAX_NODE_DEPTH) {
+            error(e.at(), ModelLimits.nodesTooDeep(ModelLimits.MAX_NODE_DEPTH));
+            throw new TooLarge();
+        }
+        nodeDepth++;
+        try {
+            return nodeNested(e, params, calling, deps);
+        } finally {
+            nodeDepth--;
+        }
+    }
+
+    private Node nodeNested(Expr e, Map<String, Node> params, Deque<String> calling, Set<Integer> deps) {
         String txt = ExprPrinter.print(e);
         if (e instanceof Expr.Num) {
             return constant(e.at(), txt, ((Expr.Num) e).value());

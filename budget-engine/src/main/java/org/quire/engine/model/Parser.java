@@ -17,12 +17,20 @@ import java.util.List;
  * </pre>
  *
  * Errors are collected with their line and column; after an error the parser resumes at the next line.
+ *
+ * <p>An expression may be nested at most {@link #MAX_DEPTH} levels deep (parentheses, unary signs, function
+ * arguments, and the terms of a sum or product each count one level), so that no later stage runs out of
+ * stack on a hostile or mistaken model; deeper expressions are an error at their line.
  */
 final class Parser {
+    /** The deepest expression accepted: levels of parentheses, signs and arguments, or terms in a chain. */
+    static final int MAX_DEPTH = 250;
+
     private final List<Token> tokens;
     private final List<ModelProblem> problems;
     private final String[] lines;
     private int i;
+    private int nesting;
 
     private Parser(String text, List<ModelProblem> problems) {
         this.problems = problems;
@@ -114,6 +122,9 @@ final class Parser {
             throw fail(peek(), "the right-hand side of '" + name.text() + " =' is empty");
         }
         Expr e = sum();
+        if (depth(e) > MAX_DEPTH) {
+            throw fail(name, ModelLimits.tooDeep(name.text(), MAX_DEPTH));
+        }
         int ln = name.at().line();
         String text = ln >= 1 && ln <= lines.length ? lines[ln - 1].replaceAll("#.*$", "").trim() : name.text();
         return new Equation(name.text(), List.copyOf(params), isFunction, e, name.at(), text);
@@ -156,6 +167,52 @@ final class Parser {
     }
 
     private Expr signed() {
+        if (nesting >= MAX_DEPTH) {
+            throw fail(peek(), ModelLimits.tooDeep(null, MAX_DEPTH));
+        }
+        nesting++;
+        try {
+            return signedNested();
+        } finally {
+            nesting--;
+        }
+    }
+
+    /**
+     * @return the depth of the tree, found without recursion (a sum of n terms is n deep)
+     */
+    static int depth(Expr root) {
+        java.util.ArrayDeque<Expr> stack = new java.util.ArrayDeque<>();
+        java.util.ArrayDeque<Integer> depths = new java.util.ArrayDeque<>();
+        stack.push(root);
+        depths.push(1);
+        int max = 0;
+        while (!stack.isEmpty()) {
+            Expr e = stack.pop();
+            int d = depths.pop();
+            max = Math.max(max, d);
+            if (d > MAX_DEPTH) {
+                return d;
+            }
+            if (e instanceof Expr.Unary u) {
+                stack.push(u.operand());
+                depths.push(d + 1);
+            } else if (e instanceof Expr.Binary b) {
+                stack.push(b.left());
+                depths.push(d + 1);
+                stack.push(b.right());
+                depths.push(d + 1);
+            } else if (e instanceof Expr.Call c) {
+                for (Expr a : c.args()) {
+                    stack.push(a);
+                    depths.push(d + 1);
+                }
+            }
+        }
+        return max;
+    }
+
+    private Expr signedNested() {
         if (peek().is(Token.Kind.MINUS)) {
             Token op = take();
             return new Expr.Unary(signed(), op.at());

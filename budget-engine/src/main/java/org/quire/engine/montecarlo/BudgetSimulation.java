@@ -27,10 +27,28 @@ public final class BudgetSimulation {
     }
 
     /** @return the Monte Carlo settings that a budget's evaluation settings ask for */
+    /** The smallest coverage probability the Monte Carlo method is run with (common practice). */
+    public static final double MIN_COVERAGE_PROBABILITY = 0.5;
+
+    /**
+     * @throws IllegalArgumentException when the coverage probability (stated, or following from a stated coverage
+     *     factor) is below {@link #MIN_COVERAGE_PROBABILITY}, or too close to 1 for the number of trials
+     */
     public static MonteCarloSettings settings(EvaluationSettings s, GumResult gum) {
         double p = s.coverageProbability();
         if (s.hasFixedCoverageFactor() && !gum.outputs().isEmpty()) {
             p = gum.outputs().get(0).coverageProbability();
+        }
+        String from = s.hasFixedCoverageFactor() ? " (from the coverage factor k = " + s.coverageFactor() + ")" : "";
+        if (!(p >= MIN_COVERAGE_PROBABILITY && p < 1)) {
+            throw new IllegalArgumentException("the Monte Carlo method needs a coverage probability of at least "
+                    + MIN_COVERAGE_PROBABILITY + " and below 1, not " + p + from + "; a coverage interval holds the "
+                    + "larger part of the output's distribution (common practice)");
+        }
+        if (s.trials() * (1 - p) < 1) {
+            throw new IllegalArgumentException("with " + s.trials() + " trials no coverage interval for p = " + p
+                    + from + " can be formed: its ends are order statistics and need at least " + (long) Math.ceil(1
+                    / (1 - p)) + " trials (JCGM 101:2008 7.7; 7.2.2 recommends at least 10^4 / (1 - p))");
         }
         MonteCarloSettings m = MonteCarloSettings.defaults().withSeed(s.seed()).withCoverageProbability(p)
                 .withSignificantDigits(s.significantDigits()).withAdaptive(s.adaptive());

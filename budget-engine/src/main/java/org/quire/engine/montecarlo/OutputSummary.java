@@ -64,7 +64,7 @@ public final class OutputSummary {
             }
         }
         if (m == 0) {
-            throw new IllegalStateException(Messages.noValidTrials(index, trials));
+            throw new MonteCarloProblem(Messages.noValidTrials(index, trials));
         }
         double[] a = values;
         int q = coverageCount(m, p);

@@ -50,6 +50,8 @@ public final class CompareWindow extends JDialog {
         super(owner, "Compare " + nameA + " with " + nameB, ModalityType.MODELESS);
         this.comparison = c;
         setName("compare");
+        setDefaultCloseOperation(DISPOSE_ON_CLOSE);
+        org.quire.app.ui.Windows.closeOnEscapeAndCtrlW(getRootPane(), this);
         JLabel head = new JLabel("<html><b>A</b> " + esc(nameA) + " \u2014 " + esc(c.titleA()) + "<br><b>B</b> "
                 + esc(nameB) + " \u2014 " + esc(c.titleB())
                 + (c.problemA().isEmpty() ? "" : "<br>A cannot be evaluated: " + esc(c.problemA()))

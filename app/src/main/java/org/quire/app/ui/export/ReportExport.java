@@ -5,7 +5,6 @@ import java.nio.charset.StandardCharsets;
 import java.nio.file.Path;
 import java.time.LocalDate;
 import java.util.Locale;
-import org.quire.app.report.AtomicFile;
 import org.quire.app.report.DocumentInfo;
 import org.quire.app.report.HtmlReport;
 import org.quire.app.report.PdfReport;
@@ -72,10 +71,10 @@ public final class ReportExport {
         }
         ReportModel m = ReportBuilder.build(in);
         if (f == Format.PDF) {
-            AtomicFile.write(target, out -> PdfReport.render(m, out));
+            org.quire.engine.document.DocumentStore.writeAtomically(target, out -> PdfReport.render(m, out));
         } else {
             byte[] html = HtmlReport.render(m).getBytes(StandardCharsets.UTF_8);
-            AtomicFile.write(target, out -> out.write(html));
+            org.quire.engine.document.DocumentStore.writeAtomically(target, out -> out.write(html));
         }
     }
 }

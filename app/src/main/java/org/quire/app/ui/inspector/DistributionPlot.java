@@ -98,7 +98,7 @@ final class DistributionPlot extends JComponent {
             g.drawLine(xm, top, xm, bottom);
         }
         g.setColor(Colors.get("Label.disabledForeground"));
-        String label = d.shape() + "   x = " + Fmt.num(mean) + "   u = " + Fmt.num(u);
+        String label = (org.quire.engine.budget.TypeB.DISTRIBUTIONS.contains(d.shape()) ? org.quire.engine.budget.TypeB.screenName(d.shape()) : d.shape()) + "   x = " + Fmt.num(mean) + "   u = " + Fmt.working(u);
         g.drawString(label, left, getHeight() - 5);
         g.dispose();
     }

@@ -139,8 +139,8 @@ final class TypeAForm extends JPanel {
         }
         grid.setReadings(a.readings());
         stats.setText("<html>n = " + a.count() + ", mean = " + Fmt.num(a.estimate()) + ", s = "
-                + Fmt.num(a.standardDeviation()) + "<br>u = s/\u221an = " + Fmt.num(a.standardUncertainty())
-                + ", \u03bd = " + Fmt.dof(a.dof()) + (a.isPooled() ? " (pooled s = " + Fmt.num(a.pooledStandardDeviation())
+                + Fmt.working(a.standardDeviation()) + "<br>u = s/\u221an = " + Fmt.working(a.standardUncertainty())
+                + ", \u03bd = " + Fmt.dof(a.dof()) + (a.isPooled() ? " (pooled s = " + Fmt.working(a.pooledStandardDeviation())
                 + ")" : "") + "</html>");
         mean.setText(Fmt.num(a.estimate()));
         s.setText(Fmt.num(a.standardDeviation()));

@@ -35,6 +35,7 @@ final class TypeBForm extends JPanel {
     TypeBForm(Runnable typed, Runnable confirm) {
         super(new GridBagLayout());
         distribution.setName("distribution");
+        distribution.setPrototypeDisplayValue("curvilinear-trapezoid");
         distribution.setRenderer(new DefaultListCellRenderer() {
             @Override
             public java.awt.Component getListCellRendererComponent(JList<?> list, Object value, int index,
@@ -57,10 +58,11 @@ final class TypeBForm extends JPanel {
             c.fill = GridBagConstraints.NONE;
             JLabel label = new JLabel(TypeB.parameterScreenName(key));
             add(label, c);
-            JTextField f = new JTextField(6);
+            JTextField f = new JTextField(5);
             f.setName("param:" + key);
             label.setLabelFor(f);
-            f.setToolTipText("Leave blank when not given");
+            f.setToolTipText(key.equals("coverageProbability") || key.equals("relativeUncertaintyOfU")
+                    ? "A fraction from 0 to 1; leave blank when not given" : "Leave blank when not given");
             f.addActionListener(x -> confirm.run());
             f.addFocusListener(new java.awt.event.FocusAdapter() {
                 @Override public void focusLost(java.awt.event.FocusEvent x) { confirm.run(); }

@@ -42,19 +42,60 @@ public final class MonteCarloSection implements Section {
     private MonteCarloOutcome shown;
     private Budget shownFor;
 
-    /** @param runner the runner, {@link MonteCarloRunner#engine} in the application */
-    public MonteCarloSection(MonteCarloRunner runner) {
+    private final org.quire.app.ui.common.EditorContext ctx;
+    private final javax.swing.JTextField trials = new javax.swing.JTextField(8);
+    private final javax.swing.JTextField seed = new javax.swing.JTextField(10);
+    private final javax.swing.JCheckBox adaptive = new javax.swing.JCheckBox("Adaptive (JCGM 101:2008 7.9)");
+    private boolean updating;
+
+    /**
+     * @param runner the runner, {@link MonteCarloRunner#engine} in the application
+     * @param ctx the editor, whose budget's Monte Carlo settings (trials, seed, adaptive) this section edits
+     */
+    public MonteCarloSection(MonteCarloRunner runner, org.quire.app.ui.common.EditorContext ctx) {
         this.runner = runner;
+        this.ctx = ctx;
         run.setName("mcRun");
         cancel.setName("mcCancel");
-        JPanel bar = new JPanel(new FlowLayout(FlowLayout.LEFT, 6, 0));
+        trials.setName("mcTrials");
+        seed.setName("mcSeed");
+        adaptive.setName("mcAdaptive");
+        JPanel settings = new JPanel(new org.quire.app.ui.common.WrapLayout(FlowLayout.LEFT, 6, 2));
+        javax.swing.JLabel tl = new javax.swing.JLabel("Trials");
+        tl.setLabelFor(trials);
+        javax.swing.JLabel sl = new javax.swing.JLabel("Seed");
+        sl.setLabelFor(seed);
+        settings.add(tl);
+        settings.add(trials);
+        settings.add(sl);
+        settings.add(seed);
+        settings.add(adaptive);
+        trials.setToolTipText("Number of Monte Carlo trials M of this budget (JCGM 101:2008 7.2); with Adaptive, the "
+                + "number of trials of each stage");
+        seed.setToolTipText("Seed of the random generator; the same seed repeats the same result");
+        adaptive.setToolTipText("Run until the results are stable to the budget's significant digits "
+                + "(JCGM 101:2008 7.9)");
+        for (javax.swing.JTextField f : new javax.swing.JTextField[] {trials, seed}) {
+            f.addActionListener(e -> commitSettings());
+            f.addFocusListener(new java.awt.event.FocusAdapter() {
+                @Override public void focusLost(java.awt.event.FocusEvent e) { commitSettings(); }
+            });
+        }
+        adaptive.addActionListener(e -> commitSettings());
+        JPanel bar = new JPanel(new org.quire.app.ui.common.WrapLayout(FlowLayout.LEFT, 6, 2));
         bar.add(run);
         bar.add(cancel);
         bar.add(progress);
         progress.setStringPainted(true);
         progress.setString("");
+        java.awt.FontMetrics fm = progress.getFontMetrics(progress.getFont());
+        progress.setPreferredSize(new java.awt.Dimension(fm.stringWidth(progressText(9_999_999, 9_999_999)) + 24,
+                progress.getPreferredSize().height));
         cancel.setEnabled(false);
-        body.add(bar, BorderLayout.NORTH);
+        JPanel top = new JPanel(new BorderLayout());
+        top.add(settings, BorderLayout.NORTH);
+        top.add(bar, BorderLayout.SOUTH);
+        body.add(top, BorderLayout.NORTH);
         outputs.setLayout(new BoxLayout(outputs, BoxLayout.Y_AXIS));
         body.add(outputs, BorderLayout.CENTER);
         body.add(state, BorderLayout.SOUTH);
@@ -75,14 +116,62 @@ public final class MonteCarloSection implements Section {
         return shown != null && b != null && b.equals(shownFor) ? shown : null;
     }
 
+    private static String progressText(long done, long of) {
+        return Fmt.count(done) + " of " + Fmt.count(of) + " trials";
+    }
+
+    /** Takes the trials, seed and adaptive mode typed into the budget's settings (one undoable edit). */
+    private void commitSettings() {
+        if (updating || ctx.readOnly() || budget == null) {
+            return;
+        }
+        org.quire.engine.budget.EvaluationSettings s = budget.settings();
+        org.quire.engine.budget.EvaluationSettings n;
+        try {
+            double m = Fmt.parse(trials.getText());
+            double sd = Fmt.parse(seed.getText());
+            if (m != Math.rint(m) || sd != Math.rint(sd) || Math.abs(sd) > 9.007e15 || m > 1e12) {
+                throw new IllegalArgumentException("trials and seed are whole numbers, not "
+                        + trials.getText().strip() + " and " + seed.getText().strip());
+            }
+            n = s.withTrials((long) m).withSeed((long) sd).withAdaptive(adaptive.isSelected());
+        } catch (IllegalArgumentException e) {
+            ctx.status("Monte Carlo settings: " + e.getMessage(), true);
+            return;
+        }
+        if (!n.equals(s)) {
+            ctx.edit("Change Monte Carlo settings", "mcSettings", b -> b.withSettings(n));
+        }
+    }
+
     @Override
     public void budgetChanged(Budget b) {
         budget = b;
+        updating = true;
+        try {
+            if (!trials.isFocusOwner()) {
+                trials.setText(Fmt.count(b.settings().trials()).replace(String.valueOf(
+                        org.quire.engine.gum.Figures.GROUP), ""));
+            }
+            if (!seed.isFocusOwner()) {
+                seed.setText(Long.toString(b.settings().seed()));
+            }
+            adaptive.setSelected(b.settings().adaptive());
+        } finally {
+            updating = false;
+        }
         if (shown != null && !b.equals(shownFor)) {
             state.setText("The budget has changed since this run; run again for results of the present budget.");
             state.setForeground(Colors.get("Quire.warning"));
         }
         updateButtons();
+    }
+
+    @Override
+    public void readOnlyChanged(boolean ro) {
+        trials.setEditable(!ro);
+        seed.setEditable(!ro);
+        adaptive.setEnabled(!ro);
     }
 
     @Override
@@ -108,11 +197,15 @@ public final class MonteCarloSection implements Section {
         GumResult gum = latest.result();
         progress.setValue(0);
         progress.setString("starting");
-        state.setText("Running " + b.settings().trials() + " trials with seed " + b.settings().seed() + " ...");
+        outputs.removeAll();
+        outputs.revalidate();
+        outputs.repaint();
+        shown = null;
+        state.setText("Running " + Fmt.count(b.settings().trials()) + " trials with seed " + b.settings().seed() + " ...");
         state.setForeground(Colors.get("Label.foreground"));
         worker = new MonteCarloWorker(runner, b, gum, p -> {
             progress.setValue((int) Math.min(1000, 1000 * p[0] / Math.max(1, p[1])));
-            progress.setString(p[0] + " / " + p[1] + " trials");
+            progress.setString(progressText(p[0], p[1]));
         });
         worker.addPropertyChangeListener(e -> {
             if ("state".equals(e.getPropertyName()) && e.getNewValue() == javax.swing.SwingWorker.StateValue.DONE) {
@@ -140,8 +233,8 @@ public final class MonteCarloSection implements Section {
             shownFor = w.budget();
             showOutcome(o, w.budget().settings().significantDigits());
             progress.setValue(1000);
-            progress.setString(o.trials() + " trials");
-            state.setText("Done: " + o.trials() + " trials, seed " + o.seed() + (o.adaptive() ? ", adaptive" : "")
+            progress.setString(Fmt.count(o.trials()) + " trials");
+            state.setText("Done: " + Fmt.count(o.trials()) + " trials, seed " + o.seed() + (o.adaptive() ? ", adaptive" : "")
                     + ". Run again with the same seed to repeat the result.");
             state.setForeground(Colors.get("Label.foreground"));
         } catch (CancellationException e) {
@@ -212,8 +305,8 @@ public final class MonteCarloSection implements Section {
     }
 
     private static void interval(StringBuilder s, String label, CoverageInterval i, String unit) {
-        s.append(label).append(' ').append(Fmt.probability(i.probability())).append(": [").append(Fmt.num(i.lower()))
-                .append(", ").append(Fmt.num(i.upper())).append("]").append(esc(unit)).append("<br>");
+        s.append(label).append(' ').append(Fmt.probability(i.probability())).append(": [").append(Fmt.working(i.lower()))
+                .append(", ").append(Fmt.working(i.upper())).append("]").append(esc(unit)).append("<br>");
     }
 
     private static String esc(String t) {

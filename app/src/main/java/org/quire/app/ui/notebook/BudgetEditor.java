@@ -78,7 +78,7 @@ public final class BudgetEditor extends JPanel implements EditorContext {
         inputs = new InputsSection(this);
         correlations = new CorrelationsSection(this);
         results = new ResultsSection(this);
-        monteCarlo = new MonteCarloSection(runner);
+        monteCarlo = new MonteCarloSection(runner, this);
         review = new ReviewPanel(this, java.time.Clock.systemUTC());
         page.setLayout(new BoxLayout(page, BoxLayout.Y_AXIS));
         JPanel outline = new JPanel(new org.quire.app.ui.common.WrapLayout(FlowLayout.LEFT, 2, 2));

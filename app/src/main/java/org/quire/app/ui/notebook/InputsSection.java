@@ -44,7 +44,16 @@ final class InputsSection implements Section {
                 }
                 return started;
             }
+
+            @Override
+            public String getToolTipText(java.awt.event.MouseEvent e) {
+                int r = rowAtPoint(e.getPoint());
+                int c = columnAtPoint(e.getPoint());
+                Object v = r < 0 || c < 0 ? null : getValueAt(r, c);
+                return v == null || v.toString().isEmpty() ? null : v.toString();
+            }
         };
+        table.setToolTipText("");
         table.setName("inputs");
         table.setSelectionMode(ListSelectionModel.SINGLE_INTERVAL_SELECTION);
         table.setCellSelectionEnabled(true);
@@ -144,7 +153,11 @@ final class InputsSection implements Section {
     public void budgetChanged(Budget b) {
         int r = table.getSelectedRow();
         String selected = r < 0 || r >= model.getRowCount() ? null : model.input(r).name();
+        boolean resize = model.getRowCount() != b.inputs().size() || model.getRowCount() == 0;
         model.budgetChanged(b);
+        if (resize) {
+            SpreadsheetTable.fitColumns(table, 240);
+        }
         if (selected != null && table.getSelectedRow() < 0) {
             select(selected);
         }

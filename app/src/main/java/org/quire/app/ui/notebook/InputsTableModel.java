@@ -94,7 +94,8 @@ final class InputsTableModel extends AbstractTableModel {
             case ESTIMATE: return Fmt.num(e.estimate());
             case TYPE: return "Type " + e.type();
             case DISTRIBUTION: return e instanceof TypeB ? ((TypeB) e).distributionName() : e.distribution().shape();
-            case U: return Fmt.num(e.standardUncertainty());
+            case U: return EvaluationEdits.uncertaintyEditable(e) ? Fmt.num(e.standardUncertainty())
+                    : Fmt.working(e.standardUncertainty());
             case DOF: return Fmt.dof(e.dof());
             default: return q.source();
         }

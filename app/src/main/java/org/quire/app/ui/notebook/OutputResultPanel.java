@@ -30,6 +30,7 @@ import org.quire.engine.gum.Rounding;
 final class OutputResultPanel extends JPanel {
     private final JLabel headline = new JLabel();
     private final JLabel figures = new JLabel();
+    private final JLabel figures2 = new JLabel();
     private final ContributionTableModel model = new ContributionTableModel(false);
     private final ContributionTableModel totalModel = new ContributionTableModel(true);
     private final JTable table = new JTable(model) {
@@ -91,9 +92,10 @@ final class OutputResultPanel extends JPanel {
         showIdle.addActionListener(e -> applyFilter());
         headline.setFont(headline.getFont().deriveFont(java.awt.Font.BOLD, headline.getFont().getSize2D() + 1));
         headline.setForeground(Colors.get("Quire.result.emphasis"));
-        JPanel top = new JPanel(new java.awt.GridLayout(2, 1));
+        JPanel top = new JPanel(new java.awt.GridLayout(3, 1));
         top.add(headline);
         top.add(figures);
+        top.add(figures2);
         top.setBorder(javax.swing.BorderFactory.createEmptyBorder(2, 0, 4, 0));
         add(top, BorderLayout.NORTH);
         JScrollPane sp = new JScrollPane(table);
@@ -103,6 +105,9 @@ final class OutputResultPanel extends JPanel {
         JScrollPane totalScroll = new JScrollPane(total, JScrollPane.VERTICAL_SCROLLBAR_NEVER,
                 JScrollPane.HORIZONTAL_SCROLLBAR_NEVER);
         totalScroll.getHorizontalScrollBar().setModel(sp.getHorizontalScrollBar().getModel());
+        totalScroll.setPreferredSize(new Dimension(100, total.getRowHeight() + 4));
+        totalScroll.setBorder(javax.swing.BorderFactory.createMatteBorder(0, 1, 1, 1,
+                Colors.get("Quire.section.rule")));
         tableAndTotal.add(totalScroll, BorderLayout.SOUTH);
         JPanel options = new JPanel(new FlowLayout(FlowLayout.LEFT, 6, 0));
         options.add(showIdle);
@@ -147,8 +152,8 @@ final class OutputResultPanel extends JPanel {
                 + Fmt.probability(o.coverageProbability()));
         set(figures, "y = " + Fmt.num(o.estimate()) + unit
                 + "     u_c(y) = " + Rounding.uncertainty(o.standardUncertainty(), digits).toPlainString() + unit
-                + "     \u03bd_eff = " + dofNote
-                + "     k = " + String.format(java.util.Locale.ROOT, "%.3f", o.coverageFactor())
+                + "     \u03bd_eff = " + dofNote);
+        set(figures2, "k = " + String.format(java.util.Locale.ROOT, "%.3f", o.coverageFactor())
                 + "     U = " + Rounding.uncertainty(o.expandedUncertainty(), digits).toPlainString() + unit
                 + "     U/|y| = " + (Double.isNaN(o.relativeExpandedUncertainty()) ? "n/a"
                         : Rounding.uncertainty(100 * o.relativeExpandedUncertainty(), digits).toPlainString() + " %"));
@@ -238,7 +243,7 @@ final class OutputResultPanel extends JPanel {
         }
     }
 
-    String summaryText() { return headline.getText() + "\n" + figures.getText(); }
+    String summaryText() { return headline.getText() + "\n" + figures.getText() + "\n" + figures2.getText(); }
 
     /** Sets a label's text only when it differs: layout of text is the costly part of an update. */
     private static void set(JLabel l, String text) {

@@ -45,7 +45,7 @@ final class ResultsSection implements Section {
         this.ctx = ctx;
         p.setName("coverageProbability");
         digits.setName("significantDigits");
-        JPanel settings = new JPanel(new FlowLayout(FlowLayout.LEFT, 6, 0));
+        JPanel settings = new JPanel(new org.quire.app.ui.common.WrapLayout(FlowLayout.LEFT, 6, 2));
         ButtonGroup g = new ButtonGroup();
         g.add(byP);
         g.add(byK);

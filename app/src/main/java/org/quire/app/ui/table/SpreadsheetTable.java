@@ -69,6 +69,40 @@ public final class SpreadsheetTable {
         }
     }
 
+    /**
+     * Sizes each column to its header and its widest cell, up to {@code maxWidth} (longer text keeps its
+     * tooltip), and lets the header show each column's full name as a tooltip.
+     */
+    public static void fitColumns(JTable t, int maxWidth) {
+        t.setAutoResizeMode(JTable.AUTO_RESIZE_OFF);
+        for (int c = 0; c < t.getColumnCount(); c++) {
+            javax.swing.table.TableColumn col = t.getColumnModel().getColumn(c);
+            Component h = t.getTableHeader().getDefaultRenderer().getTableCellRendererComponent(t,
+                    col.getHeaderValue(), false, false, -1, c);
+            int w = h.getPreferredSize().width;
+            for (int r = 0; r < Math.min(t.getRowCount(), 500); r++) {
+                w = Math.max(w, t.prepareRenderer(t.getCellRenderer(r, c), r, c).getPreferredSize().width);
+            }
+            col.setPreferredWidth(Math.min(maxWidth, w + 12));
+        }
+        if (!(t.getTableHeader() instanceof TippedHeader) && t.getTableHeader() != null) {
+            t.setTableHeader(new TippedHeader(t.getColumnModel()));
+        }
+    }
+
+    /** A header that shows each column's full name as its tooltip. */
+    private static final class TippedHeader extends javax.swing.table.JTableHeader {
+        TippedHeader(javax.swing.table.TableColumnModel m) {
+            super(m);
+        }
+
+        @Override
+        public String getToolTipText(java.awt.event.MouseEvent e) {
+            int c = columnAtPoint(e.getPoint());
+            return c < 0 ? null : plain(String.valueOf(getColumnModel().getColumn(c).getHeaderValue()));
+        }
+    }
+
     /** @return the selected block (or the whole table) as tab-separated text with headers, as displayed */
     public static String copyText(JTable t) {
         int[] rows = t.getSelectedRows();
