@@ -40,22 +40,23 @@ final class ExamplesCommand implements Callable<Integer> {
         }
         Path source = bundled();
         List<Path> files = new ArrayList<>();
-        try (Stream<Path> s = java.nio.file.Files.list(source)) {
+        try (Stream<Path> s = java.nio.file.Files.walk(source)) {
             s.filter(java.nio.file.Files::isRegularFile).sorted().forEach(files::add);
         }
         for (Path f : files) {
-            Path to = target.resolve(f.getFileName().toString());
+            Path to = target.resolve(source.relativize(f).toString());
             if (java.nio.file.Files.exists(to)) {
                 throw new UsageException(to + " exists already; nothing was copied (choose an empty folder)");
             }
         }
-        java.nio.file.Files.createDirectories(target);
         for (Path f : files) {
             byte[] bytes;
             try (InputStream in = java.nio.file.Files.newInputStream(f)) {
                 bytes = in.readAllBytes();
             }
-            org.quire.engine.document.DocumentStore.writeAtomically(target.resolve(f.getFileName().toString()), o -> o.write(bytes));
+            Path to = target.resolve(source.relativize(f).toString());
+            java.nio.file.Files.createDirectories(to.getParent());
+            org.quire.engine.document.DocumentStore.writeAtomically(to, o -> o.write(bytes));
         }
         quire.out.println("copied " + files.size() + " worked examples to " + target);
         return CommandLine.OK;

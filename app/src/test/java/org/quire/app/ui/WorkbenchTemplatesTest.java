@@ -93,10 +93,14 @@ class WorkbenchTemplatesTest extends GuiTestSupport {
     }
 
     @Test
-    void aShippedPlainBudgetIsCopiedAsANewDraftWithoutOrigin() throws Exception {
+    void aPlainBudgetInTheLibraryIsCopiedAsANewDraftWithoutOrigin() throws Exception {
+        // every shipped file is a template now; a plain budget in a library folder is still offered
+        Path plain = personal.resolve("plain-tank.json");
+        DocumentStore.save(BudgetDocument.newDraft(base.budget(), "Template Keeper",
+                Instant.parse("2026-01-15T09:00:00Z")), plain);
         NewFromTemplateDialog dlg = openDialog();
         onEdt(() -> {
-            dlg.select(TemplateCatalog.shippedFolder().resolve(SHIPPED));
+            dlg.select(plain);
             ((JButton) named(dlg.getContentPane(), "create")).doClick();
             return null;
         });
