@@ -23,8 +23,8 @@ import org.quire.engine.montecarlo.MonteCarloSettings;
 /**
  * JCGM 100:2008 H.3: the intercept y1 and slope y2 of the thermometer's calibration line as inputs of the budget
  * of the correction b(30 °C) = y1 + y2 (30 - 20), with r(y1, y2) taken from the fit, in the GUM evaluation and in
- * the Monte Carlo method (JCGM 101:2008 6.4.8, bivariate normal pair). Values from memory, recomputed (shared
- * check-values list).
+ * the Monte Carlo method (JCGM 101:2008 6.4.8, bivariate normal pair). Values from memory, recomputed
+ * independently from the published observations.
  */
 class Jcgm100H3FitParameterInputsTest {
     private static final double[] T = {21.521, 22.012, 22.512, 23.003, 23.507, 23.999, 24.513, 25.002, 25.503,

@@ -115,7 +115,7 @@ class TemperaturePointAndDifferenceTest {
         CompiledModel m = compile("y = air_density(p, t, h)", List.of("p", "t", "h"),
                 ModelUnits.none().withInput("p", "Pa").withInput("t", "°C").withInput("h", "%"));
         // CIPM-2007 (Picard et al. 2008), recomputed from the published constants: 1.199314 kg/m^3 at
-        // 101325 Pa, 20 °C, 50 % RH (check-values: recomputed)
+        // 101325 Pa, 20 °C, 50 % RH (CIPM-2007, Picard et al. 2008, Metrologia 45, 149: recomputed from the published constants)
         assertEquals(1.199314, m.evaluate(new double[] {101325, 20, 50})[0], 5e-7);
     }
 
