@@ -441,7 +441,7 @@ final class CalibrationCommand implements Callable<Integer> {
         if (ser.conformity() != null) {
             s.append(f("  conformity (%s, %s):%n", ser.conformity().limitsName(), ser.conformity().rule().kind().title()));
             s.append(f("  %-8s %12s %10s %10s %10s %8s %-6s %s%n", "point", "flow", "error %", "U %", "MPE %", "p_c",
-                    "U<=MPE/" + EvaluateCommand.num(ser.conformity().points().get(0).uncertaintyRatio()), "decision"));
+                    "U<=MPE/" + org.quire.engine.gum.Figures.compact(ser.conformity().points().get(0).uncertaintyRatio(), 4), "decision"));
             for (PointConformity pc : ser.conformity().points()) {
                 s.append(f("  %-8s %12s %10.4f %10.4f %10.4f %8.4f %-6s %s%n", pc.label(), g(pc.decision().point().flow()),
                         pc.decision().point().errorPercent(), pc.decision().expandedUncertainty(), pc.mpe(),

@@ -90,7 +90,32 @@ public final class CalibrationJson {
         }
         Path dir = calibrationFile.toAbsolutePath().getParent();
         Path p = dir == null ? Path.of(loaded.methodFile()) : dir.resolve(loaded.methodFile());
+        if (!java.nio.file.Files.exists(p)) {
+            Path shipped = shippedMethod(loaded.calibration().method());
+            if (shipped != null) {
+                return openMethod(shipped, "$.method.file");
+            }
+        }
         return openMethod(p, "$.method.file");
+    }
+
+    /**
+     * @param method the method a calibration names
+     * @return the shipped template of that id and version (read from the installation, wherever the program
+     *     runs), or null when none ships; its content hash is checked by the evaluation like any other file's
+     */
+    private static Path shippedMethod(org.quire.engine.document.TemplateOrigin method) {
+        try {
+            for (org.quire.engine.document.TemplateLibrary.Entry e
+                    : org.quire.engine.document.TemplateLibrary.withShipped(null, null).list().templates()) {
+                if (e.template().id().equals(method.id()) && e.template().version() == method.version()) {
+                    return e.file();
+                }
+            }
+        } catch (IOException e) {
+            return null;
+        }
+        return null;
     }
 
     /**
