@@ -50,7 +50,7 @@ public final class CommandLine {
 
     /** Runs one command; {@code quire open} hands over to {@code launcher}. @return the exit status */
     public static int run(String[] args, PrintStream out, PrintStream err, WorkbenchLauncher launcher) {
-        picocli.CommandLine cmd = parser(out, err, launcher);
+        picocli.CommandLine cmd = parser(out, err, launcher, args.length > 0 ? args[0] : null);
         int status;
         try {
             status = cmd.execute(args);
@@ -70,8 +70,31 @@ public final class CommandLine {
 
     /** @return the parser of the whole command line, for help, man pages and shell completion */
     static picocli.CommandLine parser(PrintStream out, PrintStream err, WorkbenchLauncher launcher) {
+        return parser(out, err, launcher, null);
+    }
+
+    /**
+     * @param only the name of the one subcommand to register, or null for all; a name that is not an ordinary
+     *     subcommand (help, completion, an option, a file, a misspelling) registers all, so that help and
+     *     suggestions see the whole tree
+     */
+    private static picocli.CommandLine parser(PrintStream out, PrintStream err, WorkbenchLauncher launcher,
+            String only) {
         QuireCommand root = new QuireCommand(out, err, launcher);
         picocli.CommandLine cmd = new picocli.CommandLine(root);
+        Class<?> single = null;
+        if (only != null && !only.equals("help") && !only.equals("completion")) {
+            for (Class<?> c : QuireCommand.SUBCOMMANDS) {
+                if (c.getAnnotation(picocli.CommandLine.Command.class).name().equals(only)) {
+                    single = c;
+                }
+            }
+        }
+        for (Class<?> c : QuireCommand.SUBCOMMANDS) {
+            if (single == null || c == single) {
+                cmd.addSubcommand(c);
+            }
+        }
         cmd.setOut(new PrintWriter(out, true));
         cmd.setErr(new PrintWriter(err, true));
         cmd.setCaseInsensitiveEnumValuesAllowed(true);
