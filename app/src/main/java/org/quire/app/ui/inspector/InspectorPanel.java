@@ -58,7 +58,7 @@ public final class InspectorPanel extends JPanel {
                     + b.correlations().size() + " correlations<br>"
                     + (s.hasFixedCoverageFactor() ? "k = " + Fmt.num(s.coverageFactor())
                             : "p = " + Fmt.probability(s.coverageProbability()))
-                    + ", " + s.significantDigits() + " significant digits<br>Monte Carlo: " + s.trials()
+                    + ", " + s.significantDigits() + " significant digits<br>Monte Carlo: " + Fmt.count(s.trials())
                     + " trials, seed " + s.seed()
                     + "<br><br>Select an input in the Inputs table to see and change all of its options here.</html>");
             if (!text.equals(overview.getText())) {
