@@ -38,7 +38,8 @@ import org.quire.engine.io.ResultJson;
  *     {@code quire evaluate --format json}) and optionally {@code monteCarlo} (an object).</li>
  * <li>{@code history}: a list of {@code revision}, {@code status}, {@code by}, {@code at}, {@code comment}, and
  *     for an approval {@code contentHash} and {@code content} (the approved canonical content).</li>
- * <li>{@code templateOrigin}: {@code id}, {@code version}, {@code contentHash} of the template used.</li>
+ * <li>{@code templateOrigin}: {@code id}, {@code version}, {@code contentHash} of the template used, and
+ *     optionally {@code locked}, the template's locked fields as recorded when the document was made.</li>
  * <li>{@code template}: present when the file is a template: {@code id}, {@code version}, {@code description},
  *     {@code parameters} (each {@code name}, {@code description}, {@code unit}, {@code input}, {@code field},
  *     {@code default}, {@code minimum}, {@code maximum}), {@code locked} (list of field names) and
@@ -60,7 +61,7 @@ public final class DocumentJson {
     private static final Set<String> RESULT_FIELDS = Set.of("engineVersion", "computed", "gum", "monteCarlo");
     private static final Set<String> HISTORY_FIELDS = Set.of("revision", "status", "by", "at", "comment",
             "contentHash", "content");
-    private static final Set<String> ORIGIN_FIELDS = Set.of("id", "version", "contentHash");
+    private static final Set<String> ORIGIN_FIELDS = Set.of("id", "version", "contentHash", "locked");
     private static final Set<String> TEMPLATE_FIELDS = Set.of("id", "version", "description", "parameters",
             "locked", "guidance");
     private static final Set<String> PARAMETER_FIELDS = Set.of("name", "description", "unit", "input", "field",
@@ -232,9 +233,15 @@ public final class DocumentJson {
 
     private static TemplateOrigin readOrigin(JsonCursor o) throws BudgetFormatException {
         o.onlyFields(ORIGIN_FIELDS);
+        List<String> locked = new ArrayList<>();
+        if (o.has("locked")) {
+            for (JsonCursor l : o.get("locked").elements()) {
+                locked.add(l.string());
+            }
+        }
         try {
             return new TemplateOrigin(o.get("id").string(), positiveInt(o.get("version")),
-                    o.get("contentHash").string());
+                    o.get("contentHash").string(), locked);
         } catch (IllegalArgumentException e) {
             throw o.error(e.getMessage());
         }
@@ -305,8 +312,14 @@ public final class DocumentJson {
                 .add("status", d.status().label()));
         if (d.templateOrigin() != null) {
             TemplateOrigin t = d.templateOrigin();
-            o.add("templateOrigin", JSON.createObjectBuilder().add("id", t.id()).add("version", t.version())
-                    .add("contentHash", t.contentHash()));
+            JsonObjectBuilder ob = JSON.createObjectBuilder().add("id", t.id()).add("version", t.version())
+                    .add("contentHash", t.contentHash());
+            if (!t.locked().isEmpty()) {
+                JsonArrayBuilder l = JSON.createArrayBuilder();
+                t.locked().forEach(l::add);
+                ob.add("locked", l);
+            }
+            o.add("templateOrigin", ob);
         }
         if (d.template() != null) {
             o.add("template", templateJson(d.template()));

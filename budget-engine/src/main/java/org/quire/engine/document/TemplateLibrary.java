@@ -153,10 +153,29 @@ public final class TemplateLibrary {
         return Optional.ofNullable(best);
     }
 
+    /**
+     * @return the template {@code id} of exactly {@code version}; of several such files, the first in folder
+     *     order
+     */
+    public Optional<Entry> find(String id, int version) throws IOException {
+        for (Entry e : list().templates()) {
+            if (e.template().id().equals(id) && e.template().version() == version) {
+                return Optional.of(e);
+            }
+        }
+        return Optional.empty();
+    }
+
     /** @return a new draft from {@code template}; see {@link Template#instantiate} */
     public static BudgetDocument newFromTemplate(Template template, Map<String, Double> parameterValues,
             String author, Instant now) {
         return template.instantiate(parameterValues, author, now);
+    }
+
+    /** @return a new draft from {@code template}; see {@link Template#instantiate(TemplateValues, String, Instant)} */
+    public static BudgetDocument newFromTemplate(Template template, TemplateValues values, String author,
+            Instant now) {
+        return template.instantiate(values, author, now);
     }
 
     // ----- comparing with a newer template --------------------------------------------------------------------
@@ -335,6 +354,7 @@ public final class TemplateLibrary {
             p.add("the document has no template section (id, version, parameters)");
         } else {
             p.addAll(doc.template().problems(doc.budget()));
+            p.addAll(doc.template().carriedValues(doc.budget()));
         }
         if (doc.title().isBlank()) {
             p.add("the template has no title");

@@ -9,8 +9,11 @@ import java.util.regex.Pattern;
  * @param id the template's identifier
  * @param version its version, at least 1
  * @param contentHash 64 lowercase hex digits
+ * @param locked the fields the template locks ({@link TemplateSpec#locked()}) as recorded when the document was
+ *     made, so that an editor can show them read-only; empty in files written before this was recorded. The
+ *     check of a budget against its template ({@link TemplateConformance}) uses the template's own locks.
  */
-public record TemplateOrigin(String id, int version, String contentHash) {
+public record TemplateOrigin(String id, int version, String contentHash, java.util.List<String> locked) {
     private static final Pattern HEX64 = Pattern.compile("[0-9a-f]{64}");
 
     /** Checks the fields. */
@@ -23,5 +26,22 @@ public record TemplateOrigin(String id, int version, String contentHash) {
             throw new IllegalArgumentException("template contentHash must be 64 lowercase hex digits, not '"
                     + contentHash + "'");
         }
+        locked = locked == null ? java.util.List.of() : java.util.List.copyOf(locked);
+    }
+
+    /** An origin that records no locked fields. */
+    public TemplateOrigin(String id, int version, String contentHash) {
+        this(id, version, contentHash, java.util.List.of());
+    }
+
+    /**
+     * @param input an input name
+     * @param field one of {@link TemplateSpec#INPUT_FIELDS}
+     * @return whether the recorded locks cover that field of that input (by the rule of
+     *     {@link TemplateSpec#isLocked})
+     */
+    public boolean isLocked(String input, String field) {
+        return locked.contains(input) || locked.contains(input + "." + field)
+                || (field.equals("estimate") && locked.contains(input + ".evaluation"));
     }
 }
