@@ -41,7 +41,21 @@ public record TemplateOrigin(String id, int version, String contentHash, java.ut
      *     {@link TemplateSpec#isLocked})
      */
     public boolean isLocked(String input, String field) {
-        return locked.contains(input) || locked.contains(input + "." + field)
-                || (field.equals("estimate") && locked.contains(input + ".evaluation"));
+        return TemplateSpec.isLocked(locked, input, field);
+    }
+
+    /** @return whether {@code o} names the same template: id, version and content hash (the recorded locks aside) */
+    public boolean sameTemplate(TemplateOrigin o) {
+        return o != null && id.equals(o.id) && version == o.version && contentHash.equals(o.contentHash);
+    }
+
+    /** @return whether any field of the input is locked (then its name is too: renaming would remove it) */
+    public boolean locksAnyOf(String input) {
+        return locked.contains(input) || locked.stream().anyMatch(l -> l.startsWith(input + "."));
+    }
+
+    /** @return the reason shown beside a locked field, e.g. "locked by template tvfl-gravimetric-emf-point v1" */
+    public String lockReason() {
+        return "locked by template " + id + " v" + version;
     }
 }

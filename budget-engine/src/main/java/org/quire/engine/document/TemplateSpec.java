@@ -114,6 +114,19 @@ public final class TemplateSpec {
 
     /** @return whether the field ({@code model}, {@code INPUT} or {@code INPUT.FIELD}) is locked */
     public boolean isLocked(String input, String field) {
+        return isLocked(locked, input, field);
+    }
+
+    /**
+     * The one rule of what a list of locked fields covers: the whole input, the field itself, or, for the
+     * estimate, the evaluation it belongs to.
+     *
+     * @param locked locked fields as in {@link #locked()}
+     * @param input an input name
+     * @param field one of {@link #INPUT_FIELDS}
+     * @return whether {@code locked} covers that field of that input
+     */
+    public static boolean isLocked(List<String> locked, String input, String field) {
         return locked.contains(input) || locked.contains(input + "." + field)
                 || (field.equals("estimate") && locked.contains(input + ".evaluation"));
     }
