@@ -375,8 +375,8 @@ final class InputInspector extends JPanel {
             type.setToolTipText(evLocked ? origin.lockReason() : null);
             typeA.setEditable(!ro && !evLocked);
             typeB.setEditable(!ro && !evLocked);
-            lock.setText(lockedHere.isEmpty() ? "" : capital(origin.lockReason()) + ": "
-                    + String.join(", ", lockedHere) + " (a value of the method; read-only)");
+            lock.setText(lockedHere.isEmpty() ? "" : "<html>" + capital(origin.lockReason()) + ":<br>"
+                    + String.join(", ", lockedHere) + " read-only (values of the method)</html>");
             lock.setToolTipText(lockedHere.isEmpty() ? null : origin.lockReason());
             lock.setVisible(!lockedHere.isEmpty());
         } finally {
