@@ -193,6 +193,50 @@ class WorkbenchTemplatesTest extends GuiTestSupport {
         assertNotNull(onEdt(() -> ed.resultSummary("E")), "its result is shown");
     }
 
+    /**
+     * The dialog takes the same path as {@code quire template new}: the shipped gravimetric template refuses a
+     * budget without the meter's readings, and takes them typed in (separated by ';' or spaces), with the
+     * laboratory and device of the new budget.
+     */
+    @Test
+    void theDialogAsksForTheMetersReadingsAndTheLaboratoryAndCarriesNoneOfTheExample() throws Exception {
+        NewFromTemplateDialog dlg = openDialog();
+        java.util.Map<String, String> values = new java.util.LinkedHashMap<>();
+        values.put("I_net", "398.75");
+        values.put("t_tank", "19.8");
+        values.put("t_meter", "19.9");
+        values.put("p_meter", "260000");
+        values.put("t_c", "28.8");
+        values.put("p_a", "100900");
+        values.put("t_a", "21.0");
+        values.put("h_a", "0.5");
+        values.put("U_bal", "0.04");
+        values.put("k_pulse", "10");
+        values.put("d_conv", "0.0002");
+        onEdt(() -> {
+            dlg.select(TemplateCatalog.shippedFolder().resolve("gravimetric-emf-flow-point.json"));
+            values.forEach((k, v) -> ((JTextField) named(dlg.getContentPane(), "param:" + k)).setText(v));
+            ((JButton) named(dlg.getContentPane(), "create")).doClick();
+            return null;
+        });
+        String refusal = onEdt(() -> ((JLabel) named(dlg.getContentPane(), "error")).getText());
+        assertTrue(refusal.contains("parameter 'N_ind' (the readings of input 'N_ind') must be given"), refusal);
+        onEdt(() -> {
+            ((JTextField) named(dlg.getContentPane(), "param:N_ind")).setText("4003.1; 4001.8 4002.6;4000.9  4003.4");
+            ((JTextField) named(dlg.getContentPane(), "laboratory")).setText("Tarrow Vale Flow Laboratory");
+            ((JTextField) named(dlg.getContentPane(), "device")).setText("TV-EM-100-09");
+            ((JButton) named(dlg.getContentPane(), "create")).doClick();
+            return null;
+        });
+        waitFor("the new budget", () -> frame.editors().size() == 1);
+        BudgetDocument made = frame.editors().get(0).document().content();
+        org.junit.jupiter.api.Assertions.assertArrayEquals(new double[] {4003.1, 4001.8, 4002.6, 4000.9, 4003.4},
+                ((org.quire.engine.budget.TypeA) made.budget().input("N_ind").evaluation()).readings());
+        assertEquals("Tarrow Vale Flow Laboratory", made.laboratory());
+        assertEquals("TV-EM-100-09", made.deviceUnderTest());
+        assertEquals("tvfl-gravimetric-emf-point", made.templateOrigin().id());
+    }
+
     @Test
     void aPlainBudgetInTheLibraryIsCopiedAsANewDraftWithoutOrigin() throws Exception {
         // every shipped file is a template now; a plain budget in a library folder is still offered
