@@ -182,13 +182,15 @@ public final class TemplateLibrary {
 
     /**
      * The newer template's budget with the document's own parameter values: a parameter whose input the
-     * document has takes the document's value; otherwise the default, or the template's own value.
+     * document has takes the document's value (its readings, for a readings parameter); otherwise the default,
+     * or the template's own value.
      */
     private static Budget reference(BudgetDocument doc, Template newer) {
         Budget b = newer.document().budget();
         for (TemplateParameter p : newer.spec().parameters()) {
             try {
-                b = p.applyTo(b, p.valueIn(doc.budget()));
+                b = p.isReadings() ? p.applyReadings(b, p.readingsIn(doc.budget()))
+                        : p.applyTo(b, p.valueIn(doc.budget()));
             } catch (IllegalArgumentException e) {
                 if (p.hasDefault()) {
                     b = p.applyTo(b, p.defaultValue());

@@ -85,6 +85,22 @@ class TemplateValuesAndLocksTest {
     }
 
     @Test
+    void theUsersReadingsAreNoChangeWhenANewerTemplateVersionIsCompared() throws Exception {
+        Template v1 = counter(COUNTER);
+        Template v2 = counter(COUNTER.replace("\"version\": 1", "\"version\": 2")
+                .replace("\"source\": \"method\"", "\"source\": \"method, revised\""));
+        BudgetDocument d = v1.instantiate(TemplateValues.of(Map.of("M", 501.0, "M_s", 0.3, "M_n", 5.0,
+                "N_ref", 999.0)).withReadings("N", new double[] {998.0, 1000.0}), "Ash Penrose", Fixtures.T0);
+        List<TemplateChange> changes = TemplateLibrary.compare(d, v2);
+        assertEquals(1, changes.size(), changes.toString());
+        assertEquals(TemplateChange.Kind.SOURCE_CHANGED, changes.get(0).kind());
+        assertEquals("M_ref", changes.get(0).subject());
+        BudgetDocument adopted = TemplateLibrary.adopt(d, v2, changes, "Ash Penrose", Fixtures.T0);
+        assertArrayEquals(new double[] {998.0, 1000.0}, ((TypeA) adopted.budget().input("N").evaluation()).readings());
+        assertEquals(2, adopted.templateOrigin().version());
+    }
+
+    @Test
     void aTemplateThatLeavesAnInputNeitherAParameterNorLockedIsRefused() throws Exception {
         Template noLock = counter(COUNTER.replace("\"M_ref\"]", "\"outputs\"]"));
         IllegalArgumentException e = assertThrows(IllegalArgumentException.class, () -> noLock.budgetFor(
