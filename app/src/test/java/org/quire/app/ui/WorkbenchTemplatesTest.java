@@ -121,6 +121,12 @@ class WorkbenchTemplatesTest extends GuiTestSupport {
             assertTrue(!model.isEditable(), "the template locks the model");
             assertEquals("The model is " + reason + " (the method's model): read-only.",
                     ((JLabel) named(ed, "modelHint")).getText());
+            JTable outputs = named(ed, "outputs");
+            assertTrue(!outputs.isCellEditable(0, 0), "the template locks the outputs");
+            JTable correlations = named(ed, "correlations");
+            if (correlations.getRowCount() > 1) {
+                assertTrue(!correlations.isCellEditable(0, 2), "the template locks the correlations");
+            }
             return null;
         });
         onEdt(() -> { ed.selectInput("t_tank"); return null; });

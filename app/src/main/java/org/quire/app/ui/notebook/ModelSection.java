@@ -161,6 +161,6 @@ final class ModelSection implements Section {
         boolean locked = o != null && o.locked().contains("model");
         editor.setEditable(!ro && !locked);
         hint.setText(locked ? "The model is " + o.lockReason() + " (the method's model): read-only." : HINT);
-        outputs.readOnlyChanged(ro);
+        outputs.readOnlyChanged(ro || o != null && o.locked().contains("outputs"));
     }
 }
