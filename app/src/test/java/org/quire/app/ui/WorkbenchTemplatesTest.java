@@ -227,6 +227,16 @@ class WorkbenchTemplatesTest extends GuiTestSupport {
         });
         String refusal = onEdt(() -> ((JLabel) named(dlg.getContentPane(), "error")).getText());
         assertTrue(refusal.contains("parameter 'N_ind' (the readings of input 'N_ind') must be given"), refusal);
+        String out = System.getProperty("quire.screenshots");
+        if (out != null) {
+            java.awt.image.BufferedImage img = onEdt(() -> {
+                java.awt.image.BufferedImage i = new java.awt.image.BufferedImage(dlg.getWidth(), dlg.getHeight(),
+                        java.awt.image.BufferedImage.TYPE_INT_RGB);
+                dlg.paint(i.getGraphics());
+                return i;
+            });
+            javax.imageio.ImageIO.write(img, "png", Path.of(out, "new-from-template.png").toFile());
+        }
         onEdt(() -> {
             ((JTextField) named(dlg.getContentPane(), "param:N_ind")).setText("4003.1; 4001.8 4002.6;4000.9  4003.4");
             ((JTextField) named(dlg.getContentPane(), "laboratory")).setText("Tarrow Vale Flow Laboratory");
