@@ -61,17 +61,13 @@ class ScreenshotsTest extends GuiTestSupport {
                 return null;
             });
             waitForCurrentResult(ed);
-            onEdt(() -> frame.saveTo(ed, file));
+            org.junit.jupiter.api.Assertions.assertTrue(await(onEdt(() -> frame.saveTo(ed, file))));
             onEdt(() -> { frame.compareWith(ed, earlier); return null; });
             org.quire.app.ui.compare.CompareWindow w = waitForWindow("compare", org.quire.app.ui.compare.CompareWindow.class);
             Thread.sleep(300);
             shot(w.getRootPane(), "08-compare");
             onEdt(() -> { w.dispose(); frame.forceClose(ed); return null; });
-            BudgetEditor rev = onEdt(() -> {
-                BudgetEditor e = frame.open(file).orElseThrow();
-                e.document().setReadOnly(true);
-                return e;
-            });
+            BudgetEditor rev = await(onEdt(() -> frame.open(file, true))).orElseThrow();
             waitForCurrentResult(rev);
             onEdt(() -> {
                 javax.swing.JTable t = named(rev, "checklist");

@@ -29,13 +29,9 @@ class WorkbenchReviewTest extends GuiTestSupport {
     /** Saves the demo budget to a file and opens that file for review. */
     private BudgetEditor openForReview(Path file) throws Exception {
         BudgetEditor demo = openDemo();
-        assertTrue(onEdt(() -> frame.saveTo(demo, file)));
+        assertTrue(await(onEdt(() -> frame.saveTo(demo, file))));
         onEdt(() -> { frame.forceClose(demo); return null; });
-        BudgetEditor ed = onEdt(() -> {
-            BudgetEditor e = frame.open(file).orElseThrow();
-            e.document().setReadOnly(true);
-            return e;
-        });
+        BudgetEditor ed = await(onEdt(() -> frame.open(file, true))).orElseThrow();
         waitForCurrentResult(ed);
         JTable checklist = onEdt(() -> named(ed, "checklist"));
         waitFor("the automatic checklist", () -> checklist.getRowCount() > 0);

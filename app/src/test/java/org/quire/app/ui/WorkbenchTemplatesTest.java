@@ -125,13 +125,13 @@ class WorkbenchTemplatesTest extends GuiTestSupport {
         waitFor("the new budget", () -> frame.editors().size() == 1);
         BudgetEditor first = frame.editors().get(0);
         Path file = personal.resolve("tank-run.json");
-        assertTrue(onEdt(() -> frame.saveTo(first, file)));
+        assertTrue(await(onEdt(() -> frame.saveTo(first, file))));
         onEdt(() -> { frame.forceClose(first); return null; });
         Budget v2 = base.budget().withInput("h_neck", base.budget().input("h_neck")
                 .withSource("TVFL neck scale, recalibrated 2026"));
         DocumentStore.save(template(2, v2), personal.resolve("tvfl-tank-v2.json"));
 
-        BudgetEditor ed = onEdt(() -> frame.open(file).orElseThrow());
+        BudgetEditor ed = await(onEdt(() -> frame.open(file))).orElseThrow();
         waitFor("the notice of template version 2", ed::noticeShown);
         EventQueue.invokeLater(() -> ed.noticeAction().doClick());
         TemplateUpdateDialog upd = waitForWindow("templateUpdate", TemplateUpdateDialog.class);

@@ -72,6 +72,8 @@ public final class ReviewPanel implements Section {
     private final JButton record = new JButton("Record decision");
     private final JLabel outcome = new JLabel(" ");
     private Review base;
+    /** The document whose checklist is being worked out off the event thread, or null. */
+    private BudgetDocument pending;
     private Review decided;
 
     public ReviewPanel(EditorContext ctx, Clock clock) {
@@ -188,25 +190,61 @@ public final class ReviewPanel implements Section {
         }
         if (r.result() == null) {
             base = null;
+            pending = null;
             items.set(List.of());
             head.setText("The budget cannot be evaluated (see the problems list); the checklist needs its GUM result.");
             setOpen(false);
             return;
         }
         BudgetDocument d = ctx.document().content();
-        if (base != null && base.contentHash().equals(d.contentHash())) {
-            return;
-        }
-        base = Review.start(r.budget(), r.result(), ReviewContext.none().withUnits(new org.quire.app.review.EngineUnitChecker()),
-                DocumentDecisionRecorder.hasherOf(d));
-        items.set(base.items());
-        head.setText("<html>Checklist of revision " + d.revision() + " (" + d.status().label() + "), content SHA-256 "
-                + d.contentHash().substring(0, 16) + "\u2026. Items <i>not met</i> or <i>to confirm</i> need your mark "
-                + "before the budget can be endorsed.</html>");
-        setOpen(true);
-        if (checklist.getRowCount() > 0 && checklist.getSelectedRow() < 0) {
-            checklist.setRowSelectionInterval(0, 0);
-        }
+        Review prior = base;
+        pending = d;
+        // the content hash of a large budget (200 000 readings) takes seconds: worked out off the event thread
+        new javax.swing.SwingWorker<Review, Void>() {
+            @Override
+            protected Review doInBackground() {
+                if (prior != null && prior.contentHash().equals(d.contentHash())) {
+                    return prior;
+                }
+                return Review.start(r.budget(), r.result(), ReviewContext.none().withUnits(
+                        new org.quire.app.review.EngineUnitChecker()), DocumentDecisionRecorder.hasherOf(d));
+            }
+
+            @Override
+            protected void done() {
+                if (pending != d || decided != null) {
+                    return;
+                }
+                pending = null;
+                Review started;
+                try {
+                    started = get();
+                } catch (InterruptedException e) {
+                    Thread.currentThread().interrupt();
+                    return;
+                } catch (java.util.concurrent.ExecutionException e) {
+                    head.setText("The checklist cannot be drawn up: " + e.getCause().getMessage());
+                    return;
+                }
+                if (started == prior) {
+                    return;
+                }
+                base = started;
+                items.set(base.items());
+                head.setText("<html>Checklist of revision " + d.revision() + " (" + d.status().label()
+                        + "), content SHA-256 " + d.contentHash().substring(0, 16) + "\u2026. Items <i>not met</i> or "
+                        + "<i>to confirm</i> need your mark before the budget can be endorsed.</html>");
+                setOpen(true);
+                if (checklist.getRowCount() > 0 && checklist.getSelectedRow() < 0) {
+                    checklist.setRowSelectionInterval(0, 0);
+                }
+            }
+        }.execute();
+    }
+
+    /** @return whether the checklist is drawn up for the latest result (none is being worked out) */
+    public boolean isCurrent() {
+        return pending == null;
     }
 
     private void setOpen(boolean on) {
