@@ -176,10 +176,18 @@ public final class WorkbenchFrame extends JFrame {
         tabs.addTab(doc.name(), ed);
         ed.addRecalculationListener(r -> {
             if (activeEditor().orElse(null) == ed) {
-                problems.show(r.problems());
+                showProblems(ed);
             }
         });
         ed.addStatusListener(this::status);
+        ed.addEntryProblemListener(cleared -> {
+            if (cleared != null) {
+                status.clearError(cleared);
+            }
+            if (activeEditor().orElse(null) == ed) {
+                showProblems(ed);
+            }
+        });
         doc.addListener(new BudgetDocument.Listener() {
             @Override
             public void budgetChanged(BudgetDocument d, Budget before, Budget after, String cause) {
@@ -477,15 +485,22 @@ public final class WorkbenchFrame extends JFrame {
         Optional<BudgetEditor> ed = activeEditor();
         if (ed.isPresent()) {
             inspectorCards.show(inspectors, String.valueOf(System.identityHashCode(ed.get())));
-            problems.show(ed.get().latest() == null ? List.of() : ed.get().latest().problems());
+            showProblems(ed.get());
         } else {
             inspectorCards.show(inspectors, "none");
-            problems.show(List.of());
+            showProblems(null);
         }
         if (actions != null) {
             actions.update();
         }
         setTitle("Quire" + ed.map(e -> " \u2013 " + e.document().name()).orElse(""));
+    }
+
+    /** Lists the editor's problems (none for null); the pane shrinks to its title line when there are none. */
+    private void showProblems(BudgetEditor ed) {
+        List<org.quire.app.ui.document.Problem> list = ed == null ? List.of() : ed.problems();
+        problems.show(list);
+        panes.collapseProblems(list.isEmpty() ? problems.collapsedHeight() : 0);
     }
 
     private void updateTitle(BudgetEditor ed) {
