@@ -35,7 +35,11 @@ final class Lexer {
                 depth = Math.max(0, depth - 1);
             }
             if (t.is(Token.Kind.NEWLINE)) {
-                if (depth > 0 || out.isEmpty() || continues(out.get(out.size() - 1))) {
+                if (depth > 0 && startsEquation(pos)) {
+                    // a '(' left open: the line ends here, and the parser reports the missing ')' at its end,
+                    // not at the next equation (which would also be swallowed)
+                    depth = 0;
+                } else if (depth > 0 || out.isEmpty() || continues(out.get(out.size() - 1))) {
                     continue;
                 }
             }
@@ -44,6 +48,17 @@ final class Lexer {
                 return out;
             }
         }
+    }
+
+    /** An equation's start: a name, optionally a parameter list, then '=' (a line of its own). */
+    private static final java.util.regex.Pattern EQUATION_START = java.util.regex.Pattern.compile(
+            "[ \\t]*[\\p{L}_][\\p{L}\\p{N}_]*[ \\t]*(\\([^()\\n]*\\)[ \\t]*)?=.*");
+
+    /** @return whether the line that starts at {@code from} starts an equation */
+    private boolean startsEquation(int from) {
+        int end = text.indexOf('\n', from);
+        String next = text.substring(from, end < 0 ? text.length() : end);
+        return EQUATION_START.matcher(next).matches();
     }
 
     private static boolean continues(Token previous) {

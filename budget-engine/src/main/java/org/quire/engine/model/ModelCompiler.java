@@ -28,6 +28,8 @@ public final class ModelCompiler {
     private final ModelUnits units;
     private final List<ModelProblem> problems = new ArrayList<>();
     private final Set<String> reported = new LinkedHashSet<>();
+    /** Names of equations whose line could not be read: their uses are not reported again. */
+    private final Set<String> broken = new java.util.HashSet<>();
     private final Map<String, Integer> inputIndex = new HashMap<>();
     private final Map<String, Integer> quantityIndex = new LinkedHashMap<>();
     private final Map<String, Equation> functions = new LinkedHashMap<>();
@@ -122,7 +124,7 @@ public final class ModelCompiler {
         for (int k = 0; k < inputs.size(); k++) {
             inputIndex.put(inputs.get(k), k);
         }
-        List<Equation> equations = Parser.parse(text, problems);
+        List<Equation> equations = Parser.parse(text, problems, broken);
         Map<String, Equation> seen = new HashMap<>();
         for (Equation eq : equations) {
             Equation before = seen.get(eq.name());
@@ -147,7 +149,7 @@ public final class ModelCompiler {
             }
         }
         for (String out : outputs) {
-            if (!quantityIndex.containsKey(out)) {
+            if (!quantityIndex.containsKey(out) && !broken.contains(out)) {
                 String known = String.join(", ", quantityIndex.keySet());
                 problems.add(new ModelProblem(0, 0, 0, ModelProblem.Severity.ERROR,
                         "output '" + out + "' is not defined by any equation"
@@ -353,6 +355,9 @@ public final class ModelCompiler {
                 error(e.at(), "'" + name + "' is a function; call it with its arguments in parentheses");
                 return constant(e.at(), txt, Double.NaN);
             }
+            if (broken.contains(name)) {
+                return constant(e.at(), txt, Double.NaN); // its own line is reported already
+            }
             List<String> known = new ArrayList<>(inputIndex.keySet());
             known.addAll(quantityIndex.keySet());
             known.addAll(params.keySet());
@@ -436,6 +441,9 @@ public final class ModelCompiler {
                 return constant(e.at(), txt, Double.NaN);
             }
             return new Node.External(nextId++, e.at(), txt, lib, args);
+        }
+        if (broken.contains(name)) {
+            return constant(e.at(), txt, Double.NaN); // the function's own line is reported already
         }
         List<String> known = new ArrayList<>(library.allNames());
         known.addAll(functions.keySet());

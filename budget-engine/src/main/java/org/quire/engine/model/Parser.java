@@ -40,7 +40,18 @@ final class Parser {
 
     /** Parses {@code text}; problems found are added to {@code problems}. */
     static List<Equation> parse(String text, List<ModelProblem> problems) {
-        return new Parser(text, problems).model();
+        return parse(text, problems, new java.util.HashSet<>());
+    }
+
+    /**
+     * Parses {@code text}; problems found are added to {@code problems}, and the names of the equations that
+     * could not be read (their line has an error) to {@code broken}, so that the compiler does not report their
+     * uses elsewhere as unknown names: one mistake, one message.
+     */
+    static List<Equation> parse(String text, List<ModelProblem> problems, java.util.Set<String> broken) {
+        Parser p = new Parser(text, problems);
+        List<Equation> out = p.model(broken);
+        return out;
     }
 
     private static final class Stop extends RuntimeException {
@@ -68,13 +79,14 @@ final class Parser {
         return new Stop();
     }
 
-    private List<Equation> model() {
+    private List<Equation> model(java.util.Set<String> broken) {
         List<Equation> out = new ArrayList<>();
         while (!peek().is(Token.Kind.END)) {
             if (peek().is(Token.Kind.NEWLINE)) {
                 take();
                 continue;
             }
+            int start = i;
             try {
                 out.add(equation());
                 Token t = peek();
@@ -82,6 +94,10 @@ final class Parser {
                     throw fail(t, "expected an operator or the end of the line, found " + t.describe());
                 }
             } catch (Stop s) {
+                if (tokens.get(start).is(Token.Kind.NAME) && start + 1 < tokens.size()
+                        && (tokens.get(start + 1).is(Token.Kind.EQUALS) || tokens.get(start + 1).is(Token.Kind.LPAREN))) {
+                    broken.add(tokens.get(start).text());
+                }
                 while (!peek().is(Token.Kind.NEWLINE) && !peek().is(Token.Kind.END)) {
                     take();
                 }
