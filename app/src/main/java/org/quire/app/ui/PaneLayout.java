@@ -81,9 +81,16 @@ final class PaneLayout {
         if ((collapsedTo > 0) == (height > 0)) {
             return;
         }
-        remember();
+        if (vertical.getHeight() == 0) {
+            collapsedTo = height; // not laid out yet: restore() applies it
+            return;
+        }
+        if (isShown(Pane.PROBLEMS) && collapsedTo == 0) {
+            problemsHeight = vertical.getHeight() - vertical.getDividerLocation();
+        }
         collapsedTo = height;
-        apply();
+        int bottom = collapsedTo > 0 ? collapsedTo + vertical.getDividerSize() : problemsHeight;
+        vertical.setDividerLocation(Math.max(200, vertical.getHeight() - bottom));
     }
 
     /** @return whether the problems pane is shrunk to its title line */

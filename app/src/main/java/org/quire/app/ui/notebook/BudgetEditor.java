@@ -131,6 +131,18 @@ public final class BudgetEditor extends JPanel implements EditorContext {
         north.add(banners, BorderLayout.NORTH);
         north.add(outline, BorderLayout.SOUTH);
         outline.setBorder(BorderFactory.createMatteBorder(0, 0, 1, 0, Colors.get("Quire.section.rule")));
+        // the wrapped rows of the outline depend on its width: a height worked out at an early, narrow width
+        // (before the window is shown) is worked out again once it has its width
+        outline.addComponentListener(new java.awt.event.ComponentAdapter() {
+            @Override
+            public void componentResized(java.awt.event.ComponentEvent e) {
+                int wanted = outline.getLayout().preferredLayoutSize(outline).height;
+                if (wanted != outline.getHeight()) {
+                    outline.invalidate();
+                    north.revalidate();
+                }
+            }
+        });
         add(north, BorderLayout.NORTH);
         add(scroll, BorderLayout.CENTER);
         recalculator = new Recalculator(library, EventQueue::invokeLater, this::recalculated);

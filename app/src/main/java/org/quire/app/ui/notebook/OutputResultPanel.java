@@ -142,7 +142,28 @@ final class OutputResultPanel extends JPanel {
                 + " with no effect on this output hidden");
     }
 
+    /**
+     * Says in the headline that the figures below are not those of the present budget (it cannot be evaluated),
+     * and greys them.
+     */
+    void markNotCurrent(String why) {
+        String name = shown == null ? "" : shown.name();
+        headline.setText(name + ": " + why);
+        headline.setToolTipText(null);
+        headline.setForeground(Colors.get("Quire.error"));
+        figures.setForeground(Colors.get("Label.disabledForeground"));
+        figures2.setForeground(Colors.get("Label.disabledForeground"));
+    }
+
+    /** @return the headline as shown, for tests */
+    String headlineText() {
+        return headline.getText();
+    }
+
     void show(OutputResult o, int digits) {
+        headline.setForeground(Colors.get("Quire.result.emphasis"));
+        figures.setForeground(Colors.get("Label.foreground"));
+        figures2.setForeground(Colors.get("Label.foreground"));
         String unit = o.unit().isEmpty() ? "" : " " + org.quire.engine.units.Units.display(o.unit());
         String rounded = Rounding.format(o.estimate(), o.expandedUncertainty(), digits);
         String dofNote = Double.isInfinite(o.effectiveDof()) ? "\u221e"
