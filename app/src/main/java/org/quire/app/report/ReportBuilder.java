@@ -401,7 +401,8 @@ public final class ReportBuilder {
         for (MonteCarloOutcome.Output o : mc.outputs()) {
             String y = Typesetter.name(o.name()).plain();
             String reason = o.comparison().reason();
-            blocks.add(new Paragraph("For " + y + ": " + reason + "."));
+            String why = o.comparison().explanation();
+            blocks.add(new Paragraph("For " + y + ": " + reason + "." + (why.isEmpty() ? "" : " " + why)));
         }
         for (String n : mc.notes()) {
             blocks.add(new Paragraph("Note: " + n + "."));

@@ -96,6 +96,24 @@ final class Messages {
                 + "tolerance delta = %s (JCGM 101:2008 8.2)", g(dLow), g(dHigh), g(delta));
     }
 
+    static String comparisonNarrower() {
+        return "The Monte Carlo interval is narrower than the GUM interval at both ends: the output's distribution "
+                + "has shorter tails than the t distribution the GUM assumes, as when a rectangular (bounded) input "
+                + "dominates the budget.";
+    }
+
+    static String comparisonWider() {
+        return "The Monte Carlo interval is wider than the GUM interval at both ends: the output's distribution has "
+                + "longer tails than the t distribution the GUM assumes, as when a dominant input has few degrees "
+                + "of freedom or heavy tails.";
+    }
+
+    static String comparisonShifted(boolean towardsLower) {
+        return "The Monte Carlo interval lies " + (towardsLower ? "lower" : "higher") + " than the GUM interval: "
+                + "the output's distribution is asymmetric, as when the model is not linear over the spread of "
+                + "its inputs.";
+    }
+
     static String comparisonNotValidated(double dLow, double dHigh, double delta) {
         return fmt("the GUM result is not validated: d_low = %s and d_high = %s, and %s the numerical tolerance "
                 + "delta = %s (JCGM 101:2008 8.2); report the Monte Carlo result", g(dLow), g(dHigh),
