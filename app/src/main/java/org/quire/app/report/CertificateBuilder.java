@@ -5,7 +5,6 @@ import java.time.LocalDate;
 import java.util.ArrayList;
 import java.util.LinkedHashSet;
 import java.util.List;
-import java.util.Locale;
 import java.util.Set;
 import org.quire.app.common.Cautions;
 import org.quire.app.report.ReportModel.Block;
@@ -20,6 +19,7 @@ import org.quire.app.report.Table.Column;
 import org.quire.engine.calibration.AdjustmentResult;
 import org.quire.engine.calibration.CalibrationResult;
 import org.quire.engine.calibration.CertificateDetails;
+import org.quire.engine.calibration.CertificateNumber;
 import org.quire.engine.calibration.ConformityResult;
 import org.quire.engine.calibration.PointConformity;
 import org.quire.engine.calibration.PointResult;
@@ -94,6 +94,9 @@ public final class CertificateBuilder {
         if (issue.role().isEmpty()) {
             refused.add("state the approver's role (for instance technical manager)");
         }
+        if (!issue.number().isEmpty() && CertificateNumber.problem(issue.number()) != null) {
+            refused.add(CertificateNumber.problem(issue.number()));
+        }
         if (d.date() != null && issue.issued().isBefore(d.date())) {
             refused.add("the date of issue " + issue.issued() + " is before the date of calibration " + d.date());
         }
@@ -158,8 +161,7 @@ public final class CertificateBuilder {
                         + "approval of the issuing laboratory. The results relate only to the item calibrated, "
                         + "at the conditions stated."))));
         String hash = CanonicalSha256.sha256(Certificate.canonicalText(facts, parts).getBytes(StandardCharsets.UTF_8));
-        String number = issue.number().isEmpty()
-                ? "TVC-" + d.date().toString().replace("-", "") + "-" + hash.substring(0, 8).toUpperCase(Locale.ROOT)
+        String number = issue.number().isEmpty() ? CertificateNumber.derive(d.laboratory().name(), d.date(), hash)
                 : issue.number();
         return new Certificate(number, d.laboratory(), facts, parts, Cautions.TEXT, hash);
     }
