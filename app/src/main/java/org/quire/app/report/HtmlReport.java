@@ -144,7 +144,7 @@ public final class HtmlReport {
     }
 
     /** @return the runs as HTML: italic in {@code <i>}, shifted runs in {@code <sub>} and {@code <sup>} */
-    static String math(MathText m) {
+    public static String math(MathText m) {
         StringBuilder s = new StringBuilder();
         for (MathText.Run r : m.runs()) {
             String t = esc(r.text());

@@ -31,6 +31,7 @@ import org.quire.engine.io.EngineVersion;
 import org.quire.engine.montecarlo.CoverageInterval;
 import org.quire.engine.montecarlo.GumComparison;
 import org.quire.engine.montecarlo.MonteCarloOutcome;
+import org.quire.engine.montecarlo.Phrase;
 import org.quire.engine.model.CompiledModel;
 import org.quire.engine.model.Formula;
 import org.quire.engine.units.Units;
@@ -102,7 +103,7 @@ public final class ReportBuilder {
         return new Part("Purpose and notes", blocks);
     }
 
-    private static Part model(Budget b) {
+    static Part model(Budget b) {
         List<MathText> lines = new ArrayList<>();
         List<Block> blocks = new ArrayList<>();
         try {
@@ -158,7 +159,7 @@ public final class ReportBuilder {
      * The inputs' notes, which hold the author's guidance (a template's instructions for filling in each input):
      * for the author, so only in an appendix on request.
      */
-    private static Part authorNotes(Budget b) {
+    static Part authorNotes(Budget b) {
         List<List<Cell>> rows = new ArrayList<>();
         for (InputQuantity q : b.inputs()) {
             if (!q.notes().isBlank()) {
@@ -315,7 +316,7 @@ public final class ReportBuilder {
         runs.add(new MathText.Run(text.replace("(-", "(−"), false, MathText.Shift.BASE));
         runs.add(new MathText.Run(", ", false, MathText.Shift.BASE));
         runs.add(new MathText.Run("k", true, MathText.Shift.BASE));
-        runs.add(new MathText.Run(" = " + Figures.compact(o.coverageFactor(), 3) + ", ", false, MathText.Shift.BASE));
+        runs.add(new MathText.Run(" = " + Figures.coverageFactor(o.coverageFactor()) + ", ", false, MathText.Shift.BASE));
         runs.add(new MathText.Run("p", true, MathText.Shift.BASE));
         runs.add(new MathText.Run(" = " + Figures.probability(o.coverageProbability()) + " %", false, MathText.Shift.BASE));
         return MathText.of(runs);
@@ -341,7 +342,7 @@ public final class ReportBuilder {
                 "Correlation coefficients of the outputs (JCGM 102:2011 6.2.1.3)", cols, rows))));
     }
 
-    private static Part monteCarlo(MonteCarloOutcome mc) {
+    static Part monteCarlo(MonteCarloOutcome mc) {
         List<Block> blocks = new ArrayList<>();
         if (mc == null) {
             blocks.add(new Paragraph("The Monte Carlo method (JCGM 101:2008) was not run for this report, so the GUM "
@@ -399,9 +400,8 @@ public final class ReportBuilder {
                 Column.of("d_{high}", "d_high", Align.RIGHT, 0.9f),
                 Column.of("GUM result", "verdict", Align.LEFT, 1.3f)), cmp)));
         for (MonteCarloOutcome.Output o : mc.outputs()) {
-            String y = Typesetter.name(o.name()).plain();
-            String reason = o.comparison().reason();
-            blocks.add(new Paragraph("For " + y + ": " + reason + "."));
+            blocks.add(new Paragraph(MathText.concat(MathText.upright("For "), Typesetter.name(o.name()),
+                    MathText.upright(": "), sentence(o.comparison().reasonPhrases()), MathText.upright("."))));
         }
         for (String n : mc.notes()) {
             blocks.add(new Paragraph("Note: " + n + "."));
@@ -413,6 +413,22 @@ public final class ReportBuilder {
             }
         }
         return new Part("Monte Carlo method", blocks);
+    }
+
+    /**
+     * @return an engine's sentence set for reading: its symbols typeset as names ({@code d_low} as d with subscript
+     *     low, {@code delta} as δ), its numbers by the figures rule
+     */
+    public static MathText sentence(List<Phrase> phrases) {
+        List<MathText> out = new ArrayList<>();
+        for (Phrase p : phrases) {
+            out.add(switch (p.kind()) {
+                case WORDS -> Typesetter.prose(p.text());
+                case SYMBOL -> Typesetter.name(p.text());
+                case NUMBER -> MathText.upright(Figures.working(p.value()));
+            });
+        }
+        return MathText.concat(out.toArray(new MathText[0]));
     }
 
     /** @return the decimals that show two digits beyond the first significant digit of {@code u} */

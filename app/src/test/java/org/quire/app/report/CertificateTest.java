@@ -95,7 +95,7 @@ class CertificateTest {
     private static String[] row(String text, String label) {
         for (String line : text.split("\\R")) {
             String[] t = line.strip().replace(" *", "").split("\\s+");
-            if (t.length == 9 && t[0].equals(label)) {
+            if (t.length == 10 && t[0].equals(label)) {
                 return t;
             }
         }
@@ -112,10 +112,12 @@ class CertificateTest {
             String uLeft = u2((Double) x.get("asLeft.points." + p + ".reportedExpandedUncertainty"));
             assertEquals(sameDecimals((Double) x.get("asFound.points." + p + ".error"), uFound), r[3], p + " E as found");
             assertEquals(uFound, r[4], p + " U as found");
-            assertEquals(sameDecimals((Double) x.get("asLeft.points." + p + ".error"), uLeft), r[5], p + " E as left");
-            assertEquals(uLeft, r[6], p + " U as left");
+            assertEquals(new BigDecimal((Double) x.get("asFound.points." + p + ".coverageFactor"))
+                    .round(new MathContext(3)).toPlainString(), r[5], p + " k as found");
+            assertEquals(sameDecimals((Double) x.get("asLeft.points." + p + ".error"), uLeft), r[6], p + " E as left");
+            assertEquals(uLeft, r[7], p + " U as left");
             assertEquals(new BigDecimal((Double) x.get("asLeft.points." + p + ".coverageFactor"))
-                    .round(new MathContext(3)).toPlainString(), r[7], p + " k");
+                    .round(new MathContext(3)).toPlainString(), r[8], p + " k as left");
         }
         // P4 and P5 are reported at the CMC of 0.08 % (ILAC P14): never below it
         assertEquals("0.080", row(t, "P4")[4]);
@@ -200,13 +202,14 @@ class CertificateTest {
                 LocalDate.of(2026, 11, 13), "M. Fenwick (invented)", "technical manager", "", false));
         String t = text(c);
         String[] p3 = row(t, "P3");
-        assertEquals("2.87", p3[7]);
+        assertEquals("2.87", p3[5]);
+        assertEquals("2.87", p3[8]);
         assertEquals("0.052", p3[4]);
         assertEquals("0.139", p3[3]);
         String[] p1 = row(t, "P1");
         assertEquals("0.89", p1[3]);
         assertEquals("0.12", p1[4]);
-        assertEquals("0.68", p1[5]);
+        assertEquals("0.68", p1[6]);
         assertTrue(t.contains("P1 ±0.78 does not conform conforms"), t);
         assertTrue(t.contains("set in the meter) 1.022405863"), t);
     }

@@ -300,7 +300,8 @@ public final class MonteCarloSection implements Section {
                 .getRGB() & 0xffffff);
         s.append("<b style='color:").append(colour).append("'>")
                 .append(c.validated() ? "GUM result validated" : "GUM result NOT validated").append("</b><br>")
-                .append("<div style='width:220px'>").append(esc(c.reason())).append("</div>");
+                .append("<div style='width:220px'>").append(org.quire.app.report.HtmlReport.math(
+                        org.quire.app.report.ReportBuilder.sentence(c.reasonPhrases()))).append("</div>");
         o.standardUncertaintyNote().ifPresent(n -> s.append("<div style='width:220px'>").append(esc(n))
                 .append("</div>"));
         return s.append("</html>").toString();
