@@ -110,7 +110,7 @@ public final class CalibrationReport {
         }
         parts.add(new Part("Findings", r.findings().isEmpty()
                 ? List.of(new Paragraph("The evaluation raised no findings."))
-                : List.of(new Notices(r.findings()))));
+                : List.of(Notices.of(r.findings()))));
         if (guidance && method != null) {
             parts.add(ReportBuilder.authorNotes(method));
         }
@@ -267,7 +267,7 @@ public final class CalibrationReport {
                 Column.of("Unit", "unit", Align.LEFT, 0.6f)), f)));
         blocks.add(new Statement(stated(p, s.phase(), errorName)));
         if (!p.notes().isEmpty()) {
-            blocks.add(new Notices(p.notes()));
+            blocks.add(Notices.of(p.notes()));
         }
         if (p.monteCarlo() != null) {
             Part mc = ReportBuilder.monteCarlo(p.monteCarlo());

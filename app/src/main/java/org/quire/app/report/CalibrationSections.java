@@ -199,7 +199,7 @@ public final class CalibrationSections {
                     Cell.number(Figures.sig(p.estimate(), 5), p.estimate()),
                     Cell.number(Figures.sig(p.standardUncertainty(), 4), p.standardUncertainty()),
                     Cell.number(Figures.dof(p.result().dofUsed()), p.result().dofUsed()),
-                    Cell.number(Figures.compact(p.result().coverageFactor(), 3), p.result().coverageFactor()),
+                    Cell.number(Figures.coverageFactor(p.result().coverageFactor()), p.result().coverageFactor()),
                     Cell.number(Figures.sig(p.expandedUncertainty(), 4), p.expandedUncertainty()),
                     Cell.number(!Figures.relativeUncertaintyMeaningful(yu, p.estimate(), p.expandedUncertainty()) ? "–"
                             : Figures.sig(rel[i], 3), rel[i])));

@@ -147,7 +147,7 @@ public final class CertificateBuilder {
         }
         parts.add(new Part("Findings", all.isEmpty()
                 ? List.of(new Paragraph("The evaluation raised no findings."))
-                : List.of(new Notices(all.stream().map(CertificateBuilder::sentence).toList()))));
+                : List.of(Notices.of(all.stream().map(CertificateBuilder::sentence).toList()))));
         parts.add(new Part("Authorisation", List.of(new TableBlock(new Table("authorisation", "Authorisation",
                 List.of(Column.of("", "item", Align.LEFT, 1.5f), Column.of("", "value", Align.LEFT, 4f)),
                 List.of(List.of(Cell.text("authorised by"), Cell.text(issue.approver())),

@@ -89,12 +89,13 @@ public final class ReportBuilder {
             blocks.add(new Paragraph("The budget gives no notes on its purpose."));
         } else {
             for (String p : b.notes().split("\\n\\s*\\n")) {
-                blocks.add(new Paragraph(p.strip()));
+                blocks.add(new Paragraph(Typesetter.caption(p.strip())));
             }
         }
         List<List<Cell>> rows = new ArrayList<>();
         for (OutputQuantity o : b.outputs()) {
-            rows.add(List.of(Cell.math(Typesetter.name(o.name())), Cell.text(o.description()), Cell.unit(o.unit())));
+            rows.add(List.of(Cell.math(Typesetter.name(o.name())), Cell.math(Typesetter.caption(o.description())),
+                    Cell.unit(o.unit())));
         }
         blocks.add(new TableBlock(new Table("measurands", "Measurands", List.of(
                 Column.of("Quantity", "quantity", Align.LEFT, 1f),
@@ -128,13 +129,14 @@ public final class ReportBuilder {
         List<List<Cell>> sources = new ArrayList<>();
         for (InputQuantity q : b.inputs()) {
             var e = q.evaluation();
-            rows.add(List.of(Cell.math(Typesetter.name(q.name())), Cell.text(q.description()),
+            rows.add(List.of(Cell.math(Typesetter.name(q.name())), Cell.math(Typesetter.caption(q.description())),
                     Cell.number(Figures.estimate(e.estimate()), e.estimate()), Cell.unit(q.unit()),
                     Cell.text(e.type()), Cell.text(e.distribution().shape()),
                     Cell.number(Figures.sig(e.standardUncertainty(), 3), e.standardUncertainty()),
                     Cell.number(Figures.dof(e.dof()), e.dof())));
             sources.add(List.of(Cell.math(Typesetter.name(q.name())),
-                    Cell.text(q.source().isBlank() ? "not stated" : q.source()), Cell.text(e.basis())));
+                    Cell.math(Typesetter.caption(q.source().isBlank() ? "not stated" : q.source())),
+                    Cell.math(Typesetter.caption(e.basis()))));
         }
         List<Block> blocks = new ArrayList<>();
         blocks.add(new TableBlock(new Table("inputs", "Input quantities", List.of(
@@ -244,7 +246,9 @@ public final class ReportBuilder {
         String ru = Rounding.uncertainty(o.standardUncertainty(), digits).toPlainString();
         String rU = Rounding.uncertainty(big, digits).toPlainString();
         String ry = Rounding.estimate(o.estimate(), big, digits).toPlainString();
-        String used = Double.isInfinite(o.effectiveDof()) ? "" : o.dofUsed() == o.effectiveDof() ? ""
+        // the whole number used for k (JCGM 100:2008 G.4.1 note 1), shown where it differs from ν_eff as printed
+        String used = Double.isInfinite(o.effectiveDof()) || o.dofUsed() == o.effectiveDof()
+                || Figures.sig(o.dofUsed(), 3).equals(Figures.sig(o.effectiveDof(), 3)) ? ""
                 : " (" + Figures.dof(o.dofUsed()) + " used)";
         List<List<Cell>> res = new ArrayList<>();
         res.add(List.of(Cell.text("estimate"), Cell.math(y), Cell.number(ry, o.estimate()), Cell.unit(unit)));
@@ -255,7 +259,7 @@ public final class ReportBuilder {
                 Cell.number(Double.isInfinite(o.effectiveDof()) ? "∞" : Figures.sig(o.effectiveDof(), 3) + used,
                         o.effectiveDof()), Cell.text("")));
         res.add(List.of(Cell.text("coverage factor"), Cell.math(Typesetter.label("k")),
-                Cell.number(Figures.compact(o.coverageFactor(), 3), o.coverageFactor()), Cell.text("")));
+                Cell.number(Figures.coverageFactor(o.coverageFactor()), o.coverageFactor()), Cell.text("")));
         res.add(List.of(Cell.text("coverage probability"), Cell.math(Typesetter.label("p")),
                 Cell.number(Figures.probability(o.coverageProbability()), 100 * o.coverageProbability()),
                 Cell.text("%")));
@@ -275,7 +279,7 @@ public final class ReportBuilder {
                 Column.of("Unit", "unit", Align.LEFT, 0.8f)), res)));
         blocks.add(new Statement(statement(o, digits)));
         if (!o.warnings().isEmpty()) {
-            blocks.add(new Notices(o.warnings()));
+            blocks.add(new Notices(o.warnings().stream().map(Typesetter::caption).toList()));
         }
         return new Part(MathText.concat(MathText.upright("Uncertainty budget of "), y), blocks);
     }
@@ -465,10 +469,13 @@ public final class ReportBuilder {
     }
 
     private static Part warnings(GumResult gum) {
-        List<String> all = new ArrayList<>(gum.warnings());
+        List<MathText> all = new ArrayList<>();
+        for (String w : gum.warnings()) {
+            all.add(Typesetter.caption(w));
+        }
         for (OutputResult o : gum.outputs()) {
             for (String w : o.warnings()) {
-                all.add(o.name() + ": " + w);
+                all.add(MathText.concat(Typesetter.name(o.name()), MathText.upright(": "), Typesetter.caption(w)));
             }
         }
         if (all.isEmpty()) {

@@ -117,6 +117,32 @@ public final class Typesetter {
         return MathText.concat(out.toArray(new MathText[0]));
     }
 
+    /**
+     * Sets words about a budget (a chart's caption, the budget's notes, descriptions, sources, warnings), where every
+     * word with an underscore is a symbol written as the model language writes names: {@code u_i(y)} as u with
+     * subscript i, {@code E_lo} as E with subscript lo, {@code rho_w} as ρ with subscript w; the rest as {@link
+     * #prose(String)} sets it ("±", m³).
+     *
+     * @return the words with their symbols typeset
+     */
+    public static MathText caption(String words) {
+        java.util.regex.Matcher m = SYMBOL_WORD.matcher(words);
+        List<MathText> out = new ArrayList<>();
+        int at = 0;
+        while (m.find()) {
+            out.add(prose(words.substring(at, m.start())));
+            out.add(name(m.group()));
+            at = m.end();
+        }
+        out.add(prose(words.substring(at)));
+        return MathText.concat(out.toArray(new MathText[0]));
+    }
+
+    /** A word with an underscore in the program's own text. */
+    private static final java.util.regex.Pattern SYMBOL_WORD = java.util.regex.Pattern.compile(
+            "(?<![\\p{L}\\p{N}_'])\\p{L}[\\p{L}\\p{N}]*(?:_[\\p{L}\\p{N}]+)+(?![\\p{L}\\p{N}_])");
+
+
     /** A power after a letter: m^3, s^-1, m^(-3). */
     private static final java.util.regex.Pattern POWER = java.util.regex.Pattern.compile(
             "(\\p{L})\\^\\(?(-?\\d+)\\)?");
