@@ -343,13 +343,27 @@ final class CalibrationCommand implements Callable<Integer> {
      * @throws Files.FileProblem naming the file and the JSON path of what is wrong
      */
     static CalibrationResult readAndEvaluate(String name) throws UsageException, Files.FileProblem, IOException {
+        return readAndEvaluateWithFile(name).result();
+    }
+
+    /**
+     * A calibration evaluated, with the method file as the calibration names it (part of its content).
+     *
+     * @param result the evaluation
+     * @param methodFile the method's file as written in the calibration, or null
+     */
+    record Evaluated(CalibrationResult result, String methodFile) {
+    }
+
+    /** As {@link #readAndEvaluate(String)}, keeping the method file the calibration names. */
+    static Evaluated readAndEvaluateWithFile(String name) throws UsageException, Files.FileProblem, IOException {
         Path file = Files.path(name);
         if (!java.nio.file.Files.isRegularFile(file)) {
             throw new UsageException("no such calibration file: " + name);
         }
         try {
             CalibrationJson.Loaded loaded = CalibrationJson.read(file);
-            return evaluate(name, CalibrationJson.method(file, loaded), loaded);
+            return new Evaluated(evaluate(name, CalibrationJson.method(file, loaded), loaded), loaded.methodFile());
         } catch (BudgetFormatException e) {
             throw new Files.FileProblem(name, e.getMessage());
         }

@@ -44,6 +44,17 @@ class TypesetterTest {
     }
 
     @Test
+    void aSmallChangeOfAGreekQuantityKeepsItsLetter() {
+        // common practice: drho_w, a correction to a density, reads dρ with subscript w, as dm_evap reads dm
+        MathText m = Typesetter.name("drho_w");
+        assertEquals("dρ", m.runs().get(0).text());
+        assertEquals("w", m.runs().get(1).text());
+        assertEquals("drho_w", m.plain());
+        assertEquals("dm", Typesetter.name("dm_evap").runs().get(0).text());
+        assertEquals("δ", Typesetter.name("delta").runs().get(0).text());
+    }
+
+    @Test
     void powersRootsAndExponentNotation() throws ModelException {
         assertEquals("y = √(a² + b²)", line("y = sqrt(a^2 + b^2)", List.of("a", "b"), "y").plain());
         assertEquals("q = 1.5 × 10⁻³ · |v|", line("q = 1.5e-3 * abs(v)", List.of("v"), "q").plain());

@@ -182,7 +182,7 @@ public final class GumEvaluator {
             double nuEff = wsDenominator > 0 ? 1 / wsDenominator : Double.POSITIVE_INFINITY;
             if (correlated && !terms.isEmpty() && !Double.isInfinite(nuEff)) {
                 warnings.add("inputs are correlated; the Welch–Satterthwaite formula assumes independent inputs, "
-                        + "so nu_eff is approximate");
+                        + "so the effective degrees of freedom are approximate");
             }
             boolean anySensitive = false;
             for (int i : active) {
@@ -191,9 +191,10 @@ public final class GumEvaluator {
             if (uc == 0 && active.length > 0 && !anySensitive) {
                 warnings.add(firstOrderZero(name, higher));
             } else if (uc == 0 && active.length > 0) {
-                warnings.add("u_c(" + name + ") is zero: the correlated contributions cancel exactly");
+                warnings.add("the combined standard uncertainty of " + name + " is zero: the correlated contributions cancel "
+                        + "exactly");
             } else if (uc == 0) {
-                warnings.add("u_c(" + name + ") is zero: no input has an uncertainty");
+                warnings.add("the combined standard uncertainty of " + name + " is zero: no input has an uncertainty");
             }
             double dofUsed = nuEff;
             if (settings.dofRounding() == EvaluationSettings.DofRounding.TRUNCATE && !Double.isInfinite(nuEff)) {
@@ -321,7 +322,8 @@ public final class GumEvaluator {
      * coefficient vanishes at the estimates (a minimum or maximum of the model, as Y = X^2 at x = 0).
      */
     static String firstOrderZero(String output, boolean higherIncluded) {
-        return "u_c(" + output + ") is zero: the first-order law of propagation gives zero because every sensitivity "
+        return "the combined standard uncertainty of " + output + " is zero: the first-order law of propagation gives "
+                + "zero because every sensitivity "
                 + "coefficient vanishes at the estimates, although the output does vary"
                 + (higherIncluded ? "; the higher-order terms are zero too" : "; include the higher-order terms "
                         + "(JCGM 100:2008 5.1.2 note)") + " or use the Monte Carlo method (JCGM 101:2008), which "

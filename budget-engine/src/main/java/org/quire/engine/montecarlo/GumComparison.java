@@ -154,8 +154,16 @@ public final class GumComparison {
 
     /** @return one sentence saying why the verdict is what it is, with the figures compared */
     public String reason() {
+        return Phrase.plain(reasonPhrases());
+    }
+
+    /**
+     * @return the sentence of {@link #reason()} in pieces: words, the symbols d_low, d_high and delta by their
+     *     names, and the numbers, so that a report can typeset the symbols and write the numbers by its own rule
+     */
+    public java.util.List<Phrase> reasonPhrases() {
         if (firstOrderZero()) {
-            return Messages.comparisonFirstOrderZero();
+            return java.util.List.of(Phrase.words(Messages.comparisonFirstOrderZero()));
         }
         return validated() ? Messages.comparisonValidated(lowerDifference, upperDifference, tolerance)
                 : Messages.comparisonNotValidated(lowerDifference, upperDifference, tolerance);

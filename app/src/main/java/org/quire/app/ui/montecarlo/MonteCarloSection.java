@@ -303,7 +303,8 @@ public final class MonteCarloSection implements Section {
         if (!c.explanation().isEmpty()) {
             s.append("<div style='width:220px'><b>").append(esc(c.explanation())).append("</b></div>");
         }
-        s.append("<div style='width:220px'>").append(esc(c.reason())).append("</div>");
+        s.append("<div style='width:220px'>").append(org.quire.app.report.HtmlReport.math(
+                org.quire.app.report.ReportBuilder.sentence(c.reasonPhrases()))).append("</div>");
         o.standardUncertaintyNote().ifPresent(n -> s.append("<div style='width:220px'>").append(esc(n))
                 .append("</div>"));
         return s.append("</html>").toString();
