@@ -56,9 +56,19 @@ final class Lexer {
 
     /** @return whether the line that starts at {@code from} starts an equation */
     private boolean startsEquation(int from) {
-        int end = text.indexOf('\n', from);
-        String next = text.substring(from, end < 0 ? text.length() : end);
-        return EQUATION_START.matcher(next).matches();
+        while (from <= text.length()) {
+            int end = text.indexOf('\n', from);
+            String next = text.substring(from, end < 0 ? text.length() : end);
+            String code = next.strip();
+            if (!code.isEmpty() && !code.startsWith("#")) {
+                return EQUATION_START.matcher(next).matches();
+            }
+            if (end < 0) {
+                return false;
+            }
+            from = end + 1; // blank and comment lines are passed over: the '(' is reported on its own line
+        }
+        return false;
     }
 
     private static boolean continues(Token previous) {

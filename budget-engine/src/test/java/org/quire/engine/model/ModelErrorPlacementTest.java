@@ -32,6 +32,15 @@ class ModelErrorPlacementTest {
     }
 
     @Test
+    void aCommentLineBetweenDoesNotMoveTheReport() {
+        String line1 = "m = (a + b";
+        List<ModelProblem> p = errors(line1 + "\n# the next quantity\n\ny = 2 * m", List.of("a", "b"), List.of("y"));
+        assertEquals(1, p.size(), p.toString());
+        assertEquals(1, p.get(0).line(), p.toString());
+        assertEquals(line1.length() + 1, p.get(0).column(), p.toString());
+    }
+
+    @Test
     void theLastLineLeftOpenIsReportedAtItsEnd() {
         List<ModelProblem> p = errors("y = 2 * (x + 1", List.of("x"), List.of("y"));
         assertEquals(1, p.size(), p.toString());
