@@ -141,8 +141,7 @@ final class ResultsSection implements Section {
             String firstText = first == null ? "" : " (" + first.area().name().toLowerCase(java.util.Locale.ROOT)
                     + (first.where().isEmpty() ? "" : ", " + first.where()) + (errors > 1 ? ", the first" : "") + ")";
             state.setText(last == null ? "No results: the budget has " + count + firstText + "; see the Problems panel."
-                    : "Not current: the budget has " + count + firstText + "; below, the last results that could "
-                            + "be evaluated.");
+                    : "Not current: the budget has " + count + firstText + "; below, the last results evaluated.");
             state.setForeground(Colors.get("Quire.error"));
             for (OutputResultPanel panel : panels.values()) {
                 panel.markNotCurrent("not current, the budget has " + count);
