@@ -144,6 +144,10 @@ public final class CommandLine {
             return USER_ERROR;
         }
         err.println("quire: internal error (a bug in Quire; please report it with the command and file): " + e);
+        StackTraceElement[] where = e.getStackTrace();
+        for (int i = 0; i < Math.min(6, where.length); i++) {
+            err.println("    at " + where[i]);
+        }
         return BUG;
     }
 }
