@@ -51,7 +51,7 @@ final class ContributionTableModel extends AbstractTableModel {
             case 5: return "Sensitivity c\u1d62";
             case 6: return "Contribution u\u1d62(y)" + yu;
             case 7: return "\u03bd\u1d62";
-            default: return "Share of u_c\u00b2(y) / %";
+            default: return "Share of combined variance / %";
         }
     }
 
@@ -66,7 +66,7 @@ final class ContributionTableModel extends AbstractTableModel {
     String shown(int r, int c) {
         if (totalRow) {
             switch (c) {
-                case 0: return "Combined, u_c(y)";
+                case 0: return "Combined standard uncertainty";
                 case 6: return Fmt.working(total.standardUncertainty());
                 case 7: return Fmt.dof(total.effectiveDof());
                 case 8: return Fmt.percent(1.0).replace(" %", "");

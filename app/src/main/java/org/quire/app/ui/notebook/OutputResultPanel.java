@@ -169,12 +169,13 @@ final class OutputResultPanel extends JPanel {
         String dofNote = Double.isInfinite(o.effectiveDof()) ? "\u221e"
                 : Fmt.dof(o.effectiveDof()) + (o.dofUsed() != o.effectiveDof() ? " (" + Fmt.dof(o.dofUsed()) + " used)" : "");
         set(headline, o.name() + " = (" + rounded + ")" + unit + ",  k = "
-                + String.format(java.util.Locale.ROOT, "%.2f", o.coverageFactor()) + ",  p = "
+                + org.quire.engine.gum.Figures.coverageFactor(o.coverageFactor()) + ",  p = "
                 + Fmt.probability(o.coverageProbability()));
-        set(figures, "y = " + Fmt.num(o.estimate()) + unit
-                + "     u_c(y) = " + Rounding.uncertainty(o.standardUncertainty(), digits).toPlainString() + unit
-                + "     \u03bd_eff = " + dofNote);
-        set(figures2, "k = " + String.format(java.util.Locale.ROOT, "%.3f", o.coverageFactor())
+        set(figures, "<html>y = " + Fmt.num(o.estimate()) + unit
+                + "&nbsp;&nbsp;&nbsp;&nbsp; u<sub>c</sub>(y) = "
+                + Rounding.uncertainty(o.standardUncertainty(), digits).toPlainString() + unit
+                + "&nbsp;&nbsp;&nbsp;&nbsp; \u03bd<sub>eff</sub> = " + dofNote + "</html>");
+        set(figures2, "k = " + org.quire.engine.gum.Figures.coverageFactor(o.coverageFactor())
                 + "     U = " + Rounding.uncertainty(o.expandedUncertainty(), digits).toPlainString() + unit
                 + "     U/|y| = " + (Double.isNaN(o.relativeExpandedUncertainty()) ? "n/a"
                         : Rounding.uncertainty(100 * o.relativeExpandedUncertainty(), digits).toPlainString() + " %"));
@@ -264,7 +265,10 @@ final class OutputResultPanel extends JPanel {
         }
     }
 
-    String summaryText() { return headline.getText() + "\n" + figures.getText() + "\n" + figures2.getText(); }
+    String summaryText() {
+        String plain = figures.getText().replace("&nbsp;", " ").replace("<sub>", "_").replaceAll("<[^>]*>", "");
+        return headline.getText() + "\n" + plain + "\n" + figures2.getText();
+    }
 
     /** Sets a label's text only when it differs: layout of text is the costly part of an update. */
     private static void set(JLabel l, String text) {
