@@ -177,8 +177,11 @@ final class OutputResultPanel extends JPanel {
                 + "&nbsp;&nbsp;&nbsp;&nbsp; \u03bd<sub>eff</sub> = " + dofNote + "</html>");
         set(figures2, "k = " + org.quire.engine.gum.Figures.coverageFactor(o.coverageFactor())
                 + "     U = " + Rounding.uncertainty(o.expandedUncertainty(), digits).toPlainString() + unit
-                + "     U/|y| = " + (Double.isNaN(o.relativeExpandedUncertainty()) ? "n/a"
-                        : Rounding.uncertainty(100 * o.relativeExpandedUncertainty(), digits).toPlainString() + " %"));
+                // a relative U only where it means something: not for a quantity that is itself in % (an error)
+                + (!org.quire.engine.gum.Figures.relativeUncertaintyMeaningful(o.unit(), o.estimate(),
+                        o.expandedUncertainty()) ? ""
+                        : "     U/|y| = " + Rounding.uncertainty(100 * o.relativeExpandedUncertainty(), digits)
+                                .toPlainString() + " %"));
         boolean columnsChanged = shown == null || !shown.unit().equals(o.unit());
         shown = o;
         model.set(o);
@@ -189,6 +192,14 @@ final class OutputResultPanel extends JPanel {
         }
         applyFilter();
         fitColumns();
+        javax.swing.table.JTableHeader header = table.getTableHeader();
+        int headerHeight = 0;
+        for (int c = 0; c < table.getColumnCount(); c++) {
+            headerHeight = Math.max(headerHeight, header.getDefaultRenderer().getTableCellRendererComponent(table,
+                    table.getColumnModel().getColumn(c).getHeaderValue(), false, false, -1, c).getPreferredSize().height);
+        }
+        header.setPreferredSize(new Dimension(table.getColumnModel().getTotalColumnWidth(), headerHeight + 4));
+        header.revalidate();
         chart.show(o);
         int h = table.getRowHeight() * Math.max(3, table.getRowCount()) + table.getTableHeader().getPreferredSize().height + 4;
         table.getParent().getParent().setPreferredSize(new Dimension(700, h));
