@@ -10,12 +10,10 @@ import java.util.Locale;
 import java.util.Set;
 import org.quire.app.common.Engine;
 import org.quire.app.review.ChecklistText;
-import org.quire.app.review.DecisionRecorder;
-import org.quire.app.review.DocumentDecisionRecorder;
 import org.quire.app.review.Mark;
 import org.quire.app.review.Review;
 import org.quire.app.review.ReviewContext;
-import org.quire.app.review.Verdict;
+import org.quire.engine.document.Verdict;
 import org.quire.engine.budget.Budget;
 import org.quire.engine.document.BudgetDocument;
 import org.quire.engine.document.DocumentStore;
@@ -139,22 +137,20 @@ final class ReviewCommand implements Callable<Integer> {
             out.println("decision refused: " + e.getMessage() + "; " + file + " is unchanged");
             return 1;
         }
-        DocumentDecisionRecorder recorder = new DocumentDecisionRecorder(doc, Clock.systemUTC());
-        DecisionRecorder.Recorded rec;
+        BudgetDocument saved;
         try {
-            rec = recorder.record(review);
+            saved = review.recordIn(doc, Clock.systemUTC().instant());
         } catch (IllegalArgumentException e) {
             out.println();
             out.println("decision refused: " + e.getMessage() + "; " + file + " is unchanged");
             return 1;
         }
-        BudgetDocument saved = recorder.document();
         Path p = Files.path(file);
         DocumentStore.save(saved, p);
         out.println();
-        out.println(rec.decision().verdict().label() + " by " + rec.decision().assessor() + " on "
-                + rec.decision().date() + "; revision " + saved.revision() + " is now " + saved.status().label()
-                + " (content " + rec.hashAlgorithm() + " " + rec.contentHash() + ")");
+        out.println(review.decision().verdict().label() + " by " + review.decision().assessor() + " on "
+                + review.decision().date() + "; revision " + saved.revision() + " is now " + saved.status().label()
+                + " (content " + review.hashAlgorithm() + " " + review.contentHash() + ")");
         out.println("saved " + file + " (previous version kept as " + DocumentStore.backupOf(p).getFileName() + ")"
                 + (doc.migratedFrom() == 1 ? "; the file is now of format version 2" : ""));
         return 0;
