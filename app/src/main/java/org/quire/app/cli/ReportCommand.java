@@ -128,9 +128,9 @@ final class ReportCommand implements Callable<Integer> {
         CompiledModel model;
         List<ReportSection> sections;
         try {
-            model = b.compile(Engine.library());
+            model = b.compile(quire.engine.library());
             r = GumEvaluator.evaluate(b, model, b.correlationMatrix(), b.settings());
-            sections = CalibrationSections.of(b, Engine.library());
+            sections = CalibrationSections.of(b, quire.engine.library());
         } catch (org.quire.engine.model.ModelException e) {
             throw Files.modelProblem(file, e);
         } catch (IllegalArgumentException e) {
@@ -157,7 +157,7 @@ final class ReportCommand implements Callable<Integer> {
                 }
             }
         }
-        ReportInput input = ReportInput.of(b, r, doc);
+        ReportInput input = ReportInput.of(b, r, doc, quire.engine.library());
         for (ReportSection s : sections) {
             input = input.withSection(s);
         }
@@ -166,7 +166,7 @@ final class ReportCommand implements Callable<Integer> {
         }
         if (against != null) {
             String earlier = against;
-            Comparison c = BudgetComparison.compare(Files.loadDocument(earlier).budget(), b, Engine.library());
+            Comparison c = BudgetComparison.compare(Files.loadDocument(earlier).budget(), b, quire.engine.library());
             input = input.withSection(ComparisonSection.of(c, shortName(earlier), shortName(file)));
         }
         ReportModel m = ReportBuilder.build(input);

@@ -111,14 +111,14 @@ final class ReviewCommand implements Callable<Integer> {
         GumResult r;
         CompiledModel model;
         try {
-            model = b.compile(Engine.library());
+            model = b.compile(quire.engine.library());
             r = GumEvaluator.evaluate(b, model, b.correlationMatrix(), b.settings());
         } catch (org.quire.engine.model.ModelException e) {
             throw Files.modelProblem(file, e);
         } catch (IllegalArgumentException e) {
             throw new Files.FileProblem(file, e.getMessage());
         }
-        ReviewContext ctx = ReviewContext.none().withUnits(new org.quire.app.review.EngineUnitChecker());
+        ReviewContext ctx = ReviewContext.none().withUnits(new org.quire.app.review.EngineUnitChecker(quire.engine.library()));
         if (mc) {
             ctx = ctx.withMonteCarlo(monteCarlo(trials, file, b, model, r));
         }

@@ -290,6 +290,11 @@ public final class WorkbenchFrame extends JFrame {
         return open(BudgetDocument.ofBudget(b, "new budget", prefs.userName()));
     }
 
+    /** @return the function set every budget of this window is evaluated, simulated and reported with */
+    public FunctionLibrary library() {
+        return library;
+    }
+
     /** @return the templates of the shipped folder and the personal and team folders of the preferences */
     public TemplateCatalog templates() {
         return TemplateCatalog.of(null, prefs.personalTemplates(), prefs.teamTemplates());
@@ -617,7 +622,7 @@ public final class WorkbenchFrame extends JFrame {
         new SwingWorker<Void, Void>() {
             @Override
             protected Void doInBackground() throws Exception {
-                ReportExport.write(content, gum, mc, target, LocalDate.now());
+                ReportExport.write(content, gum, mc, target, LocalDate.now(), library);
                 return null;
             }
 

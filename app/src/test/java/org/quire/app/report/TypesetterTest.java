@@ -19,7 +19,7 @@ import org.quire.engine.model.ModelException;
 class TypesetterTest {
 
     private static MathText line(String model, List<String> inputs, String output) throws ModelException {
-        CompiledModel m = ModelCompiler.compile(model, inputs, List.of(output), Engine.library());
+        CompiledModel m = ModelCompiler.compile(model, inputs, List.of(output), Engine.standard().library());
         return Typesetter.equation(m.lines().get(m.lines().size() - 1));
     }
 
@@ -60,7 +60,7 @@ class TypesetterTest {
         assertEquals("water_density(", m.runs().get(2).text().substring(3));
         assertFalse(m.runs().stream().anyMatch(r -> r.shift() == MathText.Shift.SUB && r.text().equals("density")));
         CompiledModel own = ModelCompiler.compile("cell_volume(n, k) = n / k\nV = cell_volume(N, K_p)",
-                List.of("N", "K_p"), List.of("V"), Engine.library());
+                List.of("N", "K_p"), List.of("V"), Engine.standard().library());
         MathText def = Typesetter.equation(own.lines().get(0));
         assertEquals("cell_volume(", def.runs().get(0).text());
         MathText use = Typesetter.equation(own.lines().get(1));

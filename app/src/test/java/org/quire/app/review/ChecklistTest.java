@@ -110,7 +110,7 @@ class ChecklistTest {
     private static org.quire.engine.montecarlo.MonteCarloOutcome run(Budget b, long trials) throws Exception {
         Budget r = b.withSettings(b.settings().withTrials(trials));
         var gum = Examples.gum(r);
-        return org.quire.engine.montecarlo.BudgetSimulation.run(r, r.compile(org.quire.app.common.Engine.library()), gum,
+        return org.quire.engine.montecarlo.BudgetSimulation.run(r, r.compile(org.quire.app.common.Engine.standard().library()), gum,
                 org.quire.engine.montecarlo.BudgetSimulation.settings(r.settings(), gum).withThreads(2),
                 org.quire.engine.montecarlo.ProgressListener.NONE);
     }

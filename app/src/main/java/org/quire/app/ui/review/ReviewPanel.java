@@ -198,7 +198,7 @@ public final class ReviewPanel implements Section {
         if (base != null && base.contentHash().equals(d.contentHash())) {
             return;
         }
-        base = Review.start(r.budget(), r.result(), ReviewContext.none().withUnits(new org.quire.app.review.EngineUnitChecker()),
+        base = Review.start(r.budget(), r.result(), ReviewContext.none().withUnits(new org.quire.app.review.EngineUnitChecker(ctx.library())),
                 org.quire.app.report.ContentHasher.of(d));
         items.set(base.items());
         head.setText("<html>Checklist of revision " + d.revision() + " (" + d.status().label() + "), content SHA-256 "
