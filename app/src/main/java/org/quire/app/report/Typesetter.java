@@ -308,6 +308,18 @@ public final class Typesetter {
     }
 
     private static void number(Formula.Number n, List<Run> out, Shift shift, int context) {
+        if (!n.unit().isEmpty()) {
+            boolean paren = context > 2;
+            if (paren) {
+                out.add(new Run("(", false, shift));
+            }
+            number(new Formula.Number(n.value(), n.written()), out, shift, 0);
+            out.add(new Run("\u2009" + n.unit(), false, shift));
+            if (paren) {
+                out.add(new Run(")", false, shift));
+            }
+            return;
+        }
         String text = n.written();
         int e = text.toLowerCase(Locale.ROOT).indexOf('e');
         if (e < 0) {
