@@ -33,7 +33,10 @@ import picocli.CommandLine.Parameters;
  * {@code quire review FILE [--mc [--trials N] [--seed S]] [--decide endorse|send-back --assessor NAME
  * [--reason TEXT] [--mark ITEM=agreed|finding|remark[:COMMENT]]... [--date YYYY-MM-DD]]}: the automatic checklist
  * of a budget document and, with {@code --decide}, the assessor's decision recorded in the document's history
- * and saved atomically. Exit 0, or 1 when an item is not met (without a decision) or the decision is refused.
+ * and saved atomically. Exit 0; 1 when an item is not met (without a decision) or the checklist does not allow the
+ * decision (unmarked items, findings, no reason); 2 when the engine's rules refuse it ({@link
+ * org.quire.engine.document.ReviewDecisions}: an approved or withdrawn document, the author endorsing, content
+ * already decided on).
  */
 @Command(name = "review", mixinStandardHelpOptions = true, sortOptions = false,
         description = {"The assessor's automatic checklist of a budget document; exit status 1 when an item is not "
@@ -141,9 +144,9 @@ final class ReviewCommand implements Callable<Integer> {
         try {
             saved = review.recordIn(doc, Clock.systemUTC().instant());
         } catch (IllegalArgumentException e) {
-            out.println();
-            out.println("decision refused: " + e.getMessage() + "; " + file + " is unchanged");
-            return 1;
+            // the engine's rules (content reviewed, status, separation of duties, one decision per content): a
+            // user error, exit 2
+            throw new Files.FileProblem(file, "decision refused: " + e.getMessage() + "; the file is unchanged");
         }
         Path p = Files.path(file);
         DocumentStore.save(saved, p);

@@ -111,8 +111,12 @@ class ReviewDecisionCommandTest {
         assertEquals("M. Okafor", rec.get(0).assessor());
 
         // a second decision on approved content is refused
-        assertEquals(1, run("review", f.toString(), "--decide", "send-back", "--assessor", "A. Brandt", "--reason", "x"));
-        assertTrue(out().contains("is approved already"), out());
+        byte[] approvedBytes = Files.readAllBytes(f);
+        assertEquals(2, run("review", f.toString(), "--decide", "send-back", "--assessor", "A. Brandt", "--reason", "x"));
+        String refused = err.toString(StandardCharsets.UTF_8);
+        assertTrue(refused.contains(f + ": decision refused: revision 1 of") && refused.contains("is approved already"),
+                refused);
+        assertArrayEquals(approvedBytes, Files.readAllBytes(f), "the approved file is unchanged");
 
         // a later edit makes revision 2 a draft; revision 1 stays readable as approved
         Budget b = approved.budget();
@@ -168,12 +172,33 @@ class ReviewDecisionCommandTest {
         List<String> args = new ArrayList<>(List.of("review", f.toString(), "--decide", "endorse", "--assessor",
                 "A. Brandt"));
         args.addAll(agreeToAll(f));
-        assertEquals(1, run(args.toArray(new String[0])));
-        assertTrue(out().contains("was already sent back by A. Brandt on ") && out().contains("(revision 1)"), out());
+        assertEquals(2, run(args.toArray(new String[0])));
+        String e = err.toString(StandardCharsets.UTF_8);
+        assertTrue(e.contains("was already sent back by A. Brandt on ") && e.contains("(revision 1)"), e);
         // sending back needs a reason or a finding
         Path g = copy(Files.createDirectory(dir.resolve("g")), "jcgm100-h2-resistance-reactance.json");
         assertEquals(1, run("review", g.toString(), "--decide", "send-back", "--assessor", "A. Brandt"));
         assertTrue(out().contains("needs a reason or at least one finding"), out());
+    }
+
+    @Test
+    void theAuthorCannotEndorseHisOwnBudget(@TempDir Path dir) throws Exception {
+        // separation of duties (ISO/IEC 17025:2017 7.8.2.1 o); common practice): the rule is the engine's
+        Path f = dir.resolve("h2.json");
+        BudgetDocument d = BudgetDocument.newDraft(Examples.budget("jcgm100-h2-resistance-reactance.json"),
+                "M. Okafor", Instant.parse("2026-11-20T08:00:00Z"));
+        DocumentStore.save(d, f);
+        byte[] before = Files.readAllBytes(f);
+        List<String> args = new ArrayList<>(List.of("review", f.toString(), "--decide", "endorse", "--assessor",
+                " m.  okafor"));
+        args.addAll(agreeToAll(f));
+        assertEquals(2, run(args.toArray(new String[0])));
+        String e = err.toString(StandardCharsets.UTF_8);
+        assertTrue(e.contains("decision refused: 'm.  okafor' is the author of") && e.contains("separation of duties"), e);
+        assertArrayEquals(before, Files.readAllBytes(f));
+        args.set(5, "A. Brandt");
+        assertEquals(0, run(args.toArray(new String[0])), err.toString(StandardCharsets.UTF_8));
+        assertEquals(DocumentStatus.APPROVED, DocumentStore.open(f).status());
     }
 
     @Test
