@@ -254,6 +254,11 @@ public final class Typesetter {
         if (f instanceof Formula.Operation o) {
             return o.precedence();
         }
+        if (f instanceof Formula.Number n && !n.unit().isEmpty()) {
+            // a number with its unit is a product (1000 mg/g): bracketed as the right side of * or / and as the
+            // base of a power, so that dm / (1000 mg/g) does not read as (dm / 1000) mg/g
+            return 2;
+        }
         return f instanceof Formula.Negation ? 3 : 5;
     }
 
@@ -309,15 +314,8 @@ public final class Typesetter {
 
     private static void number(Formula.Number n, List<Run> out, Shift shift, int context) {
         if (!n.unit().isEmpty()) {
-            boolean paren = context > 2;
-            if (paren) {
-                out.add(new Run("(", false, shift));
-            }
-            number(new Formula.Number(n.value(), n.written()), out, shift, 0);
+            number(new Formula.Number(n.value(), n.written()), out, shift, 2);
             out.add(new Run("\u2009" + n.unit(), false, shift));
-            if (paren) {
-                out.add(new Run(")", false, shift));
-            }
             return;
         }
         String text = n.written();

@@ -32,6 +32,17 @@ class TypesetterTest {
     }
 
     @Test
+    void aNumberWithItsUnitIsSetAsOneQuantity() throws ModelException {
+        // SI Brochure (9th ed.) 5.4.3: a space between the number and the unit; the quantity is bracketed where
+        // an operator would otherwise bind only its number
+        assertEquals("m = dm / (1000\u2009mg/g)", line("m = dm / 1000 [mg/g]", List.of("dm"), "m").plain());
+        assertEquals("m = 1.0 × 10\u207b\u00b3\u2009g/mg · dm", line("m = 1.0e-3 [g/mg] * dm", List.of("dm"), "m").plain());
+        MathText t = line("d = t - 20 [°C]", List.of("t"), "d");
+        assertEquals("d = t − 20\u2009°C", t.plain());
+        assertFalse(t.runs().get(t.runs().size() - 1).italic(), "the unit is upright");
+    }
+
+    @Test
     void descriptiveSubscriptsAreUprightAndSingleLetterOnesItalic() {
         MathText m = Typesetter.name("theta_mean");
         assertEquals("theta_mean", m.plain(), "the plain form of a name is the name as written");
