@@ -88,7 +88,7 @@ final class CertificateCommand implements Callable<Integer> {
         } catch (BudgetFormatException e) {
             throw new Files.FileProblem(register, e.getMessage());
         }
-        CalibrationResult r = CalibrationCommand.readAndEvaluate(file);
+        CalibrationResult r = CalibrationCommand.readAndEvaluate(file, quire.engine.library());
         Certificate c;
         try {
             c = CertificateBuilder.build(r, references, new CertificateIssue(issued == null ? LocalDate.now() : issued,

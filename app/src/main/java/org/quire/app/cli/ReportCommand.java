@@ -136,9 +136,9 @@ final class ReportCommand implements Callable<Integer> {
         CompiledModel model;
         List<ReportSection> sections;
         try {
-            model = b.compile(Engine.library());
+            model = b.compile(quire.engine.library());
             r = GumEvaluator.evaluate(b, model, b.correlationMatrix(), b.settings());
-            sections = CalibrationSections.of(b, Engine.library());
+            sections = CalibrationSections.of(b, quire.engine.library());
         } catch (org.quire.engine.model.ModelException e) {
             throw Files.modelProblem(file, e);
         } catch (IllegalArgumentException e) {
@@ -165,7 +165,7 @@ final class ReportCommand implements Callable<Integer> {
                 }
             }
         }
-        ReportInput input = ReportInput.of(b, r, doc).withAuthorNotes(withGuidance);
+        ReportInput input = ReportInput.of(b, r, doc, quire.engine.library()).withAuthorNotes(withGuidance);
         for (ReportSection s : sections) {
             input = input.withSection(s);
         }
@@ -174,7 +174,7 @@ final class ReportCommand implements Callable<Integer> {
         }
         if (against != null) {
             String earlier = against;
-            Comparison c = BudgetComparison.compare(Files.loadDocument(earlier).budget(), b, Engine.library());
+            Comparison c = BudgetComparison.compare(Files.loadDocument(earlier).budget(), b, quire.engine.library());
             input = input.withSection(ComparisonSection.of(c, shortName(earlier), shortName(file)));
         }
         write(ReportBuilder.build(input), target, format, csvDir, out);
@@ -192,9 +192,9 @@ final class ReportCommand implements Callable<Integer> {
                         : ", which records its own laboratory, author and item"));
             }
         }
-        CalibrationCommand.Evaluated e = CalibrationCommand.readAndEvaluateWithFile(file);
+        CalibrationCommand.Evaluated e = CalibrationCommand.readAndEvaluateWithFile(file, quire.engine.library());
         DocumentInfo doc = CalibrationReport.documentInfo(e.result().calibration(), e.methodFile(), date);
-        write(CalibrationReport.build(e.result(), doc, withGuidance), target, format, csvDir, out);
+        write(CalibrationReport.build(e.result(), doc, withGuidance, quire.engine.library()), target, format, csvDir, out);
         return 0;
     }
 

@@ -76,15 +76,17 @@ public final class CalibrationReport {
      * @param r the evaluated calibration
      * @param document the header facts ({@link #documentInfo})
      * @param guidance whether the method's notes on its inputs (the author's guidance) are added as an appendix
+     * @param library the function set the calibration was evaluated with (the method's model is typeset with it)
      * @return the report
      */
-    public static ReportModel build(CalibrationResult r, DocumentInfo document, boolean guidance) {
+    public static ReportModel build(CalibrationResult r, DocumentInfo document, boolean guidance,
+            org.quire.engine.model.FunctionLibrary library) {
         String flowUnit = Units.display(r.flowUnit());
         List<Part> parts = new ArrayList<>();
         parts.add(facts(r));
         Budget method = firstBudget(r);
         if (method != null) {
-            parts.add(ReportBuilder.model(method));
+            parts.add(ReportBuilder.model(method, library));
         }
         parts.add(declarations(r.calibration()));
         Part results = CertificateBuilder.results(r, flowUnit);

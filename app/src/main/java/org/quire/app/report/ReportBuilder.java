@@ -4,7 +4,6 @@ import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.List;
 import org.quire.app.common.Cautions;
-import org.quire.app.common.Engine;
 import org.quire.app.report.ReportModel.Block;
 import org.quire.app.report.ReportModel.ChartBlock;
 import org.quire.app.report.ReportModel.Equations;
@@ -59,7 +58,7 @@ public final class ReportBuilder {
         GumResult gum = in.gum();
         List<Part> parts = new ArrayList<>();
         parts.add(purpose(b));
-        parts.add(model(b));
+        parts.add(model(b, in.library()));
         parts.add(inputs(b));
         if (!b.correlations().isEmpty()) {
             parts.add(correlations(b));
@@ -104,11 +103,11 @@ public final class ReportBuilder {
         return new Part("Purpose and notes", blocks);
     }
 
-    static Part model(Budget b) {
+    static Part model(Budget b, org.quire.engine.model.FunctionLibrary library) {
         List<MathText> lines = new ArrayList<>();
         List<Block> blocks = new ArrayList<>();
         try {
-            CompiledModel m = b.compile(Engine.library());
+            CompiledModel m = b.compile(library);
             for (Formula.Line l : m.lines()) {
                 lines.add(Typesetter.equation(l));
             }

@@ -302,6 +302,11 @@ public final class Typesetter {
         if (f instanceof Formula.Operation o) {
             return o.precedence();
         }
+        if (f instanceof Formula.Number n && !n.unit().isEmpty()) {
+            // a number with its unit is a product (1000 mg/g): bracketed as the right side of * or / and as the
+            // base of a power, so that dm / (1000 mg/g) does not read as (dm / 1000) mg/g
+            return 2;
+        }
         return f instanceof Formula.Negation ? 3 : 5;
     }
 
@@ -356,6 +361,11 @@ public final class Typesetter {
     }
 
     private static void number(Formula.Number n, List<Run> out, Shift shift, int context) {
+        if (!n.unit().isEmpty()) {
+            number(new Formula.Number(n.value(), n.written()), out, shift, 2);
+            out.add(new Run("\u2009" + n.unit(), false, shift));
+            return;
+        }
         String text = n.written();
         int e = text.toLowerCase(Locale.ROOT).indexOf('e');
         if (e < 0) {

@@ -158,7 +158,7 @@ final class WorkbenchActions {
         budget.add(compareWith);
         bar.add(budget);
         JMenu help = menu("Help", KeyEvent.VK_H);
-        help.add(action("Model language reference", 0, 0, e -> ReferenceDialog.show(frame)));
+        help.add(action("Model language reference", 0, 0, e -> ReferenceDialog.show(frame, frame.library())));
         help.addSeparator();
         help.add(action("About Quire", 0, 0, e -> AboutDialog.show(frame)));
         bar.add(help);

@@ -330,6 +330,11 @@ public final class WorkbenchFrame extends JFrame {
         return open(BudgetDocument.ofBudget(b, "new budget", prefs.userName()));
     }
 
+    /** @return the function set every budget of this window is evaluated, simulated and reported with */
+    public FunctionLibrary library() {
+        return library;
+    }
+
     private void openEntry(WorkspaceNavigator.Entry e) {
         if (!e.template()) {
             open(e.file());
@@ -414,7 +419,7 @@ public final class WorkbenchFrame extends JFrame {
         new SwingWorker<Void, Void>() {
             @Override
             protected Void doInBackground() throws Exception {
-                ReportExport.write(content, gum, mc, target, LocalDate.now());
+                ReportExport.write(content, gum, mc, target, LocalDate.now(), library);
                 return null;
             }
 

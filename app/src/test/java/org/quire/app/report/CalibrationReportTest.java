@@ -264,7 +264,7 @@ class CalibrationReportTest {
         // ISO/IEC 17025:2017 7.8.2.1 b): the number the certificate prints is derived by the engine's one rule
         var loaded = org.quire.engine.calibration.CalibrationJson.read(Path.of(CAL));
         var r = org.quire.engine.calibration.CalibrationEvaluator.of(org.quire.engine.calibration.CalibrationJson
-                .method(Path.of(CAL), loaded), org.quire.app.common.Engine.library()).evaluate(loaded.calibration());
+                .method(Path.of(CAL), loaded), org.quire.app.common.Engine.standard().library()).evaluate(loaded.calibration());
         Certificate c = CertificateBuilder.build(r, org.quire.engine.io.ReferenceRegisterJson.read(Path.of(REG)),
                 new CertificateIssue(LocalDate.of(2026, 11, 25), "M. Fenwick (invented)", "technical manager", "",
                         false));

@@ -49,7 +49,7 @@ class CertificateTest {
 
     private static CalibrationResult evaluate(Calibration c) throws Exception {
         CalibrationJson.Loaded loaded = CalibrationJson.read(CAL);
-        return CalibrationEvaluator.of(CalibrationJson.method(CAL, loaded), Engine.library()).evaluate(c);
+        return CalibrationEvaluator.of(CalibrationJson.method(CAL, loaded), Engine.standard().library()).evaluate(c);
     }
 
     private static ReferenceRegister register() throws Exception {

@@ -40,11 +40,11 @@ class Jcgm101MassCalibrationReportTest {
         BudgetDocument doc = DocumentStore.open(Examples.file("jcgm101-9.3-mass-calibration.json"));
         Budget b = doc.budget();
         b = b.withSettings(b.settings().withTrials(M));
-        var model = b.compile(Engine.library());
+        var model = b.compile(Engine.standard().library());
         GumResult gum = Examples.gum(b);
         mc = BudgetSimulation.run(b, model, gum, BudgetSimulation.settings(b.settings(), gum).withThreads(2),
                 ProgressListener.NONE);
-        ReportModel m = ReportBuilder.build(ReportInput.of(b, gum, DocumentInfo.of(doc, LocalDate.of(2026, 11, 20)))
+        ReportModel m = ReportBuilder.build(ReportInput.of(b, gum, DocumentInfo.of(doc, LocalDate.of(2026, 11, 20)), org.quire.app.common.Engine.standard().library())
                 .withMonteCarlo(mc));
         ByteArrayOutputStream out = new ByteArrayOutputStream();
         PdfReport.render(m, out);

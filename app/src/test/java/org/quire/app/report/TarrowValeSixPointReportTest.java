@@ -36,8 +36,8 @@ class TarrowValeSixPointReportTest {
     static void render() throws Exception {
         doc = DocumentStore.open(Examples.file(EXAMPLE));
         Budget b = doc.budget();
-        ReportInput in = ReportInput.of(b, Examples.gum(b), DocumentInfo.of(doc, LocalDate.of(2026, 11, 20)));
-        for (ReportSection s : CalibrationSections.of(b, Engine.library())) {
+        ReportInput in = ReportInput.of(b, Examples.gum(b), DocumentInfo.of(doc, LocalDate.of(2026, 11, 20)), org.quire.app.common.Engine.standard().library());
+        for (ReportSection s : CalibrationSections.of(b, Engine.standard().library())) {
             in = in.withSection(s);
         }
         ReportModel m = ReportBuilder.build(in);

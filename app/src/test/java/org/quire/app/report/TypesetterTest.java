@@ -19,7 +19,7 @@ import org.quire.engine.model.ModelException;
 class TypesetterTest {
 
     private static MathText line(String model, List<String> inputs, String output) throws ModelException {
-        CompiledModel m = ModelCompiler.compile(model, inputs, List.of(output), Engine.library());
+        CompiledModel m = ModelCompiler.compile(model, inputs, List.of(output), Engine.standard().library());
         return Typesetter.equation(m.lines().get(m.lines().size() - 1));
     }
 
@@ -29,6 +29,17 @@ class TypesetterTest {
         MathText m = line("l = l_s + d - l_s * (delta_alpha * theta + alpha_s * delta_theta)",
                 List.of("l_s", "d", "delta_alpha", "theta", "alpha_s", "delta_theta"), "l");
         assertEquals("l = l_s + d − l_s · (δα · θ + α_s · δθ)", m.plain());
+    }
+
+    @Test
+    void aNumberWithItsUnitIsSetAsOneQuantity() throws ModelException {
+        // SI Brochure (9th ed.) 5.4.3: a space between the number and the unit; the quantity is bracketed where
+        // an operator would otherwise bind only its number
+        assertEquals("m = dm / (1000\u2009mg/g)", line("m = dm / 1000 [mg/g]", List.of("dm"), "m").plain());
+        assertEquals("m = 1.0 × 10\u207b\u00b3\u2009g/mg · dm", line("m = 1.0e-3 [g/mg] * dm", List.of("dm"), "m").plain());
+        MathText t = line("d = t - 20 [°C]", List.of("t"), "d");
+        assertEquals("d = t − 20\u2009°C", t.plain());
+        assertFalse(t.runs().get(t.runs().size() - 1).italic(), "the unit is upright");
     }
 
     @Test
@@ -71,7 +82,7 @@ class TypesetterTest {
         assertEquals("water_density(", m.runs().get(2).text().substring(3));
         assertFalse(m.runs().stream().anyMatch(r -> r.shift() == MathText.Shift.SUB && r.text().equals("density")));
         CompiledModel own = ModelCompiler.compile("cell_volume(n, k) = n / k\nV = cell_volume(N, K_p)",
-                List.of("N", "K_p"), List.of("V"), Engine.library());
+                List.of("N", "K_p"), List.of("V"), Engine.standard().library());
         MathText def = Typesetter.equation(own.lines().get(0));
         assertEquals("cell_volume(", def.runs().get(0).text());
         MathText use = Typesetter.equation(own.lines().get(1));

@@ -45,7 +45,7 @@ abstract class GuiTestSupport {
 
     /** @return the Monte Carlo runner the workbench gets: the engine's, unless a test says otherwise */
     MonteCarloRunner runner() {
-        return MonteCarloRunner.engine(Engine.library());
+        return MonteCarloRunner.engine(Engine.standard().library());
     }
 
     @BeforeEach
@@ -59,7 +59,7 @@ abstract class GuiTestSupport {
         node.put("userName", "Test Engineer");
         node.put("windowBounds", "0,0,1440,900");
         frame = onEdt(() -> {
-            WorkbenchFrame f = new WorkbenchFrame(new WorkbenchPrefs(node), Engine.library(), runner());
+            WorkbenchFrame f = new WorkbenchFrame(new WorkbenchPrefs(node), Engine.standard().library(), runner());
             f.showRestored();
             return f;
         });
@@ -95,7 +95,7 @@ abstract class GuiTestSupport {
     /** @return a frame on the same preferences (a restart of the workbench), shown */
     WorkbenchFrame newFrameOnSamePreferences() throws Exception {
         return onEdt(() -> {
-            WorkbenchFrame f = new WorkbenchFrame(new WorkbenchPrefs(node), Engine.library(), runner());
+            WorkbenchFrame f = new WorkbenchFrame(new WorkbenchPrefs(node), Engine.standard().library(), runner());
             f.showRestored();
             return f;
         });

@@ -9,6 +9,9 @@ import java.util.LinkedHashSet;
 import java.util.List;
 import java.util.Map;
 import java.util.Set;
+import org.quire.engine.units.Unit;
+import org.quire.engine.units.UnitException;
+import org.quire.engine.units.Units;
 
 /**
  * Compiles model text into a {@link CompiledModel}: parses it, resolves every name against the inputs, the
@@ -217,7 +220,7 @@ public final class ModelCompiler {
     /** The expression with its names resolved; called only once the model compiled without errors. */
     private Formula formula(Expr e, Set<String> params) {
         if (e instanceof Expr.Num n) {
-            return new Formula.Number(n.value(), n.written());
+            return new Formula.Number(n.value(), n.written(), n.unit());
         }
         if (e instanceof Expr.Name n) {
             String name = n.name();
@@ -305,7 +308,11 @@ public final class ModelCompiler {
     }
 
     private Node constant(SourcePosition at, String text, double v) {
-        Node c = new Node.Const(nextId++, at, text, v);
+        return constant(at, text, v, null);
+    }
+
+    private Node constant(SourcePosition at, String text, double v, Unit unit) {
+        Node c = new Node.Const(nextId++, at, text, v, unit);
         consts.add(c);
         return c;
     }
@@ -329,8 +336,16 @@ public final class ModelCompiler {
 
     private Node nodeNested(Expr e, Map<String, Node> params, Deque<String> calling, Set<Integer> deps) {
         String txt = ExprPrinter.print(e);
-        if (e instanceof Expr.Num) {
-            return constant(e.at(), txt, ((Expr.Num) e).value());
+        if (e instanceof Expr.Num n) {
+            Unit unit = null;
+            if (!n.unit().isEmpty()) {
+                try {
+                    unit = Units.parse(n.unit());
+                } catch (UnitException x) {
+                    error(n.unitAt(), "unit [" + n.unit() + "] of the number " + n.written() + ": " + x.getMessage());
+                }
+            }
+            return constant(e.at(), txt, n.value(), unit);
         }
         if (e instanceof Expr.Name) {
             String name = ((Expr.Name) e).name();
@@ -367,8 +382,8 @@ public final class ModelCompiler {
         }
         if (e instanceof Expr.Unary) {
             Node a = node(((Expr.Unary) e).operand(), params, calling, deps);
-            if (a instanceof Node.Const) {
-                return constant(e.at(), txt, -((Node.Const) a).value);
+            if (a instanceof Node.Const k) {
+                return constant(e.at(), txt, -k.value, k.unit);
             }
             return new Node.Neg(nextId++, e.at(), txt, a);
         }
@@ -377,8 +392,8 @@ public final class ModelCompiler {
             Node a = node(b.left(), params, calling, deps);
             Node c = node(b.right(), params, calling, deps);
             if (b.op() == '^') {
-                if (c instanceof Node.Const) {
-                    double k = ((Node.Const) c).value;
+                if (c instanceof Node.Const kc && kc.unit == null) {
+                    double k = kc.value;
                     if (k == Math.rint(k) && Math.abs(k) <= 64) {
                         return new Node.PowInt(nextId++, e.at(), txt, a, (int) k);
                     }

@@ -97,10 +97,13 @@ abstract class Node {
     // ----------------------------------------------------------------------------------------------------
     static final class Const extends Node {
         final double value;
+        /** The unit written with the number ({@code 1000 [g/kg]}), or null for a pure number. */
+        final org.quire.engine.units.Unit unit;
 
-        Const(int id, SourcePosition at, String text, double value) {
+        Const(int id, SourcePosition at, String text, double value, org.quire.engine.units.Unit unit) {
             super(id, at, text);
             this.value = value;
+            this.unit = unit;
         }
 
         @Override double eval(Scalar s) { return value; }

@@ -13,7 +13,8 @@ import java.util.List;
  * product   = signed { ("*" | "/") signed }
  * signed    = ("-" | "+") signed | power
  * power     = atom [ "^" signed ]              (right-associative: 2^3^2 = 2^9; -x^2 = -(x^2))
- * atom      = number | name | name "(" sum { "," sum } ")" | "(" sum ")"
+ * atom      = number [ unit ] | name | name "(" sum { "," sum } ")" | "(" sum ")"
+ * unit      = "[" unit expression "]"          (a number with its unit: 1000 [g/kg], 20 [°C])
  * </pre>
  *
  * Errors are collected with their line and column; after an error the parser resumes at the next line.
@@ -242,6 +243,11 @@ final class Parser {
 
     private Expr power() {
         Expr base = atom();
+        if (peek().is(Token.Kind.UNIT)) {
+            Token u = peek();
+            throw fail(u, "a unit in brackets belongs right after a number, as in 1000 [g/kg]; '" + ExprPrinter.print(base)
+                    + "' has its unit already (an input's or output's unit is stated with the input or output)");
+        }
         if (peek().is(Token.Kind.CARET)) {
             Token op = take();
             Expr exponent = signed();
@@ -254,6 +260,10 @@ final class Parser {
         Token t = take();
         switch (t.kind()) {
             case NUMBER:
+                if (peek().is(Token.Kind.UNIT)) {
+                    Token u = take();
+                    return new Expr.Num(t.number(), t.text(), t.at(), u.text(), u.at());
+                }
                 return new Expr.Num(t.number(), t.text(), t.at());
             case NAME:
                 if (peek().is(Token.Kind.LPAREN)) {

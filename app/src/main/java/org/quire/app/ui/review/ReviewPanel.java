@@ -32,7 +32,7 @@ import org.quire.app.review.Comment;
 import org.quire.app.review.Mark;
 import org.quire.app.review.Review;
 import org.quire.app.review.ReviewContext;
-import org.quire.app.review.Verdict;
+import org.quire.engine.document.Verdict;
 import org.quire.app.ui.common.Colors;
 import org.quire.app.ui.common.WrapLayout;
 import org.quire.app.ui.document.Recalculation;
@@ -41,12 +41,13 @@ import org.quire.app.ui.common.Section;
 import org.quire.engine.budget.Budget;
 import org.quire.engine.budget.InputQuantity;
 import org.quire.engine.document.BudgetDocument;
+import org.quire.engine.document.DocumentStore;
 
 /**
  * The assessor's review of a budget open read-only: the automatic checklist ({@link Review#start}) with each
  * item's outcome, where the assessor sets a mark and a comment; comments on inputs; and the decision (endorse or
  * send back, with the assessor's name, the date and a reason), recorded in the document's history and saved to
- * its file by a {@link DocumentDecisionRecorder}.
+ * its file; the engine's {@link org.quire.engine.document.ReviewDecisions} owns the rules of the decision.
  */
 public final class ReviewPanel implements Section {
     /** The heading of this section. */
@@ -207,7 +208,8 @@ public final class ReviewPanel implements Section {
                     return prior;
                 }
                 return Review.start(r.budget(), r.result(), ReviewContext.none().withUnits(
-                        new org.quire.app.review.EngineUnitChecker()), DocumentDecisionRecorder.hasherOf(d));
+                        new org.quire.app.review.EngineUnitChecker(ctx.library())),
+                        org.quire.app.report.ContentHasher.of(d));
             }
 
             @Override
@@ -318,9 +320,12 @@ public final class ReviewPanel implements Section {
         }
         try {
             Review r = decide();
-            DocumentDecisionRecorder recorder = new DocumentDecisionRecorder(ctx.document().content(), file, clock);
-            recorder.record(r);
-            BudgetDocument saved = recorder.document();
+            BudgetDocument saved = r.recordIn(ctx.document().content(), clock.instant());
+            try {
+                DocumentStore.save(saved, file);
+            } catch (java.io.IOException e) {
+                throw new UncheckedIOException(e.getMessage(), e);
+            }
             decided = r;
             ctx.document().replaceSaved(saved, file, "Record the review decision");
             setOpen(false);
