@@ -443,27 +443,70 @@ public final class CompiledModel implements BlockEvaluator {
         }
     }
 
+    /**
+     * The most scratch memory one session may hold, in bytes. A session keeps one array of block length per
+     * compiled operation; a model with very many operations (user functions written out in full) works through
+     * a block in shorter pieces instead of allocating gigabytes.
+     */
+    static final long SESSION_SCRATCH_BYTES = 64L << 20;
+
+    /**
+     * The block length a session uses inside: {@code maxBlock}, or fewer trials at a time when the model's
+     * operations would need more than {@link #SESSION_SCRATCH_BYTES} of scratch space.
+     */
+    static int innerBlock(int nodes, int maxBlock) {
+        long fit = SESSION_SCRATCH_BYTES / (8L * Math.max(1, nodes));
+        return (int) Math.max(1, Math.min(maxBlock, fit));
+    }
+
     @Override
     public Session newSession(int maxBlock) {
         if (maxBlock < 1) {
             throw new IllegalArgumentException("maxBlock must be at least 1, not " + maxBlock);
         }
-        Node.Block b = new Node.Block(nodeCount, roots.length, maxBlock);
+        int inner = innerBlock(nodeCount, maxBlock);
+        Node.Block b = new Node.Block(nodeCount, roots.length, inner);
         for (Node c : constants) {
             Arrays.fill(b.buf[c.id], ((Node.Const) c).value);
         }
+        if (inner == maxBlock) {
+            return (in, n, out) -> {
+                if (n > maxBlock) {
+                    throw new IllegalArgumentException("block of " + n + " trials exceeds the session's " + maxBlock);
+                }
+                evaluateBlock(b, in, n, out, 0);
+            };
+        }
+        double[][] pieceIn = new double[inputs.size()][inner];
+        double[][] pieceOut = new double[outputIndex.length][inner];
         return (in, n, out) -> {
             if (n > maxBlock) {
                 throw new IllegalArgumentException("block of " + n + " trials exceeds the session's " + maxBlock);
             }
-            b.in = in;
+            for (int from = 0; from < n; from += inner) {
+                int m = Math.min(inner, n - from);
+                for (int i = 0; i < pieceIn.length; i++) {
+                    System.arraycopy(in[i], from, pieceIn[i], 0, m);
+                }
+                evaluateBlock(b, pieceIn, m, pieceOut, 0);
+                for (int k = 0; k < pieceOut.length; k++) {
+                    System.arraycopy(pieceOut[k], 0, out[k], from, m);
+                }
+            }
+        };
+    }
+
+    private void evaluateBlock(Node.Block b, double[][] in, int n, double[][] out, int offset) {
+        b.in = in;
+        try {
             for (int j : order) {
                 b.vars[j] = roots[j].block(b, n);
             }
             for (int k = 0; k < outputIndex.length; k++) {
-                System.arraycopy(b.vars[outputIndex[k]], 0, out[k], 0, n);
+                System.arraycopy(b.vars[outputIndex[k]], 0, out[k], offset, n);
             }
+        } finally {
             b.in = null;
-        };
+        }
     }
 }

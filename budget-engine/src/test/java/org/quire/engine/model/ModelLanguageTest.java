@@ -159,4 +159,32 @@ class ModelLanguageTest {
             assertEquals(m.evaluate(new double[] {in[0][t], in[1][t], in[2][t]})[0], out[0][t], 1e-12);
         }
     }
+
+    @Test
+    void aModelOfVeryManyOperationsWorksThroughABlockInPiecesWithTheSameValues() throws ModelException {
+        // A function that calls another twice at every level doubles the written-out model at each level; 15
+        // levels give about 65 000 operations, whose full-length scratch arrays (8192 trials) would need 4 GB.
+        StringBuilder text = new StringBuilder("g0(x) = x + 1\n");
+        for (int k = 1; k <= 15; k++) {
+            text.append("g").append(k).append("(x) = (g").append(k - 1).append("(x) + g").append(k - 1)
+                    .append("(x)) / 2\n");
+        }
+        text.append("y = g15(a) * b");
+        CompiledModel m = ModelCompiler.compile(text.toString(), List.of("a", "b"), List.of("y"),
+                FunctionLibrary.standard());
+        int block = 8192;
+        assertTrue(CompiledModel.innerBlock(1 << 16, block) < block, "the session must work in pieces");
+        int n = 5000;
+        double[][] in = new double[2][n];
+        double[][] out = new double[1][n];
+        for (int t = 0; t < n; t++) {
+            in[0][t] = 0.001 * t;
+            in[1][t] = 2 - 0.0001 * t;
+        }
+        m.newSession(block).evaluate(in, n, out);
+        for (int t = 0; t < n; t += 7) {
+            // (x + 1) averaged with itself at every level stays x + 1
+            assertEquals((in[0][t] + 1) * in[1][t], out[0][t], 1e-12, "trial " + t);
+        }
+    }
 }
