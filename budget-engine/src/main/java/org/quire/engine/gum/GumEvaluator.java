@@ -108,19 +108,20 @@ public final class GumEvaluator {
                 }
             }
         }
+        // only the inputs correlated with another enter the off-diagonal terms, so the cost stays linear in the
+        // number of inputs (quadratic in the number of correlated ones only)
+        int[] members = r.correlated();
         double[][] cov = new double[m][m];
         for (int k = 0; k < m; k++) {
             for (int l = 0; l < m; l++) {
                 double s = 0;
                 for (int i : active) {
-                    if (!correlated) {
-                        // r is the identity: only the terms i = j remain, so the cost is linear in the inputs
-                        s += c[k][i] * c[l][i] * u[i] * u[i];
-                        continue;
-                    }
-                    for (int j : active) {
+                    s += c[k][i] * c[l][i] * u[i] * u[i];
+                }
+                for (int i : members) {
+                    for (int j : members) {
                         double rij = r.get(i, j);
-                        if (rij != 0) {
+                        if (i != j && rij != 0) {
                             s += c[k][i] * c[l][j] * u[i] * u[j] * rij;
                         }
                     }
@@ -149,11 +150,11 @@ public final class GumEvaluator {
             double corrVar = 0;
             List<CorrelationTerm> terms = new ArrayList<>();
             if (correlated) {
-                for (int ia = 0; ia < active.length; ia++) {
-                    for (int ja = ia + 1; ja < active.length; ja++) {
-                        int i = active[ia];
-                        int j = active[ja];
-                        if (r.get(i, j) != 0) {
+                for (int ia = 0; ia < members.length; ia++) {
+                    for (int ja = ia + 1; ja < members.length; ja++) {
+                        int i = members[ia];
+                        int j = members[ja];
+                        if (r.get(i, j) != 0 && u[i] > 0 && u[j] > 0) {
                             double t = 2 * c[k][i] * c[k][j] * u[i] * u[j] * r.get(i, j);
                             corrVar += t;
                             if (t != 0) {
@@ -332,8 +333,9 @@ public final class GumEvaluator {
 
     /** @return true when a pair of correlated inputs has an input whose distribution is not normal */
     private static boolean correlatedNonNormal(List<InputQuantity> inputs, CorrelationMatrix r) {
-        for (int i = 0; i < inputs.size(); i++) {
-            for (int j = 0; j < inputs.size(); j++) {
+        int[] members = r.correlated();
+        for (int i : members) {
+            for (int j : members) {
                 if (i != j && r.get(i, j) != 0 && !(inputs.get(i).evaluation().distribution()
                         instanceof org.quire.engine.budget.Distribution.Normal)) {
                     return true;

@@ -21,7 +21,7 @@ import org.quire.engine.units.Units;
  * wrong numbers of arguments, outputs no equation defines).
  *
  * <p>The result is a tree of our own node objects: no scripting engine, no reflection, no code generated from
- * user text. Stateless and thread-safe.
+ * user text. Thread-safe; it keeps the last few compiled models (immutable) to return them for the same input.
  */
 public final class ModelCompiler {
     private final String text;
@@ -84,7 +84,51 @@ public final class ModelCompiler {
      */
     public static CompiledModel compile(String text, List<String> inputs, List<String> outputs,
             FunctionLibrary library, ModelUnits units) throws ModelException {
-        return new ModelCompiler(text, inputs, outputs, library, units).run();
+        Key key = new Key(text, List.copyOf(inputs), List.copyOf(outputs), library, units);
+        synchronized (RECENT) {
+            CompiledModel m = RECENT.get(key);
+            if (m != null) {
+                return m;
+            }
+        }
+        CompiledModel m = new ModelCompiler(text, inputs, outputs, library, units).run();
+        synchronized (RECENT) {
+            RECENT.put(key, m);
+        }
+        return m;
+    }
+
+    /** Models compiled most recently, kept for a recalculation of the same model after an edit elsewhere. */
+    private static final int RECENT_MODELS = 8;
+
+    /**
+     * The last {@value #RECENT_MODELS} models compiled, by everything their compilation reads: a compiled model is
+     * immutable, so one compiled before is returned for the same text, names, library and units (a budget
+     * recalculated after a changed estimate or uncertainty is not compiled again).
+     */
+    private static final java.util.Map<Key, CompiledModel> RECENT = new java.util.LinkedHashMap<>(16, 0.75f, true) {
+        private static final long serialVersionUID = 1L;
+
+        @Override
+        protected boolean removeEldestEntry(java.util.Map.Entry<Key, CompiledModel> eldest) {
+            return size() > RECENT_MODELS;
+        }
+    };
+
+    /** What a compilation depends on; the library by identity (it is immutable). */
+    private record Key(String text, List<String> inputs, List<String> outputs, FunctionLibrary library,
+            ModelUnits units) {
+        @Override
+        public boolean equals(Object o) {
+            return o instanceof Key k && library == k.library && text.equals(k.text) && inputs.equals(k.inputs)
+                    && outputs.equals(k.outputs) && units.equals(k.units);
+        }
+
+        @Override
+        public int hashCode() {
+            return ((text.hashCode() * 31 + inputs.hashCode()) * 31 + outputs.hashCode()) * 31
+                    + System.identityHashCode(library);
+        }
     }
 
     /**
