@@ -169,6 +169,40 @@ class ShippedTemplatesTest {
         assertEquals("d_straight", largest(e).input());
     }
 
+    /**
+     * Issue 11/15: every shipped file is a real template that carries no value of its example into a new budget:
+     * each input is set by a parameter or locked as a value of the method, every Type A input's data (readings,
+     * or mean, s and n) comes from parameters, and a new budget without values is refused naming every required
+     * parameter.
+     */
+    @TestFactory
+    Stream<DynamicTest> eachTemplateAsksForEveryValueOfTheMeasurementAndLocksTheRest() throws IOException {
+        return templateFiles().stream().map(file -> DynamicTest.dynamicTest(file.getFileName().toString(), () -> {
+            org.quire.engine.document.Template t = org.quire.engine.document.Template.of(
+                    org.quire.engine.document.DocumentStore.open(file));
+            Budget b = t.document().budget();
+            assertFalse(t.spec().parameters().isEmpty(), "parameters");
+            assertEquals(List.of(), t.spec().carriedValues(b), "values of the example a new budget would keep");
+            for (InputQuantity q : b.inputs()) {
+                boolean parameter = t.spec().parameters().stream().anyMatch(p -> p.input().equals(q.name()));
+                boolean locked = t.spec().isLocked(q.name(), "evaluation");
+                assertTrue(parameter != locked, q.name() + ": either a parameter (the user's) or locked (the method's)");
+                if (q.evaluation() instanceof org.quire.engine.budget.TypeA) {
+                    assertTrue(parameter, q.name() + ": Type A data come from the user");
+                }
+            }
+            IllegalArgumentException e = org.junit.jupiter.api.Assertions.assertThrows(IllegalArgumentException.class,
+                    () -> t.budgetFor(Map.of()));
+            for (org.quire.engine.document.TemplateParameter p : t.spec().parameters()) {
+                if (!p.hasDefault()) {
+                    assertTrue(e.getMessage().contains("parameter '" + p.name() + "'"), p.name() + ": " + e.getMessage());
+                }
+            }
+            org.quire.engine.document.BudgetDocument d = org.quire.engine.document.DocumentStore.open(file);
+            assertTrue(!d.laboratory().isBlank(), "the template names its laboratory (which is not carried over)");
+        }));
+    }
+
     private static OutputResult output(GumResult r, String name) {
         OutputResult o = r.outputs().stream().filter(q -> q.name().equals(name)).findFirst().orElse(null);
         assertNotNull(o, "output " + name);

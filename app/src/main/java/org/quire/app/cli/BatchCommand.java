@@ -250,6 +250,7 @@ final class BatchCommand implements Callable<Integer> {
      */
     private static Outcome evaluate(Template template, CompiledModel model, Row row, EvaluationSettings mc) {
         Map<String, Double> values = new LinkedHashMap<>();
+        Map<String, double[]> readings = new LinkedHashMap<>();
         List<String> header = row.cells().table().header();
         for (int c = 0; c < header.size(); c++) {
             String column = header.get(c);
@@ -257,13 +258,24 @@ final class BatchCommand implements Callable<Integer> {
                 if (column.equals("id") || row.cells().isBlank(c)) {
                     continue;
                 }
-                values.put(column, row.cells().number(c));
+                org.quire.engine.document.TemplateParameter p = template.spec().parameter(column);
+                if (p != null && p.isReadings()) {
+                    // the readings of one row: one cell, separated by ';' or tabs, read by the one CSV number rule
+                    readings.put(column, org.quire.engine.csv.CsvReadings.parse("line " + row.cells().line()
+                            + ", column " + column, row.cells().text(c), org.quire.engine.csv.CsvOptions.defaults()));
+                } else {
+                    values.put(column, row.cells().number(c));
+                }
             } catch (CsvException e) {
                 return new Outcome(null, "parameter '" + column + "': " + e.reason());
             }
         }
+        org.quire.engine.document.TemplateValues given = org.quire.engine.document.TemplateValues.of(values);
+        for (Map.Entry<String, double[]> r : readings.entrySet()) {
+            given = given.withReadings(r.getKey(), r.getValue());
+        }
         try {
-            Budget b = template.budgetFor(values);
+            Budget b = template.budgetFor(given);
             GumResult r = GumEvaluator.evaluate(b, model, b.correlationMatrix(), b.settings());
             List<String> cells = new ArrayList<>();
             for (OutputResult o : r.outputs()) {

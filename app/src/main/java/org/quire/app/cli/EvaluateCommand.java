@@ -2,6 +2,7 @@ package org.quire.app.cli;
 
 import jakarta.json.JsonObject;
 import java.io.PrintStream;
+import java.util.List;
 import java.util.Locale;
 import java.util.Set;
 import java.util.concurrent.Callable;
@@ -84,20 +85,43 @@ final class EvaluateCommand implements Callable<Integer> {
         } catch (IllegalArgumentException e) {
             throw new Files.FileProblem(file, e.getMessage());
         }
+        List<String> template = templateFindings(b);
         switch (format) {
             case "json":
                 JsonObject j = ResultJson.toJson(b.title(), r);
+                if (!template.isEmpty()) {
+                    jakarta.json.JsonArrayBuilder a = org.quire.engine.io.JsonSupport.JSON.createArrayBuilder();
+                    template.forEach(a::add);
+                    j = org.quire.engine.io.JsonSupport.JSON.createObjectBuilder(j).add("templateFindings", a).build();
+                }
                 out.print(BudgetJson.pretty(j));
                 break;
             case "csv":
                 out.print(csv(r));
+                template.forEach(t -> quire.err.println("warning: " + t));
                 break;
             default:
                 out.print(BudgetTableText.format(b.title(), r));
+                for (String t : template) {
+                    out.println("Warning (template): " + t);
+                }
                 out.println();
                 out.println(Cautions.TEXT);
         }
         return 0;
+    }
+
+    /**
+     * @return the engine's template check ({@link org.quire.engine.document.TemplateConformance}) of a budget made
+     *     from a template, one sentence per finding; empty for a budget that keeps every locked field or was not
+     *     made from a template
+     */
+    private List<String> templateFindings(Budget b) throws Exception {
+        if (!b.extensions().containsKey("templateOrigin")) {
+            return List.of();
+        }
+        org.quire.engine.document.BudgetDocument d = Files.loadDocument(file);
+        return org.quire.engine.document.TemplateConformance.check(d, TemplateCommand.Folders.preferred()).messages();
     }
 
     static String csv(GumResult r) {

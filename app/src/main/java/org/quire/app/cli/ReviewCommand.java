@@ -43,7 +43,8 @@ import picocli.CommandLine.Parameters;
                 + "met.",
             "--decide records the assessor's decision in the document's history (endorse: approved; send-back: "
                 + "draft) and saves the file atomically; endorsing is refused while an item not met or to confirm "
-                + "is unmarked."},
+                + "is unmarked. A budget made from a template whose locked field was changed fails the item "
+                + "template-locks (not met), so it cannot be endorsed before the assessor has marked it."},
         footerHeading = "%nExamples:%n",
         footer = {"  quire review budget.json",
             "  quire review budget.json --mc --trials 1e6",
@@ -121,7 +122,8 @@ final class ReviewCommand implements Callable<Integer> {
         } catch (IllegalArgumentException e) {
             throw new Files.FileProblem(file, e.getMessage());
         }
-        ReviewContext ctx = ReviewContext.none().withUnits(new org.quire.app.review.EngineUnitChecker(quire.engine.library()));
+        ReviewContext ctx = ReviewContext.none().withUnits(new org.quire.app.review.EngineUnitChecker(quire.engine.library()))
+                .withTemplate(org.quire.engine.document.TemplateConformance.check(doc, TemplateCommand.Folders.preferred()));
         if (mc) {
             ctx = ctx.withMonteCarlo(monteCarlo(trials, file, b, model, r));
         }

@@ -17,6 +17,11 @@ import org.quire.engine.document.Template;
 import org.quire.engine.document.TemplateChange;
 import org.quire.engine.document.TemplateLibrary;
 import org.quire.engine.document.TemplateParameter;
+import org.quire.engine.document.TemplateConformance;
+import org.quire.engine.document.TemplateValues;
+import org.quire.engine.csv.CsvException;
+import org.quire.engine.csv.CsvOptions;
+import org.quire.engine.csv.CsvReadings;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
@@ -56,6 +61,11 @@ final class TemplateCommand implements Callable<Integer> {
         @Option(names = "--team", paramLabel = "DIR",
                 description = "the team's shared template folder (default: the workbench's preference)")
         String team;
+
+        /** @return the library of the shipped templates and the folders of the workbench's preferences */
+        static TemplateLibrary preferred() throws UsageException {
+            return new Folders().library();
+        }
 
         TemplateLibrary library() throws UsageException {
             WorkbenchPrefs prefs = WorkbenchPrefs.user();
@@ -121,8 +131,9 @@ final class TemplateCommand implements Callable<Integer> {
                 out.printf("%-32s v%-3d %-9s %s  (%s)%n", t.id(), t.version(),
                         e.folder().name().toLowerCase(java.util.Locale.ROOT), t.title(), e.file().getFileName());
                 for (TemplateParameter p : t.spec().parameters()) {
-                    out.printf("    parameter %-14s %s%s%s%n", p.name(), p.description(),
-                            p.unit().isEmpty() ? "" : " [" + p.unit() + "]", p.hasDefault() ? "" : " (required)");
+                    out.printf("    parameter %-14s %s%s%s%s%n", p.name(), p.description(),
+                            p.unit().isEmpty() ? "" : " [" + p.unit() + "]", p.isReadings() ? " (readings: --readings "
+                            + p.name() + "=FILE.csv)" : "", p.hasDefault() ? "" : " (required)");
                 }
             }
             for (String p : l.problems()) {
@@ -134,12 +145,17 @@ final class TemplateCommand implements Callable<Integer> {
     }
 
     @Command(name = "new", mixinStandardHelpOptions = true,
-            description = {"A new budget from a template: every parameter without a default must be given with "
-                    + "--set, so that no value of the template's example is carried into the new budget.",
+            description = {"A new budget from a template: every parameter without a default must be given, a number "
+                    + "with --set, the readings of a Type A input with --readings, so that no value of the "
+                    + "template's example is carried into the new budget; what the template does not ask for is "
+                    + "locked as a value of its method. The template's laboratory and device are not carried over: "
+                    + "give the new budget's with --laboratory and --device.",
                 "'quire template list' shows each template's parameters."},
             footerHeading = "%nExamples:%n",
-            footer = {"  quire template new tvfl-gravimetric-emf-point -o meter-17.json --set t_tank=20.4 --set ...",
-                "  quire template new my-template.json -o new.json --set q=12.5 --author \"A. Lindqvist\""})
+            footer = {"  quire template new tvfl-gravimetric-emf-point -o meter-17.json --set I_net=398.75 "
+                    + "--readings N_ind=counts.csv --set ...",
+                "  quire template new my-template.json -o new.json --set q=12.5 --author \"A. Lindqvist\" "
+                    + "--laboratory \"Tarrow Vale Flow Laboratory\""})
     static final class NewAction implements Callable<Integer> {
         @ParentCommand
         TemplateCommand parent;
@@ -154,8 +170,21 @@ final class TemplateCommand implements Callable<Integer> {
         @Option(names = "--set", paramLabel = "NAME=VALUE", description = "a parameter's value (repeatable)")
         List<String> set = new ArrayList<>();
 
+        @Option(names = "--readings", paramLabel = "NAME=FILE.csv",
+                description = "the readings of a readings parameter from a CSV file: a column named reading, "
+                        + "readings, value or x, or a file of one column or one row (repeatable)")
+        List<String> readings = new ArrayList<>();
+
         @Option(names = "--author", paramLabel = "NAME", defaultValue = "", description = "the new budget's author")
         String author;
+
+        @Option(names = "--laboratory", paramLabel = "NAME", defaultValue = "",
+                description = "the laboratory making the measurement (default: none; the template's is not carried over)")
+        String laboratory;
+
+        @Option(names = "--device", paramLabel = "TEXT", defaultValue = "",
+                description = "the device under test (default: none)")
+        String device;
 
         @Mixin
         Folders folders;
@@ -176,9 +205,25 @@ final class TemplateCommand implements Callable<Integer> {
                     throw new UsageException("--set " + key + " " + e.getMessage());
                 }
             }
+            TemplateValues given = TemplateValues.of(values).withLaboratory(laboratory).withDeviceUnderTest(device);
+            for (String r : readings) {
+                int eq = r.indexOf('=');
+                if (eq <= 0) {
+                    throw new UsageException("--readings needs NAME=FILE.csv, not '" + r + "'");
+                }
+                String key = r.substring(0, eq).trim();
+                String file = r.substring(eq + 1).trim();
+                try {
+                    given = given.withReadings(key, CsvReadings.read(Files.path(file), CsvOptions.defaults()));
+                } catch (CsvException e) {
+                    throw new Files.FileProblem(e);
+                } catch (java.io.IOException e) {
+                    throw new UsageException("--readings " + key + ": cannot read " + file + ": " + e.getMessage());
+                }
+            }
             BudgetDocument d;
             try {
-                d = TemplateLibrary.newFromTemplate(t, values, author, Instant.now());
+                d = TemplateLibrary.newFromTemplate(t, given, author, Instant.now());
             } catch (IllegalArgumentException e) {
                 throw new UsageException(e.getMessage());
             }
@@ -227,8 +272,10 @@ final class TemplateCommand implements Callable<Integer> {
     }
 
     @Command(name = "check", mixinStandardHelpOptions = true,
-            description = {"Whether the template a budget was made from has a newer version in the library, and "
-                    + "what changed. Exit status 1 when it changed."},
+            description = {"Whether a budget keeps every field its template locks, and whether the template it was "
+                    + "made from has a newer version in the library, and what changed. Exit status 2 when a locked "
+                    + "field was changed (each named with the template's and the budget's value); 1 when the "
+                    + "template changed or the version the budget was made from is not in the library."},
             footerHeading = "%nExamples:%n", footer = {"  quire template check meter-17.json"})
     static final class CheckAction implements Callable<Integer> {
         @ParentCommand
@@ -249,15 +296,24 @@ final class TemplateCommand implements Callable<Integer> {
                 out.println(name + " was not made from a template");
                 return CommandLine.OK;
             }
+            TemplateConformance.Finding f = TemplateConformance.check(d, library);
+            if (f.state() == TemplateConformance.State.DEVIATES) {
+                throw new Files.FileProblem(name, "does not follow template " + d.templateOrigin().id() + " version "
+                        + d.templateOrigin().version() + ": " + String.join("; ", f.messages()));
+            }
             Optional<TemplateLibrary.Entry> newest = library.find(d.templateOrigin().id());
             if (newest.isEmpty()) {
                 out.println("template " + d.templateOrigin().id() + " is not in the library");
                 return CommandLine.OK;
             }
             Template t = newest.get().template();
+            if (f.state() == TemplateConformance.State.TEMPLATE_NOT_FOUND) {
+                out.println(f.messages().get(0));
+            }
             if (t.version() <= d.templateOrigin().version()) {
-                out.println(name + " follows the newest version (" + t.version() + ") of template " + t.id());
-                return CommandLine.OK;
+                out.println(name + " follows the newest version (" + t.version() + ") of template " + t.id()
+                        + (f.state() == TemplateConformance.State.FOLLOWS ? " and keeps every locked field" : ""));
+                return f.state() == TemplateConformance.State.FOLLOWS ? CommandLine.OK : CommandLine.CHECK_FAILED;
             }
             List<TemplateChange> changes = TemplateLibrary.compare(d, t);
             out.println("template " + t.id() + " has version " + t.version() + "; " + name + " follows version "

@@ -21,7 +21,9 @@ import org.quire.engine.gum.Rounding;
  * Fills the assessor's checklist from a budget and its GUM result: every input has a source; every Type B
  * evaluation states its basis; degrees of freedom are stated; units are given and consistent; dominant
  * contributions are explained; the Monte Carlo result agrees with the GUM result; correlations are justified;
- * figures are rounded properly; the evaluation raised no warnings.
+ * figures are rounded properly; the evaluation raised no warnings; a budget made from a template keeps every
+ * field the template locks (the engine's {@link org.quire.engine.document.TemplateConformance}: a changed
+ * locked field is an item not met, so endorsing is refused until the assessor has marked it).
  *
  * <p>References: JCGM 100:2008 7.1.4 (document fully how each component was evaluated), 4.3.1 (the pool of
  * information behind a Type B evaluation), G.4.2 (degrees of freedom of a Type B evaluation), 5.2 (correlated
@@ -53,6 +55,7 @@ public final class Checklist {
         items.add(correlations(b));
         items.add(rounding(gum));
         items.add(warnings(gum));
+        items.add(templateLocks(ctx.template()));
         return items;
     }
 
@@ -245,6 +248,35 @@ public final class Checklist {
         }
         return new CheckItem("rounding", "Reported figures are rounded properly", "JCGM 100:2008 7.2.6",
                 confirm ? Outcome.TO_CONFIRM : Outcome.MET, details, List.of());
+    }
+
+    private static CheckItem templateLocks(org.quire.engine.document.TemplateConformance.Finding f) {
+        String title = "The budget keeps every field its template locks";
+        String ref = "common practice";
+        if (f == null) {
+            return new CheckItem("template-locks", title, ref, Outcome.NOT_RUN,
+                    List.of("the budget was not checked against its template"), List.of());
+        }
+        switch (f.state()) {
+            case NOT_FROM_TEMPLATE:
+                return new CheckItem("template-locks", title, ref, Outcome.NOT_APPLICABLE,
+                        List.of("the budget was not made from a template"), List.of());
+            case FOLLOWS:
+                return new CheckItem("template-locks", title, ref, Outcome.MET, List.of("every field locked by "
+                        + "template " + f.origin().id() + " v" + f.origin().version() + " keeps its value"), List.of());
+            case TEMPLATE_NOT_FOUND:
+                return new CheckItem("template-locks", title, ref, Outcome.TO_CONFIRM, f.messages(), List.of());
+            default: {
+                List<String> inputs = new ArrayList<>();
+                for (org.quire.engine.document.TemplateConformance.Deviation d : f.deviations()) {
+                    String n = d.field().contains(".") ? d.field().substring(0, d.field().indexOf('.')) : d.field();
+                    if (!org.quire.engine.document.TemplateSpec.BUDGET_PARTS.contains(n) && !inputs.contains(n)) {
+                        inputs.add(n);
+                    }
+                }
+                return new CheckItem("template-locks", title, ref, Outcome.NOT_MET, f.messages(), inputs);
+            }
+        }
     }
 
     private static CheckItem warnings(GumResult gum) {

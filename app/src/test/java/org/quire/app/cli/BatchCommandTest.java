@@ -113,10 +113,12 @@ class BatchCommandTest {
     void theShippedGravimetricTemplateRunsOverAFleetTable(@TempDir Path dir) throws Exception {
         Path template = Path.of(System.getProperty("quire.projectRoot", ".."), "templates", "gravimetric-emf-flow-point.json");
         Path data = dir.resolve("fleet.csv");
-        // row 1: the template's own values; row 2: a temperature outside the parameter's range
-        Files.writeString(data, "id,I_net,t_tank,t_meter,p_meter,t_c,p_a,t_a,h_a\n"
-                + "TV-1,997.1,20.42,20.55,280000,72.0,100650,21.3,0.48\n"
-                + "TV-2,997.1,50,20.55,280000,72.0,100650,21.3,0.48\n");
+        // row 1: the template's own values (its example readings of N_ind in one cell, separated by ';');
+        // row 2: a temperature outside the parameter's range
+        String own = ",0.06,10013.2;10009.6;10012.8;10010.1;10014.0,10,0.0002\n";
+        Files.writeString(data, "id,I_net,t_tank,t_meter,p_meter,t_c,p_a,t_a,h_a,U_bal,N_ind,k_pulse,d_conv\n"
+                + "TV-1,997.1,20.42,20.55,280000,72.0,100650,21.3,0.48" + own
+                + "TV-2,997.1,50,20.55,280000,72.0,100650,21.3,0.48" + own);
         Path out = dir.resolve("results.csv");
         ByteArrayOutputStream err = new ByteArrayOutputStream();
         assertEquals(1, run(err, "batch", template.toString(), data.toString(), "-o", out.toString()));

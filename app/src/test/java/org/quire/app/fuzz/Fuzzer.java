@@ -204,8 +204,10 @@ final class Fuzzer {
 
     /** A batch run of the shipped gravimetric template over a small mutated CSV table, and a fit. */
     void csvCase(SplittableRandom rnd, int index, Path template) throws IOException {
-        String[] cells = {"997.1", "20.42", "20.55", "280000", "72.0", "100650", "21.3", "0.48"};
-        StringBuilder csv = new StringBuilder("id,I_net,t_tank,t_meter,p_meter,t_c,p_a,t_a,h_a\n");
+        // the template's own values, its example readings of N_ind in one cell separated by ';'
+        String[] cells = {"997.1", "20.42", "20.55", "280000", "72.0", "100650", "21.3", "0.48", "0.06",
+            "10013.2;10009.6;10012.8;10010.1;10014.0", "10", "0.0002"};
+        StringBuilder csv = new StringBuilder("id,I_net,t_tank,t_meter,p_meter,t_c,p_a,t_a,h_a,U_bal,N_ind,k_pulse,d_conv\n");
         for (int r = 0; r < 3; r++) {
             csv.append("TV-").append(r);
             for (String c : cells) {

@@ -158,7 +158,7 @@ class CertificateTest {
         int pages = pages(c);
         for (String must : List.of("Calibration certificate " + c.number(), "TVAS calibration laboratory no. 0417",
                 "Tarrow Vale Water Services", "TV-EM-080-112", "Date of calibration 2026-11-24",
-                "Date of issue 2026-11-25", "tvfl-emf-gravimetric-run, version 1", "EA-4/02",
+                "Date of issue 2026-11-25", "tvfl-emf-gravimetric-run, version 2", "EA-4/02",
                 "TVFL-BAL-02", "HRC-M-26-0412", "authorised by M. Fenwick (invented)", "role technical manager",
                 "page 1 of " + pages, "page " + pages + " of " + pages, c.hash(), "do not replace")) {
             assertTrue(t.replaceAll("-\\s+", "-").replaceAll("\\s+", " ").contains(must), "missing '" + must + "' in\n" + t);

@@ -45,14 +45,121 @@ class WorkbenchTemplatesTest extends GuiTestSupport {
         DocumentStore.save(template(1, base.budget()), personal.resolve("tvfl-tank-v1.json"));
     }
 
-    /** A template of the proving-tank budget whose one parameter is the tank's nominal volume V_20. */
+    /**
+     * A template of the proving-tank budget whose parameters are the tank's nominal volume V_20 and the meter's
+     * indicated volumes V_ind (mean, s, n, with defaults); every other input is locked, so that no example value
+     * is carried over unasked.
+     */
     private static BudgetDocument template(int version, Budget b) {
         Instant t = Instant.parse("2026-01-15T09:00:00Z");
+        List<String> locked = new java.util.ArrayList<>();
+        for (String n : b.inputNames()) {
+            if (!n.equals("V_20") && !n.equals("V_ind")) {
+                locked.add(n);
+            }
+        }
         TemplateSpec spec = TemplateSpec.of("tvfl-tank", version).withDescription("Proving tank, one run")
                 .withParameters(List.of(TemplateParameter.of("V_tank", "V_20", "estimate").withUnit("L")
                         .withDescription("volume of the tank at 20 \u00b0C from its certificate")
-                        .withDefault(500.08).withRange(100, 1000)));
+                        .withDefault(500.08).withRange(100, 1000),
+                        TemplateParameter.of("V_ind", "V_ind", "estimate").withUnit("L").withDefault(498.946),
+                        TemplateParameter.of("V_ind_s", "V_ind", "standardDeviation").withUnit("L").withDefault(0.054),
+                        TemplateParameter.of("V_ind_n", "V_ind", "count").withDefault(5)))
+                .withLocked(locked);
         return BudgetDocument.newDraft(b, "Template Keeper", t).withTemplate(spec, "Template Keeper", t);
+    }
+
+    /**
+     * A budget made from the shipped proving-tank template: the inputs its template locks are read-only in the
+     * inspector and the inputs table, each with the reason "locked by template ID vN"; the inputs its
+     * parameters set stay editable.
+     */
+    @Test
+    void theFieldsTheTemplateLocksAreReadOnlyWithTheTemplateNamedAsTheReason(@TempDir Path dir) throws Exception {
+        org.quire.engine.document.Template shipped = org.quire.engine.document.Template.of(base);
+        BudgetDocument made = shipped.instantiate(java.util.Map.of("V_20", 500.08, "h_neck", 0.62, "t_tank", 17.8,
+                "t_meter", 17.5, "p_meter", 250000.0, "V_ind", 498.95, "V_ind_s", 0.054, "V_ind_n", 5.0),
+                "Test Engineer", Instant.parse("2026-12-01T10:00:00Z"));
+        Path file = dir.resolve("tank-run.json");
+        DocumentStore.save(made, file);
+        BudgetEditor ed = await(onEdt(() -> frame.open(file))).orElseThrow();
+        String reason = "locked by template " + shipped.id() + " v" + shipped.version();
+        onEdt(() -> { ed.selectInput("d_drain"); return null; });
+        onEdt(() -> {
+            JTextField source = named(frame.getContentPane(), "inspector:Source");
+            assertTrue(!source.isEditable(), "the source of a locked input is read-only");
+            assertEquals(reason, source.getToolTipText());
+            java.awt.Container form = source.getParent();
+            while (!form.getClass().getSimpleName().equals("InputInspector")) {
+                form = form.getParent();
+            }
+            List<JTextField> all = new java.util.ArrayList<>();
+            collect(form, all);
+            assertTrue(all.size() >= 7, "the inspector's fields: " + all.size());
+            for (JTextField f : all) {
+                assertTrue(!f.isEditable(), "field " + f.getName() + " of the locked input d_drain is read-only");
+            }
+            JLabel lock = named(frame.getContentPane(), "inspectorLock");
+            assertTrue(lock.isShowing(), "the inspector says the input is locked");
+            assertTrue(lock.getText().startsWith("<html>Locked by template " + shipped.id() + " v"
+                    + shipped.version() + ":"), lock.getText());
+            assertTrue(lock.getText().contains("evaluation"), lock.getText());
+            assertTrue(!((javax.swing.JComboBox<?>) named(frame.getContentPane(), "evaluationType")).isEnabled(),
+                    "the evaluation of a locked input cannot be switched");
+            JTable inputs = named(ed, "inputs");
+            int row = -1;
+            for (int r = 0; r < inputs.getRowCount(); r++) {
+                if ("d_drain".equals(inputs.getModel().getValueAt(inputs.convertRowIndexToModel(r), 0))) {
+                    row = r;
+                }
+            }
+            assertTrue(row >= 0, "d_drain is in the inputs table");
+            for (int c = 0; c < inputs.getColumnCount(); c++) {
+                assertTrue(!inputs.isCellEditable(row, c), "column " + inputs.getColumnName(c) + " of d_drain is locked");
+            }
+            javax.swing.text.JTextComponent model = named(ed, "model");
+            assertTrue(!model.isEditable(), "the template locks the model");
+            assertEquals("The model is " + reason + " (the method's model): read-only.",
+                    ((JLabel) named(ed, "modelHint")).getText());
+            JTable outputs = named(ed, "outputs");
+            assertTrue(!outputs.isCellEditable(0, 0), "the template locks the outputs");
+            JTable correlations = named(ed, "correlations");
+            if (correlations.getRowCount() > 1) {
+                assertTrue(!correlations.isCellEditable(0, 2), "the template locks the correlations");
+            }
+            return null;
+        });
+        onEdt(() -> { ed.selectInput("t_tank"); return null; });
+        onEdt(() -> {
+            JTextField source = named(frame.getContentPane(), "inspector:Source");
+            assertTrue(source.isEditable(), "an input the parameters set stays editable");
+            assertNull(source.getToolTipText());
+            assertTrue(!((JLabel) named(frame.getContentPane(), "inspectorLock")).isShowing());
+            return null;
+        });
+        onEdt(() -> { ed.selectInput("d_drain"); return null; });
+        java.awt.image.BufferedImage shot = onEdt(() -> {
+            frame.validate();
+            java.awt.image.BufferedImage img = new java.awt.image.BufferedImage(frame.getWidth(), frame.getHeight(),
+                    java.awt.image.BufferedImage.TYPE_INT_RGB);
+            frame.paint(img.getGraphics());
+            return img;
+        });
+        String out = System.getProperty("quire.screenshots");
+        if (out != null) {
+            javax.imageio.ImageIO.write(shot, "png", Path.of(out, "template-locks.png").toFile());
+        }
+    }
+
+    private static void collect(java.awt.Container c, List<JTextField> out) {
+        for (java.awt.Component k : c.getComponents()) {
+            if (k instanceof JTextField && k.isShowing()) {
+                out.add((JTextField) k);
+            }
+            if (k instanceof java.awt.Container) {
+                collect((java.awt.Container) k, out);
+            }
+        }
     }
 
     private NewFromTemplateDialog openDialog() throws Exception {
@@ -90,6 +197,50 @@ class WorkbenchTemplatesTest extends GuiTestSupport {
         waitForCurrentResult(ed);
         assertNotNull(ed.latest().result(), "the engine evaluated the new budget");
         assertNotNull(onEdt(() -> ed.resultSummary("E")), "its result is shown");
+    }
+
+    /**
+     * The dialog takes the same path as {@code quire template new}: the shipped gravimetric template refuses a
+     * budget without the meter's readings, and takes them typed in (separated by ';' or spaces), with the
+     * laboratory and device of the new budget.
+     */
+    @Test
+    void theDialogAsksForTheMetersReadingsAndTheLaboratoryAndCarriesNoneOfTheExample() throws Exception {
+        NewFromTemplateDialog dlg = openDialog();
+        java.util.Map<String, String> values = new java.util.LinkedHashMap<>();
+        values.put("I_net", "398.75");
+        values.put("t_tank", "19.8");
+        values.put("t_meter", "19.9");
+        values.put("p_meter", "260000");
+        values.put("t_c", "28.8");
+        values.put("p_a", "100900");
+        values.put("t_a", "21.0");
+        values.put("h_a", "0.5");
+        values.put("U_bal", "0.04");
+        values.put("k_pulse", "10");
+        values.put("d_conv", "0.0002");
+        onEdt(() -> {
+            dlg.select(TemplateCatalog.shippedFolder().resolve("gravimetric-emf-flow-point.json"));
+            values.forEach((k, v) -> ((JTextField) named(dlg.getContentPane(), "param:" + k)).setText(v));
+            ((JButton) named(dlg.getContentPane(), "create")).doClick();
+            return null;
+        });
+        String refusal = onEdt(() -> ((JLabel) named(dlg.getContentPane(), "error")).getText());
+        assertTrue(refusal.contains("parameter 'N_ind' (the readings of input 'N_ind') must be given"), refusal);
+        onEdt(() -> {
+            ((JTextField) named(dlg.getContentPane(), "param:N_ind")).setText("4003.1; 4001.8 4002.6;4000.9  4003.4");
+            ((JTextField) named(dlg.getContentPane(), "laboratory")).setText("Tarrow Vale Flow Laboratory");
+            ((JTextField) named(dlg.getContentPane(), "device")).setText("TV-EM-100-09");
+            ((JButton) named(dlg.getContentPane(), "create")).doClick();
+            return null;
+        });
+        waitFor("the new budget", () -> frame.editors().size() == 1);
+        BudgetDocument made = frame.editors().get(0).document().content();
+        org.junit.jupiter.api.Assertions.assertArrayEquals(new double[] {4003.1, 4001.8, 4002.6, 4000.9, 4003.4},
+                ((org.quire.engine.budget.TypeA) made.budget().input("N_ind").evaluation()).readings());
+        assertEquals("Tarrow Vale Flow Laboratory", made.laboratory());
+        assertEquals("TV-EM-100-09", made.deviceUnderTest());
+        assertEquals("tvfl-gravimetric-emf-point", made.templateOrigin().id());
     }
 
     @Test

@@ -158,7 +158,7 @@ public final class CalibrationEvaluator {
         if (c == null) {
             throw new IllegalArgumentException(CalibrationMessages.missing("calibration"));
         }
-        if (!c.method().equals(method.origin())) {
+        if (!c.method().sameTemplate(method.origin())) {
             throw new CalibrationException("method", CalibrationMessages.otherMethod(c.method(), method.origin()));
         }
         Budget base = method.document().budget();

@@ -40,7 +40,8 @@ import org.quire.engine.io.ResultJson;
  *     for an approval {@code contentHash} and {@code content} (the approved canonical content). An entry that
  *     records a review decision has {@code decision}: {@code endorsed} (on an approval) or {@code sent-back} (on
  *     a move to draft, with the {@code contentHash} of the content sent back and no {@code content}).</li>
- * <li>{@code templateOrigin}: {@code id}, {@code version}, {@code contentHash} of the template used.</li>
+ * <li>{@code templateOrigin}: {@code id}, {@code version}, {@code contentHash} of the template used, and
+ *     optionally {@code locked}, the template's locked fields as recorded when the document was made.</li>
  * <li>{@code template}: present when the file is a template: {@code id}, {@code version}, {@code description},
  *     {@code parameters} (each {@code name}, {@code description}, {@code unit}, {@code input}, {@code field},
  *     {@code default}, {@code minimum}, {@code maximum}), {@code locked} (list of field names) and
@@ -62,7 +63,7 @@ public final class DocumentJson {
     private static final Set<String> RESULT_FIELDS = Set.of("engineVersion", "computed", "gum", "monteCarlo");
     private static final Set<String> HISTORY_FIELDS = Set.of("revision", "status", "by", "at", "comment",
             "contentHash", "content", "decision");
-    private static final Set<String> ORIGIN_FIELDS = Set.of("id", "version", "contentHash");
+    private static final Set<String> ORIGIN_FIELDS = Set.of("id", "version", "contentHash", "locked");
     private static final Set<String> TEMPLATE_FIELDS = Set.of("id", "version", "description", "parameters",
             "locked", "guidance");
     private static final Set<String> PARAMETER_FIELDS = Set.of("name", "description", "unit", "input", "field",
@@ -248,9 +249,15 @@ public final class DocumentJson {
 
     private static TemplateOrigin readOrigin(JsonCursor o) throws BudgetFormatException {
         o.onlyFields(ORIGIN_FIELDS);
+        List<String> locked = new ArrayList<>();
+        if (o.has("locked")) {
+            for (JsonCursor l : o.get("locked").elements()) {
+                locked.add(l.string());
+            }
+        }
         try {
             return new TemplateOrigin(o.get("id").string(), positiveInt(o.get("version")),
-                    o.get("contentHash").string());
+                    o.get("contentHash").string(), locked);
         } catch (IllegalArgumentException e) {
             throw o.error(e.getMessage());
         }
@@ -321,8 +328,14 @@ public final class DocumentJson {
                 .add("status", d.status().label()));
         if (d.templateOrigin() != null) {
             TemplateOrigin t = d.templateOrigin();
-            o.add("templateOrigin", JSON.createObjectBuilder().add("id", t.id()).add("version", t.version())
-                    .add("contentHash", t.contentHash()));
+            JsonObjectBuilder ob = JSON.createObjectBuilder().add("id", t.id()).add("version", t.version())
+                    .add("contentHash", t.contentHash());
+            if (!t.locked().isEmpty()) {
+                JsonArrayBuilder l = JSON.createArrayBuilder();
+                t.locked().forEach(l::add);
+                ob.add("locked", l);
+            }
+            o.add("templateOrigin", ob);
         }
         if (d.template() != null) {
             o.add("template", templateJson(d.template()));

@@ -43,33 +43,77 @@ public final class Template {
 
     /** @return the provenance a document made from this template records */
     public TemplateOrigin origin() {
-        return new TemplateOrigin(id(), version(), contentHash());
+        return new TemplateOrigin(id(), version(), contentHash(), spec().locked());
     }
 
     /**
      * @param values a value for every parameter without a default; others may be given to replace the default
      * @return the template's budget with the parameters applied
      * @throws IllegalArgumentException listing every unknown, missing or out-of-range parameter
+     * @see #budgetFor(TemplateValues)
      */
     public Budget budgetFor(Map<String, Double> values) {
+        return budgetFor(TemplateValues.of(values));
+    }
+
+    /**
+     * The template's budget with the user's values applied. Refused when the template would carry a value of its
+     * example into the budget ({@link TemplateSpec#carriedValues}), so that a budget made from a template has no
+     * value the user did not give or the method does not fix.
+     *
+     * @param values a value for every numeric parameter without a default and the readings of every readings
+     *     parameter
+     * @return the template's budget with the parameters applied
+     * @throws IllegalArgumentException listing every unknown, missing or out-of-range parameter, and every input
+     *     whose example value would be carried over
+     */
+    public Budget budgetFor(TemplateValues values) {
         List<String> problems = new ArrayList<>();
-        for (String k : values.keySet()) {
-            if (spec().parameter(k) == null) {
+        for (String c : spec().carriedValues(document.budget())) {
+            problems.add("template " + id() + " v" + version() + ": " + c);
+        }
+        Map<String, Double> numbers = values.numbers();
+        Map<String, double[]> readings = values.readings();
+        for (String k : numbers.keySet()) {
+            TemplateParameter p = spec().parameter(k);
+            if (p == null) {
                 problems.add("'" + k + "' is not a parameter of template " + id() + " (its parameters: "
                         + String.join(", ", parameterNames()) + ")");
+            } else if (p.isReadings()) {
+                problems.add("parameter '" + k + "' takes the readings of input '" + p.input() + "', a list of "
+                        + "numbers, not one value");
+            }
+        }
+        for (String k : readings.keySet()) {
+            TemplateParameter p = spec().parameter(k);
+            if (p == null) {
+                problems.add("'" + k + "' is not a parameter of template " + id() + " (its parameters: "
+                        + String.join(", ", parameterNames()) + ")");
+            } else if (!p.isReadings()) {
+                problems.add("parameter '" + k + "' takes one value, not a list of readings");
             }
         }
         Budget b = document.budget();
         for (TemplateParameter p : spec().parameters()) {
-            Double v = values.get(p.name());
-            if (v == null) {
-                if (!p.hasDefault()) {
-                    problems.add("parameter '" + p.name() + "' has no default and must be given");
+            try {
+                if (p.isReadings()) {
+                    double[] r = readings.get(p.name());
+                    if (r == null) {
+                        problems.add("parameter '" + p.name() + "' (the readings of input '" + p.input()
+                                + "') must be given: the template's example readings are not carried over");
+                    } else {
+                        b = p.applyReadings(b, r);
+                    }
                     continue;
                 }
-                v = p.defaultValue();
-            }
-            try {
+                Double v = numbers.get(p.name());
+                if (v == null) {
+                    if (!p.hasDefault()) {
+                        problems.add("parameter '" + p.name() + "' has no default and must be given");
+                        continue;
+                    }
+                    v = p.defaultValue();
+                }
                 b = p.applyTo(b, v);
             } catch (IllegalArgumentException e) {
                 problems.add(e.getMessage());
@@ -90,13 +134,20 @@ public final class Template {
         return n;
     }
 
-    /**
-     * @return a new draft document (revision 1) from this template with the parameters applied: the
-     *     template's laboratory and data sets, the given author, no template section, and the template's
-     *     {@link #origin()}
-     */
+    /** @see #instantiate(TemplateValues, String, Instant) */
     public BudgetDocument instantiate(Map<String, Double> values, String author, Instant now) {
+        return instantiate(TemplateValues.of(values), author, now);
+    }
+
+    /**
+     * @return a new draft document (revision 1) from this template with the values applied
+     *     ({@link #budgetFor(TemplateValues)}): the laboratory and device under test of {@code values} (empty
+     *     when not given; the template's own are never carried over), the given author, no template section, and
+     *     the template's {@link #origin()} with its locked fields
+     */
+    public BudgetDocument instantiate(TemplateValues values, String author, Instant now) {
         Budget b = budgetFor(values);
-        return new BudgetDocument(b, document.laboratory(), "", author, now, now, 1, DocumentStatus.DRAFT, null, List.of(), origin(), null, 0);
+        return new BudgetDocument(b, values.laboratory(), values.deviceUnderTest(), author, now, now, 1,
+                DocumentStatus.DRAFT, null, List.of(), origin(), null, 0);
     }
 }

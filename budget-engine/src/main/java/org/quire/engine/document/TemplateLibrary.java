@@ -153,23 +153,44 @@ public final class TemplateLibrary {
         return Optional.ofNullable(best);
     }
 
+    /**
+     * @return the template {@code id} of exactly {@code version}; of several such files, the first in folder
+     *     order
+     */
+    public Optional<Entry> find(String id, int version) throws IOException {
+        for (Entry e : list().templates()) {
+            if (e.template().id().equals(id) && e.template().version() == version) {
+                return Optional.of(e);
+            }
+        }
+        return Optional.empty();
+    }
+
     /** @return a new draft from {@code template}; see {@link Template#instantiate} */
     public static BudgetDocument newFromTemplate(Template template, Map<String, Double> parameterValues,
             String author, Instant now) {
         return template.instantiate(parameterValues, author, now);
     }
 
+    /** @return a new draft from {@code template}; see {@link Template#instantiate(TemplateValues, String, Instant)} */
+    public static BudgetDocument newFromTemplate(Template template, TemplateValues values, String author,
+            Instant now) {
+        return template.instantiate(values, author, now);
+    }
+
     // ----- comparing with a newer template --------------------------------------------------------------------
 
     /**
      * The newer template's budget with the document's own parameter values: a parameter whose input the
-     * document has takes the document's value; otherwise the default, or the template's own value.
+     * document has takes the document's value (its readings, for a readings parameter); otherwise the default,
+     * or the template's own value.
      */
     private static Budget reference(BudgetDocument doc, Template newer) {
         Budget b = newer.document().budget();
         for (TemplateParameter p : newer.spec().parameters()) {
             try {
-                b = p.applyTo(b, p.valueIn(doc.budget()));
+                b = p.isReadings() ? p.applyReadings(b, p.readingsIn(doc.budget()))
+                        : p.applyTo(b, p.valueIn(doc.budget()));
             } catch (IllegalArgumentException e) {
                 if (p.hasDefault()) {
                     b = p.applyTo(b, p.defaultValue());
@@ -335,6 +356,7 @@ public final class TemplateLibrary {
             p.add("the document has no template section (id, version, parameters)");
         } else {
             p.addAll(doc.template().problems(doc.budget()));
+            p.addAll(doc.template().carriedValues(doc.budget()));
         }
         if (doc.title().isBlank()) {
             p.add("the template has no title");

@@ -13,8 +13,11 @@ import org.quire.engine.budget.TypeB;
  * estimate of the input {@code T_tank}.
  *
  * <p>The field is {@code estimate} (for a Type B evaluation given by limits the interval is moved so that its
- * midpoint is the value; for a Type A evaluation given as a summary the mean is replaced), or the name of a
- * parameter of the input's Type B evaluation, e.g. {@code standardUncertainty} or {@code halfWidth}.
+ * midpoint is the value; for a Type A evaluation given as a summary the mean is replaced), the name of a
+ * parameter of the input's Type B evaluation, e.g. {@code standardUncertainty} or {@code halfWidth}, or one of
+ * the {@link #TYPE_A_FIELDS} of a Type A evaluation: {@code readings} (the observations themselves, a list of
+ * numbers, see {@link #applyReadings}), {@code standardDeviation} (s of a summary) or {@code count} (n of a
+ * summary, a whole number). A readings parameter has no default: readings belong to one measurement.
  *
  * @param name the parameter's name, also the column name in {@code quire batch} files; {@code id} is reserved
  * @param description what to enter
@@ -27,6 +30,9 @@ import org.quire.engine.budget.TypeB;
  */
 public record TemplateParameter(String name, String description, String unit, String input, String field,
         double defaultValue, double minimum, double maximum) {
+    /** The fields of a Type A evaluation a parameter can set besides {@code estimate}. */
+    public static final java.util.List<String> TYPE_A_FIELDS = java.util.List.of("readings", "standardDeviation",
+            "count");
 
     /** Checks the parameter on its own; {@link TemplateSpec} checks it against the budget. */
     public TemplateParameter {
@@ -43,9 +49,15 @@ public record TemplateParameter(String name, String description, String unit, St
         description = description == null ? "" : description;
         unit = unit == null ? "" : unit;
         InputQuantity.checkName(input);
-        if (field == null || !(field.equals("estimate") || TypeB.parameterNames().contains(field))) {
+        if (field == null || !(field.equals("estimate") || TypeB.parameterNames().contains(field)
+                || TYPE_A_FIELDS.contains(field))) {
             throw new IllegalArgumentException("parameter '" + name + "' sets field '" + field + "', which is neither "
-                    + "'estimate' nor a parameter of a Type B evaluation");
+                    + "'estimate', a parameter of a Type B evaluation nor one of " + String.join(", ", TYPE_A_FIELDS)
+                    + " of a Type A evaluation");
+        }
+        if (field.equals("readings") && !Double.isNaN(defaultValue)) {
+            throw new IllegalArgumentException("parameter '" + name + "' sets readings, which have no default: "
+                    + "they belong to one measurement");
         }
         if (Double.isNaN(minimum) || Double.isNaN(maximum) || !(minimum <= maximum)) {
             throw new IllegalArgumentException("parameter '" + name + "': minimum " + minimum
@@ -79,6 +91,11 @@ public record TemplateParameter(String name, String description, String unit, St
         return new TemplateParameter(name, description, unit, input, field, defaultValue, min, max);
     }
 
+    /** @return whether the parameter gives the readings of a Type A evaluation (a list, not one number) */
+    public boolean isReadings() {
+        return field.equals("readings");
+    }
+
     /** @return whether a default value is given */
     public boolean hasDefault() {
         return !Double.isNaN(defaultValue);
@@ -105,14 +122,37 @@ public record TemplateParameter(String name, String description, String unit, St
      */
     public double valueIn(Budget b) {
         Evaluation e = target(b).evaluation();
+        if (isReadings()) {
+            throw new IllegalArgumentException("parameter '" + name + "' gives the readings of input '" + input
+                    + "', a list, not one value");
+        }
         if (field.equals("estimate")) {
             return e.estimate();
         }
         if (e instanceof TypeB && ((TypeB) e).parameters().containsKey(field)) {
             return ((TypeB) e).parameters().get(field);
         }
+        if (e instanceof TypeA && field.equals("standardDeviation") && !Double.isNaN(((TypeA) e).standardDeviation())) {
+            return ((TypeA) e).standardDeviation();
+        }
+        if (e instanceof TypeA && field.equals("count")) {
+            return ((TypeA) e).count();
+        }
         throw new IllegalArgumentException("parameter '" + name + "': input '" + input + "' has no field '" + field
                 + "'");
+    }
+
+    /**
+     * @return the readings the field holds in {@code b}
+     * @throws IllegalArgumentException when this is not a readings parameter or the input has no readings
+     */
+    public double[] readingsIn(Budget b) {
+        Evaluation e = target(b).evaluation();
+        if (isReadings() && e instanceof TypeA && ((TypeA) e).readings() != null) {
+            return ((TypeA) e).readings();
+        }
+        throw new IllegalArgumentException("parameter '" + name + "' sets the readings of input '" + input
+                + "', which has " + (e instanceof TypeA ? "no readings (it is given as a summary)" : "a Type B evaluation"));
     }
 
     private InputQuantity target(Budget b) {
@@ -132,6 +172,10 @@ public record TemplateParameter(String name, String description, String unit, St
      *     it gives is invalid
      */
     public Budget applyTo(Budget b, double v) {
+        if (isReadings()) {
+            throw new IllegalArgumentException("parameter '" + name + "' takes the readings of input '" + input
+                    + "', a list of numbers, not one value");
+        }
         checkValue(v);
         InputQuantity q = target(b);
         Evaluation e = q.evaluation();
@@ -149,17 +193,71 @@ public record TemplateParameter(String name, String description, String unit, St
     }
 
     private Evaluation setTypeA(TypeA a, double v) {
-        if (!field.equals("estimate")) {
+        if (!field.equals("estimate") && !field.equals("standardDeviation") && !field.equals("count")) {
             throw new IllegalArgumentException("parameter '" + name + "' sets '" + field + "' of input '" + input
-                    + "', whose evaluation is Type A; only its estimate can be set");
+                    + "', whose evaluation is Type A; a parameter sets its readings, or the estimate, "
+                    + "standardDeviation and count of a summary");
         }
         if (a.readings() != null) {
-            throw new IllegalArgumentException("parameter '" + name + "' sets the estimate of input '" + input
-                    + "', which is the mean of its readings; give the input as a summary (mean, s, n) instead");
+            throw new IllegalArgumentException("parameter '" + name + "' sets the " + field + " of input '" + input
+                    + "', which is given by its readings; set the readings (field 'readings') or give the input "
+                    + "as a summary (mean, s, n) instead");
         }
-        TypeA r = Double.isNaN(a.standardDeviation()) ? TypeA.ofMean(v, a.count())
-                : TypeA.ofSummary(v, a.standardDeviation(), a.count());
+        double mean = field.equals("estimate") ? v : a.estimate();
+        double s = field.equals("standardDeviation") ? v : a.standardDeviation();
+        int n = a.count();
+        if (field.equals("count")) {
+            if (v != Math.rint(v) || v < 1 || v > Integer.MAX_VALUE) {
+                throw new IllegalArgumentException("parameter '" + name + "' = " + v + ": the number of "
+                        + "observations must be a whole number of 1 or more");
+            }
+            n = (int) v;
+        }
+        if (field.equals("standardDeviation") && a.isPooled()) {
+            throw new IllegalArgumentException("parameter '" + name + "' sets s of input '" + input
+                    + "', which uses a pooled standard deviation");
+        }
+        TypeA r = Double.isNaN(s) ? TypeA.ofMean(mean, n) : TypeA.ofSummary(mean, s, n);
         return a.isPooled() ? r.withPooled(a.pooledStandardDeviation(), a.dof()) : r;
+    }
+
+    /**
+     * Replaces the readings of the input's Type A evaluation (a pooled standard deviation, when the template
+     * gives one, is kept: it belongs to the method).
+     *
+     * @param b the budget
+     * @param readings the observations, each checked against the range
+     * @return {@code b} with the input's readings replaced
+     * @throws IllegalArgumentException naming the parameter and the reading when one is out of range, too few
+     *     are given, or the input is not a Type A evaluation
+     */
+    public Budget applyReadings(Budget b, double[] readings) {
+        if (!isReadings()) {
+            throw new IllegalArgumentException("parameter '" + name + "' takes one value, not a list of readings");
+        }
+        InputQuantity q = target(b);
+        if (!(q.evaluation() instanceof TypeA)) {
+            throw new IllegalArgumentException("parameter '" + name + "' sets the readings of input '" + input
+                    + "', whose evaluation is not Type A");
+        }
+        TypeA a = (TypeA) q.evaluation();
+        for (int i = 0; i < readings.length; i++) {
+            try {
+                checkValue(readings[i]);
+            } catch (IllegalArgumentException e) {
+                throw new IllegalArgumentException("reading " + (i + 1) + " of " + e.getMessage(), e);
+            }
+        }
+        int least = a.isPooled() ? 1 : 2;
+        if (readings.length < least) {
+            throw new IllegalArgumentException("parameter '" + name + "' needs at least " + least + " readings, not "
+                    + readings.length);
+        }
+        TypeA r = TypeA.ofReadings(readings);
+        if (a.isPooled()) {
+            r = r.withPooled(a.pooledStandardDeviation(), a.dof());
+        }
+        return b.withInput(input, q.withEvaluation(r));
     }
 
     private Evaluation setTypeB(TypeB t, double v) {

@@ -114,6 +114,19 @@ public final class TemplateSpec {
 
     /** @return whether the field ({@code model}, {@code INPUT} or {@code INPUT.FIELD}) is locked */
     public boolean isLocked(String input, String field) {
+        return isLocked(locked, input, field);
+    }
+
+    /**
+     * The one rule of what a list of locked fields covers: the whole input, the field itself, or, for the
+     * estimate, the evaluation it belongs to.
+     *
+     * @param locked locked fields as in {@link #locked()}
+     * @param input an input name
+     * @param field one of {@link #INPUT_FIELDS}
+     * @return whether {@code locked} covers that field of that input
+     */
+    public static boolean isLocked(List<String> locked, String input, String field) {
         return locked.contains(input) || locked.contains(input + "." + field)
                 || (field.equals("estimate") && locked.contains(input + ".evaluation"));
     }
@@ -128,6 +141,15 @@ public final class TemplateSpec {
         List<String> out = new ArrayList<>();
         for (TemplateParameter p : parameters) {
             try {
+                if (p.isReadings()) {
+                    p.readingsIn(b);
+                    String f = "evaluation";
+                    if (isLocked(p.input(), f)) {
+                        out.add("parameter '" + p.name() + "' sets the readings of input '" + p.input()
+                                + "', which the template locks");
+                    }
+                    continue;
+                }
                 p.valueIn(b);
                 if (p.hasDefault()) {
                     p.applyTo(b, p.defaultValue());
@@ -164,52 +186,66 @@ public final class TemplateSpec {
     }
 
     /**
+     * The values of the template's example that a budget made from it would keep without the user's word: every
+     * input must either be set by at least one parameter (a value of the measurement, which the user gives) or be
+     * locked whole or in its evaluation (a value of the method, which the template fixes and
+     * {@link TemplateConformance} enforces). The readings of a Type A evaluation, or the mean, s and n of a Type A
+     * summary, always belong to one measurement: each needs its parameter (a pooled standard deviation is the
+     * method's).
+     *
+     * @param b the template's budget
+     * @return one sentence per input whose example value would be carried over; empty when none would
+     */
+    public List<String> carriedValues(Budget b) {
+        List<String> out = new ArrayList<>();
+        for (InputQuantity q : b.inputs()) {
+            String n = q.name();
+            Set<String> set = new HashSet<>();
+            for (TemplateParameter p : parameters) {
+                if (p.input().equals(n)) {
+                    set.add(p.field());
+                }
+            }
+            boolean locked = this.locked.contains(n) || this.locked.contains(n + ".evaluation");
+            if (q.evaluation() instanceof org.quire.engine.budget.TypeA) {
+                org.quire.engine.budget.TypeA a = (org.quire.engine.budget.TypeA) q.evaluation();
+                List<String> missing = new ArrayList<>();
+                if (a.readings() != null) {
+                    if (!set.contains("readings")) {
+                        missing.add("readings");
+                    }
+                } else {
+                    for (String f : a.isPooled() ? List.of("estimate", "count")
+                            : List.of("estimate", "standardDeviation", "count")) {
+                        if (!set.contains(f)) {
+                            missing.add(f);
+                        }
+                    }
+                }
+                if (!missing.isEmpty()) {
+                    out.add("input '" + n + "' is a Type A evaluation, the data of one measurement, but no parameter "
+                            + "sets its " + String.join(", ", missing) + ": the example's values would be carried "
+                            + "into the new budget");
+                }
+            } else if (set.isEmpty() && !locked) {
+                out.add("input '" + n + "' is neither set by a parameter nor locked: its example value ("
+                        + q.evaluation().basis() + ") would be carried into the new budget; make it a parameter "
+                        + "or lock it as a value of the method");
+            }
+        }
+        return out;
+    }
+
+    /**
      * @param template the template's budget
      * @param doc a budget made from it
      * @return each locked field whose value in {@code doc} differs from the template, as a sentence
+     * @see TemplateConformance#deviations
      */
     public List<String> lockViolations(Budget template, Budget doc) {
         List<String> out = new ArrayList<>();
-        if (locked.contains("model") && !template.model().equals(doc.model())) {
-            out.add("the model is locked by template " + id + " and was changed");
-        }
-        if (locked.contains("outputs") && !template.outputs().equals(doc.outputs())) {
-            out.add("the outputs are locked by template " + id + " and were changed");
-        }
-        if (locked.contains("settings") && !template.settings().equals(doc.settings())) {
-            out.add("the evaluation settings are locked by template " + id + " and were changed");
-        }
-        if (locked.contains("correlations") && !template.correlations().equals(doc.correlations())) {
-            out.add("the correlations are locked by template " + id + " and were changed");
-        }
-        for (InputQuantity t : template.inputs()) {
-            InputQuantity d = doc.input(t.name());
-            String n = t.name();
-            if (d == null) {
-                if (locked.contains(n) || locked.stream().anyMatch(l -> l.startsWith(n + "."))) {
-                    out.add("input '" + n + "' is locked by template " + id + " and was removed");
-                }
-                continue;
-            }
-            boolean all = locked.contains(n);
-            if ((all || locked.contains(n + ".evaluation")) && !t.evaluation().equals(d.evaluation())) {
-                out.add("the evaluation of input '" + n + "' is locked by template " + id + " and was changed");
-            } else if (locked.contains(n + ".estimate") && Double.compare(t.evaluation().estimate(),
-                    d.evaluation().estimate()) != 0) {
-                out.add("the estimate of input '" + n + "' is locked by template " + id + " and was changed");
-            }
-            if ((all || locked.contains(n + ".source")) && !t.source().equals(d.source())) {
-                out.add("the source of input '" + n + "' is locked by template " + id + " and was changed");
-            }
-            if ((all || locked.contains(n + ".unit")) && !t.unit().equals(d.unit())) {
-                out.add("the unit of input '" + n + "' is locked by template " + id + " and was changed");
-            }
-            if ((all || locked.contains(n + ".description")) && !t.description().equals(d.description())) {
-                out.add("the description of input '" + n + "' is locked by template " + id + " and was changed");
-            }
-            if ((all || locked.contains(n + ".notes")) && !t.notes().equals(d.notes())) {
-                out.add("the notes of input '" + n + "' are locked by template " + id + " and were changed");
-            }
+        for (TemplateConformance.Deviation d : TemplateConformance.deviations(this, template, doc)) {
+            out.add(d.sentence());
         }
         return out;
     }

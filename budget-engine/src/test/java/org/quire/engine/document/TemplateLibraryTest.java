@@ -28,9 +28,11 @@ class TemplateLibraryTest {
         assertEquals(99.87, d.budget().input("m_net").evaluation().estimate());
         assertEquals(20.4, d.budget().input("T_tank").evaluation().estimate());
         assertEquals(0.15 / Math.sqrt(3), d.budget().input("T_tank").evaluation().standardUncertainty(), 1e-15);
-        assertEquals(new TemplateOrigin("tvfl-gravimetric-water", 1, t.contentHash()), d.templateOrigin());
+        assertEquals(new TemplateOrigin("tvfl-gravimetric-water", 1, t.contentHash(), t.spec().locked()),
+                d.templateOrigin());
         assertNull(d.template());
-        assertEquals("Tarrow Vale Flow Laboratory", d.laboratory());
+        // the template's own laboratory is not carried into the new budget
+        assertEquals("", d.laboratory());
         assertEquals(1, d.revision());
         assertTrue(t.spec().lockViolations(t.document().budget(), d.budget()).isEmpty());
         BudgetDocument withDefault = t.instantiate(Map.of("m_net", 50.0, "V_meter", 50.2), "Ash Penrose",
@@ -57,8 +59,10 @@ class TemplateLibraryTest {
         List<String> v = t.spec().lockViolations(t.document().budget(), d.budget().withModel("E = 0")
                 .withInput("rho_20", rho.withSource("my own guess")));
         assertEquals(2, v.size(), v.toString());
-        assertTrue(v.get(0).contains("model is locked"));
-        assertTrue(v.get(1).contains("source of input 'rho_20'"));
+        assertTrue(v.get(0).startsWith("locked field 'model' (locked by template tvfl-gravimetric-water v1)"), v.get(0));
+        assertTrue(v.get(0).endsWith("budget value E = 0"), v.get(0));
+        assertTrue(v.get(1).startsWith("locked field 'rho_20.source'"), v.get(1));
+        assertTrue(v.get(1).endsWith("budget value my own guess"), v.get(1));
     }
 
     @Test

@@ -48,6 +48,8 @@ final class InputInspector extends JPanel {
     private final TypeBForm typeB;
     private final TypeAForm typeA;
     private final JLabel problem = new JLabel();
+    /** Says which fields of the shown input its template locks, and which template. */
+    private final JLabel lock = new JLabel();
     /** The name of the input the form shows; its typed text belongs to it. */
     private String bound;
     /** The labels of the text fields typed into and not yet applied. */
@@ -108,7 +110,10 @@ final class InputInspector extends JPanel {
         basis.setForeground(Colors.get("Label.disabledForeground"));
         problem.setForeground(Colors.get("Quire.error"));
         problem.setName("inspectorProblem");
-        for (javax.swing.JComponent j : new javax.swing.JComponent[] {heading, plot, basis, fields, problem, evaluation}) {
+        lock.setName("inspectorLock");
+        lock.setVisible(false);
+        for (javax.swing.JComponent j : new javax.swing.JComponent[] {heading, lock, plot, basis, fields, problem,
+            evaluation}) {
             j.setAlignmentX(LEFT_ALIGNMENT);
             add(j);
         }
@@ -350,12 +355,30 @@ final class InputInspector extends JPanel {
                 }
             }
             boolean ro = ctx.readOnly();
-            for (JTextField f : texts.values()) {
-                f.setEditable(!ro);
+            org.quire.engine.document.TemplateOrigin origin = ctx.document().content().templateOrigin();
+            java.util.List<String> lockedHere = new java.util.ArrayList<>();
+            for (Map.Entry<String, JTextField> e : texts.entrySet()) {
+                boolean lk = origin != null && (e.getKey().equals("Name") ? origin.locksAnyOf(q.name())
+                        : origin.isLocked(q.name(), e.getKey().toLowerCase(java.util.Locale.ROOT)));
+                e.getValue().setEditable(!ro && !lk);
+                e.getValue().setToolTipText(lk ? origin.lockReason() : null);
+                if (lk) {
+                    lockedHere.add(e.getKey().toLowerCase(java.util.Locale.ROOT));
+                }
             }
-            type.setEnabled(!ro);
-            typeA.setEditable(!ro);
-            typeB.setEditable(!ro);
+            boolean evLocked = origin != null && (origin.isLocked(q.name(), "evaluation")
+                    || origin.isLocked(q.name(), "estimate"));
+            if (evLocked) {
+                lockedHere.add("evaluation");
+            }
+            type.setEnabled(!ro && !evLocked);
+            type.setToolTipText(evLocked ? origin.lockReason() : null);
+            typeA.setEditable(!ro && !evLocked);
+            typeB.setEditable(!ro && !evLocked);
+            lock.setText(lockedHere.isEmpty() ? "" : "<html>" + capital(origin.lockReason()) + ":<br>"
+                    + String.join(", ", lockedHere) + " read-only (values of the method)</html>");
+            lock.setToolTipText(lockedHere.isEmpty() ? null : origin.lockReason());
+            lock.setVisible(!lockedHere.isEmpty());
         } finally {
             updating = false;
         }
@@ -381,6 +404,10 @@ final class InputInspector extends JPanel {
             pendingA = true;
         }
         problem("Not applied yet: " + d.why());
+    }
+
+    private static String capital(String s) {
+        return s.isEmpty() ? s : Character.toUpperCase(s.charAt(0)) + s.substring(1);
     }
 
     /** @return the name of the input the form is bound to, or null */

@@ -151,7 +151,9 @@ final class CorrelationsSection implements Section {
 
         @Override
         public boolean isCellEditable(int r, int c) {
-            return c > 0 && r != c - 1 && !ctx.readOnly();
+            org.quire.engine.document.TemplateOrigin o = ctx.document().content().templateOrigin();
+            // the correlations a template locks are the method's: read-only
+            return c > 0 && r != c - 1 && !ctx.readOnly() && !(o != null && o.locked().contains("correlations"));
         }
 
         @Override

@@ -50,7 +50,9 @@ final class InputsSection implements Section {
                 int r = rowAtPoint(e.getPoint());
                 int c = columnAtPoint(e.getPoint());
                 Object v = r < 0 || c < 0 ? null : getValueAt(r, c);
-                return v == null || v.toString().isEmpty() ? null : v.toString();
+                String lock = r < 0 || c < 0 ? null : model.lockReason(r, convertColumnIndexToModel(c));
+                String text = v == null || v.toString().isEmpty() ? null : v.toString();
+                return lock == null ? text : (text == null ? "" : text + " \u2014 ") + lock;
             }
         };
         table.setToolTipText("");

@@ -63,6 +63,28 @@ final class InputsTableModel extends AbstractTableModel {
 
     InputQuantity input(int row) { return rows.get(row); }
 
+    /**
+     * @return "locked by template ID vN" when the template the budget was made from locks the cell's field
+     *     (recorded in its {@link org.quire.engine.document.TemplateOrigin}), else null
+     */
+    String lockReason(int r, int c) {
+        org.quire.engine.document.TemplateOrigin o = ctx.document().content().templateOrigin();
+        if (o == null || r < 0 || r >= rows.size()) {
+            return null;
+        }
+        String n = rows.get(r).name();
+        boolean locked;
+        switch (c) {
+            case NAME: locked = o.locksAnyOf(n); break;
+            case DESCRIPTION: locked = o.isLocked(n, "description"); break;
+            case UNIT: locked = o.isLocked(n, "unit"); break;
+            case SOURCE: locked = o.isLocked(n, "source"); break;
+            case ESTIMATE: locked = o.isLocked(n, "estimate") || o.isLocked(n, "evaluation"); break;
+            default: locked = o.isLocked(n, "evaluation");
+        }
+        return locked ? o.lockReason() : null;
+    }
+
     @Override public int getRowCount() { return rows.size(); }
     @Override public int getColumnCount() { return COLUMNS.length; }
     @Override public String getColumnName(int c) { return COLUMNS[c]; }
@@ -73,6 +95,9 @@ final class InputsTableModel extends AbstractTableModel {
             return false;
         }
         Evaluation e = rows.get(r).evaluation();
+        if (lockReason(r, c) != null) {
+            return false;
+        }
         switch (c) {
             case ESTIMATE: return EvaluationEdits.estimateEditable(e);
             case TYPE: return false;

@@ -44,15 +44,20 @@ final class ModelSection implements Section {
     private final TextCommit commit;
     private final OutputsPanel outputs;
     private final JLabel state = new JLabel(" ");
+    private final EditorContext ctx;
+    private final JLabel hint = new JLabel();
+    private static final String HINT = "One equation a line: name = expression, or name(args) = expression for a "
+            + "function. # starts a comment.";
 
     ModelSection(EditorContext ctx) {
+        this.ctx = ctx;
         editor.setName("model");
         editor.setFont(new Font(Font.MONOSPACED, Font.PLAIN, editor.getFont().getSize()));
         editor.setToolTipText("");
         JScrollPane sp = new JScrollPane(editor);
         sp.setPreferredSize(new Dimension(600, 16 * editor.getFontMetrics(editor.getFont()).getHeight() + 8));
-        JLabel hint = new JLabel("One equation a line: name = expression, or name(args) = expression for a "
-                + "function. # starts a comment.");
+        hint.setText(HINT);
+        hint.setName("modelHint");
         hint.setForeground(Colors.get("Label.disabledForeground"));
         body.add(hint, BorderLayout.NORTH);
         body.add(sp, BorderLayout.CENTER);
@@ -152,7 +157,10 @@ final class ModelSection implements Section {
 
     @Override
     public void readOnlyChanged(boolean ro) {
-        editor.setEditable(!ro);
-        outputs.readOnlyChanged(ro);
+        org.quire.engine.document.TemplateOrigin o = ctx.document().content().templateOrigin();
+        boolean locked = o != null && o.locked().contains("model");
+        editor.setEditable(!ro && !locked);
+        hint.setText(locked ? "The model is " + o.lockReason() + " (the method's model): read-only." : HINT);
+        outputs.readOnlyChanged(ro || o != null && o.locked().contains("outputs"));
     }
 }

@@ -27,8 +27,11 @@ import org.quire.engine.document.TemplateParameter;
 
 /**
  * File &gt; New from template: the catalogue's templates and plain budgets on the left; on the right what the
- * selected one is and, for a template, a field for each parameter (with its unit, description and default).
- * A value the engine refuses is reported in the dialog, which stays open.
+ * selected one is and, for a template, a field for each parameter (with its unit, description and default; a
+ * readings parameter takes the readings, separated by ';', tabs, spaces or line breaks, each read by the one
+ * CSV number rule), and the new budget's laboratory and device under test (the template's own are not carried
+ * over). The budget is made by the engine's one path ({@link TemplateCatalog#create}); a value it refuses is
+ * reported in the dialog, which stays open.
  */
 public final class NewFromTemplateDialog extends JDialog {
     private static final long serialVersionUID = 1L;
@@ -37,6 +40,10 @@ public final class NewFromTemplateDialog extends JDialog {
     private final JTextArea about = new JTextArea(4, 40);
     private final JLabel error = new JLabel(" ");
     private final Map<String, JTextField> fields = new LinkedHashMap<>();
+    /** The parameters that take readings (a list), by name. */
+    private final java.util.Set<String> readingsFields = new java.util.HashSet<>();
+    private final JTextField laboratory = new JTextField(24);
+    private final JTextField device = new JTextField(24);
     private final String author;
     private BudgetDocument created;
     private TemplateCatalog.Entry createdFrom;
@@ -125,6 +132,7 @@ public final class NewFromTemplateDialog extends JDialog {
         TemplateCatalog.Entry e = list.getSelectedValue();
         form.removeAll();
         fields.clear();
+        readingsFields.clear();
         error.setText(" ");
         if (e == null) {
             return;
@@ -136,10 +144,30 @@ public final class NewFromTemplateDialog extends JDialog {
             c.insets = new Insets(3, 0, 3, 8);
             c.anchor = GridBagConstraints.WEST;
             c.gridy = 0;
+            laboratory.setName("laboratory");
+            device.setName("device");
+            c.gridx = 0;
+            form.add(new JLabel("Laboratory"), c);
+            c.gridx = 1;
+            c.gridwidth = 2;
+            form.add(laboratory, c);
+            c.gridwidth = 1;
+            c.gridy++;
+            c.gridx = 0;
+            form.add(new JLabel("Device under test"), c);
+            c.gridx = 1;
+            c.gridwidth = 2;
+            form.add(device, c);
+            c.gridwidth = 1;
+            c.gridy++;
             for (TemplateParameter p : e.template().spec().parameters()) {
-                JTextField f = new JTextField(p.hasDefault() ? Fmt.num(p.defaultValue()) : "", 12);
+                JTextField f = new JTextField(p.hasDefault() ? Fmt.num(p.defaultValue()) : "", p.isReadings() ? 24 : 12);
                 f.setName("param:" + p.name());
                 fields.put(p.name(), f);
+                if (p.isReadings()) {
+                    readingsFields.add(p.name());
+                    f.setToolTipText("the readings, separated by ';', tabs or spaces (a pasted column works too)");
+                }
                 c.gridx = 0;
                 form.add(new JLabel(p.name() + (p.unit().isEmpty() ? "" : " (" + p.unit() + ")")), c);
                 c.gridx = 1;
@@ -147,7 +175,7 @@ public final class NewFromTemplateDialog extends JDialog {
                 c.gridx = 2;
                 String range = Double.isInfinite(p.minimum()) && Double.isInfinite(p.maximum()) ? ""
                         : "  [" + Fmt.num(p.minimum()) + " \u2026 " + Fmt.num(p.maximum()) + "]";
-                form.add(new JLabel(p.description() + range), c);
+                form.add(new JLabel((p.isReadings() ? "readings: " : "") + p.description() + range), c);
                 c.gridy++;
             }
             if (fields.isEmpty()) {
@@ -169,20 +197,35 @@ public final class NewFromTemplateDialog extends JDialog {
             return;
         }
         Map<String, Double> values = new LinkedHashMap<>();
+        Map<String, double[]> readings = new LinkedHashMap<>();
         for (Map.Entry<String, JTextField> f : fields.entrySet()) {
             String t = f.getValue().getText().trim();
             if (t.isEmpty()) {
                 continue;
             }
             try {
-                values.put(f.getKey(), Fmt.parse(t));
+                if (readingsFields.contains(f.getKey())) {
+                    // one reading a line, each by the one CSV number rule
+                    readings.put(f.getKey(), org.quire.engine.csv.CsvReadings.parse("readings of " + f.getKey(),
+                            String.join("\n", t.split("[;\\s]+")), org.quire.engine.csv.CsvOptions.defaults()));
+                } else {
+                    values.put(f.getKey(), Fmt.parse(t));
+                }
+            } catch (org.quire.engine.csv.CsvException x) {
+                error.setText("<html>" + esc(f.getKey() + ": " + x.getMessage()) + "</html>");
+                return;
             } catch (IllegalArgumentException x) {
                 error.setText("<html>" + esc(f.getKey() + ": " + x.getMessage()) + "</html>");
                 return;
             }
         }
+        org.quire.engine.document.TemplateValues given = org.quire.engine.document.TemplateValues.of(values)
+                .withLaboratory(laboratory.getText()).withDeviceUnderTest(device.getText());
+        for (Map.Entry<String, double[]> r : readings.entrySet()) {
+            given = given.withReadings(r.getKey(), r.getValue());
+        }
         try {
-            created = TemplateCatalog.create(e, values, author, Instant.now());
+            created = TemplateCatalog.create(e, given, author, Instant.now());
             createdFrom = e;
             dispose();
         } catch (IllegalArgumentException x) {

@@ -135,6 +135,19 @@ public final class TemplateCatalog {
      * @throws IllegalArgumentException naming every missing, unknown or out-of-range parameter
      */
     public static BudgetDocument create(Entry entry, Map<String, Double> values, String author, Instant now) {
+        return create(entry, org.quire.engine.document.TemplateValues.of(values), author, now);
+    }
+
+    /**
+     * @param values the template's parameters, readings included, and the new budget's laboratory and device
+     *     (ignored for a plain budget)
+     * @return a new draft (revision 1), by the engine's {@link TemplateLibrary#newFromTemplate(Template,
+     *     org.quire.engine.document.TemplateValues, String, Instant)} for a template (the one path the command
+     *     line's {@code template new} uses); for a plain budget a copy of it with its laboratory
+     * @throws IllegalArgumentException naming every missing, unknown or out-of-range parameter
+     */
+    public static BudgetDocument create(Entry entry, org.quire.engine.document.TemplateValues values, String author,
+            Instant now) {
         if (entry.isTemplate()) {
             return TemplateLibrary.newFromTemplate(entry.template(), values, author, now);
         }
