@@ -41,7 +41,31 @@ with open(sys.argv[1] + "/rows.csv", "w") as f:
                 random.uniform(0.3, 0.7)))
 with open(sys.argv[1] + "/rows-mc.csv", "w") as f:
     f.writelines(open(sys.argv[1] + "/rows.csv").readlines()[:201])
+# the same flow points for version 2 of the template, which asks for every value of the measurement: the
+# balance's U, the five pulse counts of the runs (one cell, separated by ';'), the pulse value and the
+# converter's half-width
+random.seed(17)
+rows = open(sys.argv[1] + "/rows.csv").readlines()
+with open(sys.argv[1] + "/rows2.csv", "w") as f:
+    f.write(rows[0].strip() + ",U_bal,N_ind,k_pulse,d_conv\n")
+    for line in rows[1:]:
+        i_net = float(line.split(",")[1])
+        counts = ";".join("%.1f" % (10 * i_net * random.uniform(0.998, 1.002)) for _ in range(5))
+        f.write(line.strip() + ",%.4f,%s,10,0.0002\n" % (max(0.0001, i_net * 6e-5), counts))
+with open(sys.argv[1] + "/rows2-mc.csv", "w") as f:
+    f.writelines(open(sys.argv[1] + "/rows2.csv").readlines()[:201])
 EOF
+# A jar built before version 2 of the gravimetric template is measured on version 1 of it and the old rows:
+# BASELINE_TEMPLATE=FILE names that file (e.g. `git show 1d6eba7:templates/gravimetric-emf-flow-point.json`),
+# used for every jar whose file name contains "baseline".
+batch_args() {
+    local spec=$1 mc=$2
+    if [ -n "${BASELINE_TEMPLATE:-}" ] && [[ "$(basename "${spec%%@*}")" == *baseline* ]]; then
+        echo "$BASELINE_TEMPLATE $work/rows$mc.csv"
+    else
+        echo "$template $work/rows2$mc.csv"
+    fi
+}
 
 now() { date +%s%N; }
 # wall seconds of a command, its output discarded
@@ -122,9 +146,11 @@ for round in $(seq 1 "$repeats"); do
         record "GUM 1000 inputs first ms" "$spec" "$(echo "$out" | field first_evaluate_ms)"
     done
     for spec in "${jars[@]}"; do
-        record "batch 10000 rows s" "$spec" "$(wall run_java "$spec" batch "$template" "$work/rows.csv" -o "$work/out.csv")"
+        # shellcheck disable=SC2046
+        record "batch 10000 rows s" "$spec" "$(wall run_java "$spec" batch $(batch_args "$spec" "") -o "$work/out.csv")"
+        # shellcheck disable=SC2046
         record "batch --mc 200 rows x 1e5 s" "$spec" \
-            "$(wall run_java "$spec" batch "$template" "$work/rows-mc.csv" -o "$work/out-mc.csv" --mc --trials 100000)"
+            "$(wall run_java "$spec" batch $(batch_args "$spec" -mc) -o "$work/out-mc.csv" --mc --trials 100000)"
     done
     for spec in "${jars[@]}"; do
         record "workbench painted ms" "$spec" "$(workbench_ms "$spec")"

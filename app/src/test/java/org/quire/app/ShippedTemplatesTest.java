@@ -81,7 +81,7 @@ class ShippedTemplatesTest {
 
     private static GumResult evaluate(String file) throws Exception {
         Budget b = BudgetJson.read(templatesFolder().resolve(file));
-        return GumEvaluator.evaluate(b, Engine.library());
+        return GumEvaluator.evaluate(b, Engine.standard().library());
     }
 
     @Test
@@ -99,11 +99,11 @@ class ShippedTemplatesTest {
         return templateFiles().stream().map(file -> DynamicTest.dynamicTest(file.getFileName().toString(), () -> {
             Budget b = BudgetJson.read(file);
             List<String> modelWarnings = new ArrayList<>();
-            for (ModelProblem w : b.compile(Engine.library()).warnings()) {
+            for (ModelProblem w : b.compile(Engine.standard().library()).warnings()) {
                 modelWarnings.add(w.toString());
             }
             assertEquals(List.of(), modelWarnings, "model warnings");
-            GumResult r = GumEvaluator.evaluate(b, Engine.library());
+            GumResult r = GumEvaluator.evaluate(b, Engine.standard().library());
             assertEquals(List.of(), r.warnings(), "budget warnings");
             for (OutputResult o : r.outputs()) {
                 assertEquals(List.of(), o.warnings(), "warnings of output " + o.name());

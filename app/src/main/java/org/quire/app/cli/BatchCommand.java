@@ -112,7 +112,7 @@ final class BatchCommand implements Callable<Integer> {
         EvaluationSettings settings = base.settings();
         CompiledModel model;
         try {
-            model = base.compile(Engine.library());
+            model = base.compile(quire.engine.library());
         } catch (ModelException e) {
             throw Files.modelProblem(templateName, e);
         }

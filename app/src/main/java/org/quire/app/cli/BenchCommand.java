@@ -87,7 +87,7 @@ final class BenchCommand implements Callable<Integer> {
             throw new UsageException("--runs must be between 1 and 100");
         }
         Budget b = benchmarkBudget();
-        CompiledModel model = b.compile(Engine.library());
+        CompiledModel model = b.compile(quire.engine.library());
         GumResult gum = GumEvaluator.evaluate(b, model, b.correlationMatrix(), b.settings());
         MonteCarloSettings base = BudgetSimulation.settings(b.settings(), gum).withThreads(threads).withTrials(trials);
         long warm = Math.min(trials, 1_000_000);
@@ -138,7 +138,7 @@ final class BenchCommand implements Callable<Integer> {
                 long t0 = System.nanoTime();
                 org.quire.engine.document.BudgetDocument d = org.quire.engine.document.DocumentStore.open(file);
                 long t1 = System.nanoTime();
-                GumResult g = GumEvaluator.evaluate(d.budget(), Engine.library());
+                GumResult g = GumEvaluator.evaluate(d.budget(), quire.engine.library());
                 long t2 = System.nanoTime();
                 org.quire.engine.document.DocumentStore.save(d.withResults(org.quire.engine.document.ResultSnapshot.of(
                         org.quire.engine.io.ResultJson.toJson(d.budget().title(), g), java.time.Instant.now())), file);

@@ -46,7 +46,8 @@ final class BudgetTableText {
             s.append(String.format(Locale.ROOT, "  coverage factor                   k = %s (p = %s %%)%n",
                     g(o.coverageFactor(), 4), g(100 * o.coverageProbability(), 4)));
             s.append(String.format(Locale.ROOT, "  expanded uncertainty              U = %s%s%s%n", g(o.expandedUncertainty(), 5), unit,
-                    Double.isNaN(o.relativeExpandedUncertainty()) ? ""
+                    !org.quire.engine.gum.Figures.relativeUncertaintyMeaningful(o.unit(), o.estimate(),
+                            o.expandedUncertainty()) ? ""
                             : String.format(Locale.ROOT, " (%s %% of |y|)", g(100 * o.relativeExpandedUncertainty(), 3))));
             s.append(String.format(Locale.ROOT, "  result: %s = (%s)%s, k = %s, p = %s %%%n", o.name(),
                     Rounding.format(o.estimate(), o.expandedUncertainty(), digits), unit, g(o.coverageFactor(), 3),

@@ -151,7 +151,7 @@ final class CalibrationCommand implements Callable<Integer> {
 
         @Override
         public Integer call() throws Exception {
-            return evaluate(file, method, format, output, parent.quire.out);
+            return evaluate(file, method, format, output, parent.quire.out, parent.quire.engine.library());
         }
     }
 
@@ -184,7 +184,7 @@ final class CalibrationCommand implements Callable<Integer> {
 
         @Override
         public Integer call() throws Exception {
-            return fleet(method, runs, job, output, csv, parent.quire.err);
+            return fleet(method, runs, job, output, csv, parent.quire.err, parent.quire.engine.library());
         }
     }
 
@@ -308,7 +308,8 @@ final class CalibrationCommand implements Callable<Integer> {
         return 0;
     }
 
-    private static int evaluate(String name, String methodName, String format, String output, PrintStream out)
+    private static int evaluate(String name, String methodName, String format, String output, PrintStream out,
+            org.quire.engine.model.FunctionLibrary library)
             throws Exception {
         if (!Set.of("text", "json", "csv").contains(format)) {
             throw new UsageException("--format must be text, json or csv, not '" + format + "'");
@@ -325,7 +326,7 @@ final class CalibrationCommand implements Callable<Integer> {
         } catch (BudgetFormatException e) {
             throw new Files.FileProblem(name, e.getMessage());
         }
-        CalibrationResult r = evaluate(name, method, loaded);
+        CalibrationResult r = evaluate(name, method, loaded, library);
         String text = format.equals("json") ? BudgetJson.pretty(CalibrationResultJson.toJson(r))
                 : format.equals("csv") ? csv(r) : text(r);
         if (output != null) {
@@ -342,23 +343,41 @@ final class CalibrationCommand implements Callable<Integer> {
      * @throws UsageException when the file does not exist
      * @throws Files.FileProblem naming the file and the JSON path of what is wrong
      */
-    static CalibrationResult readAndEvaluate(String name) throws UsageException, Files.FileProblem, IOException {
+    static CalibrationResult readAndEvaluate(String name, org.quire.engine.model.FunctionLibrary library)
+            throws UsageException, Files.FileProblem, IOException {
+        return readAndEvaluateWithFile(name, library).result();
+    }
+
+    /**
+     * A calibration evaluated, with the method file as the calibration names it (part of its content).
+     *
+     * @param result the evaluation
+     * @param methodFile the method's file as written in the calibration, or null
+     */
+    record Evaluated(CalibrationResult result, String methodFile) {
+    }
+
+    /** As {@link #readAndEvaluate(String, org.quire.engine.model.FunctionLibrary)}, keeping the method file the calibration names. */
+    static Evaluated readAndEvaluateWithFile(String name, org.quire.engine.model.FunctionLibrary library)
+            throws UsageException, Files.FileProblem, IOException {
         Path file = Files.path(name);
         if (!java.nio.file.Files.isRegularFile(file)) {
             throw new UsageException("no such calibration file: " + name);
         }
         try {
             CalibrationJson.Loaded loaded = CalibrationJson.read(file);
-            return evaluate(name, CalibrationJson.method(file, loaded), loaded);
+            return new Evaluated(evaluate(name, CalibrationJson.method(file, loaded), loaded, library),
+                    loaded.methodFile());
         } catch (BudgetFormatException e) {
             throw new Files.FileProblem(name, e.getMessage());
         }
     }
 
-    private static CalibrationResult evaluate(String name, Template method, CalibrationJson.Loaded loaded)
+    private static CalibrationResult evaluate(String name, Template method, CalibrationJson.Loaded loaded,
+            org.quire.engine.model.FunctionLibrary library)
             throws Files.FileProblem {
         try {
-            return CalibrationEvaluator.of(method, Engine.library()).evaluate(loaded.calibration());
+            return CalibrationEvaluator.of(method, library).evaluate(loaded.calibration());
         } catch (CalibrationException e) {
             throw new Files.FileProblem(name, (e.location().isEmpty() ? "" : "$." + e.location() + ": ") + e.getMessage());
         } catch (ModelException e) {
@@ -504,7 +523,7 @@ final class CalibrationCommand implements Callable<Integer> {
     }
 
     private static int fleet(String methodName, String runsName, String jobName, String outputName, CsvChoice csv,
-            PrintStream err) throws Exception {
+            PrintStream err, org.quire.engine.model.FunctionLibrary library) throws Exception {
         Path target = Files.path(outputName);
         long started = System.nanoTime();
         Template method = method(methodName);
@@ -512,7 +531,7 @@ final class CalibrationCommand implements Callable<Integer> {
         JsonObject job = job(jobName);
         CalibrationEvaluator ev;
         try {
-            ev = CalibrationEvaluator.of(method, Engine.library()).withMonteCarloThreads(1);
+            ev = CalibrationEvaluator.of(method, library).withMonteCarloThreads(1);
         } catch (ModelException e) {
             throw Files.modelProblem(methodName, e);
         }

@@ -64,7 +64,8 @@ final class CertificateCommand implements Callable<Integer> {
     LocalDate issued;
 
     @Option(names = "--number", paramLabel = "TEXT",
-            description = "the certificate number (default: derived from the calibration date and the content hash)")
+            description = "the certificate number (default: the laboratory's initials, the calibration date and the "
+                    + "content hash)")
     String number;
 
     @Option(names = "--accept-reference-findings",
@@ -87,7 +88,7 @@ final class CertificateCommand implements Callable<Integer> {
         } catch (BudgetFormatException e) {
             throw new Files.FileProblem(register, e.getMessage());
         }
-        CalibrationResult r = CalibrationCommand.readAndEvaluate(file);
+        CalibrationResult r = CalibrationCommand.readAndEvaluate(file, quire.engine.library());
         Certificate c;
         try {
             c = CertificateBuilder.build(r, references, new CertificateIssue(issued == null ? LocalDate.now() : issued,

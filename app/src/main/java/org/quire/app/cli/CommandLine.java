@@ -1,5 +1,7 @@
 package org.quire.app.cli;
 
+import org.quire.app.common.Engine;
+
 import java.io.PrintStream;
 import java.io.PrintWriter;
 import java.nio.file.Path;
@@ -50,7 +52,16 @@ public final class CommandLine {
 
     /** Runs one command; {@code quire open} hands over to {@code launcher}. @return the exit status */
     public static int run(String[] args, PrintStream out, PrintStream err, WorkbenchLauncher launcher) {
-        picocli.CommandLine cmd = parser(out, err, launcher, args.length > 0 ? args[0] : null);
+        return run(args, out, err, launcher, Engine.standard());
+    }
+
+    /**
+     * Runs one command with that engine configuration: every evaluation, Monte Carlo run, review and report of the
+     * command compiles the model with its function set. @return the exit status
+     */
+    public static int run(String[] args, PrintStream out, PrintStream err, WorkbenchLauncher launcher,
+            Engine engine) {
+        picocli.CommandLine cmd = parser(out, err, launcher, args.length > 0 ? args[0] : null, engine);
         int status;
         try {
             status = cmd.execute(args);
@@ -70,7 +81,7 @@ public final class CommandLine {
 
     /** @return the parser of the whole command line, for help, man pages and shell completion */
     static picocli.CommandLine parser(PrintStream out, PrintStream err, WorkbenchLauncher launcher) {
-        return parser(out, err, launcher, null);
+        return parser(out, err, launcher, null, Engine.standard());
     }
 
     /**
@@ -79,8 +90,8 @@ public final class CommandLine {
      *     suggestions see the whole tree
      */
     private static picocli.CommandLine parser(PrintStream out, PrintStream err, WorkbenchLauncher launcher,
-            String only) {
-        QuireCommand root = new QuireCommand(out, err, launcher);
+            String only, Engine engine) {
+        QuireCommand root = new QuireCommand(out, err, launcher, engine);
         picocli.CommandLine cmd = new picocli.CommandLine(root);
         Class<?> single = null;
         if (only != null && !only.equals("help") && !only.equals("completion")) {
@@ -144,6 +155,10 @@ public final class CommandLine {
             return USER_ERROR;
         }
         err.println("quire: internal error (a bug in Quire; please report it with the command and file): " + e);
+        StackTraceElement[] where = e.getStackTrace();
+        for (int i = 0; i < Math.min(6, where.length); i++) {
+            err.println("    at " + where[i]);
+        }
         return BUG;
     }
 }

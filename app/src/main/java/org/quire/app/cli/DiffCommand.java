@@ -57,7 +57,7 @@ final class DiffCommand implements Callable<Integer> {
         String fb = files.get(1);
         BudgetDocument da = Files.loadDocument(fa);
         BudgetDocument db = Files.loadDocument(fb);
-        Comparison c = BudgetComparison.compare(da.budget(), db.budget(), Engine.library());
+        Comparison c = BudgetComparison.compare(da.budget(), db.budget(), quire.engine.library());
         out.print(ComparisonText.format(c, fa, fb));
         boolean details = details(da, db, out);
         return c.identical() && !details ? 0 : 1;
@@ -83,7 +83,7 @@ final class DiffCommand implements Callable<Integer> {
                             : "approved revisions: " + String.join(", ", revs)));
         }
         BudgetDocument old = approved.get();
-        Comparison c = BudgetComparison.compare(old.budget(), doc.budget(), Engine.library());
+        Comparison c = BudgetComparison.compare(old.budget(), doc.budget(), quire.engine.library());
         String nameA = file + ", approved revision " + n + " (" + old.contentHash().substring(0, 16) + "…)";
         String nameB = file + ", revision " + doc.revision() + ", " + doc.status().label() + " ("
                 + doc.contentHash().substring(0, 16) + "…)";

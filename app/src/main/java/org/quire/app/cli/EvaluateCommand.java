@@ -79,7 +79,7 @@ final class EvaluateCommand implements Callable<Integer> {
         b = b.withSettings(s);
         GumResult r;
         try {
-            r = GumEvaluator.evaluate(b, Engine.library());
+            r = GumEvaluator.evaluate(b, quire.engine.library());
         } catch (org.quire.engine.model.ModelException e) {
             throw Files.modelProblem(file, e);
         } catch (IllegalArgumentException e) {

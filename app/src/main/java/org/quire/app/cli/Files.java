@@ -58,6 +58,25 @@ final class Files {
         }
     }
 
+    /**
+     * @return whether {@code name} is a calibration file ({@code "format": "quire-calibration"}); false for anything
+     *     else, whose own reader then says what is wrong with it
+     */
+    static boolean isCalibration(String name) throws UsageException {
+        Path p = path(name);
+        if (!java.nio.file.Files.isRegularFile(p)) {
+            return false;
+        }
+        try {
+            jakarta.json.JsonObject o = org.quire.engine.io.BudgetJson.parseObject(
+                    org.quire.engine.io.BudgetJson.readText(p));
+            return o.get("format") instanceof jakarta.json.JsonString f
+                    && f.getString().equals(org.quire.engine.calibration.CalibrationJson.FORMAT);
+        } catch (IOException | BudgetFormatException | RuntimeException e) {
+            return false;
+        }
+    }
+
     /** @return the model's problems, each on its own line with the file, the model line and column */
     static FileProblem modelProblem(String file, org.quire.engine.model.ModelException e) {
         StringBuilder s = new StringBuilder();

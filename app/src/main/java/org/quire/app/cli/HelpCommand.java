@@ -33,6 +33,9 @@ final class HelpCommand implements Callable<Integer> {
     @Spec
     CommandSpec spec;
 
+    @picocli.CommandLine.ParentCommand
+    QuireCommand quire;
+
     @Parameters(paramLabel = "TOPIC", arity = "0..*",
             description = "a command (with its action, as in 'template new'), or model, units or functions")
     List<String> topic = new ArrayList<>();
@@ -58,7 +61,7 @@ final class HelpCommand implements Callable<Integer> {
             return CommandLine.OK;
         }
         if (topic.size() == 1 && TOPICS.contains(topic.get(0))) {
-            out.print(LanguageHelp.text(topic.get(0)));
+            out.print(LanguageHelp.text(topic.get(0), quire.engine));
             out.flush();
             return CommandLine.OK;
         }

@@ -73,7 +73,7 @@ final class MonteCarloCommand implements Callable<Integer> {
         CompiledModel model;
         GumResult gum;
         try {
-            model = b.compile(Engine.library());
+            model = b.compile(quire.engine.library());
             gum = GumEvaluator.evaluate(b, model, b.correlationMatrix(), b.settings());
         } catch (org.quire.engine.model.ModelException e) {
             throw Files.modelProblem(file, e);

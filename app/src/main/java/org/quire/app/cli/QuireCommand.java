@@ -37,11 +37,15 @@ final class QuireCommand implements Callable<Integer> {
     final PrintStream out;
     final PrintStream err;
     final CommandLine.WorkbenchLauncher launcher;
+    /** The engine configuration every subcommand evaluates with. */
+    final org.quire.app.common.Engine engine;
 
     @Spec
     CommandSpec spec;
 
-    QuireCommand(PrintStream out, PrintStream err, CommandLine.WorkbenchLauncher launcher) {
+    QuireCommand(PrintStream out, PrintStream err, CommandLine.WorkbenchLauncher launcher,
+            org.quire.app.common.Engine engine) {
+        this.engine = java.util.Objects.requireNonNull(engine, "engine");
         this.out = out;
         this.err = err;
         this.launcher = launcher;

@@ -44,7 +44,7 @@ final class RangeCommand implements Callable<Integer> {
         Budget b = Files.loadBudget(file);
         FlowRangeResult r;
         try {
-            r = FlowRange.evaluate(b, Engine.library());
+            r = FlowRange.evaluate(b, quire.engine.library());
         } catch (org.quire.engine.model.ModelException e) {
             throw Files.modelProblem(file, e);
         } catch (IllegalArgumentException e) {

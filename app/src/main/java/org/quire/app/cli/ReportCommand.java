@@ -13,6 +13,7 @@ import org.quire.app.common.Engine;
 import org.quire.app.compare.BudgetComparison;
 import org.quire.app.compare.Comparison;
 import org.quire.app.compare.ComparisonSection;
+import org.quire.app.report.CalibrationReport;
 import org.quire.app.report.CalibrationSections;
 import org.quire.app.report.CsvTables;
 import org.quire.app.report.DocumentInfo;
@@ -94,6 +95,10 @@ final class ReportCommand implements Callable<Integer> {
     @Option(names = "--against", paramLabel = "EARLIER.json", description = "add the changes from this earlier budget")
     String against;
 
+    @Option(names = "--with-guidance", description = "add the notes on the inputs (a template's guidance for the "
+            + "author) as an appendix; they are never in the report's body")
+    boolean withGuidance;
+
     @Override
     public Integer call() throws Exception {
         PrintStream out = quire.out;
@@ -122,15 +127,18 @@ final class ReportCommand implements Callable<Integer> {
             throw new UsageException("--csv needs an existing folder; " + csvDir + " is not one");
         }
         LocalDate date = this.date == null ? LocalDate.now() : this.date;
+        if (Files.isCalibration(file)) {
+            return calibration(target, format, csvDir, date, out);
+        }
         BudgetDocument document = Files.loadDocument(file);
         Budget b = document.budget();
         GumResult r;
         CompiledModel model;
         List<ReportSection> sections;
         try {
-            model = b.compile(Engine.library());
+            model = b.compile(quire.engine.library());
             r = GumEvaluator.evaluate(b, model, b.correlationMatrix(), b.settings());
-            sections = CalibrationSections.of(b, Engine.library());
+            sections = CalibrationSections.of(b, quire.engine.library());
         } catch (org.quire.engine.model.ModelException e) {
             throw Files.modelProblem(file, e);
         } catch (IllegalArgumentException e) {
@@ -157,7 +165,7 @@ final class ReportCommand implements Callable<Integer> {
                 }
             }
         }
-        ReportInput input = ReportInput.of(b, r, doc);
+        ReportInput input = ReportInput.of(b, r, doc, quire.engine.library()).withAuthorNotes(withGuidance);
         for (ReportSection s : sections) {
             input = input.withSection(s);
         }
@@ -166,10 +174,32 @@ final class ReportCommand implements Callable<Integer> {
         }
         if (against != null) {
             String earlier = against;
-            Comparison c = BudgetComparison.compare(Files.loadDocument(earlier).budget(), b, Engine.library());
+            Comparison c = BudgetComparison.compare(Files.loadDocument(earlier).budget(), b, quire.engine.library());
             input = input.withSection(ComparisonSection.of(c, shortName(earlier), shortName(file)));
         }
-        ReportModel m = ReportBuilder.build(input);
+        write(ReportBuilder.build(input), target, format, csvDir, out);
+        return 0;
+    }
+
+    /** The report of a calibration file: every point's budget, the correlation of the points, the certificate's figures. */
+    private int calibration(Path target, String format, Path csvDir, LocalDate date, PrintStream out) throws Exception {
+        String[][] budgetOnly = {{"--mc", mc ? "" : null}, {"--laboratory", laboratory}, {"--author", author},
+            {"--device", device}, {"--against", against}};
+        for (String[] o : budgetOnly) {
+            if (o[1] != null) {
+                throw new UsageException(o[0] + " is for a budget; " + file + " is a calibration file"
+                        + (o[0].equals("--mc") ? ", which states its Monte Carlo run in $.monteCarlo"
+                        : ", which records its own laboratory, author and item"));
+            }
+        }
+        CalibrationCommand.Evaluated e = CalibrationCommand.readAndEvaluateWithFile(file, quire.engine.library());
+        DocumentInfo doc = CalibrationReport.documentInfo(e.result().calibration(), e.methodFile(), date);
+        write(CalibrationReport.build(e.result(), doc, withGuidance, quire.engine.library()), target, format, csvDir, out);
+        return 0;
+    }
+
+    private static void write(ReportModel m, Path target, String format, Path csvDir, PrintStream out)
+            throws IOException {
         if (target != null) {
             byte[] bytes;
             if (format.equals("pdf")) {
@@ -191,7 +221,6 @@ final class ReportCommand implements Callable<Integer> {
             }
             out.println("wrote " + files.size() + " CSV tables to " + csvDir);
         }
-        return 0;
     }
 
     private static String shortName(String file) {

@@ -10,12 +10,10 @@ import java.util.Locale;
 import java.util.Set;
 import org.quire.app.common.Engine;
 import org.quire.app.review.ChecklistText;
-import org.quire.app.review.DecisionRecorder;
-import org.quire.app.review.DocumentDecisionRecorder;
 import org.quire.app.review.Mark;
 import org.quire.app.review.Review;
 import org.quire.app.review.ReviewContext;
-import org.quire.app.review.Verdict;
+import org.quire.engine.document.Verdict;
 import org.quire.engine.budget.Budget;
 import org.quire.engine.document.BudgetDocument;
 import org.quire.engine.document.DocumentStore;
@@ -35,7 +33,10 @@ import picocli.CommandLine.Parameters;
  * {@code quire review FILE [--mc [--trials N] [--seed S]] [--decide endorse|send-back --assessor NAME
  * [--reason TEXT] [--mark ITEM=agreed|finding|remark[:COMMENT]]... [--date YYYY-MM-DD]]}: the automatic checklist
  * of a budget document and, with {@code --decide}, the assessor's decision recorded in the document's history
- * and saved atomically. Exit 0, or 1 when an item is not met (without a decision) or the decision is refused.
+ * and saved atomically. Exit 0; 1 when an item is not met (without a decision) or the checklist does not allow the
+ * decision (unmarked items, findings, no reason); 2 when the engine's rules refuse it ({@link
+ * org.quire.engine.document.ReviewDecisions}: an approved or withdrawn document, the author endorsing, content
+ * already decided on).
  */
 @Command(name = "review", mixinStandardHelpOptions = true, sortOptions = false,
         description = {"The assessor's automatic checklist of a budget document; exit status 1 when an item is not "
@@ -114,14 +115,14 @@ final class ReviewCommand implements Callable<Integer> {
         GumResult r;
         CompiledModel model;
         try {
-            model = b.compile(Engine.library());
+            model = b.compile(quire.engine.library());
             r = GumEvaluator.evaluate(b, model, b.correlationMatrix(), b.settings());
         } catch (org.quire.engine.model.ModelException e) {
             throw Files.modelProblem(file, e);
         } catch (IllegalArgumentException e) {
             throw new Files.FileProblem(file, e.getMessage());
         }
-        ReviewContext ctx = ReviewContext.none().withUnits(new org.quire.app.review.EngineUnitChecker())
+        ReviewContext ctx = ReviewContext.none().withUnits(new org.quire.app.review.EngineUnitChecker(quire.engine.library()))
                 .withTemplate(org.quire.engine.document.TemplateConformance.check(doc, TemplateCommand.Folders.preferred()));
         if (mc) {
             ctx = ctx.withMonteCarlo(monteCarlo(trials, file, b, model, r));
@@ -141,22 +142,20 @@ final class ReviewCommand implements Callable<Integer> {
             out.println("decision refused: " + e.getMessage() + "; " + file + " is unchanged");
             return 1;
         }
-        DocumentDecisionRecorder recorder = new DocumentDecisionRecorder(doc, Clock.systemUTC());
-        DecisionRecorder.Recorded rec;
+        BudgetDocument saved;
         try {
-            rec = recorder.record(review);
+            saved = review.recordIn(doc, Clock.systemUTC().instant());
         } catch (IllegalArgumentException e) {
-            out.println();
-            out.println("decision refused: " + e.getMessage() + "; " + file + " is unchanged");
-            return 1;
+            // the engine's rules (content reviewed, status, separation of duties, one decision per content): a
+            // user error, exit 2
+            throw new Files.FileProblem(file, "decision refused: " + e.getMessage() + "; the file is unchanged");
         }
-        BudgetDocument saved = recorder.document();
         Path p = Files.path(file);
         DocumentStore.save(saved, p);
         out.println();
-        out.println(rec.decision().verdict().label() + " by " + rec.decision().assessor() + " on "
-                + rec.decision().date() + "; revision " + saved.revision() + " is now " + saved.status().label()
-                + " (content " + rec.hashAlgorithm() + " " + rec.contentHash() + ")");
+        out.println(review.decision().verdict().label() + " by " + review.decision().assessor() + " on "
+                + review.decision().date() + "; revision " + saved.revision() + " is now " + saved.status().label()
+                + " (content " + review.hashAlgorithm() + " " + review.contentHash() + ")");
         out.println("saved " + file + " (previous version kept as " + DocumentStore.backupOf(p).getFileName() + ")"
                 + (doc.migratedFrom() == 1 ? "; the file is now of format version 2" : ""));
         return 0;

@@ -40,7 +40,7 @@ final class ValidateCommand implements Callable<Integer> {
     @Override
     public Integer call() throws Exception {
         PrintStream out = quire.out;
-        Validator v = Validator.standard(Engine.library());
+        Validator v = Validator.standard(quire.engine.library());
         List<CheckOutcome> outcomes;
         if (dir != null) {
             Path folder = Files.path(dir);
@@ -54,7 +54,7 @@ final class ValidateCommand implements Callable<Integer> {
                     : ExamplesCommand.bundled()));
             Path shipped = TemplateLibrary.shippedFolder();
             if (shipped != null) {
-                outcomes.addAll(templates(shipped));
+                outcomes.addAll(templates(shipped, quire.engine.library()));
             }
         }
         return print(outcomes, out);
@@ -64,7 +64,7 @@ final class ValidateCommand implements Callable<Integer> {
      * Every shipped template must evaluate without errors and without warnings (model, unit and result
      * warnings); one outcome per template.
      */
-    static List<CheckOutcome> templates(Path dir) throws IOException {
+    static List<CheckOutcome> templates(Path dir, org.quire.engine.model.FunctionLibrary library) throws IOException {
         List<Path> files;
         try (java.util.stream.Stream<Path> st = java.nio.file.Files.list(dir)) {
             files = st.filter(p -> p.getFileName().toString().endsWith(".json")).sorted()
@@ -76,7 +76,7 @@ final class ValidateCommand implements Callable<Integer> {
             List<String> problems = new java.util.ArrayList<>();
             try {
                 org.quire.engine.budget.Budget b = org.quire.engine.io.BudgetJson.read(f);
-                org.quire.engine.gum.GumResult r = org.quire.engine.gum.GumEvaluator.evaluate(b, Engine.library());
+                org.quire.engine.gum.GumResult r = org.quire.engine.gum.GumEvaluator.evaluate(b, library);
                 problems.addAll(r.warnings());
                 r.outputs().forEach(o -> problems.addAll(o.warnings()));
             } catch (org.quire.engine.io.BudgetFormatException | org.quire.engine.model.ModelException

@@ -17,9 +17,10 @@ public final class LanguageHelp {
 
     /**
      * @param topic one of {@link #TOPICS}
+     * @param engine whose function set the {@code functions} topic lists
      * @return the reference text of the topic, ending with the cautions
      */
-    public static String text(String topic) {
+    public static String text(String topic, Engine engine) {
         String text;
         switch (topic) {
             case "model":
@@ -29,7 +30,7 @@ public final class LanguageHelp {
                 text = LanguageReference.units();
                 break;
             case "functions":
-                text = LanguageReference.functions(Engine.library());
+                text = LanguageReference.functions(engine.library());
                 break;
             default:
                 throw new IllegalArgumentException("topic must be one of " + TOPICS + ", not '" + topic + "'");

@@ -66,12 +66,20 @@ public final class CalibrationSections {
 
     /** @return the section of one fitted calibration line */
     public static ReportSection fit(CalibrationLine line) {
-        LineFit f = line.fit();
-        String xu = line.data().xUnit();
-        String yu = line.data().yUnit();
-        String key = ReportBuilder.fileKey(line.name());
+        return fit(line.name(), line.fit());
+    }
+
+    /**
+     * @param name the data set's name
+     * @param f the fitted line
+     * @return the section of one fitted calibration line
+     */
+    public static ReportSection fit(String name, LineFit f) {
+        String xu = f.data().xUnit();
+        String yu = f.data().yUnit();
+        String key = ReportBuilder.fileKey(name);
         List<Block> blocks = new ArrayList<>();
-        blocks.add(new Paragraph("The data set '" + line.name() + "' (" + f.data().size() + " points) is fitted by the straight "
+        blocks.add(new Paragraph("The data set '" + name + "' (" + f.data().size() + " points) is fitted by the straight "
                 + "line y = a + b (x − x0) with x0 = " + Figures.estimate(f.referenceX()) + (xu.isEmpty() ? "" : " " + xu)
                 + ", by " + f.method().title() + " (" + f.method().abbreviation() + ")"
                 + (f.iterations() > 0 ? ", " + f.iterations() + " iterations" : "") + ". "
@@ -98,7 +106,7 @@ public final class CalibrationSections {
         }
         p.add(List.of(Cell.text("verdict of the chi-squared check"), Cell.text(""),
                 Cell.text(f.consistency().label()), Cell.text("")));
-        Table params = new Table("fit-" + key, "Fitted line of '" + line.name() + "' (ISO/TS 28037:2010; "
+        Table params = new Table("fit-" + key, "Fitted line of '" + name + "' (ISO/TS 28037:2010; "
                 + "JCGM 100:2008 H.3)", List.of(
                 Column.of("Figure", "figure", Align.LEFT, 3f),
                 Column.of("Symbol", "symbol", Align.LEFT, 1.3f),
@@ -135,7 +143,7 @@ public final class CalibrationSections {
                     Cell.number(Figures.compact(z[i], 3), z[i])));
         }
         Table residuals = new Table("residuals-" + key, "Points and residuals r_i = y_i − a − b (x_i − x0) of '"
-                + line.name() + "'", List.of(
+                + name + "'", List.of(
                 Column.of("i", "point", Align.RIGHT, 0.4f),
                 Column.of("x_i" + unitSuffix(xu), "x", Align.RIGHT, 1.2f),
                 Column.of("y_i" + unitSuffix(yu), "y", Align.RIGHT, 1.2f),
@@ -144,14 +152,14 @@ public final class CalibrationSections {
                 Column.of("r_i", "residual", Align.RIGHT, 1.1f),
                 Column.of("standardized r_i", "standardized_residual", Align.RIGHT, 1.2f)), rows);
         boolean log = positive(xs) && max(xs) / min(xs) > 20;
-        Chart plot = new Chart.Plot("Standardized residuals of '" + line.name() + "' against x; the dashed lines mark "
+        Chart plot = new Chart.Plot("Standardized residuals of '" + name + "' against x; the dashed lines mark "
                 + "±2 (common practice: a point beyond them deserves a look)", "x" + unitSuffix(xu)
                 + (log ? ", logarithmic scale" : ""), "standardized residual", log,
                 List.of(new Chart.Series("standardized residual", xs, z, null, Chart.Style.POINTS, Chart.Tone.FIRST)),
                 List.of(0.0, -2.0, 2.0));
         blocks.add(new TableBlock(residuals));
         blocks.add(new ChartBlock(plot));
-        return ReportSection.of("fit-" + key, "Calibration line " + line.name(), blocks);
+        return ReportSection.of("fit-" + key, "Calibration line " + name, blocks);
     }
 
     /**
@@ -191,7 +199,7 @@ public final class CalibrationSections {
                     Cell.number(Figures.sig(p.estimate(), 5), p.estimate()),
                     Cell.number(Figures.sig(p.standardUncertainty(), 4), p.standardUncertainty()),
                     Cell.number(Figures.dof(p.result().dofUsed()), p.result().dofUsed()),
-                    Cell.number(Figures.compact(p.result().coverageFactor(), 3), p.result().coverageFactor()),
+                    Cell.number(Figures.coverageFactor(p.result().coverageFactor()), p.result().coverageFactor()),
                     Cell.number(Figures.sig(p.expandedUncertainty(), 4), p.expandedUncertainty()),
                     Cell.number(!Figures.relativeUncertaintyMeaningful(yu, p.estimate(), p.expandedUncertainty()) ? "–"
                             : Figures.sig(rel[i], 3), rel[i])));

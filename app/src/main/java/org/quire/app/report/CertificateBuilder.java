@@ -5,7 +5,6 @@ import java.time.LocalDate;
 import java.util.ArrayList;
 import java.util.LinkedHashSet;
 import java.util.List;
-import java.util.Locale;
 import java.util.Set;
 import org.quire.app.common.Cautions;
 import org.quire.app.report.ReportModel.Block;
@@ -20,13 +19,13 @@ import org.quire.app.report.Table.Column;
 import org.quire.engine.calibration.AdjustmentResult;
 import org.quire.engine.calibration.CalibrationResult;
 import org.quire.engine.calibration.CertificateDetails;
+import org.quire.engine.calibration.CertificateNumber;
 import org.quire.engine.calibration.ConformityResult;
 import org.quire.engine.calibration.PointConformity;
 import org.quire.engine.calibration.PointResult;
 import org.quire.engine.calibration.SeriesResult;
 import org.quire.engine.document.SeparationOfDuties;
 import org.quire.engine.gum.Figures;
-import org.quire.engine.gum.Rounding;
 import org.quire.engine.reference.ReferenceRegister;
 import org.quire.engine.reference.ReferenceStandard;
 import org.quire.engine.reference.TraceabilityFinding;
@@ -54,8 +53,6 @@ import org.quire.engine.units.Units;
  * <p>Stateless and thread-safe.
  */
 public final class CertificateBuilder {
-    /** Significant digits of U on a certificate (JCGM 100:2008 7.2.6; EA-4/02 M:2022 5.4: at most two). */
-    private static final int DIGITS = 2;
 
     private CertificateBuilder() {
     }
@@ -93,6 +90,9 @@ public final class CertificateBuilder {
         }
         if (issue.role().isEmpty()) {
             refused.add("state the approver's role (for instance technical manager)");
+        }
+        if (!issue.number().isEmpty() && CertificateNumber.problem(issue.number()) != null) {
+            refused.add(CertificateNumber.problem(issue.number()));
         }
         if (d.date() != null && issue.issued().isBefore(d.date())) {
             refused.add("the date of issue " + issue.issued() + " is before the date of calibration " + d.date());
@@ -147,7 +147,7 @@ public final class CertificateBuilder {
         }
         parts.add(new Part("Findings", all.isEmpty()
                 ? List.of(new Paragraph("The evaluation raised no findings."))
-                : List.of(new Notices(all.stream().map(CertificateBuilder::sentence).toList()))));
+                : List.of(Notices.of(all.stream().map(CertificateBuilder::sentence).toList()))));
         parts.add(new Part("Authorisation", List.of(new TableBlock(new Table("authorisation", "Authorisation",
                 List.of(Column.of("", "item", Align.LEFT, 1.5f), Column.of("", "value", Align.LEFT, 4f)),
                 List.of(List.of(Cell.text("authorised by"), Cell.text(issue.approver())),
@@ -158,8 +158,7 @@ public final class CertificateBuilder {
                         + "approval of the issuing laboratory. The results relate only to the item calibrated, "
                         + "at the conditions stated."))));
         String hash = CanonicalSha256.sha256(Certificate.canonicalText(facts, parts).getBytes(StandardCharsets.UTF_8));
-        String number = issue.number().isEmpty()
-                ? "TVC-" + d.date().toString().replace("-", "") + "-" + hash.substring(0, 8).toUpperCase(Locale.ROOT)
+        String number = issue.number().isEmpty() ? CertificateNumber.derive(d.laboratory().name(), d.date(), hash)
                 : issue.number();
         return new Certificate(number, d.laboratory(), facts, parts, Cautions.TEXT, hash);
     }
@@ -174,15 +173,12 @@ public final class CertificateBuilder {
         return String.join(", ", out);
     }
 
-    private static String rounded(double value, double expanded) {
-        return minus(Rounding.estimate(value, expanded, DIGITS).toPlainString());
-    }
-
-    private static String minus(String s) {
-        return s.startsWith("-") ? "−" + s.substring(1) : s;
-    }
-
-    private static Part results(CalibrationResult r, String flowUnit) {
+    /**
+     * @return the results part: at each point the reference and indicated flow, the error and the reported U as
+     *     found and as left, each U with its own k, and the coverage probability; the calibration report shows the
+     *     same part, so that every figure of the certificate can be found there
+     */
+    static Part results(CalibrationResult r, String flowUnit) {
         SeriesResult found = r.asFound();
         SeriesResult left = r.asLeft();
         List<List<Cell>> rows = new ArrayList<>();
@@ -192,33 +188,38 @@ public final class CertificateBuilder {
             double uF = f.reportedExpandedUncertainty();
             double uL = l.reportedExpandedUncertainty();
             double indicated = f.flow() * (1 + f.error() / 100);
-            double p = f.result() != null ? f.result().coverageProbability() : Double.NaN;
+            double p = l.result() != null ? l.result().coverageProbability()
+                    : f.result() != null ? f.result().coverageProbability() : Double.NaN;
             rows.add(List.of(Cell.text(f.label()),
                     Cell.number(Figures.compact(f.flow(), 5), f.flow()),
                     Cell.number(Figures.compact(indicated, 5), indicated),
-                    Cell.number(rounded(f.error(), uF), f.error()),
-                    Cell.number(Rounding.uncertainty(uF, DIGITS).toPlainString() + (f.raisedToCmc() ? " *" : ""), uF),
-                    Cell.number(rounded(l.error(), uL), l.error()),
-                    Cell.number(Rounding.uncertainty(uL, DIGITS).toPlainString() + (l.raisedToCmc() ? " *" : ""), uL),
-                    Cell.number(Figures.sig(l.coverageFactor(), 3), l.coverageFactor()),
+                    Cell.number(Figures.statedValue(f.error(), uF), f.error()),
+                    Cell.number(Figures.stated(uF) + (f.raisedToCmc() ? " *" : ""), uF),
+                    Cell.number(Figures.coverageFactor(f.coverageFactor()), f.coverageFactor()),
+                    Cell.number(Figures.statedValue(l.error(), uL), l.error()),
+                    Cell.number(Figures.stated(uL) + (l.raisedToCmc() ? " *" : ""), uL),
+                    Cell.number(Figures.coverageFactor(l.coverageFactor()), l.coverageFactor()),
                     Cell.number(Double.isNaN(p) ? "–" : Figures.probability(p), 100 * p)));
         }
         List<Block> blocks = new ArrayList<>();
-        blocks.add(new Paragraph("Errors of indication E = 100 (q_ind − q_ref) / q_ref in % of the reading, as found "
-                + "before any adjustment and as left " + (left == null ? "(no adjustment was made, so as found)"
+        blocks.add(new Paragraph(Typesetter.words("Errors of indication ", "E = 100 (q_{ind} − q_{ref}) / q_{ref}",
+                " in % of the reading, as found before any adjustment and as left "
+                + (left == null ? "(no adjustment was made, so as found)"
                 : left.phase() == SeriesResult.Phase.AS_LEFT_PREDICTED
                         ? "(predicted from the as-found runs and the new calibration constant)"
                         : "(measured after the adjustment)")
-                + ". Each U is the expanded uncertainty of that point with its own coverage factor k."));
+                + ". Each ", "U", " is the expanded uncertainty of that point with its own coverage factor ", "k",
+                " beside it.")));
         blocks.add(new TableBlock(new Table("certificate-results", "Results at each flow point", List.of(
-                Column.of("Point", "point", Align.LEFT, 0.8f),
-                Column.of("q_ref (" + flowUnit + ")", "reference_flow", Align.RIGHT, 1.1f),
-                Column.of("q_ind (" + flowUnit + ")", "indicated_flow", Align.RIGHT, 1.1f),
+                Column.of("Point", "point", Align.LEFT, 0.7f),
+                Column.of("q_ref (" + flowUnit + ")", "reference_flow", Align.RIGHT, 1.05f),
+                Column.of("q_ind (" + flowUnit + ")", "indicated_flow", Align.RIGHT, 1.05f),
                 Column.of("E as found (%)", "error_as_found_percent", Align.RIGHT, 1f),
                 Column.of("U as found (%)", "u_as_found_percent", Align.RIGHT, 1f),
+                Column.of("k as found", "coverage_factor_as_found", Align.RIGHT, 0.7f),
                 Column.of("E as left (%)", "error_as_left_percent", Align.RIGHT, 1f),
                 Column.of("U as left (%)", "u_as_left_percent", Align.RIGHT, 1f),
-                Column.of("k", "coverage_factor", Align.RIGHT, 0.6f),
+                Column.of("k as left", "coverage_factor_as_left", Align.RIGHT, 0.7f),
                 Column.of("p (%)", "coverage_probability_percent", Align.RIGHT, 0.7f)), rows)));
         boolean cmc = found.points().stream().anyMatch(PointResult::raisedToCmc)
                 || (left != null && left.points().stream().anyMatch(PointResult::raisedToCmc));
@@ -269,7 +270,8 @@ public final class CertificateBuilder {
                 series, List.of(0.0));
     }
 
-    private static Part conformity(CalibrationResult r, String flowUnit) {
+    /** @return the statement of conformity at each point with the rule, or null without a specification */
+    static Part conformity(CalibrationResult r, String flowUnit) {
         ConformityResult left = r.asReturned().conformity();
         if (left == null) {
             return null;
@@ -317,7 +319,8 @@ public final class CertificateBuilder {
         return t.endsWith(".") ? t : t + ".";
     }
 
-    private static Part adjustment(AdjustmentResult a) {
+    /** @return the calibration constant before and after the adjustment */
+    static Part adjustment(AdjustmentResult a) {
         String unit = a.constantUnit().isBlank() ? "" : " " + Units.display(a.constantUnit());
         List<List<Cell>> rows = new ArrayList<>();
         rows.add(List.of(Cell.text(a.constantName() + " as found"), Cell.number(Figures.estimate(a.oldConstant())
@@ -338,23 +341,37 @@ public final class CertificateBuilder {
         return new Part("Adjustment", blocks);
     }
 
-    private static Part uncertainty(CalibrationResult r) {
-        Set<String> ks = new LinkedHashSet<>();
+    /** @return the statement of uncertainty of the certificate, naming each point's k */
+    static Part uncertainty(CalibrationResult r) {
+        return uncertainty(r, "on this certificate");
+    }
+
+    /**
+     * @param where where the figures stand, e.g. "on this certificate"
+     * @return the statement of uncertainty, naming each point's k as found and as left
+     */
+    static Part uncertainty(CalibrationResult r, String where) {
         double p = Double.NaN;
-        SeriesResult s = r.asReturned();
-        for (PointResult pt : s.points()) {
-            ks.add(Figures.sig(pt.coverageFactor(), 3));
-        }
         for (PointResult pt : r.asFound().points()) {
             if (pt.result() != null) {
                 p = pt.result().coverageProbability();
             }
         }
+        List<String> lists = new ArrayList<>();
+        Set<String> all = new LinkedHashSet<>();
+        for (SeriesResult s : r.asLeft() == null ? List.of(r.asFound()) : List.of(r.asFound(), r.asLeft())) {
+            List<String> ks = new ArrayList<>();
+            for (PointResult pt : s.points()) {
+                ks.add(Figures.coverageFactor(pt.coverageFactor()));
+            }
+            all.addAll(ks);
+            lists.add((r.asLeft() == null ? "" : s.phase().label() + " ") + String.join(", ", ks));
+        }
         String pText = Double.isNaN(p) ? "about 95 %" : "about " + Figures.probability(p) + " %";
-        String kText = ks.size() == 1 ? "the coverage factor k = " + ks.iterator().next()
-                : "the coverage factor k stated beside it (k = " + String.join(", ", ks) + " at the points)";
+        String kText = all.size() == 1 ? "the coverage factor k = " + all.iterator().next()
+                : "the coverage factor k stated beside it (k = " + String.join("; ", lists) + " at the points)";
         List<Block> blocks = new ArrayList<>();
-        blocks.add(new Paragraph("Each expanded uncertainty U on this certificate is the combined standard uncertainty "
+        blocks.add(new Paragraph("Each expanded uncertainty U " + where + " is the combined standard uncertainty "
                 + "of the result multiplied by " + kText + ". Each point's k follows from its effective degrees of "
                 + "freedom (Welch–Satterthwaite), so that the interval from E − U to E + U is expected to contain the "
                 + "error of the meter with a probability of " + pText + "; for a normal distribution of the result "

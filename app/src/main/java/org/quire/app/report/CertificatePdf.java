@@ -93,6 +93,14 @@ public final class CertificatePdf {
             h.setSpacingBefore(10f);
             h.setSpacingAfter(3f);
             float need = 34f + (p.blocks().isEmpty() ? 0f : Math.min(doc.top() - doc.bottom() - 40f, r.height(p.blocks().get(0), doc)));
+            if (n == c.parts().size()) {
+                // the last part (the authorisation) stays on one page with the cautions, never split from them
+                float all = 34f + 80f;
+                for (Block b : p.blocks()) {
+                    all += r.height(b, doc);
+                }
+                need = Math.max(need, Math.min(doc.top() - doc.bottom() - 40f, all));
+            }
             if (w.getVerticalPosition(true) - doc.bottom() < need) {
                 doc.newPage();
             }

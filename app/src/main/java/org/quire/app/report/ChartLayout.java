@@ -307,16 +307,29 @@ public final class ChartLayout {
             double[] err = se.yError();
             for (int i = 0; i < x.length; i++) {
                 double xv = log ? Math.log10(x[i]) : x[i];
+                double eb = err == null || !Double.isFinite(err[i]) ? 0 : err[i];
+                if (!Double.isFinite(xv) || !Double.isFinite(y[i] - eb) || !Double.isFinite(y[i] + eb)) {
+                    continue; // a value that is not a finite number is not drawn (the tables state it)
+                }
                 xlo = Math.min(xlo, xv);
                 xhi = Math.max(xhi, xv);
-                double eb = err == null ? 0 : err[i];
                 ylo = Math.min(ylo, y[i] - eb);
                 yhi = Math.max(yhi, y[i] + eb);
             }
         }
         for (double r : c.yRules()) {
-            ylo = Math.min(ylo, r);
-            yhi = Math.max(yhi, r);
+            if (Double.isFinite(r)) {
+                ylo = Math.min(ylo, r);
+                yhi = Math.max(yhi, r);
+            }
+        }
+        if (!Double.isFinite(xhi - xlo)) {
+            xlo = 0;
+            xhi = 1;
+        }
+        if (!Double.isFinite(yhi - ylo)) {
+            ylo = 0;
+            yhi = 1;
         }
         if (xhi <= xlo) {
             xlo -= 0.5;
@@ -373,6 +386,9 @@ public final class ChartLayout {
         }
         for (double r : c.yRules()) {
             float y = (float) py.applyAsDouble(r);
+            if (!Float.isFinite(y)) {
+                continue;
+            }
             s.add(new Line(left, y, right, y, AXIS, 0.7f, r != 0));
         }
         s.add(new Line(left, top, left, bottom, AXIS, 0.8f, false));
@@ -385,6 +401,9 @@ public final class ChartLayout {
             double[] err = se.yError();
             if (se.style() != Chart.Style.POINTS) {
                 for (int i = 1; i < x.length; i++) {
+                    if (!drawable(px, py, x[i - 1], y[i - 1]) || !drawable(px, py, x[i], y[i])) {
+                        continue;
+                    }
                     s.add(new Line((float) px.applyAsDouble(x[i - 1]), (float) py.applyAsDouble(y[i - 1]),
                             (float) px.applyAsDouble(x[i]), (float) py.applyAsDouble(y[i]), rgb,
                             se.style() == Chart.Style.DASHED ? 1f : 1.2f, se.style() == Chart.Style.DASHED));
@@ -392,9 +411,13 @@ public final class ChartLayout {
             }
             if (se.style() != Chart.Style.DASHED) {
                 for (int i = 0; i < x.length; i++) {
+                    if (!drawable(px, py, x[i], y[i])) {
+                        continue;
+                    }
                     float cx = (float) px.applyAsDouble(x[i]);
                     float cy = (float) py.applyAsDouble(y[i]);
-                    if (err != null && err[i] > 0) {
+                    if (err != null && err[i] > 0 && drawable(px, py, x[i], y[i] - err[i])
+                            && drawable(px, py, x[i], y[i] + err[i])) {
                         float ya = (float) py.applyAsDouble(y[i] - err[i]);
                         float yb = (float) py.applyAsDouble(y[i] + err[i]);
                         s.add(new Line(cx, ya, cx, yb, rgb, 0.8f, false));
@@ -410,6 +433,13 @@ public final class ChartLayout {
         s.add(new Label((left + right) / 2, bottom + 25f, Typesetter.labelWithUnit(c.xLabel()), FONT + 0.5f, Anchor.MIDDLE, AXIS));
         float end = legend(s, legend, left, right, bottom + 39f);
         return new Layout(WIDTH, end + 7f, s);
+    }
+
+    private static boolean drawable(java.util.function.DoubleUnaryOperator px, java.util.function.DoubleUnaryOperator py,
+            double x, double y) {
+        float a = (float) px.applyAsDouble(x);
+        float b = (float) py.applyAsDouble(y);
+        return Float.isFinite(a) && Float.isFinite(b);
     }
 
     /** @return tick positions covering [lo, hi] with a step of 1, 2 or 5 times a power of ten (Heckbert 1990) */
@@ -443,6 +473,9 @@ public final class ChartLayout {
 
     /** @return a tick value with as many decimals as the step needs */
     static String tick(double v, double[] ticks) {
+        if (!Double.isFinite(v)) {
+            return "";
+        }
         double step = ticks.length > 1 ? ticks[1] - ticks[0] : 1;
         int decimals = Math.max(0, (int) -Math.floor(Math.log10(step) + 1e-9));
         if (decimals > 6 || Math.abs(v) >= 1e6) {

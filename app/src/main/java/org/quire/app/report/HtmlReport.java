@@ -112,15 +112,15 @@ public final class HtmlReport {
             h.append("<p class=\"statement\">").append(math(((Statement) b).text())).append("</p>\n");
         } else if (b instanceof Notices) {
             h.append("<ul class=\"notices\">\n");
-            for (String s : ((Notices) b).items()) {
-                h.append("<li>").append(esc(s)).append("</li>\n");
+            for (MathText s : ((Notices) b).texts()) {
+                h.append("<li>").append(math(s)).append("</li>\n");
             }
             h.append("</ul>\n");
         } else if (b instanceof TableBlock) {
             table(h, ((TableBlock) b).table());
         } else if (b instanceof ChartBlock) {
             Chart c = ((ChartBlock) b).chart();
-            h.append("<figure>\n").append(Svg.render(c)).append("<figcaption>").append(math(Typesetter.prose(c.caption())))
+            h.append("<figure>\n").append(Svg.render(c)).append("<figcaption>").append(math(Typesetter.caption(c.caption())))
                     .append("</figcaption>\n</figure>\n");
         }
     }
@@ -144,7 +144,7 @@ public final class HtmlReport {
     }
 
     /** @return the runs as HTML: italic in {@code <i>}, shifted runs in {@code <sub>} and {@code <sup>} */
-    static String math(MathText m) {
+    public static String math(MathText m) {
         StringBuilder s = new StringBuilder();
         for (MathText.Run r : m.runs()) {
             String t = esc(r.text());

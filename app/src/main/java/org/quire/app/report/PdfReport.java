@@ -220,8 +220,10 @@ public final class PdfReport {
             t.setKeepTogether(true);
             doc.add(t);
         } else if (b instanceof Notices) {
-            for (String s : ((Notices) b).items()) {
-                Paragraph p = new Paragraph("• " + s, new Font(regular, BODY - 0.5f, Font.NORMAL, WARN));
+            for (MathText s : ((Notices) b).texts()) {
+                Paragraph p = new Paragraph();
+                p.add(math(MathText.concat(MathText.upright("• "), s), BODY - 0.5f, WARN));
+                p.setLeading((BODY - 0.5f) * 1.35f);
                 p.setIndentationLeft(10f);
                 p.setFirstLineIndent(-8f);
                 p.setSpacingAfter(2f);
@@ -407,7 +409,7 @@ public final class PdfReport {
         }
         img.setSpacingBefore(4f);
         doc.add(img);
-        Paragraph cap = new Paragraph(math(Typesetter.prose(chart.caption()), TABLE, MUTED));
+        Paragraph cap = new Paragraph(math(Typesetter.caption(chart.caption()), TABLE, MUTED));
         cap.setSpacingAfter(8f);
         doc.add(cap);
     }

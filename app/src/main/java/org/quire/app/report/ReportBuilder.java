@@ -4,7 +4,6 @@ import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.List;
 import org.quire.app.common.Cautions;
-import org.quire.app.common.Engine;
 import org.quire.app.report.ReportModel.Block;
 import org.quire.app.report.ReportModel.ChartBlock;
 import org.quire.app.report.ReportModel.Equations;
@@ -31,6 +30,7 @@ import org.quire.engine.io.EngineVersion;
 import org.quire.engine.montecarlo.CoverageInterval;
 import org.quire.engine.montecarlo.GumComparison;
 import org.quire.engine.montecarlo.MonteCarloOutcome;
+import org.quire.engine.montecarlo.Phrase;
 import org.quire.engine.model.CompiledModel;
 import org.quire.engine.model.Formula;
 import org.quire.engine.units.Units;
@@ -58,7 +58,7 @@ public final class ReportBuilder {
         GumResult gum = in.gum();
         List<Part> parts = new ArrayList<>();
         parts.add(purpose(b));
-        parts.add(model(b));
+        parts.add(model(b, in.library()));
         parts.add(inputs(b));
         if (!b.correlations().isEmpty()) {
             parts.add(correlations(b));
@@ -88,12 +88,13 @@ public final class ReportBuilder {
             blocks.add(new Paragraph("The budget gives no notes on its purpose."));
         } else {
             for (String p : b.notes().split("\\n\\s*\\n")) {
-                blocks.add(new Paragraph(p.strip()));
+                blocks.add(new Paragraph(Typesetter.caption(p.strip())));
             }
         }
         List<List<Cell>> rows = new ArrayList<>();
         for (OutputQuantity o : b.outputs()) {
-            rows.add(List.of(Cell.math(Typesetter.name(o.name())), Cell.text(o.description()), Cell.unit(o.unit())));
+            rows.add(List.of(Cell.math(Typesetter.name(o.name())), Cell.math(Typesetter.caption(o.description())),
+                    Cell.unit(o.unit())));
         }
         blocks.add(new TableBlock(new Table("measurands", "Measurands", List.of(
                 Column.of("Quantity", "quantity", Align.LEFT, 1f),
@@ -102,11 +103,11 @@ public final class ReportBuilder {
         return new Part("Purpose and notes", blocks);
     }
 
-    private static Part model(Budget b) {
+    static Part model(Budget b, org.quire.engine.model.FunctionLibrary library) {
         List<MathText> lines = new ArrayList<>();
         List<Block> blocks = new ArrayList<>();
         try {
-            CompiledModel m = b.compile(Engine.library());
+            CompiledModel m = b.compile(library);
             for (Formula.Line l : m.lines()) {
                 lines.add(Typesetter.equation(l));
             }
@@ -127,13 +128,14 @@ public final class ReportBuilder {
         List<List<Cell>> sources = new ArrayList<>();
         for (InputQuantity q : b.inputs()) {
             var e = q.evaluation();
-            rows.add(List.of(Cell.math(Typesetter.name(q.name())), Cell.text(q.description()),
+            rows.add(List.of(Cell.math(Typesetter.name(q.name())), Cell.math(Typesetter.caption(q.description())),
                     Cell.number(Figures.estimate(e.estimate()), e.estimate()), Cell.unit(q.unit()),
                     Cell.text(e.type()), Cell.text(e.distribution().shape()),
                     Cell.number(Figures.sig(e.standardUncertainty(), 3), e.standardUncertainty()),
                     Cell.number(Figures.dof(e.dof()), e.dof())));
             sources.add(List.of(Cell.math(Typesetter.name(q.name())),
-                    Cell.text(q.source().isBlank() ? "not stated" : q.source()), Cell.text(e.basis())));
+                    Cell.math(Typesetter.caption(q.source().isBlank() ? "not stated" : q.source())),
+                    Cell.math(Typesetter.caption(e.basis()))));
         }
         List<Block> blocks = new ArrayList<>();
         blocks.add(new TableBlock(new Table("inputs", "Input quantities", List.of(
@@ -158,7 +160,7 @@ public final class ReportBuilder {
      * The inputs' notes, which hold the author's guidance (a template's instructions for filling in each input):
      * for the author, so only in an appendix on request.
      */
-    private static Part authorNotes(Budget b) {
+    static Part authorNotes(Budget b) {
         List<List<Cell>> rows = new ArrayList<>();
         for (InputQuantity q : b.inputs()) {
             if (!q.notes().isBlank()) {
@@ -243,7 +245,9 @@ public final class ReportBuilder {
         String ru = Rounding.uncertainty(o.standardUncertainty(), digits).toPlainString();
         String rU = Rounding.uncertainty(big, digits).toPlainString();
         String ry = Rounding.estimate(o.estimate(), big, digits).toPlainString();
-        String used = Double.isInfinite(o.effectiveDof()) ? "" : o.dofUsed() == o.effectiveDof() ? ""
+        // the whole number used for k (JCGM 100:2008 G.4.1 note 1), shown where it differs from ν_eff as printed
+        String used = Double.isInfinite(o.effectiveDof()) || o.dofUsed() == o.effectiveDof()
+                || Figures.sig(o.dofUsed(), 3).equals(Figures.sig(o.effectiveDof(), 3)) ? ""
                 : " (" + Figures.dof(o.dofUsed()) + " used)";
         List<List<Cell>> res = new ArrayList<>();
         res.add(List.of(Cell.text("estimate"), Cell.math(y), Cell.number(ry, o.estimate()), Cell.unit(unit)));
@@ -254,7 +258,7 @@ public final class ReportBuilder {
                 Cell.number(Double.isInfinite(o.effectiveDof()) ? "∞" : Figures.sig(o.effectiveDof(), 3) + used,
                         o.effectiveDof()), Cell.text("")));
         res.add(List.of(Cell.text("coverage factor"), Cell.math(Typesetter.label("k")),
-                Cell.number(Figures.compact(o.coverageFactor(), 3), o.coverageFactor()), Cell.text("")));
+                Cell.number(Figures.coverageFactor(o.coverageFactor()), o.coverageFactor()), Cell.text("")));
         res.add(List.of(Cell.text("coverage probability"), Cell.math(Typesetter.label("p")),
                 Cell.number(Figures.probability(o.coverageProbability()), 100 * o.coverageProbability()),
                 Cell.text("%")));
@@ -274,7 +278,7 @@ public final class ReportBuilder {
                 Column.of("Unit", "unit", Align.LEFT, 0.8f)), res)));
         blocks.add(new Statement(statement(o, digits)));
         if (!o.warnings().isEmpty()) {
-            blocks.add(new Notices(o.warnings()));
+            blocks.add(new Notices(o.warnings().stream().map(Typesetter::caption).toList()));
         }
         return new Part(MathText.concat(MathText.upright("Uncertainty budget of "), y), blocks);
     }
@@ -315,7 +319,7 @@ public final class ReportBuilder {
         runs.add(new MathText.Run(text.replace("(-", "(−"), false, MathText.Shift.BASE));
         runs.add(new MathText.Run(", ", false, MathText.Shift.BASE));
         runs.add(new MathText.Run("k", true, MathText.Shift.BASE));
-        runs.add(new MathText.Run(" = " + Figures.compact(o.coverageFactor(), 3) + ", ", false, MathText.Shift.BASE));
+        runs.add(new MathText.Run(" = " + Figures.coverageFactor(o.coverageFactor()) + ", ", false, MathText.Shift.BASE));
         runs.add(new MathText.Run("p", true, MathText.Shift.BASE));
         runs.add(new MathText.Run(" = " + Figures.probability(o.coverageProbability()) + " %", false, MathText.Shift.BASE));
         return MathText.of(runs);
@@ -341,7 +345,7 @@ public final class ReportBuilder {
                 "Correlation coefficients of the outputs (JCGM 102:2011 6.2.1.3)", cols, rows))));
     }
 
-    private static Part monteCarlo(MonteCarloOutcome mc) {
+    static Part monteCarlo(MonteCarloOutcome mc) {
         List<Block> blocks = new ArrayList<>();
         if (mc == null) {
             blocks.add(new Paragraph("The Monte Carlo method (JCGM 101:2008) was not run for this report, so the GUM "
@@ -399,9 +403,10 @@ public final class ReportBuilder {
                 Column.of("d_{high}", "d_high", Align.RIGHT, 0.9f),
                 Column.of("GUM result", "verdict", Align.LEFT, 1.3f)), cmp)));
         for (MonteCarloOutcome.Output o : mc.outputs()) {
-            String y = Typesetter.name(o.name()).plain();
-            String reason = o.comparison().reason();
-            blocks.add(new Paragraph("For " + y + ": " + reason + "."));
+            String why = o.comparison().explanation();
+            blocks.add(new Paragraph(MathText.concat(MathText.upright("For "), Typesetter.name(o.name()),
+                    MathText.upright(": "), sentence(o.comparison().reasonPhrases()),
+                    MathText.upright("." + (why.isEmpty() ? "" : " " + why)))));
         }
         for (String n : mc.notes()) {
             blocks.add(new Paragraph("Note: " + n + "."));
@@ -413,6 +418,22 @@ public final class ReportBuilder {
             }
         }
         return new Part("Monte Carlo method", blocks);
+    }
+
+    /**
+     * @return an engine's sentence set for reading: its symbols typeset as names ({@code d_low} as d with subscript
+     *     low, {@code delta} as δ), its numbers by the figures rule
+     */
+    public static MathText sentence(List<Phrase> phrases) {
+        List<MathText> out = new ArrayList<>();
+        for (Phrase p : phrases) {
+            out.add(switch (p.kind()) {
+                case WORDS -> Typesetter.prose(p.text());
+                case SYMBOL -> Typesetter.name(p.text());
+                case NUMBER -> MathText.upright(Figures.working(p.value()));
+            });
+        }
+        return MathText.concat(out.toArray(new MathText[0]));
     }
 
     /** @return the decimals that show two digits beyond the first significant digit of {@code u} */
@@ -449,10 +470,13 @@ public final class ReportBuilder {
     }
 
     private static Part warnings(GumResult gum) {
-        List<String> all = new ArrayList<>(gum.warnings());
+        List<MathText> all = new ArrayList<>();
+        for (String w : gum.warnings()) {
+            all.add(Typesetter.caption(w));
+        }
         for (OutputResult o : gum.outputs()) {
             for (String w : o.warnings()) {
-                all.add(o.name() + ": " + w);
+                all.add(MathText.concat(Typesetter.name(o.name()), MathText.upright(": "), Typesetter.caption(w)));
             }
         }
         if (all.isEmpty()) {

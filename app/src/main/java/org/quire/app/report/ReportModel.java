@@ -73,9 +73,19 @@ public record ReportModel(DocumentInfo document, String engineVersion, List<Part
         public Statement { Objects.requireNonNull(text, "text"); }
     }
 
-    /** @param items warnings or findings, one sentence each (set as {@link Typesetter#prose(String)}) */
-    public record Notices(List<String> items) implements Block {
-        public Notices { items = items.stream().map(i -> Typesetter.prose(i).plain()).toList(); }
+    /** @param texts warnings or findings, one sentence each, with names typeset where they name quantities */
+    public record Notices(List<MathText> texts) implements Block {
+        public Notices { texts = List.copyOf(texts); }
+
+        /** @return sentences of words, each set as {@link Typesetter#prose(String)} sets it */
+        public static Notices of(List<String> items) {
+            return new Notices(items.stream().map(Typesetter::prose).toList());
+        }
+
+        /** @return the sentences as plain text */
+        public List<String> items() {
+            return texts.stream().map(MathText::plain).toList();
+        }
     }
 
     /** @return every table of the report, in order */

@@ -102,6 +102,47 @@ public final class Typesetter {
         return MathText.upright(out.toString());
     }
 
+    /**
+     * Sets a sentence of the program's own that holds formulas: the parts alternate between words (set as {@link
+     * #prose(String)}) and formulas (set as {@link #label(String)}), starting with words, e.g. {@code words("Errors
+     * ", "E = 100 (q_ind − q_ref) / q_ref", " in %")}.
+     *
+     * @return the sentence, its formulas typeset
+     */
+    public static MathText words(String... parts) {
+        List<MathText> out = new ArrayList<>();
+        for (int i = 0; i < parts.length; i++) {
+            out.add(i % 2 == 0 ? prose(parts[i]) : label(parts[i]));
+        }
+        return MathText.concat(out.toArray(new MathText[0]));
+    }
+
+    /**
+     * Sets words about a budget (a chart's caption, the budget's notes, descriptions, sources, warnings), where every
+     * word with an underscore is a symbol written as the model language writes names: {@code u_i(y)} as u with
+     * subscript i, {@code E_lo} as E with subscript lo, {@code rho_w} as ρ with subscript w; the rest as {@link
+     * #prose(String)} sets it ("±", m³).
+     *
+     * @return the words with their symbols typeset
+     */
+    public static MathText caption(String words) {
+        java.util.regex.Matcher m = SYMBOL_WORD.matcher(words);
+        List<MathText> out = new ArrayList<>();
+        int at = 0;
+        while (m.find()) {
+            out.add(prose(words.substring(at, m.start())));
+            out.add(name(m.group()));
+            at = m.end();
+        }
+        out.add(prose(words.substring(at)));
+        return MathText.concat(out.toArray(new MathText[0]));
+    }
+
+    /** A word with an underscore in the program's own text. */
+    private static final java.util.regex.Pattern SYMBOL_WORD = java.util.regex.Pattern.compile(
+            "(?<![\\p{L}\\p{N}_'])\\p{L}[\\p{L}\\p{N}]*(?:_[\\p{L}\\p{N}]+)+(?![\\p{L}\\p{N}_])");
+
+
     /** A power after a letter: m^3, s^-1, m^(-3). */
     private static final java.util.regex.Pattern POWER = java.util.regex.Pattern.compile(
             "(\\p{L})\\^\\(?(-?\\d+)\\)?");
@@ -241,8 +282,15 @@ public final class Typesetter {
         }
     }
 
+    /**
+     * @return the symbol of a name's first part: a spelled-out Greek letter as the letter, and a small change
+     *     written {@code d} before one ({@code drho} as dρ, like {@code dm} or {@code dI}) with the letter too
+     */
     private static String symbol(String segment) {
         String g = GREEK.get(segment);
+        if (g == null && segment.length() > 2 && segment.charAt(0) == 'd' && GREEK.containsKey(segment.substring(1))) {
+            return "d" + GREEK.get(segment.substring(1));
+        }
         return g != null ? g : segment;
     }
 
@@ -253,6 +301,11 @@ public final class Typesetter {
     private static int precedence(Formula f) {
         if (f instanceof Formula.Operation o) {
             return o.precedence();
+        }
+        if (f instanceof Formula.Number n && !n.unit().isEmpty()) {
+            // a number with its unit is a product (1000 mg/g): bracketed as the right side of * or / and as the
+            // base of a power, so that dm / (1000 mg/g) does not read as (dm / 1000) mg/g
+            return 2;
         }
         return f instanceof Formula.Negation ? 3 : 5;
     }
@@ -308,6 +361,11 @@ public final class Typesetter {
     }
 
     private static void number(Formula.Number n, List<Run> out, Shift shift, int context) {
+        if (!n.unit().isEmpty()) {
+            number(new Formula.Number(n.value(), n.written()), out, shift, 2);
+            out.add(new Run("\u2009" + n.unit(), false, shift));
+            return;
+        }
         String text = n.written();
         int e = text.toLowerCase(Locale.ROOT).indexOf('e');
         if (e < 0) {

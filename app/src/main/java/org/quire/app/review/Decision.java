@@ -1,5 +1,6 @@
 package org.quire.app.review;
 
+import org.quire.engine.document.Verdict;
 import java.time.LocalDate;
 import java.util.Objects;
 

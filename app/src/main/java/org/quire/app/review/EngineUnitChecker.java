@@ -2,7 +2,6 @@ package org.quire.app.review;
 
 import java.util.ArrayList;
 import java.util.List;
-import org.quire.app.common.Engine;
 import org.quire.engine.budget.Budget;
 import org.quire.engine.model.ModelCompiler;
 import org.quire.engine.model.ModelProblem;
@@ -13,14 +12,20 @@ import org.quire.engine.model.ModelProblem;
  * equation gives another dimension, unreadable units). Stateless and thread-safe.
  */
 public final class EngineUnitChecker implements UnitChecker {
+    private final org.quire.engine.model.FunctionLibrary library;
+
+    /** @param library the function set the budget is evaluated with */
+    public EngineUnitChecker(org.quire.engine.model.FunctionLibrary library) {
+        this.library = java.util.Objects.requireNonNull(library, "library");
+    }
 
     @Override
     public List<String> problems(Budget budget) {
         List<ModelProblem> with = ModelCompiler.check(budget.model(), budget.inputNames(), budget.outputNames(),
-                Engine.library(), budget.units());
+                library, budget.units());
         List<String> without = new ArrayList<>();
         for (ModelProblem p : ModelCompiler.check(budget.model(), budget.inputNames(), budget.outputNames(),
-                Engine.library())) {
+                library)) {
             without.add(p.toString());
         }
         List<String> out = new ArrayList<>();

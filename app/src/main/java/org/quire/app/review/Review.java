@@ -1,5 +1,6 @@
 package org.quire.app.review;
 
+import org.quire.engine.document.Verdict;
 import java.time.LocalDate;
 import java.util.ArrayList;
 import java.util.Collections;
@@ -169,4 +170,59 @@ public final class Review {
     public List<Comment> comments() { return comments; }
     /** @return the decision, or null while the review is open */
     public Decision decision() { return decision; }
+
+    /**
+     * @return the text the document's history keeps beside the structured decision: verdict, assessor, date and
+     *     content hash, the reason, the findings and remarks with their comments, and the comments on inputs
+     * @throws IllegalStateException when the review is not decided
+     */
+    public String historyComment() {
+        if (decision == null) {
+            throw new IllegalStateException("the review of '" + title + "' has no decision yet");
+        }
+        StringBuilder b = new StringBuilder(decision.verdict().label()).append(" by ").append(decision.assessor())
+                .append(" on ").append(decision.date()).append(" (content ").append(hashAlgorithm).append(' ')
+                .append(contentHash).append(')');
+        if (!decision.reason().isEmpty()) {
+            b.append(": ").append(decision.reason());
+        }
+        for (Mark m : new Mark[] {Mark.FINDING, Mark.REMARK}) {
+            List<String> list = new ArrayList<>();
+            for (Map.Entry<String, ItemMark> e : marks.entrySet()) {
+                if (e.getValue().mark() == m) {
+                    list.add(e.getKey() + (e.getValue().comment().isEmpty() ? "" : " (" + e.getValue().comment() + ")"));
+                }
+            }
+            if (!list.isEmpty()) {
+                b.append(". ").append(m == Mark.FINDING ? "Findings: " : "Remarks: ").append(String.join("; ", list));
+            }
+        }
+        List<String> said = new ArrayList<>();
+        for (Comment c : comments) {
+            said.add(c.target().kind().name().toLowerCase(java.util.Locale.ROOT) + " " + c.target().name() + ": "
+                    + c.text());
+        }
+        if (!said.isEmpty()) {
+            b.append(". Comments: ").append(String.join("; ", said));
+        }
+        return b.toString();
+    }
+
+    /**
+     * Records the decision of this review in the document through the engine's one recorder,
+     * {@link org.quire.engine.document.ReviewDecisions#record}, which owns every rule (content reviewed, status,
+     * separation of duties, one decision per content).
+     *
+     * @param doc the document reviewed
+     * @param when when the decision is recorded
+     * @return the document with the decision in its history
+     * @throws IllegalArgumentException with the engine's reason when the decision is refused
+     * @throws IllegalStateException when the review is not decided
+     */
+    public org.quire.engine.document.BudgetDocument recordIn(org.quire.engine.document.BudgetDocument doc,
+            java.time.Instant when) {
+        String text = historyComment();
+        return org.quire.engine.document.ReviewDecisions.record(doc, contentHash, decision.verdict(),
+                decision.assessor(), when, text);
+    }
 }

@@ -19,6 +19,8 @@ final class PaneLayout {
     private int navigatorWidth = 230;
     private int inspectorWidth = 340;
     private int problemsHeight = 130;
+    /** The problems pane shrunk to its title line (nothing to list); its height in pixels then, else 0. */
+    private int collapsedTo;
 
     PaneLayout(JSplitPane main, JSplitPane centre, JSplitPane vertical, WorkbenchPrefs prefs) {
         this.main = main;
@@ -56,7 +58,7 @@ final class PaneLayout {
         if (isShown(Pane.INSPECTOR) && centre.getWidth() > 0) {
             inspectorWidth = centre.getWidth() - centre.getDividerLocation();
         }
-        if (isShown(Pane.PROBLEMS) && vertical.getHeight() > 0) {
+        if (isShown(Pane.PROBLEMS) && collapsedTo == 0 && vertical.getHeight() > 0) {
             problemsHeight = vertical.getHeight() - vertical.getDividerLocation();
         }
     }
@@ -64,8 +66,36 @@ final class PaneLayout {
     private void apply() {
         main.setDividerLocation(navigatorWidth);
         centre.setDividerLocation(Math.max(200, centre.getWidth() - inspectorWidth));
-        vertical.setDividerLocation(Math.max(200, vertical.getHeight() - problemsHeight));
+        int bottom = collapsedTo > 0 ? collapsedTo + vertical.getDividerSize() : problemsHeight;
+        vertical.setDividerLocation(Math.max(200, vertical.getHeight() - bottom));
         main.revalidate();
+    }
+
+    /**
+     * Shrinks the problems pane to its title line when there is nothing to list, and gives it its height again
+     * when there is.
+     *
+     * @param height the title line's height, or 0 to give the pane its height
+     */
+    void collapseProblems(int height) {
+        if ((collapsedTo > 0) == (height > 0)) {
+            return;
+        }
+        if (vertical.getHeight() == 0) {
+            collapsedTo = height; // not laid out yet: restore() applies it
+            return;
+        }
+        if (isShown(Pane.PROBLEMS) && collapsedTo == 0) {
+            problemsHeight = vertical.getHeight() - vertical.getDividerLocation();
+        }
+        collapsedTo = height;
+        int bottom = collapsedTo > 0 ? collapsedTo + vertical.getDividerSize() : problemsHeight;
+        vertical.setDividerLocation(Math.max(200, vertical.getHeight() - bottom));
+    }
+
+    /** @return whether the problems pane is shrunk to its title line */
+    boolean problemsCollapsed() {
+        return collapsedTo > 0;
     }
 
     void restore() {

@@ -20,6 +20,7 @@ final class ProblemsPanel extends JPanel {
     private final DefaultListModel<Problem> model = new DefaultListModel<>();
     private final JList<Problem> list = new JList<>(model);
     private final JLabel title = new JLabel(" Problems");
+    private final JScrollPane scroll = new JScrollPane(list);
 
     ProblemsPanel(Consumer<Problem> reveal) {
         super(new BorderLayout());
@@ -56,16 +57,42 @@ final class ProblemsPanel extends JPanel {
                 }
             }
         });
+        title.setName("problemsTitle");
+        title.setBorder(javax.swing.BorderFactory.createEmptyBorder(2, 4, 2, 4));
         add(title, BorderLayout.NORTH);
-        add(new JScrollPane(list), BorderLayout.CENTER);
+        add(scroll, BorderLayout.CENTER);
+        setMinimumSize(new java.awt.Dimension(0, title.getPreferredSize().height));
     }
 
+    /** Lists the problems; the list is hidden when there are none (the title alone says so). */
     void show(List<Problem> problems) {
         model.clear();
         problems.forEach(model::addElement);
         long errors = problems.stream().filter(p -> p.severity() == Problem.Severity.ERROR).count();
-        title.setText(" Problems: " + (problems.isEmpty() ? "none" : errors + " errors, " + (problems.size() - errors)
-                + " warnings"));
+        title.setText(" Problems: " + summary(errors, problems.size() - errors));
+        scroll.setVisible(!problems.isEmpty());
+        revalidate();
+    }
+
+    /** @return "none", "1 error", "2 errors, 1 warning" ... */
+    static String summary(long errors, long warnings) {
+        if (errors == 0 && warnings == 0) {
+            return "none";
+        }
+        String e = errors + (errors == 1 ? " error" : " errors");
+        String w = warnings + (warnings == 1 ? " warning" : " warnings");
+        return errors == 0 ? w : warnings == 0 ? e : e + ", " + w;
+    }
+
+    /** @return the height the panel needs with its list hidden: the title line */
+    int collapsedHeight() {
+        java.awt.Insets in = getInsets();
+        return title.getPreferredSize().height + in.top + in.bottom;
+    }
+
+    /** @return the title line's text, for tests */
+    String titleText() {
+        return title.getText();
     }
 
     /** @return the problems shown */

@@ -17,11 +17,11 @@ final class ReferenceDialog {
     private ReferenceDialog() {
     }
 
-    static void show(Frame owner) {
+    static void show(Frame owner, org.quire.engine.model.FunctionLibrary library) {
         JDialog d = new JDialog(owner, "Model language reference", false);
         JTabbedPane tabs = new JTabbedPane();
         for (String topic : LanguageHelp.TOPICS) {
-            JTextArea text = new JTextArea(LanguageHelp.text(topic));
+            JTextArea text = new JTextArea(LanguageHelp.text(topic, org.quire.app.common.Engine.of(library)));
             text.setEditable(false);
             text.setFont(new Font(Font.MONOSPACED, Font.PLAIN, text.getFont().getSize()));
             text.setCaretPosition(0);

@@ -30,15 +30,19 @@ public final class Workbench {
         installLookAndFeel(prefs.theme());
         Thread.setDefaultUncaughtExceptionHandler(Workbench::uncaught);
         EventQueue.invokeLater(() -> {
-            WorkbenchFrame frame = new WorkbenchFrame(prefs, Engine.library(), MonteCarloRunner.engine(Engine.library()));
+            Engine engine = Engine.standard();
+            WorkbenchFrame frame = new WorkbenchFrame(prefs, engine.library(),
+                    MonteCarloRunner.engine(engine.library()));
             frame.setIconImages(AppIcon.images());
-            // the budget first, then the window: its first paint shows the content, not an empty grey frame
+            // the demo budget first, then the window: its first paint shows the content, not an empty grey frame;
+            // a file is read off the event thread once the window shows
             if (file == null) {
                 frame.openDemo();
-            } else {
-                frame.open(file).ifPresent(ed -> ed.document().setReadOnly(review));
             }
             frame.showRestored();
+            if (file != null) {
+                frame.open(file, review);
+            }
             if (Boolean.getBoolean(TIMING_PROPERTY)) {
                 EventQueue.invokeLater(() -> reportPainted(frame));
             }

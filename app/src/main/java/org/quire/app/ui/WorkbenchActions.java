@@ -51,12 +51,12 @@ final class WorkbenchActions {
         openReview = action("Open for review (read-only)\u2026", KeyEvent.VK_O, InputEvent.SHIFT_DOWN_MASK, e -> {
             Path p = FileChooser.openTarget(frame, "Open budget for review");
             if (p != null) {
-                frame.open(p).ifPresent(ed -> ed.document().setReadOnly(true));
+                frame.open(p, true);
             }
         });
-        save = action("Save", KeyEvent.VK_S, 0, e -> active().ifPresent(ed -> frame.save(ed, false)));
+        save = action("Save", KeyEvent.VK_S, 0, e -> active().ifPresent(ed -> frame.files().save(ed, false)));
         saveAs = action("Save as\u2026", KeyEvent.VK_S, InputEvent.SHIFT_DOWN_MASK,
-                e -> active().ifPresent(ed -> frame.save(ed, true)));
+                e -> active().ifPresent(ed -> frame.files().save(ed, true)));
         close = action("Close budget", KeyEvent.VK_W, 0, e -> active().ifPresent(frame::close));
         undo = action("Undo", KeyEvent.VK_Z, 0, e -> active().ifPresent(ed -> ed.document().undo()));
         redo = action("Redo", KeyEvent.VK_Y, 0, e -> active().ifPresent(ed -> ed.document().redo()));
@@ -158,7 +158,7 @@ final class WorkbenchActions {
         budget.add(compareWith);
         bar.add(budget);
         JMenu help = menu("Help", KeyEvent.VK_H);
-        help.add(action("Model language reference", 0, 0, e -> ReferenceDialog.show(frame)));
+        help.add(action("Model language reference", 0, 0, e -> ReferenceDialog.show(frame, frame.library())));
         help.addSeparator();
         help.add(action("About Quire", 0, 0, e -> AboutDialog.show(frame)));
         bar.add(help);

@@ -1,16 +1,8 @@
 package org.quire.app.ui;
 
-import org.quire.app.ui.common.WorkbenchPrefs;
-import org.quire.app.ui.common.Colors;
-import org.quire.app.ui.common.FileDropHandler;
 import java.awt.BorderLayout;
 import java.awt.CardLayout;
 import java.awt.Dimension;
-import java.awt.EventQueue;
-import java.time.Duration;
-import java.time.Instant;
-import java.time.LocalDate;
-import java.util.concurrent.ExecutionException;
 import java.awt.event.WindowAdapter;
 import java.awt.event.WindowEvent;
 import java.io.IOException;
@@ -18,13 +10,16 @@ import java.io.InputStream;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.time.Instant;
+import java.time.LocalDate;
 import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
+import java.util.concurrent.CompletableFuture;
+import java.util.concurrent.ExecutionException;
 import java.util.function.BiConsumer;
-import javax.swing.BorderFactory;
 import javax.swing.JFrame;
 import javax.swing.JLabel;
 import javax.swing.JOptionPane;
@@ -34,26 +29,22 @@ import javax.swing.JTabbedPane;
 import javax.swing.SwingWorker;
 import org.quire.app.compare.BudgetComparison;
 import org.quire.app.compare.Comparison;
+import org.quire.app.ui.common.FileDropHandler;
+import org.quire.app.ui.common.WorkbenchPrefs;
 import org.quire.app.ui.compare.CompareWindow;
 import org.quire.app.ui.document.BudgetDocument;
 import org.quire.app.ui.document.RecoveryKeeper;
 import org.quire.app.ui.export.ReportExport;
-import org.quire.app.ui.templates.NewFromTemplateDialog;
-import org.quire.app.ui.templates.TemplateCatalog;
-import org.quire.app.ui.templates.TemplateUpdateDialog;
-import org.quire.engine.document.DocumentStore;
-import org.quire.engine.document.RecoveryStore;
-import org.quire.engine.document.Template;
-import org.quire.engine.document.TemplateChange;
-import org.quire.engine.document.TemplateLibrary;
-import org.quire.engine.gum.GumResult;
 import org.quire.app.ui.inspector.InspectorPanel;
 import org.quire.app.ui.montecarlo.MonteCarloRunner;
 import org.quire.app.ui.notebook.BudgetEditor;
+import org.quire.app.ui.templates.TemplateCatalog;
 import org.quire.app.ui.workspace.WorkspaceNavigator;
 import org.quire.engine.budget.Budget;
+import org.quire.engine.document.DocumentStore;
+import org.quire.engine.document.Template;
+import org.quire.engine.gum.GumResult;
 import org.quire.engine.io.BudgetFormatException;
-import org.quire.engine.io.BudgetJson;
 import org.quire.engine.model.FunctionLibrary;
 
 /**
@@ -72,11 +63,13 @@ public final class WorkbenchFrame extends JFrame {
     private final JPanel inspectors = new JPanel(inspectorCards);
     private final ProblemsPanel problems;
     private final WorkspaceNavigator navigator;
-    private final JLabel status = new JLabel(" ");
+    private final StatusBar status = new StatusBar();
     private final PaneLayout panes;
     private final Map<BudgetEditor, InspectorPanel> editors = new LinkedHashMap<>();
     private final WorkbenchActions actions;
-    private final RecoveryKeeper recovery;
+    private final WorkbenchRecovery recovery;
+    private final WorkbenchFiles files;
+    private final WorkbenchTemplates templates;
     private BiConsumer<String, Boolean> statusHook = (m, e) -> { };
 
     public WorkbenchFrame(WorkbenchPrefs prefs, FunctionLibrary library, MonteCarloRunner runner) {
@@ -101,28 +94,30 @@ public final class WorkbenchFrame extends JFrame {
         JSplitPane vertical = new JSplitPane(JSplitPane.VERTICAL_SPLIT, main, problems);
         vertical.setResizeWeight(1);
         panes = new PaneLayout(main, centre, vertical, prefs);
-        status.setBorder(BorderFactory.createEmptyBorder(2, 8, 2, 8));
-        status.setName("status");
         getContentPane().add(vertical, BorderLayout.CENTER);
         getContentPane().add(status, BorderLayout.SOUTH);
+        files = new WorkbenchFiles(this, prefs, status);
+        templates = new WorkbenchTemplates(this, prefs);
         actions = new WorkbenchActions(this);
         setJMenuBar(actions.menuBar());
         KeyBindings.yieldToMenu(getJMenuBar());
-        setTransferHandler(new FileDropHandler(this::dropped));
+        setTransferHandler(new FileDropHandler(files::dropped));
         addWindowListener(new WindowAdapter() {
             @Override
             public void windowClosing(WindowEvent e) {
                 quit();
             }
         });
-        recovery = new RecoveryKeeper(RecoveryStore.of(prefs.recoveryFolder()), autosavePeriod(),
-                (id, e) -> EventQueue.invokeLater(() -> status("Recovery copy not written: " + e.getMessage(), true)));
+        recovery = new WorkbenchRecovery(this, prefs);
         refreshNavigator();
         setMinimumSize(new Dimension(760, 500));
     }
 
     WorkbenchPrefs prefs() { return prefs; }
     PaneLayout panes() { return panes; }
+    WorkbenchActions actions() { return actions; }
+    WorkbenchFiles files() { return files; }
+    WorkbenchTemplates templateUse() { return templates; }
 
     /** Restores the window bounds (clamped to the screens) and the pane layout, then shows the window. */
     public void showRestored() {
@@ -181,10 +176,18 @@ public final class WorkbenchFrame extends JFrame {
         tabs.addTab(doc.name(), ed);
         ed.addRecalculationListener(r -> {
             if (activeEditor().orElse(null) == ed) {
-                problems.show(r.problems());
+                showProblems(ed);
             }
         });
         ed.addStatusListener(this::status);
+        ed.addEntryProblemListener(cleared -> {
+            if (cleared != null) {
+                status.clearError(cleared);
+            }
+            if (activeEditor().orElse(null) == ed) {
+                showProblems(ed);
+            }
+        });
         doc.addListener(new BudgetDocument.Listener() {
             @Override
             public void budgetChanged(BudgetDocument d, Budget before, Budget after, String cause) {
@@ -197,71 +200,108 @@ public final class WorkbenchFrame extends JFrame {
                 actions.update();
             }
         });
-        recovery.track(doc);
+        recovery.keeper().track(doc);
         tabs.setSelectedComponent(ed);
         updateTitle(ed);
         refreshNavigator();
-        checkTemplate(ed);
+        templates.checkTemplate(ed);
         return ed;
     }
 
-    /** Opens a budget file; reports an unreadable file in a message that says where and why. */
-    /** A file dropped on the window: a CSV file gives readings to the selected Type A input, others open. */
-    void dropped(Path file) {
-        if (file.getFileName().toString().toLowerCase(java.util.Locale.ROOT).endsWith(".csv")) {
-            importReadings(file);
-        } else {
-            open(file);
-        }
+    /** Makes {@code ed} the selected tab. */
+    void select(BudgetEditor ed) {
+        tabs.setSelectedComponent(ed);
     }
+
+    /** After a save: the tab's title, the navigator. */
+    void documentSaved(BudgetEditor ed) {
+        updateTitle(ed);
+        refreshNavigator();
+    }
+
+    // ----- files (WorkbenchFiles does the work off the event thread) -------------------------------------------
 
     /**
-     * Takes the readings in a CSV file as the Type A evaluation of the input selected in the active budget
-     * (an undoable edit).
+     * Opens a budget file off the event thread; an unreadable file is reported in a message that says where and
+     * why.
      *
-     * @return whether the readings were taken
+     * @return completed on the event thread with the editor, or empty when the file was not opened
      */
-    public boolean importReadings(Path file) {
-        Optional<BudgetEditor> ed = activeEditor();
-        String name = ed.map(BudgetEditor::selectedInput).orElse(null);
-        if (ed.isEmpty() || name == null) {
-            showError("Cannot import readings", "Select the input the readings in " + file.getFileName()
-                    + " belong to, then drop the file again.");
-            return false;
-        }
-        try {
-            double[] r = org.quire.engine.csv.CsvReadings.read(file, org.quire.engine.csv.CsvOptions.defaults());
-            org.quire.engine.budget.TypeA a = org.quire.engine.budget.TypeA.ofReadings(r);
-            ed.get().edit("Import readings into " + name, "", b -> b.withInput(name,
-                    b.input(name).withEvaluation(a)));
-            return true;
-        } catch (IOException | BudgetFormatException | IllegalArgumentException e) {
-            showError("Cannot import readings", e instanceof org.quire.engine.csv.CsvException ? e.getMessage()
-                    : file + ":\n" + e.getMessage());
-            return false;
-        }
+    public CompletableFuture<Optional<BudgetEditor>> open(Path file) {
+        return files.open(file, false);
     }
 
-    public Optional<BudgetEditor> open(Path file) {
-        for (BudgetEditor e : editors.keySet()) {
-            if (file.toAbsolutePath().equals(e.document().file())) {
-                tabs.setSelectedComponent(e);
-                return Optional.of(e);
-            }
+    /** As {@link #open(Path)}, as a review copy when {@code readOnly}. */
+    public CompletableFuture<Optional<BudgetEditor>> open(Path file, boolean readOnly) {
+        return files.open(file, readOnly);
+    }
+
+    /** Takes the readings of a CSV file as the Type A evaluation of the selected input; @return whether taken */
+    public CompletableFuture<Boolean> importReadings(Path file) {
+        return files.importReadings(file);
+    }
+
+    /** Saves a budget to {@code target} off the event thread; @return completed with whether it was saved */
+    public CompletableFuture<Boolean> saveTo(BudgetEditor ed, Path target) {
+        return files.saveTo(ed, target);
+    }
+
+    /** Closes an editor, offering to save changes first; @return completed with whether it closed */
+    public CompletableFuture<Boolean> close(BudgetEditor ed) {
+        return files.close(ed);
+    }
+
+    /** Quits: asks about every changed budget first and closes none when the engineer cancels or a save fails. */
+    void quit() {
+        files.quit();
+    }
+
+    /** Closes every editor (their changes were dealt with), remembers the layout and closes the window. */
+    void closeAllAndDispose() {
+        for (BudgetEditor e : editors()) {
+            forceClose(e);
         }
-        try {
-            BudgetDocument doc = BudgetDocument.open(file, prefs.userName());
-            prefs.addRecent(file.toAbsolutePath());
-            actions.updateRecent();
-            BudgetEditor ed = open(doc);
-            if (doc.content().migratedFrom() == 1) {
-                status(file.getFileName() + " is a format version 1 file; it will be saved as version 2", false);
-            }
-            return Optional.of(ed);
-        } catch (IOException | BudgetFormatException e) {
-            showError("Cannot open the budget", file + ":\n" + e.getMessage());
-            return Optional.empty();
-        }
+        prefs.setWindowBounds(getBounds(), getExtendedState() == MAXIMIZED_BOTH);
+        panes.save();
+        dispose();
+    }
+
+    /** @return whether a file is being read or written in the background */
+    public boolean fileTaskRunning() {
+        return files.busy();
+    }
+
+    // ----- templates ------------------------------------------------------------------------------------------
+
+    /** @return the templates of the shipped folder and the personal and team folders of the preferences */
+    public TemplateCatalog templates() {
+        return templates.templates();
+    }
+
+    /** File &gt; New from template; @param preselect the file to select in the list, or null */
+    public Optional<BudgetEditor> newFromTemplate(Path preselect) {
+        return templates.newFromTemplate(preselect);
+    }
+
+    /** Shows the changes a newer template brings, field by field, and takes the checked ones over. */
+    void offerTemplateChanges(BudgetEditor ed, Template newer) {
+        templates.offerTemplateChanges(ed, newer);
+    }
+
+    // ----- recovery -------------------------------------------------------------------------------------------
+
+    /** @return the keeper of this workbench's recovery copies, for tests */
+    public RecoveryKeeper recovery() {
+        return recovery.keeper();
+    }
+
+    void applyAutosave() {
+        recovery.applyPeriod();
+    }
+
+    /** Offers the recovery copies left by workbenches that are no longer running. */
+    public void offerRecovery() {
+        recovery.offer();
     }
 
     /** Opens the built-in demo budget of the Tarrow Vale Flow Laboratory. */
@@ -290,89 +330,9 @@ public final class WorkbenchFrame extends JFrame {
         return open(BudgetDocument.ofBudget(b, "new budget", prefs.userName()));
     }
 
-    /** @return the templates of the shipped folder and the personal and team folders of the preferences */
-    public TemplateCatalog templates() {
-        return TemplateCatalog.of(null, prefs.personalTemplates(), prefs.teamTemplates());
-    }
-
-    /**
-     * File &gt; New from template: offers the catalogue, asks for the parameters, opens the new budget.
-     *
-     * @param preselect the file to select in the list, or null
-     */
-    public Optional<BudgetEditor> newFromTemplate(Path preselect) {
-        TemplateCatalog.Listing listing;
-        try {
-            listing = templates().list();
-        } catch (IOException e) {
-            showError("Cannot list the templates", e.getMessage());
-            return Optional.empty();
-        }
-        NewFromTemplateDialog dlg = new NewFromTemplateDialog(this, listing, prefs.userName());
-        if (preselect != null) {
-            dlg.select(preselect);
-        }
-        dlg.setVisible(true);
-        if (dlg.created() == null) {
-            return Optional.empty();
-        }
-        BudgetEditor ed = open(new BudgetDocument(dlg.created(), null, "new from " + shortName(dlg.createdFrom()),
-                prefs.userName()));
-        status("New budget from " + dlg.createdFrom().file().getFileName()
-                + (dlg.createdFrom().isTemplate() ? "" : " (a plain budget: copied, no template origin recorded)"),
-                false);
-        return Optional.of(ed);
-    }
-
-    private static String shortName(TemplateCatalog.Entry e) {
-        String n = String.valueOf(e.file().getFileName());
-        return n.endsWith(".json") ? n.substring(0, n.length() - 5) : n;
-    }
-
-    /** Looks, off the event thread, for a newer version of the template the budget follows, and offers it. */
-    private void checkTemplate(BudgetEditor ed) {
-        org.quire.engine.document.BudgetDocument content = ed.document().content();
-        if (content.templateOrigin() == null) {
-            return;
-        }
-        TemplateCatalog catalog = templates();
-        new SwingWorker<Optional<Template>, Void>() {
-            @Override
-            protected Optional<Template> doInBackground() throws Exception {
-                return catalog.newerTemplate(content);
-            }
-
-            @Override
-            protected void done() {
-                try {
-                    Optional<Template> newer = get();
-                    if (newer.isPresent() && editors.containsKey(ed)) {
-                        Template t = newer.get();
-                        ed.showNotice("This budget follows template " + t.id() + " version "
-                                + content.templateOrigin().version() + "; version " + t.version()
-                                + " is in the library.", "Review the changes\u2026", () -> offerTemplateChanges(ed, t));
-                    }
-                } catch (InterruptedException e) {
-                    Thread.currentThread().interrupt();
-                } catch (ExecutionException e) {
-                    status("Cannot look for a newer template: " + e.getCause().getMessage(), true);
-                }
-            }
-        }.execute();
-    }
-
-    /** Shows the changes a newer template brings, field by field, and takes the checked ones over. */
-    void offerTemplateChanges(BudgetEditor ed, Template newer) {
-        BudgetDocument doc = ed.document();
-        List<TemplateChange> changes = TemplateLibrary.compare(doc.content(), newer);
-        TemplateUpdateDialog dlg = new TemplateUpdateDialog(this, newer, doc.content().templateOrigin().version(),
-                changes);
-        dlg.setVisible(true);
-        List<TemplateChange> chosen = dlg.chosen();
-        if (!chosen.isEmpty()) {
-            ed.editDocument("Take over " + chosen.size() + " change(s) of template " + newer.id(), "",
-                    d -> TemplateLibrary.adopt(d, newer, chosen, doc.user(), doc.now()));
-        }
+    /** @return the function set every budget of this window is evaluated, simulated and reported with */
+    public FunctionLibrary library() {
+        return library;
     }
 
     private void openEntry(WorkspaceNavigator.Entry e) {
@@ -383,109 +343,21 @@ public final class WorkbenchFrame extends JFrame {
         }
     }
 
-    /** Saves the active budget, asking for a file when it has none; @return whether it was saved */
-    boolean save(BudgetEditor ed, boolean askForFile) {
-        BudgetDocument doc = ed.document();
-        Path target = doc.file();
-        if (askForFile || target == null) {
-            target = FileChooser.saveTarget(this, doc.name());
-            if (target == null) {
-                return false;
-            }
-        }
-        return saveTo(ed, target);
-    }
-
-    /**
-     * Saves a budget to {@code target}; a failure (read-only folder, full disk, a file in the way) is shown in a
-     * message and the document stays open, changed, with its file as it was.
-     *
-     * @return whether it was saved
-     */
-    boolean saveTo(BudgetEditor ed, Path target) {
-        BudgetDocument doc = ed.document();
-        try {
-            doc.saveTo(target);
-            prefs.addRecent(target.toAbsolutePath());
-            actions.updateRecent();
-            status("Saved " + target, false);
-            updateTitle(ed);
-            refreshNavigator();
-            return true;
-        } catch (IOException e) {
-            showError("The budget was not saved", e.getMessage() + "\n\nThe budget is still open with its changes; "
-                    + "save it somewhere else with Save as.");
-            return false;
-        }
-    }
-
-    /** The answers of a prompt about unsaved changes, in the order shown. */
-    static final String[] SAVE_CHOICES = {"Save", "Don't save", "Cancel"};
-
-    /** @return 0 to save, 1 not to save, 2 to cancel (also when the prompt is closed) */
-    private int askToSave(BudgetEditor ed, String title) {
-        tabs.setSelectedComponent(ed);
-        int a = JOptionPane.showOptionDialog(this, "Save the changes to " + ed.document().name() + "?", title,
-                JOptionPane.YES_NO_CANCEL_OPTION, JOptionPane.WARNING_MESSAGE, null, SAVE_CHOICES, SAVE_CHOICES[0]);
-        return a < 0 ? 2 : a;
-    }
-
-    /** Closes an editor, offering to save changes first; @return whether it closed */
-    public boolean close(BudgetEditor ed) {
-        if (ed.document().isDirty() && !ed.document().isReadOnly()) {
-            int a = askToSave(ed, "Close budget");
-            if (a == 2 || (a == 0 && !save(ed, false))) {
-                return false;
-            }
-        }
-        forceClose(ed);
-        return true;
-    }
-
     /** Closes an editor without asking (the caller has dealt with unsaved changes); its recovery copy goes. */
     public void forceClose(BudgetEditor ed) {
         ed.dispose();
-        recovery.forget(ed.document());
+        recovery.keeper().forget(ed.document());
         inspectors.remove(editors.remove(ed));
         tabs.remove(ed);
         refreshNavigator();
         activeChanged();
     }
 
-    /**
-     * Quits: asks about every changed budget first (Save, Don't save, Cancel) and closes none when the engineer
-     * cancels or a save fails; then closes them all.
-     */
-    void quit() {
-        List<BudgetEditor> toSave = new ArrayList<>();
-        for (BudgetEditor e : editors()) {
-            if (e.document().isDirty() && !e.document().isReadOnly()) {
-                int a = askToSave(e, "Quit Quire");
-                if (a == 2) {
-                    return;
-                }
-                if (a == 0) {
-                    toSave.add(e);
-                }
-            }
-        }
-        for (BudgetEditor e : toSave) {
-            if (!save(e, false)) {
-                return;
-            }
-        }
-        for (BudgetEditor e : editors()) {
-            forceClose(e);
-        }
-        prefs.setWindowBounds(getBounds(), getExtendedState() == MAXIMIZED_BOTH);
-        panes.save();
-        dispose();
-    }
-
     /** Closes the window; copies of changed budgets still open are written to the recovery folder first. */
     @Override
     public void dispose() {
         recovery.close();
+        files.cancelAll();
         super.dispose();
     }
 
@@ -493,76 +365,6 @@ public final class WorkbenchFrame extends JFrame {
     void showError(String title, String message) {
         status(title + ": " + message.lines().findFirst().orElse(""), true);
         JOptionPane.showMessageDialog(this, message, title, JOptionPane.ERROR_MESSAGE);
-    }
-
-    // ----- recovery -------------------------------------------------------------------------------------------
-
-    private Duration autosavePeriod() {
-        int m = prefs.autosaveMinutes();
-        return m > 0 ? Duration.ofMinutes(m) : null;
-    }
-
-    /** @return the keeper of recovery copies, for tests */
-    public RecoveryKeeper recovery() {
-        return recovery;
-    }
-
-    void applyAutosave() {
-        recovery.setPeriod(autosavePeriod());
-    }
-
-    /**
-     * Offers the recovery copies left by an earlier session (a crash, a power cut): a dialog lists each with its
-     * file and time; the checked ones are opened as changed budgets, the others discarded.
-     */
-    public void offerRecovery() {
-        List<String> unreadable = new ArrayList<>();
-        List<RecoveryStore.Pending> pending;
-        try {
-            pending = recovery.pending(unreadable);
-        } catch (IOException e) {
-            status("Cannot read the recovery folder " + recovery.store().folder() + ": " + e.getMessage(), true);
-            return;
-        }
-        if (!unreadable.isEmpty()) {
-            status("Unreadable recovery copies in " + recovery.store().folder() + ": " + String.join("; ", unreadable),
-                    true);
-        }
-        if (pending.isEmpty()) {
-            return;
-        }
-        RecoveryDialog dlg = new RecoveryDialog(this, pending);
-        dlg.setVisible(true);
-        if (dlg.cancelled()) {
-            return;
-        }
-        for (RecoveryStore.Pending p : pending) {
-            if (dlg.restore().contains(p)) {
-                restore(p);
-            } else {
-                try {
-                    recovery.store().discard(p.id());
-                } catch (IOException e) {
-                    status("Cannot discard the recovery copy " + p.file() + ": " + e.getMessage(), true);
-                }
-            }
-        }
-    }
-
-    /** Opens a recovery copy as a changed budget belonging to its original file. */
-    Optional<BudgetEditor> restore(RecoveryStore.Pending p) {
-        try {
-            org.quire.engine.document.BudgetDocument content = p.load();
-            BudgetDocument doc = new BudgetDocument(content, p.originalPath(), "recovered " + content.title(),
-                    prefs.userName());
-            doc.markRecovered(p.id());
-            BudgetEditor ed = open(doc);
-            status("Restored the copy of " + doc.name() + " kept at " + p.saved() + "; save it to keep it", false);
-            return Optional.of(ed);
-        } catch (IOException | BudgetFormatException e) {
-            showError("Cannot restore the recovery copy", p.file() + ":\n" + e.getMessage());
-            return Optional.empty();
-        }
     }
 
     // ----- calibration -----------------------------------------------------------------------------------------
@@ -617,7 +419,7 @@ public final class WorkbenchFrame extends JFrame {
         new SwingWorker<Void, Void>() {
             @Override
             protected Void doInBackground() throws Exception {
-                ReportExport.write(content, gum, mc, target, LocalDate.now());
+                ReportExport.write(content, gum, mc, target, LocalDate.now(), library);
                 return null;
             }
 
@@ -675,8 +477,7 @@ public final class WorkbenchFrame extends JFrame {
     }
 
     void status(String message, boolean error) {
-        status.setText(message == null || message.isEmpty() ? " " : message);
-        status.setForeground(Colors.get(error ? "Quire.error" : "Label.foreground"));
+        status.show(message, error);
         statusHook.accept(message, error);
     }
 
@@ -689,15 +490,22 @@ public final class WorkbenchFrame extends JFrame {
         Optional<BudgetEditor> ed = activeEditor();
         if (ed.isPresent()) {
             inspectorCards.show(inspectors, String.valueOf(System.identityHashCode(ed.get())));
-            problems.show(ed.get().latest() == null ? List.of() : ed.get().latest().problems());
+            showProblems(ed.get());
         } else {
             inspectorCards.show(inspectors, "none");
-            problems.show(List.of());
+            showProblems(null);
         }
         if (actions != null) {
             actions.update();
         }
         setTitle("Quire" + ed.map(e -> " \u2013 " + e.document().name()).orElse(""));
+    }
+
+    /** Lists the editor's problems (none for null); the pane shrinks to its title line when there are none. */
+    private void showProblems(BudgetEditor ed) {
+        List<org.quire.app.ui.document.Problem> list = ed == null ? List.of() : ed.problems();
+        problems.show(list);
+        panes.collapseProblems(list.isEmpty() ? problems.collapsedHeight() : 0);
     }
 
     private void updateTitle(BudgetEditor ed) {
@@ -737,6 +545,6 @@ public final class WorkbenchFrame extends JFrame {
 
     /** @return the status line text, for tests */
     public String statusText() {
-        return status.getText();
+        return status.text();
     }
 }

@@ -1,6 +1,7 @@
 package org.quire.app.cli;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.io.ByteArrayOutputStream;
@@ -43,7 +44,10 @@ class CalibrationCommandsTest {
         assertEquals(0, r.status(), r.err());
         assertTrue(r.out().contains("a = 0.885"), r.out()); // ISO/TS 28037:2010 clause 6, a = 0.885, from memory
         assertTrue(r.out().contains("chi2 = 4.13"), r.out()); // ISO/TS 28037:2010 clause 6, chi2 = 4.131, from memory
-        assertTrue(r.out().contains("consistent"), r.out());
+        // chi2 = 4.131 below the 95 % quantile of chi2(4), 9.488 (common statistical tables): the verdict is
+        // "consistent"; the line must not say "inconsistent", which contains the word
+        assertTrue(r.out().contains("quantile of chi2(4) = 9.48773: consistent\n"), r.out());
+        assertFalse(r.out().contains("inconsistent"), r.out());
         assertTrue(r.out().contains("standardized"), r.out());
         assertTrue(r.out().contains("x = 4.431"), r.out()); // independent closed-form computation, 4.4312
     }

@@ -37,7 +37,7 @@ class CertificateCommandTest {
         assertEquals(0, run("certificate", cal(), "--register", register(), "--approver", "M. Fenwick (invented)",
                 "--role", "technical manager", "--issued", "2026-11-25", "-o", pdf.toString()), err.toString());
         assertTrue(Files.size(pdf) > 10_000);
-        assertTrue(out.toString(StandardCharsets.UTF_8).contains("wrote certificate TVC-20261124-"));
+        assertTrue(out.toString(StandardCharsets.UTF_8).contains("wrote certificate TVFL-20261124-"));
     }
 
     @Test

@@ -52,13 +52,68 @@ class CommandLineTest {
     void evaluateJsonAndCsvCarryTheSameFigures() {
         Run j = run("evaluate", example("jcgm100-h2-resistance-reactance.json").toString(), "--format", "json");
         assertEquals(0, j.status(), j.err());
-        assertTrue(j.out().contains("\"outputCorrelation\""));
-        // JCGM 100:2008 H.2: R = 127.732 ohm
-        assertTrue(j.out().contains("127.73"), j.out());
+        jakarta.json.JsonObject json = jakarta.json.Json.createReader(new java.io.StringReader(j.out())).readObject();
+        jakarta.json.JsonArray outputs = json.getJsonArray("outputs");
+        // JCGM 100:2008 H.2 (Table H.4): R = 127.732 ohm, X = 219.847 ohm, Z = 254.260 ohm, each to half a unit
+        // of the last printed digit
+        double[] published = {127.732, 219.847, 254.260};
+        assertEquals(3, outputs.size());
+        for (int i = 0; i < 3; i++) {
+            assertEquals(published[i], outputs.getJsonObject(i).getJsonNumber("estimate").doubleValue(), 0.0005);
+        }
         Run c = run("evaluate", example("jcgm100-h2-resistance-reactance.json").toString(), "--format=csv");
         assertEquals(0, c.status(), c.err());
-        assertTrue(c.out().startsWith("output,input,type,distribution,estimate"));
-        assertTrue(c.out().contains("R,V,A,"));
+        String[] tables = c.out().strip().split("\n\\s*\n");
+        assertEquals(2, tables.length, "the budget rows and the results: " + c.out());
+        String[] lines = tables[0].split("\n");
+        assertEquals("output,input,type,distribution,estimate,standard_uncertainty,sensitivity,contribution,dof,share",
+                lines[0]);
+        int rows = 0;
+        for (int i = 0; i < outputs.size(); i++) {
+            rows += outputs.getJsonObject(i).getJsonArray("contributions").size();
+        }
+        assertEquals(rows, lines.length - 1, "one CSV row per input of each output, as in the JSON");
+        String[] numeric = {"estimate", "standardUncertainty", "sensitivity", "contribution", "dof", "share"};
+        for (int k = 1; k < lines.length; k++) {
+            String[] f = lines[k].split(",", -1);
+            assertEquals(10, f.length, lines[k]);
+            jakarta.json.JsonObject row = null;
+            for (int i = 0; i < outputs.size(); i++) {
+                if (outputs.getJsonObject(i).getString("name").equals(f[0])) {
+                    for (jakarta.json.JsonValue v : outputs.getJsonObject(i).getJsonArray("contributions")) {
+                        if (v.asJsonObject().getString("input").equals(f[1])) {
+                            row = v.asJsonObject();
+                        }
+                    }
+                }
+            }
+            assertTrue(row != null, "the JSON has no contribution of " + f[1] + " to " + f[0]);
+            assertEquals(row.getString("type"), f[2], lines[k]);
+            assertEquals(row.getString("distribution"), f[3], lines[k]);
+            for (int n = 0; n < numeric.length; n++) {
+                double fromJson = row.getJsonNumber(numeric[n]).doubleValue();
+                double fromCsv = Double.parseDouble(f[4 + n]);
+                // the CSV keeps 10 significant digits
+                assertEquals(fromJson, fromCsv, 1e-9 * Math.abs(fromJson) + 1e-300, f[0] + "/" + f[1] + " " + numeric[n]);
+            }
+        }
+        String[] results = tables[1].split("\n");
+        assertEquals("output,unit,estimate,standard_uncertainty,effective_dof,coverage_factor,coverage_probability,"
+                + "expanded_uncertainty,relative_expanded_uncertainty", results[0]);
+        assertEquals(outputs.size() + 1, results.length);
+        String[] fields = {"estimate", "standardUncertainty", "effectiveDof", "coverageFactor", "coverageProbability",
+            "expandedUncertainty", "relativeExpandedUncertainty"};
+        for (int i = 0; i < outputs.size(); i++) {
+            jakarta.json.JsonObject o = outputs.getJsonObject(i);
+            String[] f = results[i + 1].split(",", -1);
+            assertEquals(o.getString("name"), f[0]);
+            assertEquals(o.getString("unit"), f[1]);
+            for (int n = 0; n < fields.length; n++) {
+                double fromJson = o.getJsonNumber(fields[n]).doubleValue();
+                assertEquals(fromJson, Double.parseDouble(f[2 + n]), 1e-9 * Math.abs(fromJson) + 1e-300,
+                        f[0] + " " + fields[n]);
+            }
+        }
     }
 
     @Test

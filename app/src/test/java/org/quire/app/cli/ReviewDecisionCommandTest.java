@@ -14,17 +14,16 @@ import java.util.ArrayList;
 import java.util.List;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
-import org.quire.app.review.DecisionRecorder;
-import org.quire.app.review.DocumentDecisionRecorder;
 import org.quire.app.review.Review;
 import org.quire.app.review.ReviewContext;
-import org.quire.app.review.Verdict;
+import org.quire.engine.document.Verdict;
 import org.quire.app.testing.Examples;
 import org.quire.engine.budget.Budget;
 import org.quire.engine.budget.InputQuantity;
 import org.quire.engine.document.BudgetDocument;
 import org.quire.engine.document.DocumentStatus;
 import org.quire.engine.document.DocumentStore;
+import org.quire.engine.document.ReviewDecisions;
 import org.quire.engine.document.RevisionEntry;
 
 /**
@@ -105,14 +104,19 @@ class ReviewDecisionCommandTest {
         assertTrue(h.get(1).comment().startsWith("endorsed by M. Okafor on 2026-11-21 (content SHA-256 "
                 + approved.contentHash() + ")"), h.get(1).comment());
         assertTrue(approved.approvalIntact());
-        List<DecisionRecorder.Recorded> rec = new DocumentDecisionRecorder(approved, java.time.Clock.systemUTC())
-                .decisions(approved.contentHash());
+        assertEquals(Verdict.ENDORSED, h.get(1).decision(), "the history entry says it is a decision");
+        List<ReviewDecisions.Recorded> rec = ReviewDecisions.decisions(approved, approved.contentHash());
         assertEquals(1, rec.size());
-        assertEquals(Verdict.ENDORSED, rec.get(0).decision().verdict());
+        assertEquals(Verdict.ENDORSED, rec.get(0).verdict());
+        assertEquals("M. Okafor", rec.get(0).assessor());
 
         // a second decision on approved content is refused
-        assertEquals(1, run("review", f.toString(), "--decide", "send-back", "--assessor", "A. Brandt", "--reason", "x"));
-        assertTrue(out().contains("is approved already"), out());
+        byte[] approvedBytes = Files.readAllBytes(f);
+        assertEquals(2, run("review", f.toString(), "--decide", "send-back", "--assessor", "A. Brandt", "--reason", "x"));
+        String refused = err.toString(StandardCharsets.UTF_8);
+        assertTrue(refused.contains(f + ": decision refused: revision 1 of") && refused.contains("is approved already"),
+                refused);
+        assertArrayEquals(approvedBytes, Files.readAllBytes(f), "the approved file is unchanged");
 
         // a later edit makes revision 2 a draft; revision 1 stays readable as approved
         Budget b = approved.budget();
@@ -157,23 +161,44 @@ class ReviewDecisionCommandTest {
         RevisionEntry last = doc.history().get(doc.history().size() - 1);
         assertEquals(DocumentStatus.DRAFT, last.status());
         assertTrue(last.comment().contains("state the source of the phase readings")
-                && last.comment().contains("findings: warnings") && last.comment().contains(doc.contentHash()),
-                last.comment());
-        DecisionRecorder.Recorded r = new DocumentDecisionRecorder(doc, java.time.Clock.systemUTC())
-                .decisions(doc.contentHash()).get(0);
-        assertEquals(Verdict.SENT_BACK, r.decision().verdict());
-        assertEquals("state the source of the phase readings", r.decision().reason());
-        assertEquals(List.of("warnings"), r.findings());
+                && last.comment().contains("Findings: warnings (correlated inputs)")
+                && last.comment().contains(doc.contentHash()), last.comment());
+        assertEquals(Verdict.SENT_BACK, last.decision());
+        assertEquals(doc.contentHash(), last.contentHash(), "the entry records the hash of the content sent back");
+        ReviewDecisions.Recorded r = ReviewDecisions.decisions(doc, doc.contentHash()).get(0);
+        assertEquals(Verdict.SENT_BACK, r.verdict());
+        assertEquals("A. Brandt", r.assessor());
         // the same content cannot be decided on again: it must change first
         List<String> args = new ArrayList<>(List.of("review", f.toString(), "--decide", "endorse", "--assessor",
                 "A. Brandt"));
         args.addAll(agreeToAll(f));
-        assertEquals(1, run(args.toArray(new String[0])));
-        assertTrue(out().contains("was already sent back by A. Brandt on 2026-11-21"), out());
+        assertEquals(2, run(args.toArray(new String[0])));
+        String e = err.toString(StandardCharsets.UTF_8);
+        assertTrue(e.contains("was already sent back by A. Brandt on ") && e.contains("(revision 1)"), e);
         // sending back needs a reason or a finding
         Path g = copy(Files.createDirectory(dir.resolve("g")), "jcgm100-h2-resistance-reactance.json");
         assertEquals(1, run("review", g.toString(), "--decide", "send-back", "--assessor", "A. Brandt"));
         assertTrue(out().contains("needs a reason or at least one finding"), out());
+    }
+
+    @Test
+    void theAuthorCannotEndorseHisOwnBudget(@TempDir Path dir) throws Exception {
+        // separation of duties (ISO/IEC 17025:2017 7.8.2.1 o); common practice): the rule is the engine's
+        Path f = dir.resolve("h2.json");
+        BudgetDocument d = BudgetDocument.newDraft(Examples.budget("jcgm100-h2-resistance-reactance.json"),
+                "M. Okafor", Instant.parse("2026-11-20T08:00:00Z"));
+        DocumentStore.save(d, f);
+        byte[] before = Files.readAllBytes(f);
+        List<String> args = new ArrayList<>(List.of("review", f.toString(), "--decide", "endorse", "--assessor",
+                " m.  okafor"));
+        args.addAll(agreeToAll(f));
+        assertEquals(2, run(args.toArray(new String[0])));
+        String e = err.toString(StandardCharsets.UTF_8);
+        assertTrue(e.contains("decision refused: 'm.  okafor' is the author of") && e.contains("separation of duties"), e);
+        assertArrayEquals(before, Files.readAllBytes(f));
+        args.set(5, "A. Brandt");
+        assertEquals(0, run(args.toArray(new String[0])), err.toString(StandardCharsets.UTF_8));
+        assertEquals(DocumentStatus.APPROVED, DocumentStore.open(f).status());
     }
 
     @Test

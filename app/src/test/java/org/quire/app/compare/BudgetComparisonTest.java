@@ -21,7 +21,7 @@ class BudgetComparisonTest {
     void additiveModelWithOneDominantInput() throws Exception {
         Budget a = Examples.budget("jcgm101-9.2.3-additive-rectangular.json");
         Budget b = Examples.budget("jcgm101-9.2.4-additive-dominant.json");
-        Comparison c = BudgetComparison.compare(a, b, Engine.library());
+        Comparison c = BudgetComparison.compare(a, b, Engine.standard().library());
         assertFalse(c.identical());
         assertTrue(c.inputsAdded().isEmpty() && c.inputsRemoved().isEmpty());
         assertEquals(1, c.inputsChanged().size());
@@ -44,7 +44,7 @@ class BudgetComparisonTest {
     void endGaugeWithTheComparatorDifferenceAsOneInput() throws Exception {
         Budget a = Examples.budget("jcgm100-h1-end-gauge.json");
         Budget b = BudgetJson.read(Path.of(BudgetComparisonTest.class.getResource("jcgm100-h1-combined-d.json").toURI()));
-        Comparison c = BudgetComparison.compare(a, b, Engine.library());
+        Comparison c = BudgetComparison.compare(a, b, Engine.standard().library());
         assertEquals(List.of("d"), c.inputsAdded().stream().map(InputQuantity::name).toList());
         assertEquals(List.of("d_mean", "d_random", "d_systematic"),
                 c.inputsRemoved().stream().map(InputQuantity::name).toList());
@@ -71,11 +71,11 @@ class BudgetComparisonTest {
     @Test
     void aBudgetComparedWithItselfIsIdentical() throws Exception {
         Budget a = Examples.budget("jcgm100-h2-resistance-reactance.json");
-        Comparison c = BudgetComparison.compare(a, a, Engine.library());
+        Comparison c = BudgetComparison.compare(a, a, Engine.standard().library());
         assertTrue(c.identical());
         assertEquals(0, c.effects().get(0).changePercent(), 0);
         Budget k3 = a.withSettings(a.settings().withCoverageFactor(3));
-        Comparison s = BudgetComparison.compare(a, k3, Engine.library());
+        Comparison s = BudgetComparison.compare(a, k3, Engine.standard().library());
         assertEquals(List.of(new FieldChange("coverage", "k = 2", "k = 3")), s.settings());
         // U = k u_c, so going from k = 2 to k = 3 raises every U by exactly 50 %
         assertEquals(50, s.effects().get(1).changePercent(), 1e-9);

@@ -65,4 +65,24 @@ class FuzzTest {
             f.shutdown();
         }
     }
+
+    @Test
+    void aCoverageFactorThatWouldMakeUOverflowIsAUserError(@TempDir Path work) throws Exception {
+        // fuzz finding (seed 11, case 40547): the six-point example with coverageFactor 1.8e308 gave U = infinity,
+        // and its report ended in an internal error while drawing the chart's ticks
+        Path file = Path.of("src", "test", "resources", "org", "quire", "app", "fuzz",
+                "six-point-coverage-factor-1.8e308.json");
+        {
+            for (String[] args : new String[][] {{"evaluate", file.toString()},
+                {"report", file.toString(), "-o", work.resolve("r.html").toString()}}) {
+                java.io.ByteArrayOutputStream err = new java.io.ByteArrayOutputStream();
+                int status = org.quire.app.cli.CommandLine.run(args, new java.io.PrintStream(
+                        java.io.OutputStream.nullOutputStream()), new java.io.PrintStream(err, true,
+                        java.nio.charset.StandardCharsets.UTF_8));
+                String msg = err.toString(java.nio.charset.StandardCharsets.UTF_8);
+                assertEquals(2, status, String.join(" ", args) + ": " + msg);
+                assertTrue(msg.contains("coverageFactor") && msg.contains("at most 1000"), msg);
+            }
+        }
+    }
 }

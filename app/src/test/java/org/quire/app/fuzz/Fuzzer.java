@@ -115,9 +115,26 @@ final class Fuzzer {
             if (findings.putIfAbsent(key.length() > 300 ? key.substring(0, 300) : key,
                     label + " " + String.join(" ", args) + "\n" + msg + "\n" + abbreviate(input)) == null) {
                 System.err.println("FINDING (new) " + key);
+                keep(input, args);
             }
         }
         return kind;
+    }
+
+    /** Keeps the whole input of a new finding in target/fuzz-findings, so that it can be run again by hand. */
+    private static void keep(String input, String... args) {
+        if (input == null || input.isEmpty()) {
+            return;
+        }
+        try {
+            Path dir = Path.of("target", "fuzz-findings");
+            Files.createDirectories(dir);
+            Path kept = dir.resolve(args[0] + "-" + Integer.toHexString(input.hashCode()) + ".input");
+            Files.writeString(kept, input);
+            System.err.println("  input kept in " + kept.toAbsolutePath() + " (command: " + String.join(" ", args) + ")");
+        } catch (IOException e) {
+            System.err.println("  input not kept: " + e);
+        }
     }
 
     private static String abbreviate(String s) {

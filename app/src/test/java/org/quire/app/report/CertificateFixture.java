@@ -85,7 +85,7 @@ final class CertificateFixture {
     }
 
     static CalibrationResult evaluate(Calibration c) throws Exception {
-        return CalibrationEvaluator.of(method(), Engine.library()).evaluate(c);
+        return CalibrationEvaluator.of(method(), Engine.standard().library()).evaluate(c);
     }
 
     static CalibrationResult worked() throws Exception {

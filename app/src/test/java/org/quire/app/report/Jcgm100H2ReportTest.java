@@ -32,6 +32,7 @@ class Jcgm100H2ReportTest {
         assertTrue(text.contains("−0.588"), "r(R, X) printed");
         assertTrue(text.contains("observed simultaneously"), "the correlations' justification is printed");
         // JCGM 100:2008 H.2: R = 127.732 ohm with u = 0.071 ohm; k = 2 fixed, so U = 0.142 ohm, 0.14 to two digits
-        assertTrue(text.contains("R = (127.73 ± 0.14) ohm, k = 2,"), text);
+        // k is stated to three significant digits by the one rule (Figures.coverageFactor)
+        assertTrue(text.contains("R = (127.73 ± 0.14) ohm, k = 2.00,"), text);
     }
 }

@@ -40,11 +40,11 @@ class Jcgm101MassCalibrationReportTest {
         BudgetDocument doc = DocumentStore.open(Examples.file("jcgm101-9.3-mass-calibration.json"));
         Budget b = doc.budget();
         b = b.withSettings(b.settings().withTrials(M));
-        var model = b.compile(Engine.library());
+        var model = b.compile(Engine.standard().library());
         GumResult gum = Examples.gum(b);
         mc = BudgetSimulation.run(b, model, gum, BudgetSimulation.settings(b.settings(), gum).withThreads(2),
                 ProgressListener.NONE);
-        ReportModel m = ReportBuilder.build(ReportInput.of(b, gum, DocumentInfo.of(doc, LocalDate.of(2026, 11, 20)))
+        ReportModel m = ReportBuilder.build(ReportInput.of(b, gum, DocumentInfo.of(doc, LocalDate.of(2026, 11, 20)), org.quire.app.common.Engine.standard().library())
                 .withMonteCarlo(mc));
         ByteArrayOutputStream out = new ByteArrayOutputStream();
         PdfReport.render(m, out);
@@ -136,6 +136,9 @@ class Jcgm101MassCalibrationReportTest {
         assertEquals(1.3395, Double.parseDouble(m.group(2)), 0.00005 + 0.000005);
         assertTrue(text.contains("the GUM result is not validated"), text);
         assertTrue(text.contains("report the Monte Carlo result"), text);
+        // the reason's symbols are typeset (d with subscript low, δ), never their plain names
+        assertFalse(text.contains("d_low") || text.contains("d_high") || text.contains("tolerance delta"), text);
+        assertTrue(text.contains("numerical tolerance δ = "), text);
         assertEquals(GumComparison.Verdict.NOT_VALIDATED, mc.output(0).comparison().verdict());
         // d_low = |1.1285 - 1.0834| is about 0.045 mg against the published figures, far beyond delta = 0.0005 mg
         assertTrue(mc.output(0).comparison().lowerDifference() > 0.03);

@@ -56,10 +56,10 @@ class MonteCarloSectionTest {
         Budget b = Examples.budget("jcgm101-9.2.3-additive-rectangular.json");
         b = b.withSettings(b.settings().withTrials(M).withSeed(20_261_202L));
         GumResult gum = Examples.gum(b);
-        MonteCarloOutcome mc = BudgetSimulation.run(b, b.compile(Engine.library()), gum,
+        MonteCarloOutcome mc = BudgetSimulation.run(b, b.compile(Engine.standard().library()), gum,
                 BudgetSimulation.settings(b.settings(), gum).withThreads(2), ProgressListener.NONE);
         ReportModel m = ReportBuilder.build(ReportInput.of(b, gum,
-                DocumentInfo.forPlainBudget(b, CanonicalSha256.INSTANCE, java.time.LocalDate.of(2026, 3, 2)))
+                DocumentInfo.forPlainBudget(b, CanonicalSha256.INSTANCE, java.time.LocalDate.of(2026, 3, 2)), org.quire.app.common.Engine.standard().library())
                 .withMonteCarlo(mc));
         String html = HtmlReport.render(m);
         assertTrue(html.contains("<svg"), "the histogram is drawn");

@@ -41,10 +41,10 @@ class ReportMarkupTest {
     private static ReportModel model(Path file) throws Exception {
         BudgetDocument doc = DocumentJson.read(file);
         Budget b = doc.budget();
-        var m = b.compile(Engine.library());
+        var m = b.compile(Engine.standard().library());
         GumResult r = GumEvaluator.evaluate(b, m, b.correlationMatrix(), b.settings());
-        ReportInput in = ReportInput.of(b, r, DocumentInfo.of(doc, LocalDate.of(2026, 12, 2)));
-        for (ReportSection s : CalibrationSections.of(b, Engine.library())) {
+        ReportInput in = ReportInput.of(b, r, DocumentInfo.of(doc, LocalDate.of(2026, 12, 2)), org.quire.app.common.Engine.standard().library());
+        for (ReportSection s : CalibrationSections.of(b, Engine.standard().library())) {
             in = in.withSection(s);
         }
         return ReportBuilder.build(in);

@@ -19,7 +19,7 @@ import org.quire.engine.model.ModelException;
 class TypesetterTest {
 
     private static MathText line(String model, List<String> inputs, String output) throws ModelException {
-        CompiledModel m = ModelCompiler.compile(model, inputs, List.of(output), Engine.library());
+        CompiledModel m = ModelCompiler.compile(model, inputs, List.of(output), Engine.standard().library());
         return Typesetter.equation(m.lines().get(m.lines().size() - 1));
     }
 
@@ -32,6 +32,17 @@ class TypesetterTest {
     }
 
     @Test
+    void aNumberWithItsUnitIsSetAsOneQuantity() throws ModelException {
+        // SI Brochure (9th ed.) 5.4.3: a space between the number and the unit; the quantity is bracketed where
+        // an operator would otherwise bind only its number
+        assertEquals("m = dm / (1000\u2009mg/g)", line("m = dm / 1000 [mg/g]", List.of("dm"), "m").plain());
+        assertEquals("m = 1.0 × 10\u207b\u00b3\u2009g/mg · dm", line("m = 1.0e-3 [g/mg] * dm", List.of("dm"), "m").plain());
+        MathText t = line("d = t - 20 [°C]", List.of("t"), "d");
+        assertEquals("d = t − 20\u2009°C", t.plain());
+        assertFalse(t.runs().get(t.runs().size() - 1).italic(), "the unit is upright");
+    }
+
+    @Test
     void descriptiveSubscriptsAreUprightAndSingleLetterOnesItalic() {
         MathText m = Typesetter.name("theta_mean");
         assertEquals("theta_mean", m.plain(), "the plain form of a name is the name as written");
@@ -41,6 +52,17 @@ class TypesetterTest {
         assertEquals("mean", m.runs().get(1).text());
         assertTrue(Typesetter.name("l_s").runs().get(1).italic());
         assertEquals("Rc,cal", Typesetter.name("m_Rc_cal").runs().get(1).text());
+    }
+
+    @Test
+    void aSmallChangeOfAGreekQuantityKeepsItsLetter() {
+        // common practice: drho_w, a correction to a density, reads dρ with subscript w, as dm_evap reads dm
+        MathText m = Typesetter.name("drho_w");
+        assertEquals("dρ", m.runs().get(0).text());
+        assertEquals("w", m.runs().get(1).text());
+        assertEquals("drho_w", m.plain());
+        assertEquals("dm", Typesetter.name("dm_evap").runs().get(0).text());
+        assertEquals("δ", Typesetter.name("delta").runs().get(0).text());
     }
 
     @Test
@@ -60,7 +82,7 @@ class TypesetterTest {
         assertEquals("water_density(", m.runs().get(2).text().substring(3));
         assertFalse(m.runs().stream().anyMatch(r -> r.shift() == MathText.Shift.SUB && r.text().equals("density")));
         CompiledModel own = ModelCompiler.compile("cell_volume(n, k) = n / k\nV = cell_volume(N, K_p)",
-                List.of("N", "K_p"), List.of("V"), Engine.library());
+                List.of("N", "K_p"), List.of("V"), Engine.standard().library());
         MathText def = Typesetter.equation(own.lines().get(0));
         assertEquals("cell_volume(", def.runs().get(0).text());
         MathText use = Typesetter.equation(own.lines().get(1));

@@ -36,7 +36,7 @@ public final class Examples {
     }
 
     public static GumResult gum(Budget b) throws ModelException {
-        return GumEvaluator.evaluate(b, Engine.library());
+        return GumEvaluator.evaluate(b, Engine.standard().library());
     }
 
     /** @return the report model of a worked example, dated 2026-03-02, for the invented Tarrow Vale laboratory */
@@ -45,6 +45,6 @@ public final class Examples {
         DocumentInfo d = DocumentInfo.forPlainBudget(b, CanonicalSha256.INSTANCE, LocalDate.of(2026, 3, 2))
                 .withLaboratory("Tarrow Vale Flow Laboratory").withAuthor("R. Hollis")
                 .withDeviceUnderTest("End gauge EG-50");
-        return ReportBuilder.build(ReportInput.of(b, gum(b), d));
+        return ReportBuilder.build(ReportInput.of(b, gum(b), d, org.quire.app.common.Engine.standard().library()));
     }
 }

@@ -45,7 +45,7 @@ abstract class GuiTestSupport {
 
     /** @return the Monte Carlo runner the workbench gets: the engine's, unless a test says otherwise */
     MonteCarloRunner runner() {
-        return MonteCarloRunner.engine(Engine.library());
+        return MonteCarloRunner.engine(Engine.standard().library());
     }
 
     @BeforeEach
@@ -59,7 +59,7 @@ abstract class GuiTestSupport {
         node.put("userName", "Test Engineer");
         node.put("windowBounds", "0,0,1440,900");
         frame = onEdt(() -> {
-            WorkbenchFrame f = new WorkbenchFrame(new WorkbenchPrefs(node), Engine.library(), runner());
+            WorkbenchFrame f = new WorkbenchFrame(new WorkbenchPrefs(node), Engine.standard().library(), runner());
             f.showRestored();
             return f;
         });
@@ -95,7 +95,7 @@ abstract class GuiTestSupport {
     /** @return a frame on the same preferences (a restart of the workbench), shown */
     WorkbenchFrame newFrameOnSamePreferences() throws Exception {
         return onEdt(() -> {
-            WorkbenchFrame f = new WorkbenchFrame(new WorkbenchPrefs(node), Engine.library(), runner());
+            WorkbenchFrame f = new WorkbenchFrame(new WorkbenchPrefs(node), Engine.standard().library(), runner());
             f.showRestored();
             return f;
         });
@@ -177,6 +177,18 @@ abstract class GuiTestSupport {
         return out.get();
     }
 
+    /** @return the value of a future the workbench completes on the event thread, waiting for it (not on the EDT) */
+    static <T> T await(java.util.concurrent.CompletableFuture<T> f) throws Exception {
+        return f.get(WAIT_MILLIS, java.util.concurrent.TimeUnit.MILLISECONDS);
+    }
+
+    /** @return the recovery copies anywhere under the test's recovery folder (every workbench's own folder) */
+    long recoveryCopies() throws java.io.IOException {
+        try (java.util.stream.Stream<Path> s = Files.walk(recoveryDir)) {
+            return s.filter(p -> p.getFileName().toString().endsWith(".recovery.json")).count();
+        }
+    }
+
     /** Waits until {@code condition} (checked on the event thread) holds. */
     static void waitFor(String what, BooleanSupplier condition) throws Exception {
         long end = System.currentTimeMillis() + WAIT_MILLIS;
@@ -199,6 +211,6 @@ abstract class GuiTestSupport {
     /** Waits until the engine has answered for the editor's present budget. */
     static void waitForCurrentResult(BudgetEditor ed) throws Exception {
         waitFor("the engine's answer for the present budget", () -> ed.latest() != null
-                && ed.latest().budget().equals(ed.document().budget()));
+                && ed.latest().budget().equals(ed.document().budget()) && ed.reviewPanel().isCurrent());
     }
 }

@@ -44,7 +44,7 @@ class MonteCarloSectionTest extends GuiTestSupport {
         }
         // then the engine itself, with few trials, so that what is shown is the engine's outcome
         Budget small = budget.withSettings(budget.settings().withTrials(2_000));
-        return MonteCarloRunner.engine(Engine.library()).run(small, gum, ProgressListener.NONE);
+        return MonteCarloRunner.engine(Engine.standard().library()).run(small, gum, ProgressListener.NONE);
     };
 
     @Override

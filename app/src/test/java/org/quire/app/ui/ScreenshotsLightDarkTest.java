@@ -1,5 +1,8 @@
 package org.quire.app.ui;
 
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.awt.image.BufferedImage;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.concurrent.atomic.AtomicReference;
@@ -11,7 +14,9 @@ import org.quire.app.ui.notebook.BudgetEditor;
 /**
  * Pictures of the main screens in the light and the dark theme at 1366 x 768, saved to
  * {@code app/target/screenshots/} to be looked at: the results with the ranking chart, the inspector, a model
- * error, the Monte Carlo check, and the calibration view.
+ * error, the Monte Carlo check, and the calibration view. Each picture is checked for the component it is
+ * taken for (see {@link ScreenshotsTest#assertShows}), and the dark theme's pictures must be darker than the
+ * light theme's.
  */
 class ScreenshotsLightDarkTest extends GuiTestSupport {
     private static final Path OUT = Path.of("target", "screenshots");
@@ -19,13 +24,14 @@ class ScreenshotsLightDarkTest extends GuiTestSupport {
     @Test
     void lightAndDark() throws Exception {
         Files.createDirectories(OUT);
+        java.util.Map<String, Double> luminance = new java.util.LinkedHashMap<>();
         try {
             for (org.quire.app.ui.common.WorkbenchPrefs.Theme theme : org.quire.app.ui.common.WorkbenchPrefs.Theme.values()) {
                 String t = theme.name().toLowerCase(java.util.Locale.ROOT);
                 onEdt(() -> { Workbench.installLookAndFeel(theme); return null; });
                 WorkbenchFrame f = newFrameOnSamePreferences();
                 try {
-                    screens(f, t);
+                    luminance.put(t, screens(f, t));
                 } finally {
                     onEdt(() -> {
                         for (BudgetEditor e : f.editors()) {
@@ -39,21 +45,26 @@ class ScreenshotsLightDarkTest extends GuiTestSupport {
         } finally {
             onEdt(() -> { Workbench.installLookAndFeel(org.quire.app.ui.common.WorkbenchPrefs.Theme.LIGHT); return null; });
         }
+        assertTrue(luminance.get("dark") < luminance.get("light") - 0.2, "the dark theme is not darker: " + luminance);
     }
 
-    private void screens(WorkbenchFrame f, String t) throws Exception {
+    /** @return the mean luminance of the results picture */
+    private double screens(WorkbenchFrame f, String t) throws Exception {
         onEdt(() -> { f.setBounds(0, 0, 1366, 768); f.validate(); return null; });
         BudgetEditor ed = onEdt(f::openDemo);
         waitForCurrentResult(ed);
         onEdt(() -> { ed.revealSection("Results (GUM)"); return null; });
         Thread.sleep(400);
-        shot(f.getRootPane(), t + "-1-results-and-ranking");
+        BufferedImage results = shot(f.getRootPane(), t + "-1-results-and-ranking");
+        ScreenshotsTest.assertShows(results, f.getRootPane(), named(f, "budget:E"), t + ": the budget table of E");
         onEdt(() -> { ed.selectInput("V_ind"); ed.revealSection("Inputs"); return null; });
         Thread.sleep(300);
-        shot(f.getRootPane(), t + "-2-inputs-inspector-type-a");
+        ScreenshotsTest.assertShows(shot(f.getRootPane(), t + "-2-inputs-inspector-type-a"), f.getRootPane(),
+                named(f, "summary:mean"), t + ": the Type A summary");
         onEdt(() -> { ed.selectInput("d_inst"); return null; });
         Thread.sleep(300);
-        shot(f.getRootPane(), t + "-3-inspector-type-b");
+        ScreenshotsTest.assertShows(shot(f.getRootPane(), t + "-3-inspector-type-b"), f.getRootPane(),
+                named(f, "distributionPlot"), t + ": the distribution plot");
         onEdt(() -> {
             ed.modelEditor().setText(ed.modelEditor().getText().replace("E = 100 * (V_m - V_ref) / V_ref",
                     "E = 100 * (V_m - V_ref / V_ref"));
@@ -62,7 +73,8 @@ class ScreenshotsLightDarkTest extends GuiTestSupport {
         });
         waitFor("the model error", () -> !f.shownProblems().isEmpty());
         Thread.sleep(300);
-        shot(f.getRootPane(), t + "-4-model-error");
+        ScreenshotsTest.assertShows(shot(f.getRootPane(), t + "-4-model-error"), f.getRootPane(),
+                named(f, "problemList"), t + ": the problems list");
         onEdt(() -> { ed.document().undo(); ed.edit("Fewer trials", "", b -> b.withSettings(b.settings()
                 .withTrials(100_000))); return null; });
         waitForCurrentResult(ed);
@@ -70,18 +82,21 @@ class ScreenshotsLightDarkTest extends GuiTestSupport {
         waitFor("the Monte Carlo verdict", () -> WorkbenchEditingTest.find(ed, "mcVerdict:E") != null);
         onEdt(() -> { ed.revealSection("Monte Carlo check"); return null; });
         Thread.sleep(400);
-        shot(f.getRootPane(), t + "-5-monte-carlo");
+        ScreenshotsTest.assertShows(shot(f.getRootPane(), t + "-5-monte-carlo"), f.getRootPane(),
+                named(f, "mcHistogram:E"), t + ": the Monte Carlo histogram of E");
         AtomicReference<CalibrationWindow> w = new AtomicReference<>();
         onEdt(() -> { f.openCalibration(Path.of("..", "worked-examples", "calibration",
                 "tarrow-vale-dn80-calibration.json"), w::set); return null; });
         waitFor("the calibration", () -> w.get() != null && w.get().result() != null);
         onEdt(() -> { w.get().setBounds(0, 0, 1366, 768); w.get().validate(); return null; });
         Thread.sleep(400);
-        shot(w.get().getRootPane(), t + "-6-calibration");
+        ScreenshotsTest.assertShows(shot(w.get().getRootPane(), t + "-6-calibration"), w.get().getRootPane(),
+                named(w.get(), "errorCurve"), t + ": the error curve");
         onEdt(() -> { w.get().dispose(); return null; });
+        return ScreenshotsTest.meanLuminance(results);
     }
 
-    private static void shot(JRootPane root, String name) throws Exception {
-        ScreenshotsTest.shot(root, name);
+    private static BufferedImage shot(JRootPane root, String name) throws Exception {
+        return ScreenshotsTest.shot(root, name);
     }
 }

@@ -19,7 +19,7 @@ class WorkbenchCompareTest extends GuiTestSupport {
     void theComparisonListsTheChangedInputAndEachOutput() throws Exception {
         BudgetEditor ed = openDemo();
         Path earlier = dir.resolve("earlier.json");
-        assertTrue(onEdt(() -> frame.saveTo(ed, earlier)));
+        assertTrue(await(onEdt(() -> frame.saveTo(ed, earlier))));
         onEdt(() -> ed.edit("Change source", "", b -> b.withInput("I_net", b.input("I_net")
                 .withSource("TVFL balance B2, certificate 2026-02"))));
         onEdt(() -> { frame.compareWith(ed, earlier); return null; });

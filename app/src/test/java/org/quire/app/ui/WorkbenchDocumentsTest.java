@@ -11,7 +11,6 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.concurrent.atomic.AtomicReference;
-import java.util.stream.Stream;
 import javax.swing.JButton;
 import javax.swing.JComboBox;
 import javax.swing.JTable;
@@ -36,7 +35,7 @@ class WorkbenchDocumentsTest extends GuiTestSupport {
         Files.writeString(blocker, "a regular file where a folder should be");
         Path target = blocker.resolve("point-30.json");
         AtomicReference<Boolean> saved = new AtomicReference<>();
-        EventQueue.invokeLater(() -> saved.set(frame.saveTo(ed, target)));
+        EventQueue.invokeLater(() -> frame.saveTo(ed, target).thenAccept(saved::set));
         String message = takeMessageBox();
         assertTrue(message.startsWith("The budget was not saved"), message);
         assertTrue(message.contains("point-30.json") && message.contains("not-a-folder"),
@@ -54,9 +53,9 @@ class WorkbenchDocumentsTest extends GuiTestSupport {
     void savingKeepsThePreviousVersionAsBackupAndWritesFormatVersion2() throws Exception {
         BudgetEditor ed = openDemo();
         Path file = dir.resolve("point-30.json");
-        assertTrue(onEdt(() -> frame.saveTo(ed, file)));
+        assertTrue(await(onEdt(() -> frame.saveTo(ed, file))));
         onEdt(() -> ed.edit("Edit notes", "", b -> b.withNotes("second version")));
-        assertTrue(onEdt(() -> frame.saveTo(ed, file)));
+        assertTrue(await(onEdt(() -> frame.saveTo(ed, file))));
         assertTrue(Files.readString(file).contains("\"formatVersion\": 2"), "the file is of format version 2");
         assertEquals("second version", DocumentStore.open(file).budget().notes());
         assertTrue(Files.exists(DocumentStore.backupOf(file)), "NAME.bak is kept");
@@ -112,16 +111,14 @@ class WorkbenchDocumentsTest extends GuiTestSupport {
     void aChangedBudgetIsKeptForRecoveryAndOfferedAfterARestart() throws Exception {
         Path file = dir.resolve("kept.json");
         BudgetEditor demo = openDemo();
-        assertTrue(onEdt(() -> frame.saveTo(demo, file)));
+        assertTrue(await(onEdt(() -> frame.saveTo(demo, file))));
         onEdt(() -> { frame.forceClose(demo); return null; });
         node.putInt("autosaveMinutes", 1);
         WorkbenchFrame first = newFrameOnSamePreferences();
-        BudgetEditor ed = onEdt(() -> first.open(file).orElseThrow());
+        BudgetEditor ed = await(onEdt(() -> first.open(file))).orElseThrow();
         onEdt(() -> ed.edit("Edit notes", "", b -> b.withNotes("work not saved when the power went")));
         assertEquals(1, (int) onEdt(() -> first.recovery().flush()), "one copy written");
-        try (Stream<Path> s = Files.list(recoveryDir)) {
-            assertEquals(1, s.count(), "the copy is in the recovery folder");
-        }
+        assertEquals(1, recoveryCopies(), "the copy is in the recovery folder");
         onEdt(() -> { first.dispose(); return null; });
 
         WorkbenchFrame second = newFrameOnSamePreferences();
@@ -138,10 +135,8 @@ class WorkbenchDocumentsTest extends GuiTestSupport {
             assertEquals("work not saved when the power went", restored.document().budget().notes());
             assertEquals(file.toAbsolutePath(), restored.document().file(), "it belongs to its file again");
             assertTrue(restored.document().isDirty(), "and is marked as changed");
-            assertTrue(onEdt(() -> second.saveTo(restored, file)));
-            try (Stream<Path> s = Files.list(recoveryDir)) {
-                assertEquals(0, s.count(), "saving removes the copy");
-            }
+            assertTrue(await(onEdt(() -> second.saveTo(restored, file))));
+            assertEquals(0, recoveryCopies(), "saving removes the copy");
             assertEquals("work not saved when the power went", DocumentStore.open(file).budget().notes());
         } finally {
             onEdt(() -> {

@@ -40,7 +40,7 @@ class WorkbenchFilesTest extends GuiTestSupport {
         assertEquals(ed.document().content(), DocumentStore.open(file), "and the document's details and history");
         onEdt(() -> { frame.forceClose(ed); return null; });
         assertTrue(frame.editors().isEmpty());
-        BudgetEditor again = onEdt(() -> frame.open(file).orElseThrow());
+        BudgetEditor again = await(onEdt(() -> frame.open(file))).orElseThrow();
         assertEquals(edited, again.document().budget());
         assertEquals(file.toAbsolutePath(), again.document().file());
         waitForCurrentResult(again);
@@ -51,11 +51,7 @@ class WorkbenchFilesTest extends GuiTestSupport {
         Path file = dir.resolve("review.json");
         BudgetEditor demo = openDemo();
         onEdt(() -> { demo.document().saveTo(file); frame.forceClose(demo); return null; });
-        BudgetEditor ed = onEdt(() -> {
-            BudgetEditor e = frame.open(file).orElseThrow();
-            e.document().setReadOnly(true);
-            return e;
-        });
+        BudgetEditor ed = await(onEdt(() -> frame.open(file, true))).orElseThrow();
         Budget before = ed.document().budget();
         assertTrue(onEdt(() -> WorkbenchEditingTest.find(ed, "reviewBanner").isShowing()), "banner visible");
         assertFalse(onEdt(() -> ed.inputsTable().isCellEditable(0, 3)), "table cells are not editable");

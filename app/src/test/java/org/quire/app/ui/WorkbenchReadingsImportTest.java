@@ -25,7 +25,7 @@ class WorkbenchReadingsImportTest extends GuiTestSupport {
         String none = takeMessageBox();
         assertTrue(none.contains("Select the input"), none);
         onEdt(() -> { ed.selectInput("V_ind"); return null; });
-        assertTrue(onEdt(() -> frame.importReadings(csv)));
+        assertTrue(await(onEdt(() -> frame.importReadings(csv))));
         TypeA a = (TypeA) ed.document().budget().input("V_ind").evaluation();
         assertArrayEquals(new double[] {1002.21, 1002.47, 1002.30, 1002.41, 1002.36}, a.readings(), 0);
         // mean of the five readings, by hand: 5011.75 / 5

@@ -36,6 +36,33 @@ class WorkbenchReportTest extends GuiTestSupport {
     }
 
     @Test
+    void anExportedReportCarriesTheMonteCarloResultsOnceTheyExist() throws Exception {
+        BudgetEditor ed = openDemo();
+        Path before = dir.resolve("before.html");
+        onEdt(() -> { frame.exportReport(ed, before); return null; });
+        waitFor("the report", () -> frame.statusText().equals("Report written to " + before));
+        String none = Files.readString(before);
+        assertTrue(none.contains("was not run for this report"), "no Monte Carlo results before a run");
+        onEdt(() -> ed.edit("Fewer trials", "", b -> b.withSettings(b.settings().withTrials(200_000))));
+        waitFor("the results of the changed budget", () -> ed.latest() != null && ed.latest().result() != null
+                && ed.latest().budget().equals(ed.document().budget()));
+        onEdt(() -> { ed.runMonteCarlo(); return null; });
+        waitFor("the verdict of E", () -> WorkbenchEditingTest.find(ed, "mcVerdict:E") != null);
+        String label = onEdt(() -> ((javax.swing.JLabel) WorkbenchEditingTest.find(ed, "mcVerdict:E")).getText());
+        assertFalse(label.contains("d_low") || label.contains("d_high"), "the reason's symbols are typeset: " + label);
+        assertTrue(label.contains("<sub>low</sub>"), label);
+        Path after = dir.resolve("after.html");
+        onEdt(() -> { frame.exportReport(ed, after); return null; });
+        waitFor("the report", () -> frame.statusText().equals("Report written to " + after));
+        String html = Files.readString(after);
+        assertFalse(html.contains("was not run for this report"), "the Monte Carlo results of the run");
+        // JCGM 101:2008 7.9 / 8.2: the run's trials, its coverage intervals and the validation of the GUM result
+        assertTrue(html.contains("200\u202f000 trials"), "the number of trials of the run");
+        assertTrue(html.contains("Validation of the GUM result"), "the comparison table");
+        assertFalse(html.contains("d_low =") || html.contains("d_high ="), "no raw symbol names in the reasons");
+    }
+
+    @Test
     void aReportThatCannotBeWrittenIsReportedWithItsPlace() throws Exception {
         BudgetEditor ed = openDemo();
         Path blocker = dir.resolve("not-a-folder");

@@ -29,13 +29,9 @@ class WorkbenchReviewTest extends GuiTestSupport {
     /** Saves the demo budget to a file and opens that file for review. */
     private BudgetEditor openForReview(Path file) throws Exception {
         BudgetEditor demo = openDemo();
-        assertTrue(onEdt(() -> frame.saveTo(demo, file)));
+        assertTrue(await(onEdt(() -> frame.saveTo(demo, file))));
         onEdt(() -> { frame.forceClose(demo); return null; });
-        BudgetEditor ed = onEdt(() -> {
-            BudgetEditor e = frame.open(file).orElseThrow();
-            e.document().setReadOnly(true);
-            return e;
-        });
+        BudgetEditor ed = await(onEdt(() -> frame.open(file, true))).orElseThrow();
         waitForCurrentResult(ed);
         JTable checklist = onEdt(() -> named(ed, "checklist"));
         waitFor("the automatic checklist", () -> checklist.getRowCount() > 0);
@@ -114,5 +110,47 @@ class WorkbenchReviewTest extends GuiTestSupport {
         assertTrue(back.comment().contains("sent back by Morwenna Hale")
                 && back.comment().contains("state the balance certificate")
                 && back.comment().contains("Findings: sources (balance certificate number missing)"), back.comment());
+    }
+
+    @Test
+    void theWorkbenchFollowsTheEnginesRulesForAnApprovedDocumentAndForTheAuthor() throws Exception {
+        // the rules are the engine's (ReviewDecisions): the command line and the workbench refuse alike
+        Path file = dir.resolve("point-32.json");
+        BudgetEditor ed = openForReview(file);
+        String author = ed.document().content().author();
+        onEdt(() -> {
+            markAll(named(ed, "checklist"), Mark.AGREED);
+            ((JTextField) named(ed, "assessor")).setText(author.toUpperCase(java.util.Locale.ROOT));
+            ((JButton) named(ed, "recordDecision")).doClick();
+            return null;
+        });
+        String refusal = onEdt(() -> ((JLabel) named(ed, "decisionOutcome")).getText());
+        assertTrue(!author.isBlank() && refusal.contains("is the author of") && refusal.contains("separation of duties"),
+                author + ": " + refusal);
+        assertEquals(DocumentStatus.DRAFT, DocumentStore.open(file).status(), "nothing recorded");
+        onEdt(() -> { frame.forceClose(ed); return null; });
+
+        // approved elsewhere, then opened for review and sent back: refused, where the workbench once sent an
+        // approved document back to draft
+        BudgetDocument d = DocumentStore.open(file);
+        DocumentStore.save(org.quire.engine.document.ReviewDecisions.record(d, d.contentHash(),
+                org.quire.engine.document.Verdict.ENDORSED, "Morwenna Hale", java.time.Instant.now(), "endorsed"), file);
+        byte[] approved = Files.readAllBytes(file);
+        BudgetEditor again = await(onEdt(() -> frame.open(file, true))).orElseThrow();
+        waitForCurrentResult(again);
+        JTable checklist = onEdt(() -> named(again, "checklist"));
+        waitFor("the automatic checklist", () -> checklist.getRowCount() > 0);
+        onEdt(() -> {
+            markAll(checklist, Mark.AGREED);
+            ((JRadioButton) named(again, "sendBack")).setSelected(true);
+            ((JTextField) named(again, "reason")).setText("second thoughts");
+            ((JTextField) named(again, "assessor")).setText("Idris Fenwick");
+            ((JButton) named(again, "recordDecision")).doClick();
+            return null;
+        });
+        String second = onEdt(() -> ((JLabel) named(again, "decisionOutcome")).getText());
+        assertTrue(second.contains("is approved already"), second);
+        assertEquals(DocumentStatus.APPROVED, again.document().content().status());
+        assertTrue(java.util.Arrays.equals(approved, Files.readAllBytes(file)), "the approved file is unchanged");
     }
 }

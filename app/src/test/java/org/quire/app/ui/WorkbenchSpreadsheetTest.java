@@ -123,7 +123,7 @@ class WorkbenchSpreadsheetTest extends GuiTestSupport {
         String[] lines = copied.split("\n");
         assertEquals(3, lines.length, copied);
         assertTrue(lines[0].startsWith("Input\tEvaluation\tDistribution"), lines[0]);
-        assertTrue(lines[0].endsWith("Share of u_c\u00b2(y) / %"), lines[0]);
+        assertTrue(lines[0].endsWith("Share of combined variance / %"), lines[0]);
         String[] first = lines[1].split("\t");
         // the share as a percentage with one decimal, as the table shows it (not a fraction such as 0.62)
         assertTrue(first[first.length - 1].matches("\\d{1,3}\\.\\d"), lines[1]);

@@ -82,7 +82,7 @@ class WorkbenchTemplatesTest extends GuiTestSupport {
                 "Test Engineer", Instant.parse("2026-12-01T10:00:00Z"));
         Path file = dir.resolve("tank-run.json");
         DocumentStore.save(made, file);
-        BudgetEditor ed = onEdt(() -> frame.open(file).orElseThrow());
+        BudgetEditor ed = await(onEdt(() -> frame.open(file))).orElseThrow();
         String reason = "locked by template " + shipped.id() + " v" + shipped.version();
         onEdt(() -> { ed.selectInput("d_drain"); return null; });
         onEdt(() -> {
@@ -286,13 +286,13 @@ class WorkbenchTemplatesTest extends GuiTestSupport {
         waitFor("the new budget", () -> frame.editors().size() == 1);
         BudgetEditor first = frame.editors().get(0);
         Path file = personal.resolve("tank-run.json");
-        assertTrue(onEdt(() -> frame.saveTo(first, file)));
+        assertTrue(await(onEdt(() -> frame.saveTo(first, file))));
         onEdt(() -> { frame.forceClose(first); return null; });
         Budget v2 = base.budget().withInput("h_neck", base.budget().input("h_neck")
                 .withSource("TVFL neck scale, recalibrated 2026"));
         DocumentStore.save(template(2, v2), personal.resolve("tvfl-tank-v2.json"));
 
-        BudgetEditor ed = onEdt(() -> frame.open(file).orElseThrow());
+        BudgetEditor ed = await(onEdt(() -> frame.open(file))).orElseThrow();
         waitFor("the notice of template version 2", ed::noticeShown);
         EventQueue.invokeLater(() -> ed.noticeAction().doClick());
         TemplateUpdateDialog upd = waitForWindow("templateUpdate", TemplateUpdateDialog.class);

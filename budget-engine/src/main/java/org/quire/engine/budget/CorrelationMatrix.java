@@ -3,6 +3,7 @@ package org.quire.engine.budget;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.HashMap;
+import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
@@ -33,13 +34,51 @@ public final class CorrelationMatrix {
      */
     public static final double SEMIDEFINITE_TOLERANCE = 1e-9;
     private final List<String> names;
+    /** the quantities correlated with at least one other, ascending; the others form an identity block */
+    private final int[] members;
+    /** per quantity, its position in {@link #members}, or -1 */
+    private final int[] slot;
+    /** the coefficients among the members (memory and checks grow with their number, not with all quantities) */
     private final double[][] r;
     private final boolean identity;
 
-    private CorrelationMatrix(List<String> names, double[][] r, boolean identity) {
+    /** @param m a checked square matrix (not copied) */
+    private CorrelationMatrix(List<String> names, double[][] m) {
+        int n = m.length;
+        int[] slot = new int[n];
+        int count = 0;
+        for (int i = 0; i < n; i++) {
+            boolean any = false;
+            for (int j = 0; j < n && !any; j++) {
+                any = j != i && m[i][j] != 0;
+            }
+            slot[i] = any ? count++ : -1;
+        }
+        int[] members = new int[count];
+        for (int i = 0; i < n; i++) {
+            if (slot[i] >= 0) {
+                members[slot[i]] = i;
+            }
+        }
+        double[][] sub = new double[count][count];
+        for (int a = 0; a < count; a++) {
+            for (int b = 0; b < count; b++) {
+                sub[a][b] = m[members[a]][members[b]];
+            }
+        }
         this.names = names;
-        this.r = r;
-        this.identity = identity;
+        this.members = members;
+        this.slot = slot;
+        this.r = sub;
+        this.identity = count == 0;
+    }
+
+    private CorrelationMatrix(List<String> names, int[] members, int[] slot, double[][] sub) {
+        this.names = names;
+        this.members = members;
+        this.slot = slot;
+        this.r = sub;
+        this.identity = members.length == 0;
     }
 
     /**
@@ -56,11 +95,8 @@ public final class CorrelationMatrix {
             index.put(inputs.get(i).name(), i);
             names.add(inputs.get(i).name());
         }
-        double[][] r = new double[n][n];
-        for (int i = 0; i < n; i++) {
-            r[i][i] = 1;
-        }
-        boolean[][] set = new boolean[n][n];
+        // the coefficients by pair (i < j), then the members: the inputs in at least one pair
+        Map<Long, Double> pairs = new LinkedHashMap<>();
         for (Correlation c : correlations) {
             Integer a = index.get(c.first());
             Integer b = index.get(c.second());
@@ -70,7 +106,7 @@ public final class CorrelationMatrix {
                         + "': there is no input named '" + missing + "'"
                         + org.quire.engine.model.Suggest.hint(missing, names));
             }
-            if (set[a][b]) {
+            if (pairs.containsKey(pair(a, b))) {
                 throw new IllegalArgumentException("the correlation between '" + c.first() + "' and '" + c.second()
                         + "' is given twice");
             }
@@ -80,15 +116,50 @@ public final class CorrelationMatrix {
                 throw new IllegalArgumentException("the correlation between '" + c.first() + "' and '"
                         + c.second() + "' involves an exactly known constant, which cannot be correlated");
             }
-            r[a][b] = v;
-            r[b][a] = v;
-            set[a][b] = true;
-            set[b][a] = true;
+            pairs.put(pair(a, b), v);
         }
-        boolean fitPairs = addFitCorrelations(inputs, r, set);
-        CorrelationMatrix m = new CorrelationMatrix(List.copyOf(names), r, correlations.isEmpty() && !fitPairs);
+        addFitCorrelations(inputs, pairs);
+        int[] slot = new int[n];
+        Arrays.fill(slot, -1);
+        boolean[] in = new boolean[n];
+        for (Map.Entry<Long, Double> e : pairs.entrySet()) {
+            if (e.getValue() != 0) {
+                in[(int) (e.getKey() >>> 32)] = true;
+                in[(int) (long) e.getKey()] = true;
+            }
+        }
+        int count = 0;
+        for (int i = 0; i < n; i++) {
+            if (in[i]) {
+                slot[i] = count++;
+            }
+        }
+        int[] members = new int[count];
+        for (int i = 0; i < n; i++) {
+            if (slot[i] >= 0) {
+                members[slot[i]] = i;
+            }
+        }
+        double[][] sub = new double[count][count];
+        for (int a = 0; a < count; a++) {
+            sub[a][a] = 1;
+        }
+        for (Map.Entry<Long, Double> e : pairs.entrySet()) {
+            int i = slot[(int) (e.getKey() >>> 32)];
+            int j = slot[(int) (long) e.getKey()];
+            if (i >= 0 && j >= 0) {
+                sub[i][j] = e.getValue();
+                sub[j][i] = e.getValue();
+            }
+        }
+        CorrelationMatrix m = new CorrelationMatrix(List.copyOf(names), members, slot, sub);
         m.checkPositiveSemiDefinite();
         return m;
+    }
+
+    /** @return the key of the pair {i, j}: the smaller index in the high half */
+    private static long pair(int i, int j) {
+        return ((long) Math.min(i, j) << 32) | Math.max(i, j);
     }
 
     /**
@@ -99,11 +170,9 @@ public final class CorrelationMatrix {
         if (size < 1) {
             throw new IllegalArgumentException("size of a correlation matrix must be at least 1, not " + size);
         }
-        double[][] m = new double[size][size];
-        for (int i = 0; i < size; i++) {
-            m[i][i] = 1.0;
-        }
-        return new CorrelationMatrix(numbered(size), m, true);
+        int[] slot = new int[size];
+        Arrays.fill(slot, -1);
+        return new CorrelationMatrix(numbered(size), new int[0], slot, new double[0][0]);
     }
 
     /**
@@ -139,7 +208,7 @@ public final class CorrelationMatrix {
      *     1, or the result is not positive semi-definite
      */
     public CorrelationMatrix withCoefficient(int i, int j, double coefficient) {
-        int n = r.length;
+        int n = slot.length;
         if (i < 0 || i >= n || j < 0 || j >= n) {
             throw new IllegalArgumentException(String.format(Locale.ROOT, "%s index %d is outside 0..%d",
                     i < 0 || i >= n ? "row" : "column", i < 0 || i >= n ? i : j, n - 1));
@@ -160,7 +229,6 @@ public final class CorrelationMatrix {
 
     private static CorrelationMatrix checked(List<String> names, double[][] m) {
         int n = m.length;
-        boolean identity = true;
         for (int i = 0; i < n; i++) {
             if (m[i][i] != 1.0) {
                 throw new IllegalArgumentException(String.format(Locale.ROOT, "correlation matrix entry (%d, %d) "
@@ -177,10 +245,9 @@ public final class CorrelationMatrix {
                             + "symmetric: entry (%d, %d) is %s but entry (%d, %d) is %s", i + 1, j + 1, v, j + 1,
                             i + 1, m[j][i]));
                 }
-                identity &= i == j || v == 0;
             }
         }
-        CorrelationMatrix c = new CorrelationMatrix(names, m, identity);
+        CorrelationMatrix c = new CorrelationMatrix(names, m);
         c.checkPositiveSemiDefinite();
         return c;
     }
@@ -190,19 +257,19 @@ public final class CorrelationMatrix {
      * y2) enters eq. H.16). A stated coefficient for such a pair is refused: the fit fixes it. Two inputs that are
      * the same parameter of the same fit are refused: they are one quantity.
      *
-     * @return whether any pair was joined
      */
-    private static boolean addFitCorrelations(List<InputQuantity> inputs, double[][] r, boolean[][] set) {
-        boolean any = false;
+    private static void addFitCorrelations(List<InputQuantity> inputs, Map<Long, Double> pairs) {
+        List<Integer> fits = new ArrayList<>();
         for (int a = 0; a < inputs.size(); a++) {
-            if (!(inputs.get(a).evaluation() instanceof FitParameter)) {
-                continue;
+            if (inputs.get(a).evaluation() instanceof FitParameter) {
+                fits.add(a);
             }
+        }
+        for (int x = 0; x < fits.size(); x++) {
+            int a = fits.get(x);
             FitParameter pa = (FitParameter) inputs.get(a).evaluation();
-            for (int b = a + 1; b < inputs.size(); b++) {
-                if (!(inputs.get(b).evaluation() instanceof FitParameter)) {
-                    continue;
-                }
+            for (int y = x + 1; y < fits.size(); y++) {
+                int b = fits.get(y);
                 FitParameter pb = (FitParameter) inputs.get(b).evaluation();
                 if (!pa.line().equals(pb.line())) {
                     continue;
@@ -213,19 +280,14 @@ public final class CorrelationMatrix {
                             + " of data set '" + pa.dataSet() + "'; use one input for one quantity");
                 }
                 double v = pa.correlationWith(pb);
-                if (set[a][b]) {
+                if (pairs.containsKey(pair(a, b))) {
                     throw new IllegalArgumentException(String.format(Locale.ROOT, "the correlation between %s is "
                             + "fixed by the fit of data set '%s' (r = %.6f); remove the stated correlation", pair,
                             pa.dataSet(), v));
                 }
-                r[a][b] = v;
-                r[b][a] = v;
-                set[a][b] = true;
-                set[b][a] = true;
-                any = true;
+                pairs.put(pair(a, b), v);
             }
         }
-        return any;
     }
 
     /**
@@ -267,6 +329,7 @@ public final class CorrelationMatrix {
         if (identity || names.size() < 2) {
             return;
         }
+        // the quantities outside the members form an identity block, whose eigenvalues are all 1
         EigenDecomposition e = new EigenDecomposition(new Array2DRowRealMatrix(r, false));
         double[] ev = e.getRealEigenvalues();
         int worst = 0;
@@ -280,7 +343,7 @@ public final class CorrelationMatrix {
         }
         RealVector v = e.getEigenvector(worst);
         List<Integer> involved = new ArrayList<>();
-        for (int i = 0; i < names.size(); i++) {
+        for (int i = 0; i < members.length; i++) {
             if (Math.abs(v.getEntry(i)) > 0.15) {
                 involved.add(i);
             }
@@ -291,7 +354,8 @@ public final class CorrelationMatrix {
                 int i = involved.get(a);
                 int j = involved.get(b);
                 if (r[i][j] != 0) {
-                    pairs.add(String.format(Locale.ROOT, "r(%s, %s) = %s", names.get(i), names.get(j), r[i][j]));
+                    pairs.add(String.format(Locale.ROOT, "r(%s, %s) = %s", names.get(members[i]),
+                            names.get(members[j]), r[i][j]));
                 }
             }
         }
@@ -321,7 +385,7 @@ public final class CorrelationMatrix {
         double[][] sub = new double[k][k];
         for (int a = 0; a < k; a++) {
             for (int b = 0; b < k; b++) {
-                sub[a][b] = r[members[a]][members[b]];
+                sub[a][b] = get(members[a], members[b]);
             }
         }
         double[][] l = choleskyOrNull(sub);
@@ -396,7 +460,7 @@ public final class CorrelationMatrix {
 
     /** @return the number of quantities */
     public int size() {
-        return r.length;
+        return slot.length;
     }
 
     /** @return the input names in matrix order */
@@ -406,45 +470,58 @@ public final class CorrelationMatrix {
 
     /** @return r(x_i, x_j) */
     public double get(int i, int j) {
-        return r[i][j];
+        if (i == j) {
+            if (i < 0 || i >= slot.length) {
+                throw new ArrayIndexOutOfBoundsException(i);
+            }
+            return 1.0;
+        }
+        int a = slot[i];
+        int b = slot[j];
+        return a < 0 || b < 0 ? 0.0 : r[a][b];
+    }
+
+    /**
+     * @return the quantities correlated with at least one other, ascending (a copy): every coefficient r(i, j),
+     *     i != j, outside these pairs is zero
+     */
+    public int[] correlated() {
+        return members.clone();
     }
 
     /** @return a copy of the matrix */
     public double[][] toArray() {
-        double[][] c = new double[r.length][];
-        for (int i = 0; i < r.length; i++) {
-            c[i] = r[i].clone();
+        int n = slot.length;
+        double[][] c = new double[n][n];
+        for (int i = 0; i < n; i++) {
+            c[i][i] = 1.0;
+        }
+        for (int a = 0; a < members.length; a++) {
+            for (int b = 0; b < members.length; b++) {
+                c[members[a]][members[b]] = r[a][b];
+            }
         }
         return c;
     }
 
     @Override
     public boolean equals(Object o) {
-        return o instanceof CorrelationMatrix c && Arrays.deepEquals(r, c.r);
+        return o instanceof CorrelationMatrix c && slot.length == c.slot.length && Arrays.equals(members, c.members)
+                && Arrays.deepEquals(r, c.r);
     }
 
     @Override
     public int hashCode() {
-        return Arrays.deepHashCode(r);
+        return 31 * (31 * slot.length + Arrays.hashCode(members)) + Arrays.deepHashCode(r);
     }
 
     @Override
     public String toString() {
-        return "CorrelationMatrix" + Arrays.deepToString(r);
+        return "CorrelationMatrix" + Arrays.deepToString(toArray());
     }
 
     /** @return whether no two inputs are correlated */
     public boolean isIdentity() {
-        if (identity) {
-            return true; // no coefficient stated and no fitted line: nothing to scan
-        }
-        for (int i = 0; i < r.length; i++) {
-            for (int j = i + 1; j < r.length; j++) {
-                if (r[i][j] != 0) {
-                    return false;
-                }
-            }
-        }
-        return true;
+        return identity;
     }
 }

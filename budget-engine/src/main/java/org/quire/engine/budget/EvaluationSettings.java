@@ -62,10 +62,17 @@ public final class EvaluationSettings {
         return new EvaluationSettings(p, Double.NaN, higherOrder, dofRounding, trials, seed, significantDigits, adaptive);
     }
 
-    /** @param k a fixed coverage factor &gt; 0 used instead of t_p(nu_eff) */
+    /**
+     * The largest coverage factor a budget may fix: above the largest value of JCGM 100:2008 Table G.2 (k = 235.80
+     * for nu = 1, p = 99.73 %), so that no stated k is refused, while a factor that would make U overflow is.
+     */
+    public static final double MAX_COVERAGE_FACTOR = 1000;
+
+    /** @param k a fixed coverage factor in (0, {@link #MAX_COVERAGE_FACTOR}] used instead of t_p(nu_eff) */
     public EvaluationSettings withCoverageFactor(double k) {
-        if (!(k > 0) || Double.isInfinite(k)) {
-            throw new IllegalArgumentException("coverage factor k must be positive and finite, not " + k);
+        if (!(k > 0) || !(k <= MAX_COVERAGE_FACTOR)) {
+            throw new IllegalArgumentException("coverage factor k must be greater than 0 and at most "
+                    + (int) MAX_COVERAGE_FACTOR + ", not " + k);
         }
         return new EvaluationSettings(coverageProbability, k, higherOrder, dofRounding, trials, seed, significantDigits, adaptive);
     }

@@ -497,7 +497,7 @@ public final class CalibrationEvaluator {
             }
             if (p.monteCarlo() != null && !p.monteCarlo().output(0).comparison().validated()) {
                 findings.add(CalibrationMessages.monteCarloNotValidated(phase.label(), p.label(),
-                        p.monteCarlo().output(0).comparison().reason()));
+                        p.monteCarlo().output(0).comparison()));
             }
         }
         return new SeriesResult(phase, points, cov, PointCovariance.correlation(cov),

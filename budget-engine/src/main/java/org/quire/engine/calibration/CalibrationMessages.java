@@ -216,8 +216,21 @@ final class CalibrationMessages {
         return "the flows are in " + from + " but the " + what + " is in " + to + ": " + message;
     }
 
-    static String monteCarloNotValidated(String phase, String label, String reason) {
-        return phase + ": point '" + label + "': " + reason;
+    /**
+     * @return the finding of a point whose GUM result the Monte Carlo method does not validate, in words (a finding
+     *     is read as text everywhere, so it names no symbol)
+     */
+    static String monteCarloNotValidated(String phase, String label,
+            org.quire.engine.montecarlo.GumComparison c) {
+        if (c.firstOrderZero()) {
+            return phase + ": point '" + label + "': " + c.reason();
+        }
+        return phase + ": point '" + label + "': the GUM result is not validated by the Monte Carlo method: the ends "
+                + "of the GUM interval differ from those of the Monte Carlo interval by "
+                + org.quire.engine.gum.Figures.working(c.lowerDifference()) + " (lower) and "
+                + org.quire.engine.gum.Figures.working(c.upperDifference()) + " (upper), more than the numerical "
+                + "tolerance " + org.quire.engine.gum.Figures.working(c.tolerance()) + " allows (JCGM 101:2008 8.2); "
+                + "report the Monte Carlo result";
     }
 
     static String weightedMeanNote(int m) {

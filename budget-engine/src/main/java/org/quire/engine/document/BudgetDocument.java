@@ -155,6 +155,15 @@ public final class BudgetDocument {
      * @throws IllegalArgumentException when {@code who} is blank
      */
     public BudgetDocument moveTo(DocumentStatus target, String who, Instant when, String comment) {
+        return moveTo(target, who, when, comment, null);
+    }
+
+    /**
+     * {@link #moveTo(DocumentStatus, String, Instant, String)} with the entry marked as a review decision
+     * ({@link ReviewDecisions} checks the rules first): an endorsement is the approval; a sending back is the
+     * move to draft and records the hash of the content sent back.
+     */
+    BudgetDocument moveTo(DocumentStatus target, String who, Instant when, String comment, Verdict decision) {
         Objects.requireNonNull(target, "target");
         if (!status.canMoveTo(target)) {
             throw new IllegalStateException("a document that is " + status.label() + " cannot move to "
@@ -162,10 +171,12 @@ public final class BudgetDocument {
                             : String.join(", ", status.next().stream().map(DocumentStatus::label).toList())));
         }
         int rev = status == DocumentStatus.APPROVED && target == DocumentStatus.DRAFT ? revision + 1 : revision;
+        Instant at = when.truncatedTo(ChronoUnit.MILLIS);
         RevisionEntry e = target == DocumentStatus.APPROVED
-                ? new RevisionEntry(rev, target, who, when.truncatedTo(ChronoUnit.MILLIS), comment, contentHash(),
-                        contentJson())
-                : RevisionEntry.of(rev, target, who, when.truncatedTo(ChronoUnit.MILLIS), comment);
+                ? new RevisionEntry(rev, target, who, at, comment, contentHash(), contentJson(), decision)
+                : decision == Verdict.SENT_BACK
+                        ? new RevisionEntry(rev, target, who, at, comment, contentHash(), null, decision)
+                        : new RevisionEntry(rev, target, who, at, comment, "", null, decision);
         return copy(budget, laboratory, deviceUnderTest, author, when, rev, target, results, append(e),
                 templateOrigin, template);
     }

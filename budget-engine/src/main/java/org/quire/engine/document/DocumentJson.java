@@ -37,7 +37,9 @@ import org.quire.engine.io.ResultJson;
  * <li>{@code results}: {@code engineVersion}, {@code computed} (time), {@code gum} (the result object of
  *     {@code quire evaluate --format json}) and optionally {@code monteCarlo} (an object).</li>
  * <li>{@code history}: a list of {@code revision}, {@code status}, {@code by}, {@code at}, {@code comment}, and
- *     for an approval {@code contentHash} and {@code content} (the approved canonical content).</li>
+ *     for an approval {@code contentHash} and {@code content} (the approved canonical content). An entry that
+ *     records a review decision has {@code decision}: {@code endorsed} (on an approval) or {@code sent-back} (on
+ *     a move to draft, with the {@code contentHash} of the content sent back and no {@code content}).</li>
  * <li>{@code templateOrigin}: {@code id}, {@code version}, {@code contentHash} of the template used, and
  *     optionally {@code locked}, the template's locked fields as recorded when the document was made.</li>
  * <li>{@code template}: present when the file is a template: {@code id}, {@code version}, {@code description},
@@ -60,7 +62,7 @@ public final class DocumentJson {
             "modified", "revision", "status");
     private static final Set<String> RESULT_FIELDS = Set.of("engineVersion", "computed", "gum", "monteCarlo");
     private static final Set<String> HISTORY_FIELDS = Set.of("revision", "status", "by", "at", "comment",
-            "contentHash", "content");
+            "contentHash", "content", "decision");
     private static final Set<String> ORIGIN_FIELDS = Set.of("id", "version", "contentHash", "locked");
     private static final Set<String> TEMPLATE_FIELDS = Set.of("id", "version", "description", "parameters",
             "locked", "guidance");
@@ -218,14 +220,28 @@ public final class DocumentJson {
         String comment = h.string("comment", "");
         String hash = h.string("contentHash", "");
         JsonObject content = h.has("content") ? h.get("content").object() : null;
+        Verdict decision = null;
+        if (h.has("decision")) {
+            JsonCursor d = h.get("decision");
+            try {
+                decision = Verdict.ofKey(d.string());
+            } catch (IllegalArgumentException e) {
+                throw new BudgetFormatException(d.path(), e.getMessage());
+            }
+        }
         String field;
         if (st == DocumentStatus.APPROVED) {
-            field = !hash.matches("[0-9a-f]{64}") ? ".contentHash" : content == null ? "" : ".content";
+            field = !hash.matches("[0-9a-f]{64}") ? ".contentHash" : content == null ? "" : decision != null
+                    && decision != Verdict.ENDORSED ? ".decision" : ".content";
+        } else if (decision == Verdict.SENT_BACK && st == DocumentStatus.DRAFT) {
+            field = !hash.matches("[0-9a-f]{64}") ? ".contentHash" : ".content";
+        } else if (decision != null) {
+            field = ".decision";
         } else {
             field = !hash.isEmpty() ? ".contentHash" : ".content";
         }
         try {
-            return new RevisionEntry(rev, st, by, at, comment, hash, content);
+            return new RevisionEntry(rev, st, by, at, comment, hash, content, decision);
         } catch (IllegalArgumentException e) {
             throw new BudgetFormatException(h.path() + field, e.getMessage());
         }
@@ -343,6 +359,11 @@ public final class DocumentJson {
                 }
                 if (e.content() != null) {
                     eb.add("contentHash", e.contentHash()).add("content", e.content());
+                } else if (!e.contentHash().isEmpty()) {
+                    eb.add("contentHash", e.contentHash());
+                }
+                if (e.decision() != null) {
+                    eb.add("decision", e.decision().key());
                 }
                 h.add(eb);
             }

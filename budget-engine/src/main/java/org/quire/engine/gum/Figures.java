@@ -27,7 +27,47 @@ public final class Figures {
      */
     public static final int WORKING_DIGITS = 3;
 
+    /**
+     * Significant digits of an expanded uncertainty as a certificate states it, and as the report states the same
+     * figure for checking: two (JCGM 100:2008 7.2.6; EA-4/02 M:2022 5.4: at most two).
+     */
+    public static final int STATED_DIGITS = 2;
+
     private Figures() {
+    }
+
+    /**
+     * @param expanded an expanded uncertainty U
+     * @return U as a certificate states it: {@link Rounding#uncertainty} to {@link #STATED_DIGITS} significant
+     *     digits, e.g. {@code 0.052}, {@code 0.080}
+     */
+    public static String stated(double expanded) {
+        if (!Double.isFinite(expanded)) {
+            return sig(expanded, STATED_DIGITS);
+        }
+        return minus(Rounding.uncertainty(expanded, STATED_DIGITS).toPlainString());
+    }
+
+    /**
+     * @param value a result, such as an error of indication
+     * @param expanded its expanded uncertainty U
+     * @return the result as a certificate states it: rounded to the last decimal place of {@link #stated(double)}
+     *     (JCGM 100:2008 7.2.6), e.g. {@code 0.397}, {@code −0.002}
+     */
+    public static String statedValue(double value, double expanded) {
+        if (!Double.isFinite(value) || !Double.isFinite(expanded)) {
+            return sig(value, 4);
+        }
+        return minus(Rounding.estimate(value, expanded, STATED_DIGITS).toPlainString());
+    }
+
+    /**
+     * @param k a coverage factor
+     * @return k to three significant digits, the way every report, certificate and screen states it: {@code 2.00},
+     *     {@code 2.16}, {@code 3.31} (JCGM 100:2008 7.2.3 asks for k to be stated; three digits, common practice)
+     */
+    public static String coverageFactor(double k) {
+        return sig(k, 3);
     }
 
     /** @return a working figure to {@link #WORKING_DIGITS} significant digits, e.g. {@code 0.00289}, {@code 2.89 × 10⁻⁵} */

@@ -108,19 +108,20 @@ public final class GumEvaluator {
                 }
             }
         }
+        // only the inputs correlated with another enter the off-diagonal terms, so the cost stays linear in the
+        // number of inputs (quadratic in the number of correlated ones only)
+        int[] members = r.correlated();
         double[][] cov = new double[m][m];
         for (int k = 0; k < m; k++) {
             for (int l = 0; l < m; l++) {
                 double s = 0;
                 for (int i : active) {
-                    if (!correlated) {
-                        // r is the identity: only the terms i = j remain, so the cost is linear in the inputs
-                        s += c[k][i] * c[l][i] * u[i] * u[i];
-                        continue;
-                    }
-                    for (int j : active) {
+                    s += c[k][i] * c[l][i] * u[i] * u[i];
+                }
+                for (int i : members) {
+                    for (int j : members) {
                         double rij = r.get(i, j);
-                        if (rij != 0) {
+                        if (i != j && rij != 0) {
                             s += c[k][i] * c[l][j] * u[i] * u[j] * rij;
                         }
                     }
@@ -149,11 +150,11 @@ public final class GumEvaluator {
             double corrVar = 0;
             List<CorrelationTerm> terms = new ArrayList<>();
             if (correlated) {
-                for (int ia = 0; ia < active.length; ia++) {
-                    for (int ja = ia + 1; ja < active.length; ja++) {
-                        int i = active[ia];
-                        int j = active[ja];
-                        if (r.get(i, j) != 0) {
+                for (int ia = 0; ia < members.length; ia++) {
+                    for (int ja = ia + 1; ja < members.length; ja++) {
+                        int i = members[ia];
+                        int j = members[ja];
+                        if (r.get(i, j) != 0 && u[i] > 0 && u[j] > 0) {
                             double t = 2 * c[k][i] * c[k][j] * u[i] * u[j] * r.get(i, j);
                             corrVar += t;
                             if (t != 0) {
@@ -182,7 +183,7 @@ public final class GumEvaluator {
             double nuEff = wsDenominator > 0 ? 1 / wsDenominator : Double.POSITIVE_INFINITY;
             if (correlated && !terms.isEmpty() && !Double.isInfinite(nuEff)) {
                 warnings.add("inputs are correlated; the Welch–Satterthwaite formula assumes independent inputs, "
-                        + "so nu_eff is approximate");
+                        + "so the effective degrees of freedom are approximate");
             }
             boolean anySensitive = false;
             for (int i : active) {
@@ -191,9 +192,10 @@ public final class GumEvaluator {
             if (uc == 0 && active.length > 0 && !anySensitive) {
                 warnings.add(firstOrderZero(name, higher));
             } else if (uc == 0 && active.length > 0) {
-                warnings.add("u_c(" + name + ") is zero: the correlated contributions cancel exactly");
+                warnings.add("the combined standard uncertainty of " + name + " is zero: the correlated contributions cancel "
+                        + "exactly");
             } else if (uc == 0) {
-                warnings.add("u_c(" + name + ") is zero: no input has an uncertainty");
+                warnings.add("the combined standard uncertainty of " + name + " is zero: no input has an uncertainty");
             }
             double dofUsed = nuEff;
             if (settings.dofRounding() == EvaluationSettings.DofRounding.TRUNCATE && !Double.isInfinite(nuEff)) {
@@ -321,7 +323,8 @@ public final class GumEvaluator {
      * coefficient vanishes at the estimates (a minimum or maximum of the model, as Y = X^2 at x = 0).
      */
     static String firstOrderZero(String output, boolean higherIncluded) {
-        return "u_c(" + output + ") is zero: the first-order law of propagation gives zero because every sensitivity "
+        return "the combined standard uncertainty of " + output + " is zero: the first-order law of propagation gives "
+                + "zero because every sensitivity "
                 + "coefficient vanishes at the estimates, although the output does vary"
                 + (higherIncluded ? "; the higher-order terms are zero too" : "; include the higher-order terms "
                         + "(JCGM 100:2008 5.1.2 note)") + " or use the Monte Carlo method (JCGM 101:2008), which "
@@ -330,8 +333,9 @@ public final class GumEvaluator {
 
     /** @return true when a pair of correlated inputs has an input whose distribution is not normal */
     private static boolean correlatedNonNormal(List<InputQuantity> inputs, CorrelationMatrix r) {
-        for (int i = 0; i < inputs.size(); i++) {
-            for (int j = 0; j < inputs.size(); j++) {
+        int[] members = r.correlated();
+        for (int i : members) {
+            for (int j : members) {
                 if (i != j && r.get(i, j) != 0 && !(inputs.get(i).evaluation().distribution()
                         instanceof org.quire.engine.budget.Distribution.Normal)) {
                     return true;

@@ -23,6 +23,8 @@ public final class CompiledModel implements BlockEvaluator {
     private final List<Node> constants;
     private final List<ModelProblem> warnings;
     private final List<Formula.Line> lines;
+    /** the trees as numbers for {@link #live}; made on first use */
+    private volatile Walk walk;
 
     CompiledModel(List<String> inputs, List<String> quantities, List<String> equationTexts,
             List<String> functionTexts, Node[] roots, int[] order, int[] outputIndex, List<String> outputs,
@@ -125,40 +127,185 @@ public final class CompiledModel implements BlockEvaluator {
         return y;
     }
 
-    /** Free parameters per pass of {@link #sensitivities}. */
-    static final int SENSITIVITY_CHUNK = 32;
-
     /**
-     * The first-order partial derivatives of every output, by forward-mode automatic differentiation in passes
-     * of at most {@value #SENSITIVITY_CHUNK} free inputs each. In first order the derivative with respect to
-     * one input is carried through the model independently of the others (each operation combines at most two
-     * terms per component), so the passes give the same numbers as one pass over all inputs, while the cost stays
-     * linear in the number of inputs for a model of a given size: a derivative structure of N free parameters
-     * would need a table of all N at once, whose construction grows faster than N^2.
+     * The first-order partial derivatives of every output, by reverse-mode automatic differentiation: one pass
+     * computes every node's value, then one backward pass per output carries the adjoint df/d(node) from the
+     * output down to the inputs by the chain rule, each node passing it on to its operands multiplied by the
+     * operation's own partial derivatives. The cost is linear in the size of the model for each output, however
+     * many inputs there are. The partial derivatives of the library's functions are taken from their derivative
+     * structures with one free parameter per argument.
      *
-     * <p>References: JCGM 100:2008 5.1.3, eq. (10) (sensitivity coefficients c_i = df/dx_i); Commons Math
-     * {@code DerivativeStructure}.
+     * <p>References: JCGM 100:2008 5.1.3, eq. (10) (sensitivity coefficients c_i = df/dx_i); A. Griewank,
+     * A. Walther, Evaluating Derivatives, 2nd ed., SIAM 2008, ch. 3 (the reverse mode).
      *
      * @param x input values (checked first with {@link #evaluate(double[])} by the caller)
-     * @param active indices of the inputs that are free variables; the others are held constant
+     * @param active indices of the inputs whose coefficients are wanted
      * @return {@code c[k][a]}, the partial derivative of output k with respect to input {@code active[a]}
      */
     public double[][] sensitivities(double[] x, int[] active) {
         checkLength(x.length);
+        Walk w = walk();
+        Node[] nodes = w.nodes;
+        double[] val = new double[nodeCount];
+        for (int j : order) {
+            for (int id : w.postorder[j]) {
+                val[id] = localValue(nodes[id], x, val);
+            }
+        }
         double[][] c = new double[outputIndex.length][active.length];
-        for (int from = 0; from < active.length; from += SENSITIVITY_CHUNK) {
-            int[] chunk = java.util.Arrays.copyOfRange(active, from, Math.min(active.length, from + SENSITIVITY_CHUNK));
-            DerivativeStructure[] y = derivatives(x, chunk, 1);
-            int[] orders = new int[chunk.length];
-            for (int a = 0; a < chunk.length; a++) {
-                orders[a] = 1;
-                for (int k = 0; k < y.length; k++) {
-                    c[k][from + a] = y[k].getPartialDerivative(orders);
+        double[] adj = new double[nodeCount];
+        double[] adjX = new double[x.length];
+        for (int k = 0; k < outputIndex.length; k++) {
+            java.util.Arrays.fill(adj, 0.0);
+            java.util.Arrays.fill(adjX, 0.0);
+            adj[roots[outputIndex[k]].id] = 1.0;
+            for (int o = order.length - 1; o >= 0; o--) {
+                int[] post = w.postorder[order[o]];
+                for (int p = post.length - 1; p >= 0; p--) {
+                    int id = post[p];
+                    double g = adj[id];
+                    if (g != 0) {
+                        propagate(nodes[id], g, val, adj, adjX);
+                    }
                 }
-                orders[a] = 0;
+            }
+            for (int a = 0; a < active.length; a++) {
+                c[k][a] = adjX[active[a]];
             }
         }
         return c;
+    }
+
+    /** The value of one node from its operands' values (no domain checks: the caller has evaluated the model). */
+    private double localValue(Node n, double[] x, double[] val) {
+        if (n instanceof Node.Const k) {
+            return k.value;
+        } else if (n instanceof Node.Input in) {
+            return x[in.index];
+        } else if (n instanceof Node.Quantity q) {
+            return val[roots[q.index].id];
+        } else if (n instanceof Node.Neg g) {
+            return -val[g.a.id];
+        } else if (n instanceof Node.Arith ar) {
+            double u = val[ar.a.id];
+            double v = val[ar.c.id];
+            switch (ar.op) {
+                case '+': return u + v;
+                case '-': return u - v;
+                case '*': return u * v;
+                default: return u / v;
+            }
+        } else if (n instanceof Node.PowInt pw) {
+            return Node.PowInt.pow(val[pw.a.id], pw.k);
+        } else if (n instanceof Node.Pow pw) {
+            return org.apache.commons.math3.util.FastMath.pow(val[pw.a.id], val[pw.c.id]);
+        } else if (n instanceof Node.Func1 f) {
+            return Node.Func1.scalar(f.fn, val[f.a.id]);
+        } else if (n instanceof Node.MinMax mm) {
+            return val[mm.args[chosen(mm, val)].id];
+        } else if (n instanceof Node.External e) {
+            double[] a = new double[e.args.length];
+            for (int k = 0; k < a.length; k++) {
+                a[k] = val[e.args[k].id];
+            }
+            return e.fn.value(a);
+        } else {
+            Node.Convert cv = (Node.Convert) n;
+            return val[cv.a.id] * cv.factor + cv.shift;
+        }
+    }
+
+    /** The argument min or max picks: the first, replaced by each later one that is strictly beyond it. */
+    private static int chosen(Node.MinMax mm, double[] val) {
+        int r = 0;
+        for (int k = 1; k < mm.args.length; k++) {
+            double v = val[mm.args[k].id];
+            double best = val[mm.args[r].id];
+            if (mm.max ? v > best : v < best) {
+                r = k;
+            }
+        }
+        return r;
+    }
+
+    /** Adds g times the node's partial derivative to each operand's adjoint (chain rule, reverse mode). */
+    private void propagate(Node n, double g, double[] val, double[] adj, double[] adjX) {
+        if (n instanceof Node.Const) {
+            return;
+        } else if (n instanceof Node.Input in) {
+            adjX[in.index] += g;
+        } else if (n instanceof Node.Quantity q) {
+            adj[roots[q.index].id] += g;
+        } else if (n instanceof Node.Neg ng) {
+            adj[ng.a.id] -= g;
+        } else if (n instanceof Node.Arith ar) {
+            double u = val[ar.a.id];
+            double v = val[ar.c.id];
+            switch (ar.op) {
+                case '+':
+                    adj[ar.a.id] += g;
+                    adj[ar.c.id] += g;
+                    break;
+                case '-':
+                    adj[ar.a.id] += g;
+                    adj[ar.c.id] -= g;
+                    break;
+                case '*':
+                    adj[ar.a.id] += g * v;
+                    adj[ar.c.id] += g * u;
+                    break;
+                default:
+                    adj[ar.a.id] += g / v;
+                    adj[ar.c.id] -= g * u / (v * v);
+                    break;
+            }
+        } else if (n instanceof Node.PowInt pw) {
+            double u = val[pw.a.id];
+            adj[pw.a.id] += g * (pw.k == 0 ? 0.0 : pw.k * Node.PowInt.pow(u, pw.k - 1));
+        } else if (n instanceof Node.Pow pw) {
+            double u = val[pw.a.id];
+            double y = val[pw.c.id];
+            adj[pw.a.id] += g * y * org.apache.commons.math3.util.FastMath.pow(u, y - 1);
+            if (!(pw.c instanceof Node.Const)) {
+                adj[pw.c.id] += g * val[pw.id] * Math.log(u);
+            }
+        } else if (n instanceof Node.Func1 f) {
+            double u = val[f.a.id];
+            double r = val[f.id];
+            double d;
+            switch (f.fn) {
+                case SQRT: d = 0.5 / r; break;
+                case EXP: d = r; break;
+                case LN: d = 1.0 / u; break;
+                case LOG10: d = 1.0 / (u * Math.log(10.0)); break;
+                case ABS: d = Double.doubleToLongBits(u) < 0 ? -1.0 : 1.0; break;
+                case SIN: d = Math.cos(u); break;
+                case COS: d = -Math.sin(u); break;
+                case TAN: d = 1.0 + r * r; break;
+                case ASIN: d = 1.0 / Math.sqrt(1.0 - u * u); break;
+                case ACOS: d = -1.0 / Math.sqrt(1.0 - u * u); break;
+                default: d = 1.0 / (1.0 + u * u); break;
+            }
+            adj[f.a.id] += g * d;
+        } else if (n instanceof Node.MinMax mm) {
+            adj[mm.args[chosen(mm, val)].id] += g;
+        } else if (n instanceof Node.External e) {
+            int p = e.args.length;
+            DerivativeStructure[] a = new DerivativeStructure[p];
+            for (int k = 0; k < p; k++) {
+                a[k] = new DerivativeStructure(p, 1, k, val[e.args[k].id]);
+            }
+            DerivativeStructure r = e.fn.value(a);
+            int[] orders = new int[p];
+            for (int k = 0; k < p; k++) {
+                orders[k] = 1;
+                adj[e.args[k].id] += g * r.getPartialDerivative(orders);
+                orders[k] = 0;
+            }
+        } else {
+            Node.Convert cv = (Node.Convert) n;
+            adj[cv.a.id] += g * cv.factor;
+        }
     }
 
     /**
@@ -175,23 +322,119 @@ public final class CompiledModel implements BlockEvaluator {
     public DerivativeStructure[] derivatives(double[] x, int[] active, int derivativeOrder) {
         checkLength(x.length);
         int params = active.length;
-        DerivativeStructure[] xs = new DerivativeStructure[x.length];
-        for (int i = 0; i < x.length; i++) {
-            xs[i] = new DerivativeStructure(params, derivativeOrder, x[i]);
+        double[] values = new double[roots.length];
+        Node.Scalar scalar = new Node.Scalar(x, values);
+        for (int j : order) {
+            values[j] = roots[j].eval(scalar);
         }
+        DerivativeStructure[] xs = new DerivativeStructure[x.length];
+        boolean[] free = new boolean[x.length];
         for (int k = 0; k < params; k++) {
             xs[active[k]] = new DerivativeStructure(params, derivativeOrder, k, x[active[k]]);
+            free[active[k]] = true;
         }
+        boolean[] live = live(free);
         DerivativeStructure[] v = new DerivativeStructure[roots.length];
-        Node.Derivs d = new Node.Derivs(xs, v, params, derivativeOrder);
+        Node.Derivs d = new Node.Derivs(xs, v, params, derivativeOrder, live, scalar);
         for (int j : order) {
-            v[j] = roots[j].ds(d);
+            v[j] = roots[j].derive(d);
         }
         DerivativeStructure[] y = new DerivativeStructure[outputIndex.length];
         for (int k = 0; k < y.length; k++) {
             y[k] = v[outputIndex[k]];
         }
         return y;
+    }
+
+    /**
+     * @param free per input, whether it is a free parameter
+     * @return per node id, whether the node's value depends on a free input (directly, or through a quantity)
+     */
+    private boolean[] live(boolean[] free) {
+        Walk w = walk();
+        boolean[] live = new boolean[nodeCount];
+        boolean[] quantity = new boolean[roots.length];
+        for (int j : order) {
+            for (int id : w.postorder[j]) {
+                int ref = w.ref[id];
+                boolean l;
+                if (ref >= 0) {
+                    l = free[ref];
+                } else if (ref < -1) {
+                    l = quantity[-2 - ref];
+                } else {
+                    l = false;
+                    for (int c : w.children[id]) {
+                        if (live[c]) {
+                            l = true;
+                            break;
+                        }
+                    }
+                }
+                live[id] = l;
+            }
+            quantity[j] = live[roots[j].id];
+        }
+        return live;
+    }
+
+    /**
+     * The trees as numbers, for {@link #live}: per equation its node ids with every child before its parent;
+     * per node id its children's ids and what it refers to (the input index i as i, quantity q as -2 - q, else
+     * -1).
+     */
+    private static final class Walk {
+        final int[][] postorder;
+        final int[][] children;
+        final int[] ref;
+        final Node[] nodes;
+
+        /** A node in several trees is listed in the first one of {@code order} only, which is computed first. */
+        Walk(Node[] roots, int[] order, int nodeCount) {
+            postorder = new int[roots.length][];
+            children = new int[nodeCount][];
+            ref = new int[nodeCount];
+            nodes = new Node[nodeCount];
+            boolean[] seen = new boolean[nodeCount];
+            for (int j : order) {
+                int[] list = new int[16];
+                int[] size = {0};
+                list = add(roots[j], list, size, seen);
+                postorder[j] = java.util.Arrays.copyOf(list, size[0]);
+            }
+        }
+
+        private int[] add(Node n, int[] list, int[] size, boolean[] seen) {
+            if (seen[n.id]) {
+                return list;
+            }
+            seen[n.id] = true;
+            nodes[n.id] = n;
+            List<Node> kids = n.children();
+            int[] ids = new int[kids.size()];
+            for (int k = 0; k < ids.length; k++) {
+                Node c = kids.get(k);
+                ids[k] = c.id;
+                list = add(c, list, size, seen);
+            }
+            children[n.id] = ids;
+            ref[n.id] = n instanceof Node.Input in ? in.index : n instanceof Node.Quantity q ? -2 - q.index : -1;
+            if (size[0] == list.length) {
+                list = java.util.Arrays.copyOf(list, 2 * list.length);
+            }
+            list[size[0]++] = n.id;
+            return list;
+        }
+    }
+
+    /** @return the trees as numbers (made on first use; a race makes equal copies) */
+    private Walk walk() {
+        Walk w = walk;
+        if (w == null) {
+            w = new Walk(roots, order, nodeCount);
+            walk = w;
+        }
+        return w;
     }
 
     private void checkLength(int n) {

@@ -7,8 +7,16 @@ sealed interface Expr permits Expr.Num, Expr.Name, Expr.Unary, Expr.Binary, Expr
 
     SourcePosition at();
 
-    /** A number, with its digits as written. */
-    record Num(double value, String written, SourcePosition at) implements Expr { }
+    /**
+     * A number, with its digits as written and the unit written after it in brackets ({@code 1000 [g/kg]}), or
+     * an empty unit for a pure number.
+     */
+    record Num(double value, String written, SourcePosition at, String unit, SourcePosition unitAt)
+            implements Expr {
+        Num(double value, String written, SourcePosition at) {
+            this(value, written, at, "", at);
+        }
+    }
 
     /** A reference to an input, an equation's result, a function parameter or a constant. */
     record Name(String name, SourcePosition at) implements Expr { }

@@ -25,7 +25,8 @@ final class ExprPrinter {
     private static String print(Expr e, int context) {
         String s;
         if (e instanceof Expr.Num) {
-            s = number(((Expr.Num) e).value());
+            Expr.Num n = (Expr.Num) e;
+            s = number(n.value()) + (n.unit().isEmpty() ? "" : " [" + n.unit() + "]");
         } else if (e instanceof Expr.Name) {
             s = ((Expr.Name) e).name();
         } else if (e instanceof Expr.Call) {

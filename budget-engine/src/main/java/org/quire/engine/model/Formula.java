@@ -42,10 +42,17 @@ public sealed interface Formula permits Formula.Number, Formula.Symbol, Formula.
      *
      * @param value its value
      * @param written its digits as written in the model, e.g. {@code 1.5e-3}
+     * @param unit the unit written after it in brackets, e.g. {@code g/kg}; empty for a pure number
      */
-    record Number(double value, String written) implements Formula {
+    record Number(double value, String written, String unit) implements Formula {
         public Number {
             Objects.requireNonNull(written, "written");
+            unit = unit == null ? "" : unit;
+        }
+
+        /** A pure number. */
+        public Number(double value, String written) {
+            this(value, written, "");
         }
     }
 

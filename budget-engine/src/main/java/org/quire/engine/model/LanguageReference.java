@@ -32,6 +32,7 @@ public final class LanguageReference {
         s.append("  A line  name(p1, p2) = expression  defines a function of the model's own, used like a\n");
         s.append("  built-in one.\n\n");
         s.append("Numbers      12   0.5   1.5e-3   (a point is the decimal separator)\n");
+        s.append("With a unit  1000 [mg/g]   20 [\u00b0C]   1e-3 [m^3/L]   (the unit in brackets right after the number)\n");
         s.append("Operators    + - * /   ^ (power, right-associative: 2^3^2 is 2^9; -x^2 is -(x^2))\n");
         s.append("             unary minus, parentheses; \u00d7 \u00b7 \u00f7 \u2212 are read as * * / -\n");
         s.append("Functions    ");
@@ -43,8 +44,12 @@ public final class LanguageReference {
         s.append("Units: the unit of every input and output is a unit expression (see 'units'). The equations are\n");
         s.append("dimension-checked: adding quantities of different dimensions, a function argument of the wrong\n");
         s.append("dimension, or an output whose equation gives another dimension is an error with the model line\n");
-        s.append("and column. A number written in the model is a pure number: state a reference value that has a\n");
-        s.append("unit (such as 20 \u00b0C) as an exactly known input with its unit.\n\n");
+        s.append("and column. A bare number is a pure number: it may be a conversion factor, so its scale is not\n");
+        s.append("checked. Write a conversion factor or a reference value with its unit in brackets and the check\n");
+        s.append("covers it: with dm in mg and m in g,  m = dm / 1000 [mg/g]  is accepted and  m = 1000 [g/kg] * dm\n");
+        s.append("is refused (it computes m in 10^-9 kg, not g);  t_w - 20 [\u00b0C]  needs t_w in \u00b0C. The check covers\n");
+        s.append("the unit, not the digits: 100 [mg/g] is a quantity of its own, not 1 g in mg. The number is used\n");
+        s.append("as written; without units stated in the budget the brackets are read but not checked.\n\n");
         s.append("Errors name the model line and column: syntax, unknown names (with the nearest known name),\n");
         s.append("duplicate definitions, cycles, wrong numbers of arguments, and values that leave a function's\n");
         s.append("domain at the estimates (division by zero, square root of a negative number ...).\n\n");

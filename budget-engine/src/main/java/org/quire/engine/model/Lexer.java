@@ -7,7 +7,8 @@ import java.util.List;
  * Splits model text into tokens. Names are letters, digits and underscores, starting with a letter or an
  * underscore (any Unicode letter, so Greek names such as {@code ρ_w} are allowed). Numbers are decimal with an
  * optional exponent ({@code 1.5e-3}). A {@code #} starts a comment that runs to the end of the line. The
- * typographic signs {@code × · ÷ −} are read as {@code * * / -}.
+ * typographic signs {@code × · ÷ −} are read as {@code * * / -}. A unit in square brackets ({@code [g/kg]}) is
+ * one token; the parser accepts it only right after a number.
  *
  * <p>A line break ends an equation unless it stands inside parentheses or right after an operator, so a long
  * equation may be continued on the next line after {@code +}, {@code *} and the like.
@@ -35,7 +36,11 @@ final class Lexer {
                 depth = Math.max(0, depth - 1);
             }
             if (t.is(Token.Kind.NEWLINE)) {
-                if (depth > 0 || out.isEmpty() || continues(out.get(out.size() - 1))) {
+                if (depth > 0 && startsEquation(pos)) {
+                    // a '(' left open: the line ends here, and the parser reports the missing ')' at its end,
+                    // not at the next equation (which would also be swallowed)
+                    depth = 0;
+                } else if (depth > 0 || out.isEmpty() || continues(out.get(out.size() - 1))) {
                     continue;
                 }
             }
@@ -44,6 +49,27 @@ final class Lexer {
                 return out;
             }
         }
+    }
+
+    /** An equation's start: a name, optionally a parameter list, then '=' (a line of its own). */
+    private static final java.util.regex.Pattern EQUATION_START = java.util.regex.Pattern.compile(
+            "[ \\t]*[\\p{L}_][\\p{L}\\p{N}_]*[ \\t]*(\\([^()\\n]*\\)[ \\t]*)?=.*");
+
+    /** @return whether the line that starts at {@code from} starts an equation */
+    private boolean startsEquation(int from) {
+        while (from <= text.length()) {
+            int end = text.indexOf('\n', from);
+            String next = text.substring(from, end < 0 ? text.length() : end);
+            String code = next.strip();
+            if (!code.isEmpty() && !code.startsWith("#")) {
+                return EQUATION_START.matcher(next).matches();
+            }
+            if (end < 0) {
+                return false;
+            }
+            from = end + 1; // blank and comment lines are passed over: the '(' is reported on its own line
+        }
+        return false;
     }
 
     private static boolean continues(Token previous) {
@@ -93,6 +119,9 @@ final class Lexer {
             String name = text.substring(start, pos);
             return new Token(Token.Kind.NAME, name, 0, at(start, pos - start));
         }
+        if (c == '[') {
+            return unit(start);
+        }
         pos++;
         Token.Kind kind;
         switch (c) {
@@ -107,10 +136,34 @@ final class Lexer {
             case '=': kind = Token.Kind.EQUALS; break;
             default:
                 problems.add(ModelProblem.error(at(start, 1), "unexpected character '" + c + "'"
-                        + (c == '*' || c == '[' || c == '{' ? "" : "; use + - * / ^ ( ) and names")));
+                        + (c == ']' ? "; a unit is written in brackets right after a number, as in 1000 [g/kg]"
+                                : "; use + - * / ^ ( ) and names")));
                 return next();
         }
         return new Token(kind, String.valueOf(c), 0, at(start, 1));
+    }
+
+    /** A unit in brackets, {@code [g/kg]}, on one line; the token's text is what stands inside. */
+    private Token unit(int start) {
+        int end = pos + 1;
+        while (end < text.length() && text.charAt(end) != ']' && text.charAt(end) != '\n'
+                && text.charAt(end) != '[') {
+            end++;
+        }
+        if (end >= text.length() || text.charAt(end) != ']') {
+            problems.add(ModelProblem.error(at(start, end - start), "the unit '" + text.substring(start, end)
+                    + "' has no closing ']'; write a number with its unit as 1000 [g/kg]"));
+            pos = end;
+            return next();
+        }
+        String inside = text.substring(start + 1, end).strip();
+        pos = end + 1;
+        if (inside.isEmpty()) {
+            problems.add(ModelProblem.error(at(start, pos - start), "empty unit '[]'; write the unit in the brackets, "
+                    + "as in 1000 [g/kg], or [1] for a pure number"));
+            return next();
+        }
+        return new Token(Token.Kind.UNIT, inside, 0, at(start, pos - start));
     }
 
     private Token number(int start) {

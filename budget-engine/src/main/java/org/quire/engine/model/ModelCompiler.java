@@ -9,6 +9,9 @@ import java.util.LinkedHashSet;
 import java.util.List;
 import java.util.Map;
 import java.util.Set;
+import org.quire.engine.units.Unit;
+import org.quire.engine.units.UnitException;
+import org.quire.engine.units.Units;
 
 /**
  * Compiles model text into a {@link CompiledModel}: parses it, resolves every name against the inputs, the
@@ -18,7 +21,7 @@ import java.util.Set;
  * wrong numbers of arguments, outputs no equation defines).
  *
  * <p>The result is a tree of our own node objects: no scripting engine, no reflection, no code generated from
- * user text. Stateless and thread-safe.
+ * user text. Thread-safe; it keeps the last few compiled models (immutable) to return them for the same input.
  */
 public final class ModelCompiler {
     private final String text;
@@ -28,6 +31,8 @@ public final class ModelCompiler {
     private final ModelUnits units;
     private final List<ModelProblem> problems = new ArrayList<>();
     private final Set<String> reported = new LinkedHashSet<>();
+    /** Names of equations whose line could not be read: their uses are not reported again. */
+    private final Set<String> broken = new java.util.HashSet<>();
     private final Map<String, Integer> inputIndex = new HashMap<>();
     private final Map<String, Integer> quantityIndex = new LinkedHashMap<>();
     private final Map<String, Equation> functions = new LinkedHashMap<>();
@@ -79,7 +84,51 @@ public final class ModelCompiler {
      */
     public static CompiledModel compile(String text, List<String> inputs, List<String> outputs,
             FunctionLibrary library, ModelUnits units) throws ModelException {
-        return new ModelCompiler(text, inputs, outputs, library, units).run();
+        Key key = new Key(text, List.copyOf(inputs), List.copyOf(outputs), library, units);
+        synchronized (RECENT) {
+            CompiledModel m = RECENT.get(key);
+            if (m != null) {
+                return m;
+            }
+        }
+        CompiledModel m = new ModelCompiler(text, inputs, outputs, library, units).run();
+        synchronized (RECENT) {
+            RECENT.put(key, m);
+        }
+        return m;
+    }
+
+    /** Models compiled most recently, kept for a recalculation of the same model after an edit elsewhere. */
+    private static final int RECENT_MODELS = 8;
+
+    /**
+     * The last {@value #RECENT_MODELS} models compiled, by everything their compilation reads: a compiled model is
+     * immutable, so one compiled before is returned for the same text, names, library and units (a budget
+     * recalculated after a changed estimate or uncertainty is not compiled again).
+     */
+    private static final java.util.Map<Key, CompiledModel> RECENT = new java.util.LinkedHashMap<>(16, 0.75f, true) {
+        private static final long serialVersionUID = 1L;
+
+        @Override
+        protected boolean removeEldestEntry(java.util.Map.Entry<Key, CompiledModel> eldest) {
+            return size() > RECENT_MODELS;
+        }
+    };
+
+    /** What a compilation depends on; the library by identity (it is immutable). */
+    private record Key(String text, List<String> inputs, List<String> outputs, FunctionLibrary library,
+            ModelUnits units) {
+        @Override
+        public boolean equals(Object o) {
+            return o instanceof Key k && library == k.library && text.equals(k.text) && inputs.equals(k.inputs)
+                    && outputs.equals(k.outputs) && units.equals(k.units);
+        }
+
+        @Override
+        public int hashCode() {
+            return ((text.hashCode() * 31 + inputs.hashCode()) * 31 + outputs.hashCode()) * 31
+                    + System.identityHashCode(library);
+        }
     }
 
     /**
@@ -122,7 +171,7 @@ public final class ModelCompiler {
         for (int k = 0; k < inputs.size(); k++) {
             inputIndex.put(inputs.get(k), k);
         }
-        List<Equation> equations = Parser.parse(text, problems);
+        List<Equation> equations = Parser.parse(text, problems, broken);
         Map<String, Equation> seen = new HashMap<>();
         for (Equation eq : equations) {
             Equation before = seen.get(eq.name());
@@ -147,7 +196,7 @@ public final class ModelCompiler {
             }
         }
         for (String out : outputs) {
-            if (!quantityIndex.containsKey(out)) {
+            if (!quantityIndex.containsKey(out) && !broken.contains(out)) {
                 String known = String.join(", ", quantityIndex.keySet());
                 problems.add(new ModelProblem(0, 0, 0, ModelProblem.Severity.ERROR,
                         "output '" + out + "' is not defined by any equation"
@@ -215,7 +264,7 @@ public final class ModelCompiler {
     /** The expression with its names resolved; called only once the model compiled without errors. */
     private Formula formula(Expr e, Set<String> params) {
         if (e instanceof Expr.Num n) {
-            return new Formula.Number(n.value(), n.written());
+            return new Formula.Number(n.value(), n.written(), n.unit());
         }
         if (e instanceof Expr.Name n) {
             String name = n.name();
@@ -303,7 +352,11 @@ public final class ModelCompiler {
     }
 
     private Node constant(SourcePosition at, String text, double v) {
-        Node c = new Node.Const(nextId++, at, text, v);
+        return constant(at, text, v, null);
+    }
+
+    private Node constant(SourcePosition at, String text, double v, Unit unit) {
+        Node c = new Node.Const(nextId++, at, text, v, unit);
         consts.add(c);
         return c;
     }
@@ -327,8 +380,16 @@ public final class ModelCompiler {
 
     private Node nodeNested(Expr e, Map<String, Node> params, Deque<String> calling, Set<Integer> deps) {
         String txt = ExprPrinter.print(e);
-        if (e instanceof Expr.Num) {
-            return constant(e.at(), txt, ((Expr.Num) e).value());
+        if (e instanceof Expr.Num n) {
+            Unit unit = null;
+            if (!n.unit().isEmpty()) {
+                try {
+                    unit = Units.parse(n.unit());
+                } catch (UnitException x) {
+                    error(n.unitAt(), "unit [" + n.unit() + "] of the number " + n.written() + ": " + x.getMessage());
+                }
+            }
+            return constant(e.at(), txt, n.value(), unit);
         }
         if (e instanceof Expr.Name) {
             String name = ((Expr.Name) e).name();
@@ -353,6 +414,9 @@ public final class ModelCompiler {
                 error(e.at(), "'" + name + "' is a function; call it with its arguments in parentheses");
                 return constant(e.at(), txt, Double.NaN);
             }
+            if (broken.contains(name)) {
+                return constant(e.at(), txt, Double.NaN); // its own line is reported already
+            }
             List<String> known = new ArrayList<>(inputIndex.keySet());
             known.addAll(quantityIndex.keySet());
             known.addAll(params.keySet());
@@ -362,8 +426,8 @@ public final class ModelCompiler {
         }
         if (e instanceof Expr.Unary) {
             Node a = node(((Expr.Unary) e).operand(), params, calling, deps);
-            if (a instanceof Node.Const) {
-                return constant(e.at(), txt, -((Node.Const) a).value);
+            if (a instanceof Node.Const k) {
+                return constant(e.at(), txt, -k.value, k.unit);
             }
             return new Node.Neg(nextId++, e.at(), txt, a);
         }
@@ -372,8 +436,8 @@ public final class ModelCompiler {
             Node a = node(b.left(), params, calling, deps);
             Node c = node(b.right(), params, calling, deps);
             if (b.op() == '^') {
-                if (c instanceof Node.Const) {
-                    double k = ((Node.Const) c).value;
+                if (c instanceof Node.Const kc && kc.unit == null) {
+                    double k = kc.value;
                     if (k == Math.rint(k) && Math.abs(k) <= 64) {
                         return new Node.PowInt(nextId++, e.at(), txt, a, (int) k);
                     }
@@ -436,6 +500,9 @@ public final class ModelCompiler {
                 return constant(e.at(), txt, Double.NaN);
             }
             return new Node.External(nextId++, e.at(), txt, lib, args);
+        }
+        if (broken.contains(name)) {
+            return constant(e.at(), txt, Double.NaN); // the function's own line is reported already
         }
         List<String> known = new ArrayList<>(library.allNames());
         known.addAll(functions.keySet());

@@ -103,4 +103,15 @@ public final class ModelUnits {
                 && outputs.values().stream().allMatch(String::isEmpty)
                 && displays.values().stream().allMatch(String::isEmpty);
     }
+
+    @Override
+    public boolean equals(Object o) {
+        return o instanceof ModelUnits u && inputs.equals(u.inputs) && outputs.equals(u.outputs)
+                && displays.equals(u.displays);
+    }
+
+    @Override
+    public int hashCode() {
+        return Objects.hash(inputs, outputs, displays);
+    }
 }

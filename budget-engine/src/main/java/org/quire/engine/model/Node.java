@@ -25,6 +25,14 @@ abstract class Node {
 
     abstract DerivativeStructure ds(Derivs d);
 
+    /**
+     * This node's derivative structure: {@link #ds} when the node depends on a free parameter of the pass, else
+     * a constant of its scalar value (no derivative structure is carried through a subtree that has none).
+     */
+    final DerivativeStructure derive(Derivs d) {
+        return d.live[id] ? ds(d) : d.constant(eval(d.scalar));
+    }
+
     /** @return an array whose first {@code n} entries hold this node's value for each trial (read only) */
     abstract double[] block(Block b, int n);
 
@@ -42,18 +50,26 @@ abstract class Node {
         }
     }
 
-    /** Derivative evaluation state. */
+    /**
+     * Derivative evaluation state: the free inputs' derivative structures, the quantities' so far, which nodes
+     * depend on a free input ({@code live}, by node id) and the scalar values for the nodes that do not.
+     */
     static final class Derivs {
         final DerivativeStructure[] x;
         final DerivativeStructure[] v;
         final int params;
         final int order;
+        final boolean[] live;
+        final Scalar scalar;
 
-        Derivs(DerivativeStructure[] x, DerivativeStructure[] v, int params, int order) {
+        Derivs(DerivativeStructure[] x, DerivativeStructure[] v, int params, int order, boolean[] live,
+                Scalar scalar) {
             this.x = x;
             this.v = v;
             this.params = params;
             this.order = order;
+            this.live = live;
+            this.scalar = scalar;
         }
 
         DerivativeStructure constant(double c) {
@@ -97,10 +113,13 @@ abstract class Node {
     // ----------------------------------------------------------------------------------------------------
     static final class Const extends Node {
         final double value;
+        /** The unit written with the number ({@code 1000 [g/kg]}), or null for a pure number. */
+        final org.quire.engine.units.Unit unit;
 
-        Const(int id, SourcePosition at, String text, double value) {
+        Const(int id, SourcePosition at, String text, double value, org.quire.engine.units.Unit unit) {
             super(id, at, text);
             this.value = value;
+            this.unit = unit;
         }
 
         @Override double eval(Scalar s) { return value; }
@@ -147,7 +166,7 @@ abstract class Node {
         }
 
         @Override double eval(Scalar s) { return -a.eval(s); }
-        @Override DerivativeStructure ds(Derivs d) { return a.ds(d).negate(); }
+        @Override DerivativeStructure ds(Derivs d) { return a.derive(d).negate(); }
         @Override double[] block(Block b, int n) {
             double[] x = a.block(b, n);
             double[] r = b.buf[id];
@@ -188,8 +207,8 @@ abstract class Node {
         }
 
         @Override DerivativeStructure ds(Derivs d) {
-            DerivativeStructure x = a.ds(d);
-            DerivativeStructure y = c.ds(d);
+            DerivativeStructure x = a.derive(d);
+            DerivativeStructure y = c.derive(d);
             switch (op) {
                 case '+': return x.add(y);
                 case '-': return x.subtract(y);
@@ -244,7 +263,7 @@ abstract class Node {
             }
         }
 
-        @Override DerivativeStructure ds(Derivs d) { return a.ds(d).pow(k); }
+        @Override DerivativeStructure ds(Derivs d) { return a.derive(d).pow(k); }
 
         @Override double[] block(Block b, int n) {
             double[] x = a.block(b, n);
@@ -285,11 +304,11 @@ abstract class Node {
         }
 
         @Override DerivativeStructure ds(Derivs d) {
-            DerivativeStructure x = a.ds(d);
+            DerivativeStructure x = a.derive(d);
             if (c instanceof Const) {
                 return x.pow(((Const) c).value);
             }
-            return x.pow(c.ds(d));
+            return x.pow(c.derive(d));
         }
 
         @Override double[] block(Block b, int n) {
@@ -381,7 +400,7 @@ abstract class Node {
         }
 
         @Override DerivativeStructure ds(Derivs d) {
-            DerivativeStructure x = a.ds(d);
+            DerivativeStructure x = a.derive(d);
             switch (fn) {
                 case SQRT: return x.sqrt();
                 case EXP: return x.exp();
@@ -433,9 +452,9 @@ abstract class Node {
         }
 
         @Override DerivativeStructure ds(Derivs d) {
-            DerivativeStructure r = args[0].ds(d);
+            DerivativeStructure r = args[0].derive(d);
             for (int k = 1; k < args.length; k++) {
-                DerivativeStructure v = args[k].ds(d);
+                DerivativeStructure v = args[k].derive(d);
                 if (max ? v.getValue() > r.getValue() : v.getValue() < r.getValue()) {
                     r = v;
                 }
@@ -484,7 +503,7 @@ abstract class Node {
         @Override DerivativeStructure ds(Derivs d) {
             DerivativeStructure[] a = new DerivativeStructure[args.length];
             for (int k = 0; k < a.length; k++) {
-                a[k] = args[k].ds(d);
+                a[k] = args[k].derive(d);
             }
             return fn.value(a);
         }
@@ -519,7 +538,7 @@ abstract class Node {
         }
 
         @Override double eval(Scalar s) { return checked(this, a.eval(s) * factor + shift); }
-        @Override DerivativeStructure ds(Derivs d) { return a.ds(d).multiply(factor).add(shift); }
+        @Override DerivativeStructure ds(Derivs d) { return a.derive(d).multiply(factor).add(shift); }
         @Override double[] block(Block b, int n) {
             double[] x = a.block(b, n);
             double[] r = b.buf[id];

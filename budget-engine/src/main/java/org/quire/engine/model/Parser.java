@@ -13,7 +13,8 @@ import java.util.List;
  * product   = signed { ("*" | "/") signed }
  * signed    = ("-" | "+") signed | power
  * power     = atom [ "^" signed ]              (right-associative: 2^3^2 = 2^9; -x^2 = -(x^2))
- * atom      = number | name | name "(" sum { "," sum } ")" | "(" sum ")"
+ * atom      = number [ unit ] | name | name "(" sum { "," sum } ")" | "(" sum ")"
+ * unit      = "[" unit expression "]"          (a number with its unit: 1000 [g/kg], 20 [°C])
  * </pre>
  *
  * Errors are collected with their line and column; after an error the parser resumes at the next line.
@@ -40,7 +41,18 @@ final class Parser {
 
     /** Parses {@code text}; problems found are added to {@code problems}. */
     static List<Equation> parse(String text, List<ModelProblem> problems) {
-        return new Parser(text, problems).model();
+        return parse(text, problems, new java.util.HashSet<>());
+    }
+
+    /**
+     * Parses {@code text}; problems found are added to {@code problems}, and the names of the equations that
+     * could not be read (their line has an error) to {@code broken}, so that the compiler does not report their
+     * uses elsewhere as unknown names: one mistake, one message.
+     */
+    static List<Equation> parse(String text, List<ModelProblem> problems, java.util.Set<String> broken) {
+        Parser p = new Parser(text, problems);
+        List<Equation> out = p.model(broken);
+        return out;
     }
 
     private static final class Stop extends RuntimeException {
@@ -68,13 +80,14 @@ final class Parser {
         return new Stop();
     }
 
-    private List<Equation> model() {
+    private List<Equation> model(java.util.Set<String> broken) {
         List<Equation> out = new ArrayList<>();
         while (!peek().is(Token.Kind.END)) {
             if (peek().is(Token.Kind.NEWLINE)) {
                 take();
                 continue;
             }
+            int start = i;
             try {
                 out.add(equation());
                 Token t = peek();
@@ -82,6 +95,10 @@ final class Parser {
                     throw fail(t, "expected an operator or the end of the line, found " + t.describe());
                 }
             } catch (Stop s) {
+                if (tokens.get(start).is(Token.Kind.NAME) && start + 1 < tokens.size()
+                        && (tokens.get(start + 1).is(Token.Kind.EQUALS) || tokens.get(start + 1).is(Token.Kind.LPAREN))) {
+                    broken.add(tokens.get(start).text());
+                }
                 while (!peek().is(Token.Kind.NEWLINE) && !peek().is(Token.Kind.END)) {
                     take();
                 }
@@ -226,6 +243,11 @@ final class Parser {
 
     private Expr power() {
         Expr base = atom();
+        if (peek().is(Token.Kind.UNIT)) {
+            Token u = peek();
+            throw fail(u, "a unit in brackets belongs right after a number, as in 1000 [g/kg]; '" + ExprPrinter.print(base)
+                    + "' has its unit already (an input's or output's unit is stated with the input or output)");
+        }
         if (peek().is(Token.Kind.CARET)) {
             Token op = take();
             Expr exponent = signed();
@@ -238,6 +260,10 @@ final class Parser {
         Token t = take();
         switch (t.kind()) {
             case NUMBER:
+                if (peek().is(Token.Kind.UNIT)) {
+                    Token u = take();
+                    return new Expr.Num(t.number(), t.text(), t.at(), u.text(), u.at());
+                }
                 return new Expr.Num(t.number(), t.text(), t.at());
             case NAME:
                 if (peek().is(Token.Kind.LPAREN)) {

@@ -39,10 +39,13 @@ import org.quire.engine.units.Units;
  *       scale or offset, a conversion is compiled in front of the argument, so the function receives its
  *       declared unit: a temperature point in K into a parameter in °C becomes T − 273.15 (parameters in °C or
  *       °F are temperature points), kPa into Pa is multiplied by 1000, % into 1 by 0.01.</li>
+ *   <li>A number written with its unit in brackets ({@code 1000 [mg/g]}, {@code 20 [°C]}) is a quantity in that
+ *       unit, of known scale, and follows every rule above like an input: a conversion factor written so is
+ *       checked against the units it converts.</li>
  * </ul>
  *
  * <h2>Limitations</h2>
- * A number written in the model may be a pure number (the 4 of pi d^2/4) or a conversion factor (the 1000 of
+ * A bare number written in the model may be a pure number (the 4 of pi d^2/4) or a conversion factor (the 1000 of
  * I/1000 turning mA into A); the check cannot tell. So a node whose value depends on such a number (other than
  * 1 and pi) has a known dimension but an unknown scale: its scale is not compared with the declared unit of an
  * output, nor with the other side of a sum (it takes that side's unit), and it is passed to a function unchanged
@@ -244,6 +247,9 @@ final class UnitCheck {
 
     private Q compute(Node n) {
         if (n instanceof Node.Const k) {
+            if (k.unit != null) {
+                return Q.of(k.unit, true);
+            }
             return Q.number(k.value == 1 || k.value == -1 || k.value == Math.PI || k.value == -Math.PI);
         }
         if (n instanceof Node.Input in) {

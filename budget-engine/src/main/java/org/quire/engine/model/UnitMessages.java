@@ -183,7 +183,7 @@ final class UnitMessages {
         return "output " + output + " is stated in " + declared.symbol() + " but its equation computes it in "
                 + found.symbol() + " (1 " + found.symbol() + " = " + number(found.factor() / declared.factor()) + " "
                 + declared.symbol() + "); state " + found.symbol() + " as its unit and choose " + declared.symbol()
-                + " as its display unit, or write the conversion factor in the model";
+                + " as its display unit, or write the conversion factor in the model with its unit, as in 1000 [g/kg]";
     }
 
     static String outputTemperature(String output, Unit declared, Unit found) {

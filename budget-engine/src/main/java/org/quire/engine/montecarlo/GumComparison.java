@@ -154,11 +154,47 @@ public final class GumComparison {
 
     /** @return one sentence saying why the verdict is what it is, with the figures compared */
     public String reason() {
+        return Phrase.plain(reasonPhrases());
+    }
+
+    /**
+     * @return the sentence of {@link #reason()} in pieces: words, the symbols d_low, d_high and delta by their
+     *     names, and the numbers, so that a report can typeset the symbols and write the numbers by its own rule
+     */
+    public java.util.List<Phrase> reasonPhrases() {
         if (firstOrderZero()) {
-            return Messages.comparisonFirstOrderZero();
+            return java.util.List.of(Phrase.words(Messages.comparisonFirstOrderZero()));
         }
         return validated() ? Messages.comparisonValidated(lowerDifference, upperDifference, tolerance)
                 : Messages.comparisonNotValidated(lowerDifference, upperDifference, tolerance);
+    }
+
+    /**
+     * Says in plain words, in one sentence, why the GUM interval was not validated: the Monte Carlo interval
+     * y_low .. y_high is narrower than y +- U_p at both ends (the output's distribution has shorter tails than the
+     * scaled and shifted t distribution the GUM assigns to it, as when a bounded input such as a rectangular one
+     * dominates: JCGM 101:2008 9.2.4), wider at both ends (longer tails), or shifted to one side (an asymmetric
+     * distribution, as a model that is not linear over the spread of its inputs gives: JCGM 101:2008 9.4). The
+     * "as when" cases are common practice.
+     *
+     * @return the sentence, or an empty string when the GUM result is validated or its u(y) is zero (then
+     *     {@link #reason()} says it all)
+     */
+    public String explanation() {
+        if (validated() || firstOrderZero()) {
+            return "";
+        }
+        double gumLow = gumEstimate - gumExpandedUncertainty;
+        double gumHigh = gumEstimate + gumExpandedUncertainty;
+        boolean lowInside = monteCarloInterval.lower() > gumLow;
+        boolean highInside = monteCarloInterval.upper() < gumHigh;
+        if (lowInside && highInside) {
+            return Messages.comparisonNarrower();
+        }
+        if (!lowInside && !highInside) {
+            return Messages.comparisonWider();
+        }
+        return Messages.comparisonShifted(highInside);
     }
 
     /** @return the numerical tolerance delta, NaN when the GUM standard uncertainty is zero */

@@ -2,9 +2,6 @@ package org.quire.engine.montecarlo;
 
 import java.util.ArrayList;
 import java.util.List;
-import org.apache.commons.rng.UniformRandomProvider;
-import org.apache.commons.rng.sampling.distribution.NormalizedGaussianSampler;
-import org.apache.commons.rng.sampling.distribution.ZigguratSampler;
 import org.quire.engine.budget.CorrelationMatrix;
 import org.quire.engine.budget.Distribution;
 
@@ -203,7 +200,7 @@ public final class InputSampler {
          * input order, each group of correlated inputs when its first member is reached, all from {@code rng},
          * so that the values depend only on the stream.
          */
-        public void fill(UniformRandomProvider rng, double[][] columns, int n) {
+        public void fill(BlockStream rng, double[][] columns, int n) {
             for (int i = 0; i < marginals.length; i++) {
                 int g = groupOf[i];
                 if (g < 0) {
@@ -214,16 +211,12 @@ public final class InputSampler {
             }
         }
 
-        private void fillGroup(int g, UniformRandomProvider rng, double[][] columns, int n) {
+        private void fillGroup(int g, BlockStream rng, double[][] columns, int n) {
             int[] members = groups[g];
             int k = members.length;
             double[][] l = cholesky[g];
-            NormalizedGaussianSampler e = ZigguratSampler.NormalizedGaussian.of(rng);
             for (int a = 0; a < k; a++) {
-                double[] za = z[a];
-                for (int t = 0; t < n; t++) {
-                    za[t] = e.sample();
-                }
+                rng.normals(z[a], 0, n);
             }
             // z := L e in place, from the last row up so that each row reads still untouched e values
             for (int a = k - 1; a >= 0; a--) {

@@ -2,9 +2,6 @@ package org.quire.engine.montecarlo;
 
 import org.apache.commons.math3.distribution.TDistribution;
 import org.apache.commons.math3.special.Erf;
-import org.apache.commons.rng.UniformRandomProvider;
-import org.apache.commons.rng.sampling.distribution.NormalizedGaussianSampler;
-import org.apache.commons.rng.sampling.distribution.ZigguratSampler;
 import org.quire.engine.budget.Distribution;
 
 /**
@@ -66,7 +63,7 @@ public abstract class Marginal {
      *
      * @param rng the random stream, used by this call only
      */
-    public abstract void fill(UniformRandomProvider rng, double[] out, int from, int n);
+    public abstract void fill(BlockStream rng, double[] out, int from, int n);
 
     /** @return the distribution function G(x) = Pr(X &lt;= x) */
     public abstract double cdf(double x);
@@ -109,7 +106,7 @@ public abstract class Marginal {
         return -SQRT2 * Erf.erfcInv(2.0 * p);
     }
 
-    /** N(mu, sigma^2) by the Ziggurat method; JCGM 101:2008 6.4.7.4 and C.4. */
+    /** N(mu, sigma^2) by the Ziggurat method ({@link BlockStream}); JCGM 101:2008 6.4.7.4 and C.4. */
     private static final class NormalMarginal extends Marginal {
         private final double mu;
         private final double sd;
@@ -121,10 +118,10 @@ public abstract class Marginal {
         }
 
         @Override
-        public void fill(UniformRandomProvider rng, double[] out, int from, int n) {
-            NormalizedGaussianSampler g = ZigguratSampler.NormalizedGaussian.of(rng);
+        public void fill(BlockStream rng, double[] out, int from, int n) {
+            rng.normals(out, from, n);
             for (int t = from, end = from + n; t < end; t++) {
-                out[t] = mu + sd * g.sample();
+                out[t] = mu + sd * out[t];
             }
         }
 
@@ -146,9 +143,10 @@ public abstract class Marginal {
         }
 
         @Override
-        public void fill(UniformRandomProvider rng, double[] out, int from, int n) {
+        public void fill(BlockStream rng, double[] out, int from, int n) {
+            rng.uniforms(out, from, n);
             for (int t = from, end = from + n; t < end; t++) {
-                out[t] = a + w * rng.nextDouble();
+                out[t] = a + w * out[t];
             }
         }
 
@@ -171,7 +169,7 @@ public abstract class Marginal {
         }
 
         @Override
-        public void fill(UniformRandomProvider rng, double[] out, int from, int n) {
+        public void fill(BlockStream rng, double[] out, int from, int n) {
             double h = 0.5 * w;
             for (int t = from, end = from + n; t < end; t++) {
                 out[t] = a + h * (rng.nextDouble() + rng.nextDouble());
@@ -214,7 +212,7 @@ public abstract class Marginal {
         }
 
         @Override
-        public void fill(UniformRandomProvider rng, double[] out, int from, int n) {
+        public void fill(BlockStream rng, double[] out, int from, int n) {
             double twoPi = 2.0 * Math.PI;
             for (int t = from, end = from + n; t < end; t++) {
                 out[t] = c + h * Math.sin(twoPi * rng.nextDouble());
@@ -261,7 +259,7 @@ public abstract class Marginal {
         }
 
         @Override
-        public void fill(UniformRandomProvider rng, double[] out, int from, int n) {
+        public void fill(BlockStream rng, double[] out, int from, int n) {
             double h = 0.5 * (b - a);
             double c1 = h * (1.0 + beta);
             double c2 = h * (1.0 - beta);
@@ -332,7 +330,7 @@ public abstract class Marginal {
         }
 
         @Override
-        public void fill(UniformRandomProvider rng, double[] out, int from, int n) {
+        public void fill(BlockStream rng, double[] out, int from, int n) {
             double lo = a - d;
             double twoD = 2.0 * d;
             double sum = a + b;
@@ -426,8 +424,8 @@ public abstract class Marginal {
      *     r &lt; 1 - 0.0331 x^4 or ln r &lt; x^2/2 + d - d v + d ln v, giving d v; for a &lt; 1, the variate of
      *     shape a + 1 times r^(1/a) (their section 6).</li>
      * </ul>
-     * The normals are drawn by the Ziggurat method, and the generator is read in the caller's block, so the
-     * values depend only on the stream.
+     * The normals are drawn by the Ziggurat method of {@link BlockStream}, a column at a time: first the normals z
+     * of the block, then its chi-squared variates, so the values depend only on the stream.
      *
      * <p>References: L. Devroye, Non-Uniform Random Variate Generation, Springer 1986, chapter IX; G. Marsaglia,
      * W. W. Tsang, A simple method for generating gamma variables, ACM Trans. Math. Softw. 26 (2000) 363-372.
@@ -450,12 +448,12 @@ public abstract class Marginal {
         }
 
         @Override
-        public void fill(UniformRandomProvider rng, double[] out, int from, int n) {
-            NormalizedGaussianSampler g = ZigguratSampler.NormalizedGaussian.of(rng);
+        public void fill(BlockStream rng, double[] out, int from, int n) {
             int end = from + n;
             if (Double.isInfinite(nu)) {
+                rng.normals(out, from, n);
                 for (int i = from; i < end; i++) {
-                    out[i] = mu + s * g.sample(); // the limit of t as nu grows: the standard normal
+                    out[i] = mu + s * out[i]; // the limit of t as nu grows: the standard normal
                 }
                 return;
             }
@@ -463,19 +461,25 @@ public abstract class Marginal {
                 int k = (int) nu / 2;
                 boolean odd = ((int) nu & 1) == 1;
                 double twoOverNu = 2.0 / nu;
-                for (int i = from; i < end; i++) {
-                    double z = g.sample();
-                    double product = 1.0;
-                    for (int j = 0; j < k; j++) {
-                        product *= openUniform(rng);
+                double[] w = rng.scratch(0, n);
+                rng.normals(out, from, n); // z
+                if (k > 0) {
+                    rng.logProducts(w, 0, n, k); // half the chi-squared variate, from the exponentials
+                    for (int i = 0; i < n; i++) {
+                        w[i] *= twoOverNu;
                     }
-                    double w = -Math.log(product); // half the chi-squared variate from the exponentials
-                    double scaled = w * twoOverNu;
-                    if (odd) {
-                        double y = g.sample();
-                        scaled += y * y / nu;
+                } else {
+                    java.util.Arrays.fill(w, 0, n, 0.0);
+                }
+                if (odd) {
+                    double[] y = rng.scratch(1, n);
+                    rng.normals(y, 0, n);
+                    for (int i = 0; i < n; i++) {
+                        w[i] += y[i] * y[i] / nu;
                     }
-                    out[i] = mu + s * (z / Math.sqrt(scaled));
+                }
+                for (int i = 0; i < n; i++) {
+                    out[from + i] = mu + s * (out[from + i] / Math.sqrt(w[i]));
                 }
                 return;
             }
@@ -487,16 +491,16 @@ public abstract class Marginal {
             double inverseA = 1.0 / a;
             double twoOverNu = 2.0 / nu;
             for (int i = from; i < end; i++) {
-                double z = g.sample();
+                double z = rng.nextNormal();
                 double gamma;
                 while (true) {
-                    double x = g.sample();
+                    double x = rng.nextNormal();
                     double v = 1.0 + c * x;
                     if (v <= 0.0) {
                         continue;
                     }
                     v = v * v * v;
-                    double r = openUniform(rng);
+                    double r = rng.nextOpenDouble();
                     double x2 = x * x;
                     if (r < 1.0 - 0.0331 * x2 * x2 || Math.log(r) < 0.5 * x2 + d * (1.0 - v + Math.log(v))) {
                         gamma = d * v;
@@ -504,16 +508,12 @@ public abstract class Marginal {
                     }
                 }
                 if (boost) {
-                    gamma *= Math.pow(openUniform(rng), inverseA);
+                    gamma *= Math.pow(rng.nextOpenDouble(), inverseA);
                 }
                 out[i] = mu + s * (z / Math.sqrt(gamma * twoOverNu));
             }
         }
 
-        /** @return a uniform variate in the open interval (0, 1): 53 random bits, offset by half a step */
-        private static double openUniform(UniformRandomProvider rng) {
-            return ((rng.nextLong() >>> 11) + 0.5) * 0x1.0p-53;
-        }
 
         @Override public double cdf(double x) { return t.cumulativeProbability((x - mu) / s); }
 
@@ -544,7 +544,7 @@ public abstract class Marginal {
         }
     }
 
-    /** Ex(x): xi = -x ln r; JCGM 101:2008 6.4.10.4 (drawn by the Ziggurat method, same distribution). */
+    /** Ex(x): xi = -x ln r, r uniform on (0, 1); JCGM 101:2008 6.4.10.4. */
     private static final class ExponentialMarginal extends Marginal {
         private final double mean;
 
@@ -554,10 +554,9 @@ public abstract class Marginal {
         }
 
         @Override
-        public void fill(UniformRandomProvider rng, double[] out, int from, int n) {
-            ZigguratSampler.Exponential e = ZigguratSampler.Exponential.of(rng);
+        public void fill(BlockStream rng, double[] out, int from, int n) {
             for (int t = from, end = from + n; t < end; t++) {
-                out[t] = mean * e.sample();
+                out[t] = -mean * Math.log(rng.nextOpenDouble());
             }
         }
 
@@ -576,7 +575,7 @@ public abstract class Marginal {
         }
 
         @Override
-        public void fill(UniformRandomProvider rng, double[] out, int from, int n) {
+        public void fill(BlockStream rng, double[] out, int from, int n) {
             java.util.Arrays.fill(out, from, from + n, value);
         }
 

@@ -91,16 +91,49 @@ final class Messages {
                 + "(JCGM 100:2008 5.1.2 note)";
     }
 
-    static String comparisonValidated(double dLow, double dHigh, double delta) {
-        return fmt("the GUM result is validated: d_low = %s and d_high = %s are both within the numerical "
-                + "tolerance delta = %s (JCGM 101:2008 8.2)", g(dLow), g(dHigh), g(delta));
+    /** @return why the GUM result is validated, with d_low, d_high and delta as symbols (JCGM 101:2008 8.2) */
+    static java.util.List<Phrase> comparisonValidated(double dLow, double dHigh, double delta) {
+        return java.util.List.of(Phrase.words("the GUM result is validated: "), Phrase.symbol("d_low"),
+                Phrase.words(" = "), Phrase.number(g(dLow), dLow), Phrase.words(" and "), Phrase.symbol("d_high"),
+                Phrase.words(" = "), Phrase.number(g(dHigh), dHigh),
+                Phrase.words(" are both within the numerical tolerance "), Phrase.symbol("delta"), Phrase.words(" = "),
+                Phrase.number(g(delta), delta), Phrase.words(" (JCGM 101:2008 8.2)"));
     }
 
-    static String comparisonNotValidated(double dLow, double dHigh, double delta) {
-        return fmt("the GUM result is not validated: d_low = %s and d_high = %s, and %s the numerical tolerance "
-                + "delta = %s (JCGM 101:2008 8.2); report the Monte Carlo result", g(dLow), g(dHigh),
-                dLow > delta && dHigh > delta ? "both exceed" : dLow > delta ? "d_low exceeds" : "d_high exceeds",
-                g(delta));
+    static String comparisonNarrower() {
+        return "The Monte Carlo interval is narrower than the GUM interval at both ends: the output's distribution "
+                + "has shorter tails than the t distribution the GUM assumes, as when a rectangular (bounded) input "
+                + "dominates the budget.";
+    }
+
+    static String comparisonWider() {
+        return "The Monte Carlo interval is wider than the GUM interval at both ends: the output's distribution has "
+                + "longer tails than the t distribution the GUM assumes, as when a dominant input has few degrees "
+                + "of freedom or heavy tails.";
+    }
+
+    static String comparisonShifted(boolean towardsLower) {
+        return "The Monte Carlo interval lies " + (towardsLower ? "lower" : "higher") + " than the GUM interval: "
+                + "the output's distribution is asymmetric, as when the model is not linear over the spread of "
+                + "its inputs.";
+    }
+
+    /** @return why the GUM result is not validated, with d_low, d_high and delta as symbols (JCGM 101:2008 8.2) */
+    static java.util.List<Phrase> comparisonNotValidated(double dLow, double dHigh, double delta) {
+        java.util.List<Phrase> p = new java.util.ArrayList<>(java.util.List.of(
+                Phrase.words("the GUM result is not validated: "), Phrase.symbol("d_low"), Phrase.words(" = "),
+                Phrase.number(g(dLow), dLow), Phrase.words(" and "), Phrase.symbol("d_high"), Phrase.words(" = "),
+                Phrase.number(g(dHigh), dHigh)));
+        if (dLow > delta && dHigh > delta) {
+            p.add(Phrase.words(", and both exceed the numerical tolerance "));
+        } else {
+            p.add(Phrase.words(", and "));
+            p.add(Phrase.symbol(dLow > delta ? "d_low" : "d_high"));
+            p.add(Phrase.words(" exceeds the numerical tolerance "));
+        }
+        p.addAll(java.util.List.of(Phrase.symbol("delta"), Phrase.words(" = "), Phrase.number(g(delta), delta),
+                Phrase.words(" (JCGM 101:2008 8.2); report the Monte Carlo result")));
+        return p;
     }
 
     static String standardUncertaintyUndefined(String input, double dof) {

@@ -12,8 +12,6 @@ import java.util.concurrent.TimeoutException;
 import java.util.concurrent.atomic.AtomicBoolean;
 import java.util.concurrent.atomic.AtomicInteger;
 import java.util.concurrent.atomic.AtomicLong;
-import org.apache.commons.rng.UniformRandomProvider;
-import org.apache.commons.rng.simple.RandomSource;
 import org.quire.engine.model.BlockEvaluator;
 
 /**
@@ -114,10 +112,13 @@ public final class MonteCarlo {
      * the sequence started at {@code seed}. References: JCGM 101:2008 C.3.1 (generators with long periods and
      * good statistical properties); Steele, Lea and Flood 2014 (SplitMix64).
      */
-    static UniformRandomProvider blockStream(long seed, long block) {
-        long s0 = mix64(seed + GOLDEN_GAMMA * (2 * block + 1));
-        long s1 = mix64(seed + GOLDEN_GAMMA * (2 * block + 2));
-        return RandomSource.XO_RO_SHI_RO_128_PP.create(new long[] {s0, s1});
+    static BlockStream blockStream(long seed, long block) {
+        return new BlockStream(mix64(seed + GOLDEN_GAMMA * (2 * block + 1)), mix64(seed + GOLDEN_GAMMA * (2 * block + 2)));
+    }
+
+    /** Starts {@code stream} again as the stream of block {@code block} (see {@link #blockStream}). */
+    static void restart(BlockStream stream, long seed, long block) {
+        stream.restart(mix64(seed + GOLDEN_GAMMA * (2 * block + 1)), mix64(seed + GOLDEN_GAMMA * (2 * block + 2)));
     }
 
     /** The SplitMix64 output function (Stafford's Mix13 variant). */
@@ -296,11 +297,13 @@ public final class MonteCarlo {
                     InputSampler.Block sampler = inputs.newBlock(BLOCK_SIZE);
                     double[][] in = new double[inputs.inputCount()][BLOCK_SIZE];
                     double[][] out = new double[k][BLOCK_SIZE];
+                    BlockStream stream = blockStream(settings.seed(), firstBlock);
                     int b;
                     while (!stop.get() && (b = next.getAndIncrement()) < nBlocks) {
                         int from = b * BLOCK_SIZE;
                         int n = Math.min(BLOCK_SIZE, trials - from);
-                        sampler.fill(blockStream(settings.seed(), firstBlock + b), in, n);
+                        restart(stream, settings.seed(), firstBlock + b);
+                        sampler.fill(stream, in, n);
                         session.evaluate(in, n, out);
                         for (int o = 0; o < k; o++) {
                             System.arraycopy(out[o], 0, batch.values[o], from, n);

@@ -365,7 +365,7 @@ public final class CalibrationWindow extends JFrame {
                 case 5: return Double.isNaN(p.runStandardDeviation()) ? "\u2013" : Fmt.working(p.runStandardDeviation());
                 case 6: return Fmt.working(p.repeatabilityUncertainty());
                 case 7: return Fmt.working(p.expandedUncertainty());
-                case 8: return String.format(java.util.Locale.ROOT, "%.2f", p.coverageFactor());
+                case 8: return org.quire.engine.gum.Figures.coverageFactor(p.coverageFactor());
                 case 9: return Double.isNaN(p.cmc()) ? "\u2013" : Fmt.working(p.cmc());
                 case 10: return Fmt.working(p.reportedExpandedUncertainty()) + (p.raisedToCmc() ? " (at the CMC)" : "");
                 case 11: return pc == null ? "\u2013" : Fmt.working(pc.mpe());

@@ -229,6 +229,20 @@ public final class BudgetDocument {
         history.markSaved();
     }
 
+    /**
+     * Records that {@code saved} (a content this document had) was written to {@code target} by
+     * {@link DocumentStore#save} off the event thread, and makes it the document's file. When the content changed
+     * while the file was written, the document stays marked as changed.
+     */
+    public void markSaved(org.quire.engine.document.BudgetDocument saved, Path target) {
+        file = target.toAbsolutePath();
+        if (content == saved) {
+            history.markSaved();
+        } else {
+            history.markUnsaved();
+        }
+    }
+
     private void fireChanged(org.quire.engine.document.BudgetDocument before,
             org.quire.engine.document.BudgetDocument after, String cause) {
         for (Listener l : listeners) {

@@ -15,8 +15,11 @@ public record Problem(Severity severity, Area area, String message, int line, in
     /** How serious a problem is. */
     public enum Severity { ERROR, WARNING }
 
-    /** The section a problem belongs to, for jumping there from the list. */
-    public enum Area { MODEL, INPUTS, CORRELATIONS, RESULTS }
+    /**
+     * The section a problem belongs to, for jumping there from the list; {@code ENTRY} is a value the engineer
+     * typed and the workbench refused (kept until the entry is fixed).
+     */
+    public enum Area { MODEL, INPUTS, CORRELATIONS, RESULTS, ENTRY }
 
     public static Problem of(Severity severity, Area area, String message) {
         return new Problem(severity, area, message, 0, 0, 0);

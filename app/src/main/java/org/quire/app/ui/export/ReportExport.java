@@ -59,13 +59,14 @@ public final class ReportExport {
      * @param gum the GUM result of {@code doc}'s budget
      * @param monteCarlo the Monte Carlo outcome of that same budget from the workbench's last run, or null when it
      *     was not run (the report then says so)
+     * @param library the function set {@code gum} was evaluated with
      * @throws IOException naming the file when it cannot be written
      * @throws IllegalArgumentException when the file name ends in neither .pdf nor .html
      */
     public static void write(BudgetDocument doc, GumResult gum, MonteCarloOutcome monteCarlo, Path target,
-            LocalDate date) throws IOException {
+            LocalDate date, org.quire.engine.model.FunctionLibrary library) throws IOException {
         Format f = formatOf(target);
-        ReportInput in = ReportInput.of(doc.budget(), gum, info(doc, date));
+        ReportInput in = ReportInput.of(doc.budget(), gum, info(doc, date), library);
         if (monteCarlo != null) {
             in = in.withMonteCarlo(monteCarlo);
         }

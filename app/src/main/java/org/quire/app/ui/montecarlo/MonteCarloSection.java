@@ -299,8 +299,12 @@ public final class MonteCarloSection implements Section {
         String colour = String.format("#%06x", Colors.get(c.validated() ? "Quire.ok" : "Quire.error")
                 .getRGB() & 0xffffff);
         s.append("<b style='color:").append(colour).append("'>")
-                .append(c.validated() ? "GUM result validated" : "GUM result NOT validated").append("</b><br>")
-                .append("<div style='width:220px'>").append(esc(c.reason())).append("</div>");
+                .append(c.validated() ? "GUM result validated" : "GUM result NOT validated").append("</b><br>");
+        if (!c.explanation().isEmpty()) {
+            s.append("<div style='width:220px'><b>").append(esc(c.explanation())).append("</b></div>");
+        }
+        s.append("<div style='width:220px'>").append(org.quire.app.report.HtmlReport.math(
+                org.quire.app.report.ReportBuilder.sentence(c.reasonPhrases()))).append("</div>");
         o.standardUncertaintyNote().ifPresent(n -> s.append("<div style='width:220px'>").append(esc(n))
                 .append("</div>"));
         return s.append("</html>").toString();

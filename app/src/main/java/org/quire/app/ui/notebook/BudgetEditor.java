@@ -59,6 +59,8 @@ public final class BudgetEditor extends JPanel implements EditorContext {
     private final List<Consumer<Recalculation>> recalcListeners = new CopyOnWriteArrayList<>();
     private final List<Consumer<String>> selectionListeners = new CopyOnWriteArrayList<>();
     private final List<StatusListener> statusListeners = new CopyOnWriteArrayList<>();
+    private final List<Consumer<String>> problemListeners = new CopyOnWriteArrayList<>();
+    private Problem entryProblem;
     private Recalculation latest;
     private String selectedInput;
     private org.quire.engine.document.BudgetDocument shownContent;
@@ -129,6 +131,18 @@ public final class BudgetEditor extends JPanel implements EditorContext {
         north.add(banners, BorderLayout.NORTH);
         north.add(outline, BorderLayout.SOUTH);
         outline.setBorder(BorderFactory.createMatteBorder(0, 0, 1, 0, Colors.get("Quire.section.rule")));
+        // the wrapped rows of the outline depend on its width: a height worked out at an early, narrow width
+        // (before the window is shown) is worked out again once it has its width
+        outline.addComponentListener(new java.awt.event.ComponentAdapter() {
+            @Override
+            public void componentResized(java.awt.event.ComponentEvent e) {
+                int wanted = outline.getLayout().preferredLayoutSize(outline).height;
+                if (wanted != outline.getHeight()) {
+                    outline.invalidate();
+                    north.revalidate();
+                }
+            }
+        });
         add(north, BorderLayout.NORTH);
         add(scroll, BorderLayout.CENTER);
         recalculator = new Recalculator(library, EventQueue::invokeLater, this::recalculated);
@@ -202,6 +216,7 @@ public final class BudgetEditor extends JPanel implements EditorContext {
             case MODEL: return s == model;
             case INPUTS: return s == inputs;
             case CORRELATIONS: return s == correlations;
+            case ENTRY: return false;
             default: return s == results;
         }
     }
@@ -218,7 +233,7 @@ public final class BudgetEditor extends JPanel implements EditorContext {
         Section target;
         switch (p.area()) {
             case MODEL: target = model; break;
-            case INPUTS: target = inputs; break;
+            case INPUTS: case ENTRY: target = inputs; break;
             case CORRELATIONS: target = correlations; break;
             default: target = results;
         }
@@ -244,7 +259,9 @@ public final class BudgetEditor extends JPanel implements EditorContext {
     @Override
     public boolean edit(String name, String mergeKey, UnaryOperator<Budget> change) {
         try {
-            return doc.apply(name, mergeKey, change);
+            boolean changed = doc.apply(name, mergeKey, change);
+            clearEntryProblem(); // taken (or the same value again): the entry is fixed
+            return changed;
         } catch (IllegalArgumentException | IllegalStateException e) {
             status(e.getMessage(), true);
             return false;
@@ -255,20 +272,59 @@ public final class BudgetEditor extends JPanel implements EditorContext {
     public boolean editDocument(String name, String mergeKey,
             UnaryOperator<org.quire.engine.document.BudgetDocument> change) {
         try {
-            return doc.applyToDocument(name, mergeKey, change);
+            boolean changed = doc.applyToDocument(name, mergeKey, change);
+            clearEntryProblem(); // taken (or the same value again): the entry is fixed
+            return changed;
         } catch (IllegalArgumentException | IllegalStateException e) {
             status(e.getMessage(), true);
             return false;
         }
     }
 
+    /**
+     * Shows a message in the status line; an error (a value refused) is also kept in the problems list until the
+     * entry is fixed: the next edit that the document takes, or the next message that is not an error, clears it.
+     */
     @Override
     public void status(String message, boolean error) {
         statusListeners.forEach(l -> l.status(message, error));
         if (error) {
             java.awt.Toolkit.getDefaultToolkit().beep();
+            entryProblem = Problem.of(Problem.Severity.ERROR, Problem.Area.ENTRY, message);
+            problemListeners.forEach(l -> l.accept(null));
+        } else {
+            clearEntryProblem();
         }
     }
+
+    private void clearEntryProblem() {
+        if (entryProblem != null) {
+            String cleared = entryProblem.message();
+            entryProblem = null;
+            problemListeners.forEach(l -> l.accept(cleared));
+        }
+    }
+
+    /**
+     * @return the problems to list: the engine's for the present budget (none before its first answer) and the
+     *     last refused entry, if it is not fixed yet
+     */
+    public List<Problem> problems() {
+        List<Problem> out = new ArrayList<>();
+        if (entryProblem != null) {
+            out.add(entryProblem);
+        }
+        if (latest != null) {
+            out.addAll(latest.problems());
+        }
+        return out;
+    }
+
+    /**
+     * Hears of changes of the refused entry: told the message of an entry error that was cleared (its field was
+     * fixed), or null when a new one was kept.
+     */
+    public void addEntryProblemListener(Consumer<String> l) { problemListeners.add(l); }
 
     @Override
     public void selectInput(String name) {

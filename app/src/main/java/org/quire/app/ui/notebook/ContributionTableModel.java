@@ -42,16 +42,17 @@ final class ContributionTableModel extends AbstractTableModel {
     @Override
     public String getColumnName(int c) {
         String yu = outputUnit.isBlank() ? "" : " / " + Units.display(outputUnit);
+        // two lines a header (the copy and the tooltip read them as one), so the table fits a 1366-pixel screen
         switch (c) {
             case 0: return "Input";
             case 1: return "Evaluation";
             case 2: return "Distribution";
-            case 3: return "Estimate x\u1d62";
-            case 4: return "Std. uncertainty u(x\u1d62)";
-            case 5: return "Sensitivity c\u1d62";
-            case 6: return "Contribution u\u1d62(y)" + yu;
+            case 3: return "<html>Estimate<br>x\u1d62</html>";
+            case 4: return "<html>Std. uncertainty<br>u(x\u1d62)</html>";
+            case 5: return "<html>Sensitivity<br>c\u1d62</html>";
+            case 6: return "<html>Contribution<br>u\u1d62(y)" + yu + "</html>";
             case 7: return "\u03bd\u1d62";
-            default: return "Share of u_c\u00b2(y) / %";
+            default: return "<html>Share of combined<br>variance / %</html>";
         }
     }
 
@@ -66,7 +67,7 @@ final class ContributionTableModel extends AbstractTableModel {
     String shown(int r, int c) {
         if (totalRow) {
             switch (c) {
-                case 0: return "Combined, u_c(y)";
+                case 0: return "Combined";
                 case 6: return Fmt.working(total.standardUncertainty());
                 case 7: return Fmt.dof(total.effectiveDof());
                 case 8: return Fmt.percent(1.0).replace(" %", "");

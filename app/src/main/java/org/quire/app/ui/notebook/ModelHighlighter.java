@@ -11,12 +11,13 @@ import javax.swing.text.StyledDocument;
 import org.quire.app.ui.common.Colors;
 
 /**
- * Syntax colouring of model text: comments, numbers, operators, names of calls, and the names an equation
- * defines. Colouring only: the meaning of the text is the engine's {@code ModelCompiler}'s business.
+ * Syntax colouring of model text: comments, numbers (with the unit in brackets written after one, coloured
+ * like the number), operators, names of calls, and the names an equation defines. Colouring only: the meaning of the text is the engine's {@code ModelCompiler}'s business.
  */
 final class ModelHighlighter {
     private static final Pattern TOKEN = Pattern.compile(
-            "(?<comment>#[^\\n]*)|(?<number>(?<![\\p{L}_\\d])\\d+(\\.\\d*)?([eE][+-]?\\d+)?|\\.\\d+([eE][+-]?\\d+)?)"
+            "(?<comment>#[^\\n]*)|(?<unit>\\[[^\\]\\n]*\\])"
+                    + "|(?<number>(?<![\\p{L}_\\d])\\d+(\\.\\d*)?([eE][+-]?\\d+)?|\\.\\d+([eE][+-]?\\d+)?)"
                     + "|(?<name>[\\p{L}_][\\p{L}\\p{N}_]*)|(?<op>[-+*/^=(),\u00d7\u00b7\u00f7\u2212])");
     private static final Pattern DEFINED = Pattern.compile("(?m)^\\s*([\\p{L}_][\\p{L}\\p{N}_]*)\\s*(\\([^)]*\\))?\\s*=");
 
@@ -36,7 +37,7 @@ final class ModelHighlighter {
             boolean bold = false;
             if (m.group("comment") != null) {
                 c = Colors.get("Quire.syntax.comment");
-            } else if (m.group("number") != null) {
+            } else if (m.group("number") != null || m.group("unit") != null) {
                 c = Colors.get("Quire.syntax.number");
             } else if (m.group("op") != null) {
                 c = Colors.get("Quire.syntax.operator");

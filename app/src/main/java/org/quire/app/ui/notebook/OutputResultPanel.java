@@ -142,21 +142,46 @@ final class OutputResultPanel extends JPanel {
                 + " with no effect on this output hidden");
     }
 
+    /**
+     * Says in the headline that the figures below are not those of the present budget (it cannot be evaluated),
+     * and greys them.
+     */
+    void markNotCurrent(String why) {
+        String name = shown == null ? "" : shown.name();
+        headline.setText(name + ": " + why);
+        headline.setToolTipText(null);
+        headline.setForeground(Colors.get("Quire.error"));
+        figures.setForeground(Colors.get("Label.disabledForeground"));
+        figures2.setForeground(Colors.get("Label.disabledForeground"));
+    }
+
+    /** @return the headline as shown, for tests */
+    String headlineText() {
+        return headline.getText();
+    }
+
     void show(OutputResult o, int digits) {
+        headline.setForeground(Colors.get("Quire.result.emphasis"));
+        figures.setForeground(Colors.get("Label.foreground"));
+        figures2.setForeground(Colors.get("Label.foreground"));
         String unit = o.unit().isEmpty() ? "" : " " + org.quire.engine.units.Units.display(o.unit());
         String rounded = Rounding.format(o.estimate(), o.expandedUncertainty(), digits);
         String dofNote = Double.isInfinite(o.effectiveDof()) ? "\u221e"
                 : Fmt.dof(o.effectiveDof()) + (o.dofUsed() != o.effectiveDof() ? " (" + Fmt.dof(o.dofUsed()) + " used)" : "");
         set(headline, o.name() + " = (" + rounded + ")" + unit + ",  k = "
-                + String.format(java.util.Locale.ROOT, "%.2f", o.coverageFactor()) + ",  p = "
+                + org.quire.engine.gum.Figures.coverageFactor(o.coverageFactor()) + ",  p = "
                 + Fmt.probability(o.coverageProbability()));
-        set(figures, "y = " + Fmt.num(o.estimate()) + unit
-                + "     u_c(y) = " + Rounding.uncertainty(o.standardUncertainty(), digits).toPlainString() + unit
-                + "     \u03bd_eff = " + dofNote);
-        set(figures2, "k = " + String.format(java.util.Locale.ROOT, "%.3f", o.coverageFactor())
+        set(figures, "<html>y = " + Fmt.num(o.estimate()) + unit
+                + "&nbsp;&nbsp;&nbsp;&nbsp; u<sub>c</sub>(y) = "
+                + Rounding.uncertainty(o.standardUncertainty(), digits).toPlainString() + unit
+                + "&nbsp;&nbsp;&nbsp;&nbsp; \u03bd<sub>eff</sub> = " + dofNote + "</html>");
+        set(figures2, "k = " + org.quire.engine.gum.Figures.coverageFactor(o.coverageFactor())
                 + "     U = " + Rounding.uncertainty(o.expandedUncertainty(), digits).toPlainString() + unit
-                + "     U/|y| = " + (Double.isNaN(o.relativeExpandedUncertainty()) ? "n/a"
-                        : Rounding.uncertainty(100 * o.relativeExpandedUncertainty(), digits).toPlainString() + " %"));
+                // a relative U only where it means something: not for a quantity that is itself in % (an error)
+                + (!org.quire.engine.gum.Figures.relativeUncertaintyMeaningful(o.unit(), o.estimate(),
+                        o.expandedUncertainty()) ? ""
+                        : "     U/|y| = " + Rounding.uncertainty(100 * o.relativeExpandedUncertainty(), digits)
+                                .toPlainString() + " %"));
         boolean columnsChanged = shown == null || !shown.unit().equals(o.unit());
         shown = o;
         model.set(o);
@@ -167,6 +192,14 @@ final class OutputResultPanel extends JPanel {
         }
         applyFilter();
         fitColumns();
+        javax.swing.table.JTableHeader header = table.getTableHeader();
+        int headerHeight = 0;
+        for (int c = 0; c < table.getColumnCount(); c++) {
+            headerHeight = Math.max(headerHeight, header.getDefaultRenderer().getTableCellRendererComponent(table,
+                    table.getColumnModel().getColumn(c).getHeaderValue(), false, false, -1, c).getPreferredSize().height);
+        }
+        header.setPreferredSize(new Dimension(table.getColumnModel().getTotalColumnWidth(), headerHeight + 4));
+        header.revalidate();
         chart.show(o);
         int h = table.getRowHeight() * Math.max(3, table.getRowCount()) + table.getTableHeader().getPreferredSize().height + 4;
         table.getParent().getParent().setPreferredSize(new Dimension(700, h));
@@ -243,7 +276,10 @@ final class OutputResultPanel extends JPanel {
         }
     }
 
-    String summaryText() { return headline.getText() + "\n" + figures.getText() + "\n" + figures2.getText(); }
+    String summaryText() {
+        String plain = figures.getText().replace("&nbsp;", " ").replace("<sub>", "_").replaceAll("<[^>]*>", "");
+        return headline.getText() + "\n" + plain + "\n" + figures2.getText();
+    }
 
     /** Sets a label's text only when it differs: layout of text is the costly part of an update. */
     private static void set(JLabel l, String text) {

@@ -136,10 +136,16 @@ final class ResultsSection implements Section {
             long errors = r.problems().stream().filter(x -> x.severity()
                     == org.quire.app.ui.document.Problem.Severity.ERROR).count();
             String count = errors + (errors == 1 ? " error" : " errors");
-            state.setText(last == null ? "No results: the budget has " + count + " (see the Problems panel)."
-                    : "Not current: the budget has " + count + " (see the Problems panel); the results below are "
-                            + "those of the last budget that could be evaluated.");
+            org.quire.app.ui.document.Problem first = r.problems().stream().filter(x -> x.severity()
+                    == org.quire.app.ui.document.Problem.Severity.ERROR).findFirst().orElse(null);
+            String firstText = first == null ? "" : " (" + first.area().name().toLowerCase(java.util.Locale.ROOT)
+                    + (first.where().isEmpty() ? "" : ", " + first.where()) + (errors > 1 ? ", the first" : "") + ")";
+            state.setText(last == null ? "No results: the budget has " + count + firstText + "; see the Problems panel."
+                    : "Not current: the budget has " + count + firstText + "; below, the last results evaluated.");
             state.setForeground(Colors.get("Quire.error"));
+            for (OutputResultPanel panel : panels.values()) {
+                panel.markNotCurrent("not current, the budget has " + count);
+            }
             return;
         }
         last = r.result();

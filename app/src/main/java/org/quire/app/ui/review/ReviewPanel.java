@@ -32,7 +32,7 @@ import org.quire.app.review.Comment;
 import org.quire.app.review.Mark;
 import org.quire.app.review.Review;
 import org.quire.app.review.ReviewContext;
-import org.quire.app.review.Verdict;
+import org.quire.engine.document.Verdict;
 import org.quire.app.ui.common.Colors;
 import org.quire.app.ui.common.WrapLayout;
 import org.quire.app.ui.document.Recalculation;
@@ -41,12 +41,13 @@ import org.quire.app.ui.common.Section;
 import org.quire.engine.budget.Budget;
 import org.quire.engine.budget.InputQuantity;
 import org.quire.engine.document.BudgetDocument;
+import org.quire.engine.document.DocumentStore;
 
 /**
  * The assessor's review of a budget open read-only: the automatic checklist ({@link Review#start}) with each
  * item's outcome, where the assessor sets a mark and a comment; comments on inputs; and the decision (endorse or
  * send back, with the assessor's name, the date and a reason), recorded in the document's history and saved to
- * its file by a {@link DocumentDecisionRecorder}.
+ * its file; the engine's {@link org.quire.engine.document.ReviewDecisions} owns the rules of the decision.
  */
 public final class ReviewPanel implements Section {
     /** The heading of this section. */
@@ -72,6 +73,8 @@ public final class ReviewPanel implements Section {
     private final JButton record = new JButton("Record decision");
     private final JLabel outcome = new JLabel(" ");
     private Review base;
+    /** The document whose checklist is being worked out off the event thread, or null. */
+    private BudgetDocument pending;
     private Review decided;
 
     public ReviewPanel(EditorContext ctx, Clock clock) {
@@ -188,25 +191,62 @@ public final class ReviewPanel implements Section {
         }
         if (r.result() == null) {
             base = null;
+            pending = null;
             items.set(List.of());
             head.setText("The budget cannot be evaluated (see the problems list); the checklist needs its GUM result.");
             setOpen(false);
             return;
         }
         BudgetDocument d = ctx.document().content();
-        if (base != null && base.contentHash().equals(d.contentHash())) {
-            return;
-        }
-        base = Review.start(r.budget(), r.result(), ReviewContext.none().withUnits(new org.quire.app.review.EngineUnitChecker()),
-                DocumentDecisionRecorder.hasherOf(d));
-        items.set(base.items());
-        head.setText("<html>Checklist of revision " + d.revision() + " (" + d.status().label() + "), content SHA-256 "
-                + d.contentHash().substring(0, 16) + "\u2026. Items <i>not met</i> or <i>to confirm</i> need your mark "
-                + "before the budget can be endorsed.</html>");
-        setOpen(true);
-        if (checklist.getRowCount() > 0 && checklist.getSelectedRow() < 0) {
-            checklist.setRowSelectionInterval(0, 0);
-        }
+        Review prior = base;
+        pending = d;
+        // the content hash of a large budget (200 000 readings) takes seconds: worked out off the event thread
+        new javax.swing.SwingWorker<Review, Void>() {
+            @Override
+            protected Review doInBackground() {
+                if (prior != null && prior.contentHash().equals(d.contentHash())) {
+                    return prior;
+                }
+                return Review.start(r.budget(), r.result(), ReviewContext.none().withUnits(
+                        new org.quire.app.review.EngineUnitChecker(ctx.library())),
+                        org.quire.app.report.ContentHasher.of(d));
+            }
+
+            @Override
+            protected void done() {
+                if (pending != d || decided != null) {
+                    return;
+                }
+                pending = null;
+                Review started;
+                try {
+                    started = get();
+                } catch (InterruptedException e) {
+                    Thread.currentThread().interrupt();
+                    return;
+                } catch (java.util.concurrent.ExecutionException e) {
+                    head.setText("The checklist cannot be drawn up: " + e.getCause().getMessage());
+                    return;
+                }
+                if (started == prior) {
+                    return;
+                }
+                base = started;
+                items.set(base.items());
+                head.setText("<html>Checklist of revision " + d.revision() + " (" + d.status().label()
+                        + "), content SHA-256 " + d.contentHash().substring(0, 16) + "\u2026. Items <i>not met</i> or "
+                        + "<i>to confirm</i> need your mark before the budget can be endorsed.</html>");
+                setOpen(true);
+                if (checklist.getRowCount() > 0 && checklist.getSelectedRow() < 0) {
+                    checklist.setRowSelectionInterval(0, 0);
+                }
+            }
+        }.execute();
+    }
+
+    /** @return whether the checklist is drawn up for the latest result (none is being worked out) */
+    public boolean isCurrent() {
+        return pending == null;
     }
 
     private void setOpen(boolean on) {
@@ -280,9 +320,12 @@ public final class ReviewPanel implements Section {
         }
         try {
             Review r = decide();
-            DocumentDecisionRecorder recorder = new DocumentDecisionRecorder(ctx.document().content(), file, clock);
-            recorder.record(r);
-            BudgetDocument saved = recorder.document();
+            BudgetDocument saved = r.recordIn(ctx.document().content(), clock.instant());
+            try {
+                DocumentStore.save(saved, file);
+            } catch (java.io.IOException e) {
+                throw new UncheckedIOException(e.getMessage(), e);
+            }
             decided = r;
             ctx.document().replaceSaved(saved, file, "Record the review decision");
             setOpen(false);

@@ -1,0 +1,183 @@
+package org.quire.app.ui;
+
+import java.awt.EventQueue;
+import java.io.IOException;
+import java.time.Duration;
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.Optional;
+import javax.swing.SwingWorker;
+import org.quire.app.ui.common.WorkbenchPrefs;
+import org.quire.app.ui.document.BudgetDocument;
+import org.quire.app.ui.document.RecoveryKeeper;
+import org.quire.app.ui.notebook.BudgetEditor;
+import org.quire.engine.document.RecoverySessions;
+import org.quire.engine.document.RecoveryStore;
+import org.quire.engine.io.BudgetFormatException;
+
+/**
+ * Recovery copies of this workbench: it claims a session folder of its own inside the recovery folder of the
+ * preferences (locked while it runs, {@link RecoverySessions}), keeps copies of changed budgets there, and at
+ * start-up offers the copies of workbenches that are no longer running (a crash, a power cut), never those of a
+ * second workbench running beside it.
+ *
+ * <p>Not thread-safe: call on the event thread.
+ */
+final class WorkbenchRecovery {
+    private final WorkbenchFrame frame;
+    private final WorkbenchPrefs prefs;
+    private final RecoverySessions sessions;
+    private final RecoverySessions.Session session;
+    private final RecoveryKeeper keeper;
+
+    WorkbenchRecovery(WorkbenchFrame frame, WorkbenchPrefs prefs) {
+        this.frame = frame;
+        this.prefs = prefs;
+        sessions = RecoverySessions.in(prefs.recoveryFolder());
+        RecoverySessions.Session s;
+        RecoveryStore store;
+        try {
+            s = sessions.claim();
+            store = s.store();
+        } catch (IOException e) {
+            s = null;
+            store = RecoveryStore.of(sessions.base());
+            EventQueue.invokeLater(() -> frame.status("No recovery copies will be kept: " + e.getMessage(), true));
+        }
+        session = s;
+        keeper = new RecoveryKeeper(store, period(), (id, e) -> EventQueue.invokeLater(
+                () -> frame.status("Recovery copy not written: " + e.getMessage(), true)));
+    }
+
+    private Duration period() {
+        int m = prefs.autosaveMinutes();
+        return m > 0 ? Duration.ofMinutes(m) : null;
+    }
+
+    RecoveryKeeper keeper() {
+        return keeper;
+    }
+
+    /** @return this workbench's own recovery folder */
+    java.nio.file.Path folder() {
+        return keeper.store().folder();
+    }
+
+    void applyPeriod() {
+        keeper.setPeriod(period());
+    }
+
+    /** Writes what is pending, stops copying and releases this workbench's folder (kept when copies remain). */
+    void close() {
+        keeper.close();
+        if (session != null) {
+            try {
+                session.close();
+            } catch (IOException e) {
+                // the lock goes with the process anyway; nothing the engineer can do about it
+            }
+        }
+    }
+
+    /**
+     * Offers the copies left by workbenches no longer running: the folders are listed off the event thread, then
+     * a dialog lists each copy with its file and time; the checked ones are opened as changed budgets (and kept
+     * by this workbench from now on), the others discarded. Cancel keeps them all for the next start.
+     */
+    void offer() {
+        record Found(List<RecoverySessions.Session> orphans, Map<RecoveryStore.Pending, RecoverySessions.Session> of,
+                List<String> unreadable) {
+        }
+        new SwingWorker<Found, Void>() {
+            @Override
+            protected Found doInBackground() throws Exception {
+                List<RecoverySessions.Session> orphans = sessions.orphans();
+                Map<RecoveryStore.Pending, RecoverySessions.Session> of = new LinkedHashMap<>();
+                List<String> unreadable = new ArrayList<>();
+                for (RecoverySessions.Session o : orphans) {
+                    for (RecoveryStore.Pending p : o.store().pending(unreadable)) {
+                        of.put(p, o);
+                    }
+                }
+                return new Found(orphans, of, unreadable);
+            }
+
+            @Override
+            protected void done() {
+                Found f;
+                try {
+                    f = get();
+                } catch (InterruptedException e) {
+                    Thread.currentThread().interrupt();
+                    return;
+                } catch (java.util.concurrent.ExecutionException e) {
+                    frame.status("Cannot read the recovery folder " + sessions.base() + ": "
+                            + e.getCause().getMessage(), true);
+                    return;
+                }
+                try {
+                    offer(f.of(), f.unreadable());
+                } finally {
+                    for (RecoverySessions.Session o : f.orphans()) {
+                        try {
+                            o.close();
+                        } catch (IOException e) {
+                            frame.status("Cannot release the recovery folder " + o.folder() + ": " + e.getMessage(),
+                                    true);
+                        }
+                    }
+                }
+            }
+        }.execute();
+    }
+
+    private void offer(Map<RecoveryStore.Pending, RecoverySessions.Session> of, List<String> unreadable) {
+        if (!unreadable.isEmpty()) {
+            frame.status("Unreadable recovery copies in " + sessions.base() + ": " + String.join("; ", unreadable),
+                    true);
+        }
+        if (of.isEmpty()) {
+            return;
+        }
+        List<RecoveryStore.Pending> pending = new ArrayList<>(of.keySet());
+        pending.sort(java.util.Comparator.comparing(RecoveryStore.Pending::saved).reversed());
+        RecoveryDialog dlg = new RecoveryDialog(frame, pending);
+        dlg.setVisible(true);
+        if (dlg.cancelled()) {
+            return;
+        }
+        for (RecoveryStore.Pending p : pending) {
+            if (dlg.restore().contains(p)) {
+                restore(p);
+            } else {
+                try {
+                    of.get(p).store().discard(p.id());
+                } catch (IOException e) {
+                    frame.status("Cannot discard the recovery copy " + p.file() + ": " + e.getMessage(), true);
+                }
+            }
+        }
+    }
+
+    /** Opens a recovery copy as a changed budget belonging to its original file; this workbench keeps it now. */
+    Optional<BudgetEditor> restore(RecoveryStore.Pending p) {
+        try {
+            org.quire.engine.document.BudgetDocument content = p.load();
+            if (session != null && !p.file().getParent().equals(session.folder())) {
+                session.adopt(p.file());
+            }
+            BudgetDocument doc = new BudgetDocument(content, p.originalPath(), "recovered " + content.title(),
+                    prefs.userName());
+            doc.markRecovered(p.id());
+            BudgetEditor ed = frame.open(doc);
+            frame.status("Restored the copy of " + doc.name() + " kept at " + p.saved() + "; save it to keep it",
+                    false);
+            return Optional.of(ed);
+        } catch (IOException | BudgetFormatException e) {
+            frame.showError("Cannot restore the recovery copy", p.file() + ":\n" + e.getMessage());
+            return Optional.empty();
+        }
+    }
+}

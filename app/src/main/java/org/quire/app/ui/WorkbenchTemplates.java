@@ -1,0 +1,118 @@
+package org.quire.app.ui;
+
+import java.io.IOException;
+import java.nio.file.Path;
+import java.util.List;
+import java.util.Optional;
+import java.util.concurrent.ExecutionException;
+import javax.swing.SwingWorker;
+import org.quire.app.ui.common.WorkbenchPrefs;
+import org.quire.app.ui.document.BudgetDocument;
+import org.quire.app.ui.notebook.BudgetEditor;
+import org.quire.app.ui.templates.NewFromTemplateDialog;
+import org.quire.app.ui.templates.TemplateCatalog;
+import org.quire.app.ui.templates.TemplateUpdateDialog;
+import org.quire.engine.document.Template;
+import org.quire.engine.document.TemplateChange;
+import org.quire.engine.document.TemplateLibrary;
+
+/**
+ * The workbench's use of the template library: a new budget from a template, and the notice (with the
+ * field-by-field changes) when a newer version of the template a budget follows is in the library.
+ *
+ * <p>Not thread-safe: call on the event thread.
+ */
+final class WorkbenchTemplates {
+    private final WorkbenchFrame frame;
+    private final WorkbenchPrefs prefs;
+
+    WorkbenchTemplates(WorkbenchFrame frame, WorkbenchPrefs prefs) {
+        this.frame = frame;
+        this.prefs = prefs;
+    }
+
+    /** @return the templates of the shipped folder and the personal and team folders of the preferences */
+    TemplateCatalog templates() {
+        return TemplateCatalog.of(null, prefs.personalTemplates(), prefs.teamTemplates());
+    }
+
+    /**
+     * File &gt; New from template: offers the catalogue, asks for the parameters, opens the new budget.
+     *
+     * @param preselect the file to select in the list, or null
+     */
+    Optional<BudgetEditor> newFromTemplate(Path preselect) {
+        TemplateCatalog.Listing listing;
+        try {
+            listing = templates().list();
+        } catch (IOException e) {
+            frame.showError("Cannot list the templates", e.getMessage());
+            return Optional.empty();
+        }
+        NewFromTemplateDialog dlg = new NewFromTemplateDialog(frame, listing, prefs.userName());
+        if (preselect != null) {
+            dlg.select(preselect);
+        }
+        dlg.setVisible(true);
+        if (dlg.created() == null) {
+            return Optional.empty();
+        }
+        BudgetEditor ed = frame.open(new BudgetDocument(dlg.created(), null, "new from " + shortName(dlg.createdFrom()),
+                prefs.userName()));
+        frame.status("New budget from " + dlg.createdFrom().file().getFileName()
+                + (dlg.createdFrom().isTemplate() ? "" : " (a plain budget: copied, no template origin recorded)"),
+                false);
+        return Optional.of(ed);
+    }
+
+    private static String shortName(TemplateCatalog.Entry e) {
+        String n = String.valueOf(e.file().getFileName());
+        return n.endsWith(".json") ? n.substring(0, n.length() - 5) : n;
+    }
+
+    /** Looks, off the event thread, for a newer version of the template the budget follows, and offers it. */
+    void checkTemplate(BudgetEditor ed) {
+        org.quire.engine.document.BudgetDocument content = ed.document().content();
+        if (content.templateOrigin() == null) {
+            return;
+        }
+        TemplateCatalog catalog = templates();
+        new SwingWorker<Optional<Template>, Void>() {
+            @Override
+            protected Optional<Template> doInBackground() throws Exception {
+                return catalog.newerTemplate(content);
+            }
+
+            @Override
+            protected void done() {
+                try {
+                    Optional<Template> newer = get();
+                    if (newer.isPresent() && frame.editors().contains(ed)) {
+                        Template t = newer.get();
+                        ed.showNotice("This budget follows template " + t.id() + " version "
+                                + content.templateOrigin().version() + "; version " + t.version()
+                                + " is in the library.", "Review the changes\u2026", () -> offerTemplateChanges(ed, t));
+                    }
+                } catch (InterruptedException e) {
+                    Thread.currentThread().interrupt();
+                } catch (ExecutionException e) {
+                    frame.status("Cannot look for a newer template: " + e.getCause().getMessage(), true);
+                }
+            }
+        }.execute();
+    }
+
+    /** Shows the changes a newer template brings, field by field, and takes the checked ones over. */
+    void offerTemplateChanges(BudgetEditor ed, Template newer) {
+        BudgetDocument doc = ed.document();
+        List<TemplateChange> changes = TemplateLibrary.compare(doc.content(), newer);
+        TemplateUpdateDialog dlg = new TemplateUpdateDialog(frame, newer, doc.content().templateOrigin().version(),
+                changes);
+        dlg.setVisible(true);
+        List<TemplateChange> chosen = dlg.chosen();
+        if (!chosen.isEmpty()) {
+            ed.editDocument("Take over " + chosen.size() + " change(s) of template " + newer.id(), "",
+                    d -> TemplateLibrary.adopt(d, newer, chosen, doc.user(), doc.now()));
+        }
+    }
+}
