@@ -65,7 +65,7 @@ public final class CalibrationReport {
      */
     public static DocumentInfo documentInfo(Calibration c, String methodFile, LocalDate date) {
         CertificateDetails d = c.details();
-        String item = join(d.item().type(), d.item().size(),
+        String item = CertificateBuilder.join(d.item().type(), d.item().size(),
                 d.item().serial().isEmpty() ? "" : "serial number " + d.item().serial());
         String title = c.title().isEmpty() ? "Calibration" + (item.isEmpty() ? "" : " of " + item) : c.title();
         return new DocumentInfo(d.laboratory().name(), title, item, NOT_RECORDED, NOT_RECORDED, date, d.author(),
@@ -139,10 +139,10 @@ public final class CalibrationReport {
         Calibration c = r.calibration();
         CertificateDetails d = c.details();
         List<List<Cell>> rows = new ArrayList<>();
-        rows.add(fact("laboratory", join(d.laboratory().name(), d.laboratory().address(),
+        rows.add(fact("laboratory", CertificateBuilder.join(d.laboratory().name(), d.laboratory().address(),
                 d.laboratory().accreditation())));
-        rows.add(fact("customer", join(d.customer().name(), d.customer().address())));
-        rows.add(fact("item calibrated", join(d.item().type(), d.item().size(),
+        rows.add(fact("customer", CertificateBuilder.join(d.customer().name(), d.customer().address())));
+        rows.add(fact("item calibrated", CertificateBuilder.join(d.item().type(), d.item().size(),
                 d.item().serial().isEmpty() ? "" : "serial number " + d.item().serial())));
         rows.add(fact("date of calibration", d.date() == null ? "" : d.date().toString()));
         rows.add(fact("method", r.methodTitle() + "; template " + c.method().id() + ", version "
@@ -421,15 +421,5 @@ public final class CalibrationReport {
             blocks.add(new Paragraph("Overall, " + s.phase().label() + ": " + s.conformity().overall().label() + "."));
         }
         return new Part("Conformity", blocks);
-    }
-
-    private static String join(String... parts) {
-        List<String> out = new ArrayList<>();
-        for (String p : parts) {
-            if (p != null && !p.isBlank()) {
-                out.add(p.strip().replace("\n", ", "));
-            }
-        }
-        return String.join(", ", out);
     }
 }

@@ -163,7 +163,8 @@ public final class CertificateBuilder {
         return new Certificate(number, d.laboratory(), facts, parts, Cautions.TEXT, hash);
     }
 
-    private static String join(String... parts) {
+    /** @return the non-blank parts, each on one line, joined by commas (the certificate's and the report's facts) */
+    static String join(String... parts) {
         List<String> out = new ArrayList<>();
         for (String p : parts) {
             if (p != null && !p.isBlank()) {
