@@ -3,6 +3,7 @@ package org.quire.app;
 import java.awt.AWTError;
 import java.awt.HeadlessException;
 import org.quire.app.cli.CommandLine;
+import org.quire.app.cli.Terminal;
 import org.quire.app.ui.Workbench;
 
 /**
@@ -22,7 +23,7 @@ public final class Main {
             words = new String[] {"open", args[0]};
         }
         boolean[] opened = {false};
-        int status = CommandLine.run(words, System.out, System.err, (file, review) -> {
+        int status = CommandLine.run(words, Terminal.out(), Terminal.err(), (file, review) -> {
             try {
                 Workbench.start(file, review);
                 opened[0] = true;

@@ -3,15 +3,23 @@ package org.quire.app.cli;
 import java.util.Locale;
 import org.quire.engine.gum.Contribution;
 import org.quire.engine.gum.CorrelationTerm;
+import org.quire.engine.gum.Figures;
 import org.quire.engine.gum.GumResult;
+import org.quire.engine.gum.HigherOrderTerms;
 import org.quire.engine.gum.OutputResult;
 import org.quire.engine.gum.Rounding;
+import org.quire.engine.units.Units;
 
 /** Formats a GUM result as the plain-text budget table the command line prints. */
 final class BudgetTableText {
     private BudgetTableText() {
     }
 
+    /**
+     * The budget table by the engine's one rule for figures ({@link Figures}): estimates as entered, u(x_i), c_i
+     * and u_i(y) to {@link Figures#WORKING_DIGITS} significant digits, shares to 0.1 %, and u_c, U and the result
+     * rounded to the budget's significant digits (JCGM 100:2008 7.2.6), as the workbench's results show them.
+     */
     static String format(String title, GumResult r) {
         StringBuilder s = new StringBuilder();
         int digits = r.settings().significantDigits();
@@ -20,38 +28,43 @@ final class BudgetTableText {
             s.append("warning: ").append(w).append('\n');
         }
         for (OutputResult o : r.outputs()) {
-            String unit = o.unit().isEmpty() ? "" : " " + o.unit();
-            s.append('\n').append("Output ").append(o.name()).append(unit.isEmpty() ? "" : " [" + o.unit() + "]").append('\n');
-            s.append(String.format(Locale.ROOT, "  %-14s %-4s %-13s %16s %12s %12s %12s %8s %7s%n", "input", "type",
-                    "distribution", "x_i", "u(x_i)", "c_i", "u_i(y)", "nu_i", "share"));
+            String shownUnit = Units.display(o.unit());
+            String unit = o.unit().isEmpty() ? "" : " " + shownUnit;
+            String perUnit = o.unit().isEmpty() ? "" : " [" + shownUnit + "]";
+            s.append('\n').append("Output ").append(o.name()).append(perUnit).append('\n');
+            s.append(String.format(Locale.ROOT, "  %-14s %-4s %-13s %16s %13s %13s %15s %6s %7s%n", "input", "type",
+                    "distribution", "x_i", "u(x_i)", "c_i", "u_i(y)" + perUnit, "\u03bd_i", "share"));
             for (Contribution c : o.contributions()) {
-                s.append(String.format(Locale.ROOT, "  %-14s %-4s %-13s %16s %12s %12s %12s %8s %6.1f%%%n",
-                        c.input(), c.type(), c.distribution(), g(c.estimate(), 10), g(c.standardUncertainty(), 4),
-                        g(c.sensitivity(), 4), g(c.contribution(), 4), dof(c.dof()), 100 * c.share()));
+                s.append(String.format(Locale.ROOT, "  %-14s %-4s %-13s %16s %13s %13s %15s %6s %7s%n",
+                        c.input(), c.type(), c.distribution(), Figures.estimate(c.estimate()),
+                        working(c.standardUncertainty()), working(c.sensitivity()), working(c.contribution()),
+                        Figures.dof(c.dof()), Figures.percent(c.share()) + " %"));
             }
             for (CorrelationTerm t : o.correlationTerms()) {
-                s.append(String.format(Locale.ROOT, "  correlation term %s, %s (r = %s): %s to u_c^2%n", t.first(),
-                        t.second(), g(t.r(), 3), g(t.variance(), 4)));
+                s.append(String.format(Locale.ROOT, "  correlation term %s, %s (r = %s): %s%s to u_c\u00b2(y)%n",
+                        t.first(), t.second(), Figures.estimate(t.r()), working(t.variance()), squared(shownUnit)));
             }
-            if (o.higherOrderTerms() == org.quire.engine.gum.HigherOrderTerms.INCLUDED) {
-                s.append(String.format(Locale.ROOT, "  higher-order terms: %s to u_c^2%n", g(o.higherOrderVariance(), 4)));
-            } else if (o.higherOrderTerms() == org.quire.engine.gum.HigherOrderTerms.NOT_INCLUDED) {
+            if (o.higherOrderTerms() == HigherOrderTerms.INCLUDED) {
+                s.append(String.format(Locale.ROOT, "  higher-order terms: %s%s to u_c\u00b2(y)%n",
+                        working(o.higherOrderVariance()), squared(shownUnit)));
+            } else if (o.higherOrderTerms() == HigherOrderTerms.NOT_INCLUDED) {
                 s.append("  higher-order terms: ").append(o.higherOrderTerms().text()).append('\n');
             }
-            s.append(String.format(Locale.ROOT, "  estimate                          y = %s%s%n", g(o.estimate(), 12), unit));
-            s.append(String.format(Locale.ROOT, "  combined standard uncertainty   u_c = %s%s%n", g(o.standardUncertainty(), 5), unit));
+            s.append(String.format(Locale.ROOT, "  estimate                           y = %s%s%n", Figures.estimate(o.estimate()), unit));
+            s.append(String.format(Locale.ROOT, "  combined standard uncertainty u_c(y) = %s%s%n",
+                    uncertainty(o.standardUncertainty(), digits), unit));
             String used = Double.isInfinite(o.effectiveDof()) || o.dofUsed() == o.effectiveDof() ? ""
-                    : " (" + dof(o.dofUsed()) + " used)";
-            s.append(String.format(Locale.ROOT, "  effective degrees of freedom nu_eff = %s%s%n", dof(o.effectiveDof()), used));
-            s.append(String.format(Locale.ROOT, "  coverage factor                   k = %s (p = %s %%)%n",
-                    g(o.coverageFactor(), 4), g(100 * o.coverageProbability(), 4)));
-            s.append(String.format(Locale.ROOT, "  expanded uncertainty              U = %s%s%s%n", g(o.expandedUncertainty(), 5), unit,
-                    !org.quire.engine.gum.Figures.relativeUncertaintyMeaningful(o.unit(), o.estimate(),
-                            o.expandedUncertainty()) ? ""
-                            : String.format(Locale.ROOT, " (%s %% of |y|)", g(100 * o.relativeExpandedUncertainty(), 3))));
+                    : " (" + Figures.dof(o.dofUsed()) + " used)";
+            s.append(String.format(Locale.ROOT, "  effective degrees of freedom   \u03bd_eff = %s%s%n", Figures.dof(o.effectiveDof()), used));
+            s.append(String.format(Locale.ROOT, "  coverage factor                    k = %s (p = %s %%)%n",
+                    Figures.coverageFactor(o.coverageFactor()), Figures.probability(o.coverageProbability())));
+            s.append(String.format(Locale.ROOT, "  expanded uncertainty               U = %s%s%s%n",
+                    uncertainty(o.expandedUncertainty(), digits), unit,
+                    !Figures.relativeUncertaintyMeaningful(o.unit(), o.estimate(), o.expandedUncertainty()) ? ""
+                            : " (" + uncertainty(100 * o.relativeExpandedUncertainty(), digits) + " % of |y|)"));
             s.append(String.format(Locale.ROOT, "  result: %s = (%s)%s, k = %s, p = %s %%%n", o.name(),
-                    Rounding.format(o.estimate(), o.expandedUncertainty(), digits), unit, g(o.coverageFactor(), 3),
-                    g(100 * o.coverageProbability(), 4)));
+                    Rounding.format(o.estimate(), o.expandedUncertainty(), digits), unit,
+                    Figures.coverageFactor(o.coverageFactor()), Figures.probability(o.coverageProbability())));
             for (String w : o.warnings()) {
                 s.append("  warning: ").append(w).append('\n');
             }
@@ -74,19 +87,21 @@ final class BudgetTableText {
         return s.toString();
     }
 
-    static String g(double v, int sig) {
-        if (Double.isNaN(v)) {
-            return "-";
-        }
-        if (v == 0) {
-            return "0";
-        }
-        return String.format(Locale.ROOT, "%." + sig + "g", v);
+    /** @return a working figure by {@link Figures#working}, "–" where it is not defined */
+    static String working(double v) {
+        return Figures.working(v);
+    }
+
+    /** @return an uncertainty rounded to {@code digits} significant digits (JCGM 100:2008 7.2.6), as stated */
+    static String uncertainty(double u, int digits) {
+        return Double.isFinite(u) ? Rounding.uncertainty(u, digits).toPlainString() : Figures.sig(u, digits);
+    }
+
+    private static String squared(String unit) {
+        return unit.isEmpty() ? "" : " (" + unit + ")\u00b2";
     }
 
     static String dof(double nu) {
-        return org.quire.engine.gum.Figures.dofPlain(nu);
+        return Figures.dofPlain(nu);
     }
-
-
 }

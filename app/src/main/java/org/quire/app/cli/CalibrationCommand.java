@@ -437,15 +437,15 @@ final class CalibrationCommand implements Callable<Integer> {
     private static void series(StringBuilder s, CalibrationResult r, SeriesResult ser) {
         s.append(ser.phase().label()).append(":\n");
         s.append(f("  %-8s %5s %12s %12s %10s %10s %8s %6s %10s %8s %10s%n", "point", "row", "flow / " + r.flowUnit(),
-                "error / %", "s / %", "u_rep / %", "nu_eff", "k", "U / %", "CMC / %", "reported U"));
+                "error / %", "s / %", "u_rep / %", "\u03bd_eff", "k", "U / %", "CMC / %", "reported U"));
         for (PointResult p : ser.points()) {
             for (RunResult run : p.runs()) {
                 s.append(f("  %-8s %5s %12s %12.4f%n", "", run.sourceRow() > 0 ? Integer.toString(run.sourceRow()) : "-",
                         g(run.flow()), run.error()));
             }
-            s.append(f("  %-8s %5s %12s %12.4f %10s %10s %8s %6.3f %10.4f %8s %10.4f%s%n", p.label(), "mean",
+            s.append(f("  %-8s %5s %12s %12.4f %10s %10s %8s %6s %10.4f %8s %10.4f%s%n", p.label(), "mean",
                     g(p.flow()), p.error(), Double.isNaN(p.runStandardDeviation()) ? "-" : f("%.4f", p.runStandardDeviation()),
-                    f("%.4f", p.repeatabilityUncertainty()), FitCommand.dof(p.effectiveDof()), p.coverageFactor(),
+                    f("%.4f", p.repeatabilityUncertainty()), org.quire.engine.gum.Figures.dof(p.effectiveDof()), org.quire.engine.gum.Figures.coverageFactor(p.coverageFactor()),
                     p.expandedUncertainty(), Double.isNaN(p.cmc()) ? "-" : f("%.3f", p.cmc()),
                     p.reportedExpandedUncertainty(), p.raisedToCmc() ? "  (at the CMC)" : ""));
         }

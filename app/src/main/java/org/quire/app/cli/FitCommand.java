@@ -170,7 +170,8 @@ final class FitCommand implements Callable<Integer> {
     }
 
     static String g(double v) {
-        return String.format(Locale.ROOT, "%.6g", v);
+        // six significant digits: enough to check a fit against ISO/TS 28037's worked examples
+        return org.quire.engine.gum.Figures.sig(v, 6);
     }
 
     static String dof(double v) {

@@ -8,12 +8,15 @@ import org.quire.app.common.Cautions;
 import org.quire.app.common.Engine;
 import org.quire.engine.budget.Budget;
 import org.quire.engine.budget.EvaluationSettings;
+import org.quire.engine.gum.Figures;
 import org.quire.engine.gum.GumEvaluator;
 import org.quire.engine.gum.GumResult;
 import org.quire.engine.io.BudgetJson;
 import org.quire.engine.io.MonteCarloJson;
 import org.quire.engine.model.CompiledModel;
+import org.quire.engine.units.Units;
 import org.quire.engine.montecarlo.BudgetSimulation;
+import org.quire.engine.montecarlo.CoverageInterval;
 import org.quire.engine.montecarlo.GumComparison;
 import org.quire.engine.montecarlo.MonteCarloOutcome;
 import org.quire.engine.montecarlo.MonteCarloResult;
@@ -105,28 +108,37 @@ final class MonteCarloCommand implements Callable<Integer> {
         return 0;
     }
 
+    /**
+     * The Monte Carlo result by the engine's one rule for figures, as the workbench's Monte Carlo section shows it:
+     * u(y) rounded to the budget's significant digits, the mean and the interval ends to its decimal place
+     * ({@link Figures#intervalEnd}, JCGM 101:2008 7.9), the trial count in groups of three.
+     */
     static String text(String title, MonteCarloOutcome o) {
         MonteCarloResult r = o.result();
         StringBuilder s = new StringBuilder();
         s.append("Budget: ").append(title).append('\n');
-        s.append(String.format(Locale.ROOT, "Monte Carlo method (JCGM 101): %d trials, seed %d, p = %s %%%s%n",
-                r.trials(), r.seed(), BudgetTableText.g(100 * r.coverageProbability(), 4),
+        s.append(String.format(Locale.ROOT, "Monte Carlo method (JCGM 101): %s trials, seed %d, p = %s %%%s%n",
+                Figures.count(r.trials()), r.seed(), Figures.probability(r.coverageProbability()),
                 r.settings().adaptive() ? ", adaptive: " + r.adaptiveRuns() + " runs"
                         + (r.stabilized() ? ", stabilized" : ", NOT stabilized") : ""));
         for (MonteCarloOutcome.Output m : o.outputs()) {
             GumComparison c = m.comparison();
-            String unit = m.unit().isEmpty() ? "" : " " + m.unit();
-            s.append('\n').append("Output ").append(m.name()).append(unit.isEmpty() ? "" : " /" + unit).append('\n');
-            s.append(String.format(Locale.ROOT, "  mean                     %s%n", BudgetTableText.g(m.estimate(), 10)));
-            s.append(String.format(Locale.ROOT, "  standard uncertainty     %s%n", m.hasStandardUncertainty()
-                    ? BudgetTableText.g(m.standardUncertainty(), 5) : "not defined"));
-            s.append(String.format(Locale.ROOT, "  symmetric interval       [%s, %s]%n",
-                    BudgetTableText.g(m.symmetricInterval().lower(), 8), BudgetTableText.g(m.symmetricInterval().upper(), 8)));
-            s.append(String.format(Locale.ROOT, "  shortest interval        [%s, %s]%n",
-                    BudgetTableText.g(m.shortestInterval().lower(), 8), BudgetTableText.g(m.shortestInterval().upper(), 8)));
-            s.append(String.format(Locale.ROOT, "  GUM interval             [%s, %s]%n",
-                    BudgetTableText.g(m.gumInterval().lower(), 8), BudgetTableText.g(m.gumInterval().upper(), 8)));
-            s.append(String.format(Locale.ROOT, "  comparison (JCGM 101 clause 8): %s%n", c.verdict().word()));
+            int digits = c.significantDigits();
+            String shownUnit = Units.display(m.unit());
+            String unit = m.unit().isEmpty() ? "" : " " + shownUnit;
+            double u = m.hasStandardUncertainty() ? m.standardUncertainty() : Double.NaN;
+            s.append('\n').append("Output ").append(m.name()).append(unit.isEmpty() ? "" : " [" + shownUnit + "]").append('\n');
+            s.append(String.format(Locale.ROOT, "  estimate (mean)             y = %s%s%n",
+                    Figures.intervalEnd(m.estimate(), u, digits), unit));
+            s.append(String.format(Locale.ROOT, "  standard uncertainty     u(y) = %s%n", m.hasStandardUncertainty()
+                    ? BudgetTableText.uncertainty(u, digits) + unit : "not defined"));
+            interval(s, "probabilistically symmetric", m.symmetricInterval(), u, digits, unit);
+            interval(s, "shortest", m.shortestInterval(), u, digits, unit);
+            interval(s, "GUM y \u00b1 U", m.gumInterval(), u, digits, unit);
+            s.append(String.format(Locale.ROOT, "  comparison (JCGM 101:2008 8): %s%n", c.verdict().statement()));
+            if (!c.explanation().isEmpty()) {
+                s.append("  ").append(c.explanation()).append('\n');
+            }
             s.append("  ").append(c.reason()).append('\n');
             m.summary().exclusionNote().ifPresent(n -> s.append("  note: ").append(n).append('\n'));
         }
@@ -134,5 +146,10 @@ final class MonteCarloCommand implements Callable<Integer> {
             s.append("note: ").append(n).append('\n');
         }
         return s.toString();
+    }
+
+    private static void interval(StringBuilder s, String label, CoverageInterval i, double u, int digits, String unit) {
+        s.append(String.format(Locale.ROOT, "  %-27s %s %%: [%s, %s]%s%n", label, Figures.probability(i.probability()),
+                Figures.intervalEnd(i.lower(), u, digits), Figures.intervalEnd(i.upper(), u, digits), unit));
     }
 }

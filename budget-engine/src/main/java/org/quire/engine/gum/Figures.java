@@ -70,6 +70,21 @@ public final class Figures {
         return sig(k, 3);
     }
 
+    /**
+     * @param v an end of a coverage interval (or a Monte Carlo estimate)
+     * @param u the standard uncertainty it goes with
+     * @param digits the significant digits u is stated to
+     * @return {@code v} to the decimal place of {@code u} rounded to {@code digits} significant digits (JCGM 100:2008
+     *     7.2.6; JCGM 101:2008 7.9 states the ends of a coverage interval to the decimal place of u(y)), or to 6 significant digits when u is
+     *     not a positive finite number
+     */
+    public static String intervalEnd(double v, double u, int digits) {
+        if (!Double.isFinite(v)) {
+            return sig(v, 6);
+        }
+        return Double.isFinite(u) && u > 0 ? minus(Rounding.estimate(v, u, digits).toPlainString()) : compact(v, 6);
+    }
+
     /** @return a working figure to {@link #WORKING_DIGITS} significant digits, e.g. {@code 0.00289}, {@code 2.89 × 10⁻⁵} */
     public static String working(double v) {
         return sig(v, WORKING_DIGITS);

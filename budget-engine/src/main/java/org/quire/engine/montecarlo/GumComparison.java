@@ -41,6 +41,14 @@ public final class GumComparison {
         public String word() {
             return this == VALIDATED ? "validated" : "not-validated";
         }
+
+        /**
+         * @return the verdict as screens, reports and the command line state it: {@code GUM result validated} or
+         *     {@code GUM result NOT validated} (JCGM 101:2008 8.2 c)
+         */
+        public String statement() {
+            return this == VALIDATED ? "GUM result validated" : "GUM result NOT validated";
+        }
     }
 
     private final double gumEstimate;

@@ -299,7 +299,7 @@ public final class MonteCarloSection implements Section {
         String colour = String.format("#%06x", Colors.get(c.validated() ? "Quire.ok" : "Quire.error")
                 .getRGB() & 0xffffff);
         s.append("<b style='color:").append(colour).append("'>")
-                .append(c.validated() ? "GUM result validated" : "GUM result NOT validated").append("</b><br>");
+                .append(c.verdict().statement()).append("</b><br>");
         if (!c.explanation().isEmpty()) {
             s.append("<div style='width:220px'><b>").append(esc(c.explanation())).append("</b></div>");
         }
@@ -312,8 +312,7 @@ public final class MonteCarloSection implements Section {
 
     /** An interval's ends to the decimal place of u at the budget's digits (JCGM 100:2008 7.2.6), else 6 digits. */
     private static String end(double v, double u, int digits) {
-        return Double.isFinite(u) && u > 0 ? Rounding.estimate(v, u, digits).toPlainString().replace('-', '\u2212')
-                : org.quire.engine.gum.Figures.compact(v, 6);
+        return org.quire.engine.gum.Figures.intervalEnd(v, u, digits);
     }
 
     private static void interval(StringBuilder s, String label, CoverageInterval i, String unit, double u, int digits) {
