@@ -139,7 +139,31 @@ public final class FlowRange {
                 points.flowUnit(), table, cov, corr, assessment);
     }
 
-    /** The budget with the varying inputs' estimates and uncertainties of point p. */
+    /**
+     * The budget of one of its own flow points, as {@link #evaluate(Budget, FunctionLibrary)} evaluates it there:
+     * for a drill-down from a point of the flow range to its full budget.
+     *
+     * @param p the point, from 0 in table order
+     * @throws IllegalArgumentException when the budget has no flow points or {@code p} is not one of them
+     */
+    public static Budget atPoint(Budget budget, int p) {
+        if (budget == null || budget.flowPoints() == null) {
+            throw new IllegalArgumentException("the budget has no flow points: add a 'flowPoints' table with one row "
+                    + "per flow");
+        }
+        int m = budget.flowPoints().rows().size();
+        if (p < 0 || p >= m) {
+            throw new IllegalArgumentException("flow point " + (p + 1) + " does not exist: the budget has " + m
+                    + " flow points");
+        }
+        return atPoint(budget, budget.flowPoints(), p);
+    }
+
+    /**
+     * The budget with the varying inputs' estimates and uncertainties of point p: each input with a column becomes
+     * a normal Type B evaluation with the point's estimate and standard uncertainty (its degrees of freedom kept),
+     * or a constant when its uncertainty is zero; the result carries no flow points.
+     */
     private static Budget atPoint(Budget budget, FlowPoints points, int p) {
         Map<String, Double> estimate = new HashMap<>();
         Map<String, Double> uncertainty = new HashMap<>();

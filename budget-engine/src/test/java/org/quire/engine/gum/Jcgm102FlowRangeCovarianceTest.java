@@ -62,6 +62,22 @@ class Jcgm102FlowRangeCovarianceTest {
     }
 
     @Test
+    void theBudgetOfAPointIsTheOneTheRangeEvaluatesThere() throws Exception {
+        // y = k q with the second point's q = 2, u(q) = 0.05 and the shared k = 2, u(k) = 0.1 (by hand):
+        // y = 4, u^2(y) = q^2 u^2(k) + k^2 u^2(q) = 4 * 0.01 + 4 * 0.0025 = 0.05
+        Budget b = budget("y = k * q", List.of(normal("k", 2, 0.1), normal("q", 1, 0.05)))
+                .withFlowPoints(table(List.of("q", "u(q)"), new double[] {1, 1, 0.05}, new double[] {2, 2, 0.05}));
+        Budget second = FlowRange.atPoint(b, 1);
+        assertEquals(null, second.flowPoints(), "the budget of a point is a budget of that point only");
+        OutputResult y = GumEvaluator.evaluate(second, LIB).output("y");
+        assertEquals(4.0, y.estimate(), 1e-15);
+        assertEquals(Math.sqrt(0.05), y.standardUncertainty(), 1e-15);
+        assertEquals(FlowRange.evaluate(b, LIB).points().get(1).standardUncertainty(), y.standardUncertainty(), 0.0);
+        assertThrows(IllegalArgumentException.class, () -> FlowRange.atPoint(b, 2));
+        assertThrows(IllegalArgumentException.class, () -> FlowRange.atPoint(b.withFlowPoints(null), 0));
+    }
+
+    @Test
     void withNoSharedInputThePointResultsAreUncorrelated() throws Exception {
         Budget b = budget("y = k * q", List.of(normal("k", 2, 0.1), normal("q", 1, 0.05)));
         FlowRangeResult r = FlowRange.evaluate(b, table(List.of("k", "q"), new double[] {1, 2, 1},
