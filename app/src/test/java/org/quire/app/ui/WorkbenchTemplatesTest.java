@@ -127,6 +127,25 @@ class WorkbenchTemplatesTest extends GuiTestSupport {
             if (correlations.getRowCount() > 1) {
                 assertTrue(!correlations.isCellEditable(0, 2), "the template locks the correlations");
             }
+            // the template locks the settings: coverage, digits, trials, seed and adaptive mode, with the reason
+            assertTrue(shipped.spec().locked().contains("settings"), "the shipped template locks its settings");
+            for (String name : List.of("coverageProbability", "significantDigits")) {
+                javax.swing.JComponent c = named(ed, name);
+                assertTrue(!c.isEnabled(), name + " is read-only");
+                assertTrue(String.valueOf(c.getToolTipText()).startsWith(reason), c.getToolTipText());
+            }
+            assertEquals("The coverage and evaluation settings are " + reason + " (the method's settings): read-only.",
+                    ((JLabel) named(ed, "resultsLock")).getText());
+            assertTrue(((JLabel) named(ed, "resultsLock")).isVisible());
+            for (String name : List.of("mcTrials", "mcSeed")) {
+                JTextField f = named(ed, name);
+                assertTrue(!f.isEditable(), name + " is read-only");
+                assertTrue(String.valueOf(f.getToolTipText()).startsWith(reason), f.getToolTipText());
+            }
+            assertTrue(!((javax.swing.JCheckBox) named(ed, "mcAdaptive")).isEnabled(), "adaptive mode is read-only");
+            assertEquals("Trials, seed and adaptive mode are " + reason + " (the method's settings): read-only.",
+                    ((JLabel) named(ed, "mcLock")).getText());
+            assertTrue(((JLabel) named(ed, "mcLock")).isVisible());
             return null;
         });
         onEdt(() -> { ed.selectInput("t_tank"); return null; });
@@ -272,6 +291,14 @@ class WorkbenchTemplatesTest extends GuiTestSupport {
         assertEquals(1, ed.document().content().revision());
         waitForCurrentResult(ed);
         assertNotNull(onEdt(() -> ed.resultSummary("E")));
+        onEdt(() -> {
+            // without a template nothing locks the settings
+            assertTrue(((javax.swing.JComponent) named(ed, "coverageProbability")).isEnabled());
+            assertTrue(((JTextField) named(ed, "mcTrials")).isEditable());
+            assertTrue(!((JLabel) named(ed, "resultsLock")).isVisible());
+            assertTrue(!((JLabel) named(ed, "mcLock")).isVisible());
+            return null;
+        });
     }
 
     @Test

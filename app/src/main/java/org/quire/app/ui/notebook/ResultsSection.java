@@ -38,6 +38,9 @@ final class ResultsSection implements Section {
     private final JSpinner digits = new JSpinner(new SpinnerNumberModel(2, 1, 4, 1));
     private final JCheckBox higher = new JCheckBox("Higher-order terms");
     private final JCheckBox truncate = new JCheckBox("Truncate \u03bd_eff");
+    private final JLabel lock = new JLabel();
+    /** The settings' own tooltips, shown again when they are not locked. */
+    private final Map<JComponent, String> tips = new LinkedHashMap<>();
     private boolean updating;
     private GumResult last;
 
@@ -65,7 +68,14 @@ final class ResultsSection implements Section {
         state.setName("resultsState");
         state.setFont(state.getFont().deriveFont(java.awt.Font.BOLD));
         north.add(state, BorderLayout.NORTH);
+        lock.setName("resultsLock");
+        lock.setForeground(Colors.get("Quire.warning"));
+        lock.setVisible(false);
+        north.add(lock, BorderLayout.CENTER);
         north.add(settings, BorderLayout.SOUTH);
+        for (JComponent c : new JComponent[] {byP, byK, p, k, digits, higher, truncate}) {
+            tips.put(c, c.getToolTipText());
+        }
         body.add(north, BorderLayout.NORTH);
         outputs.setLayout(new BoxLayout(outputs, BoxLayout.Y_AXIS));
         body.add(outputs, BorderLayout.CENTER);
@@ -85,7 +95,7 @@ final class ResultsSection implements Section {
     }
 
     private void commitSettings() {
-        if (updating || ctx.readOnly()) {
+        if (updating || ctx.readOnly() || lockedBy() != null) {
             return;
         }
         EvaluationSettings s = ctx.document().budget().settings();
@@ -169,11 +179,30 @@ final class ResultsSection implements Section {
         outputs.repaint();
     }
 
+    /** @return the template that locks the budget's settings (the method's), or null when none does */
+    private org.quire.engine.document.TemplateOrigin lockedBy() {
+        org.quire.engine.document.TemplateOrigin o = ctx.document().content().templateOrigin();
+        return o != null && o.locksPart("settings") ? o : null;
+    }
+
+    @Override
+    public void documentChanged(org.quire.engine.document.BudgetDocument content) {
+        readOnlyChanged(ctx.readOnly());
+    }
+
     @Override
     public void readOnlyChanged(boolean ro) {
-        for (JComponent c : new JComponent[] {byP, byK, p, k, digits, higher, truncate}) {
-            c.setEnabled(!ro);
+        org.quire.engine.document.TemplateOrigin o = lockedBy();
+        for (Map.Entry<JComponent, String> e : tips.entrySet()) {
+            e.getKey().setEnabled(!ro && o == null);
+            e.getKey().setToolTipText(o == null ? e.getValue() : o.lockReason() + " (a setting of the method)");
         }
+        String text = o == null ? "" : "The coverage and evaluation settings are " + o.lockReason()
+                + " (the method's settings): read-only.";
+        if (!text.equals(lock.getText())) {
+            lock.setText(text);
+        }
+        lock.setVisible(o != null);
     }
 
     /** @return the result panel of an output, for tests and reports */
