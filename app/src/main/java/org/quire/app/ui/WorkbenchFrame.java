@@ -170,6 +170,7 @@ public final class WorkbenchFrame extends JFrame {
     /** Opens a budget document in a new tab and makes it active. */
     public BudgetEditor open(BudgetDocument doc) {
         BudgetEditor ed = new BudgetEditor(doc, library, runner);
+        ed.reviewPanel().useTemplates(() -> templates().library());
         InspectorPanel insp = new InspectorPanel(ed);
         editors.put(ed, insp);
         inspectors.add(insp, String.valueOf(System.identityHashCode(ed)));
