@@ -415,7 +415,7 @@ public final class WorkbenchFrame extends JFrame {
         String name = ed.document().name();
         org.quire.app.ui.calibration.FlowRangeWindow w = new org.quire.app.ui.calibration.FlowRangeWindow(name,
                 () -> ed.document().budget(), library, (p, b) -> {
-                    BudgetEditor point = open(BudgetDocument.ofBudget(b, "point " + (p + 1) + " of " + name,
+                    BudgetEditor point = open(BudgetDocument.ofBudget(b, p + " of " + name,
                             prefs.userName()));
                     point.document().setReadOnly(true);
                     toFront();

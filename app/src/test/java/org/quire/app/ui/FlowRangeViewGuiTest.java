@@ -109,6 +109,7 @@ class FlowRangeViewGuiTest extends GuiTestSupport {
         waitFor("the point's budget opened", () -> frame.editors().size() == before + 1);
         BudgetEditor point = onEdt(() -> frame.editors().get(frame.editors().size() - 1));
         assertTrue(point.document().isReadOnly(), "a point's budget opens as a review copy");
+        assertEquals("point 2 at 0.2504 m\u00b3/h of tarrow-vale-emf-six-point.json", point.document().name());
         assertEquals(FlowRange.atPoint(budget, 1), point.document().budget());
         waitForCurrentResult(point);
         org.quire.engine.gum.OutputResult e2 = onEdt(() -> point.latest().result().output("E"));

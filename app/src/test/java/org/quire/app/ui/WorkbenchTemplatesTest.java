@@ -134,7 +134,7 @@ class WorkbenchTemplatesTest extends GuiTestSupport {
                 assertTrue(!c.isEnabled(), name + " is read-only");
                 assertTrue(String.valueOf(c.getToolTipText()).startsWith(reason), c.getToolTipText());
             }
-            assertEquals("The coverage and evaluation settings are " + reason + " (the method's settings): read-only.",
+            assertEquals("Coverage and evaluation settings: " + reason + ", read-only.",
                     ((JLabel) named(ed, "resultsLock")).getText());
             assertTrue(((JLabel) named(ed, "resultsLock")).isVisible());
             for (String name : List.of("mcTrials", "mcSeed")) {
@@ -143,7 +143,7 @@ class WorkbenchTemplatesTest extends GuiTestSupport {
                 assertTrue(String.valueOf(f.getToolTipText()).startsWith(reason), f.getToolTipText());
             }
             assertTrue(!((javax.swing.JCheckBox) named(ed, "mcAdaptive")).isEnabled(), "adaptive mode is read-only");
-            assertEquals("Trials, seed and adaptive mode are " + reason + " (the method's settings): read-only.",
+            assertEquals("Trials, seed and adaptive mode: " + reason + ", read-only.",
                     ((JLabel) named(ed, "mcLock")).getText());
             assertTrue(((JLabel) named(ed, "mcLock")).isVisible());
             return null;

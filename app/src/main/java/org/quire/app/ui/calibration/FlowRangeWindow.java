@@ -45,7 +45,7 @@ import org.quire.engine.units.Units;
 public final class FlowRangeWindow extends JFrame {
     private final FunctionLibrary library;
     private final Supplier<Budget> source;
-    private final BiConsumer<Integer, Budget> openPoint;
+    private final BiConsumer<String, Budget> openPoint;
     private final JLabel header = new JLabel(" ");
     private final JLabel state = new JLabel(" ");
     private final JProgressBar progress = new JProgressBar();
@@ -62,10 +62,11 @@ public final class FlowRangeWindow extends JFrame {
      * @param name the budget's name, for the title
      * @param source the budget to evaluate (read again by Evaluate again: the editor's present budget)
      * @param library the function library
-     * @param openPoint opens the full budget of a point (its index from 0 and the engine's budget of the point)
+     * @param openPoint opens the full budget of a point (its label, e.g. "point 2 at 0.2504 m³/h", and the
+     *     engine's budget of the point)
      */
     public FlowRangeWindow(String name, Supplier<Budget> source, FunctionLibrary library,
-            BiConsumer<Integer, Budget> openPoint) {
+            BiConsumer<String, Budget> openPoint) {
         super("Flow range \u2013 " + name);
         this.library = library;
         this.source = source;
@@ -215,7 +216,9 @@ public final class FlowRangeWindow extends JFrame {
             state.setText("Select a flow point first.");
             return;
         }
-        openPoint.accept(row, FlowRange.atPoint(budget, row));
+        FlowRangeResult.Point p = result.points().get(row);
+        openPoint.accept("point " + (row + 1) + " at " + Fmt.num(p.flow()) + (result.flowUnit().isBlank() ? ""
+                : " " + Units.display(result.flowUnit())), FlowRange.atPoint(budget, row));
     }
 
     private static String esc(String s) {

@@ -198,10 +198,10 @@ public final class MonteCarloSection implements Section {
         for (java.util.Map.Entry<JComponent, String> e : tips.entrySet()) {
             e.getKey().setToolTipText(o == null ? e.getValue() : o.lockReason() + " (a setting of the method)");
         }
-        String text = o == null ? "" : "Trials, seed and adaptive mode are " + o.lockReason()
-                + " (the method's settings): read-only.";
+        String text = o == null ? "" : "Trials, seed and adaptive mode: " + o.lockReason() + ", read-only.";
         if (!text.equals(lock.getText())) {
             lock.setText(text);
+            lock.setToolTipText(o == null ? null : "The settings are values of the method: " + o.lockReason());
         }
         lock.setVisible(o != null);
     }

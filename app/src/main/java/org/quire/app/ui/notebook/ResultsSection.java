@@ -197,10 +197,10 @@ final class ResultsSection implements Section {
             e.getKey().setEnabled(!ro && o == null);
             e.getKey().setToolTipText(o == null ? e.getValue() : o.lockReason() + " (a setting of the method)");
         }
-        String text = o == null ? "" : "The coverage and evaluation settings are " + o.lockReason()
-                + " (the method's settings): read-only.";
+        String text = o == null ? "" : "Coverage and evaluation settings: " + o.lockReason() + ", read-only.";
         if (!text.equals(lock.getText())) {
             lock.setText(text);
+            lock.setToolTipText(o == null ? null : "The settings are values of the method: " + o.lockReason());
         }
         lock.setVisible(o != null);
     }
