@@ -128,4 +128,51 @@ class FlowRangeViewGuiTest extends GuiTestSupport {
         }
         onEdt(() -> { w.dispose(); return null; });
     }
+
+    /**
+     * A long flow range (1000 points made from the six of the worked budget): Cancel pressed at once leaves no
+     * figure on screen, not the last result; Evaluate again then shows the range with the progress bar gone.
+     */
+    @Test
+    void cancelShowsNoResultAndEvaluateAgainShowsTheRange() throws Exception {
+        Budget six = DocumentStore.open(FILE).budget();
+        org.quire.engine.budget.FlowPoints fp = six.flowPoints();
+        java.util.List<org.quire.engine.budget.FlowPoints.Row> rows = new java.util.ArrayList<>();
+        for (int i = 0; i < 1000; i++) {
+            org.quire.engine.budget.FlowPoints.Row r = fp.rows().get(i % fp.rows().size());
+            rows.add(new org.quire.engine.budget.FlowPoints.Row(r.flow() * (1 + i * 1e-6), r.values()));
+        }
+        Budget many = six.withFlowPoints(org.quire.engine.budget.FlowPoints.of(fp.flowUnit(), fp.columns(), rows)
+                .withOutput("E"));
+        BudgetEditor ed = onEdt(() -> frame.open(org.quire.app.ui.document.BudgetDocument.ofBudget(many,
+                "thousand points", "Test Engineer")));
+        AtomicReference<FlowRangeWindow> window = new AtomicReference<>();
+        onEdt(() -> {
+            frame.openFlowRange(ed, w -> {
+                window.set(w);
+                assertTrue(w.isRunning(), "the evaluation runs in the background");
+                ((javax.swing.JButton) WorkbenchEditingTest.find(w.getContentPane(), "cancelFlowRange")).doClick();
+            });
+            return null;
+        });
+        FlowRangeWindow w = window.get();
+        waitFor("the run ended", () -> !w.isRunning());
+        onEdt(() -> {
+            assertEquals(null, w.result());
+            assertEquals(0, w.pointsTable().getRowCount(), "no stale rows");
+            assertEquals(null, ((org.quire.app.ui.chart.ChartView) WorkbenchEditingTest.find(w.getContentPane(),
+                    "flowRangeChart")).layoutShown(), "no stale chart");
+            String state = ((javax.swing.JLabel) WorkbenchEditingTest.find(w.getContentPane(), "flowRangeState")).getText();
+            assertTrue(state.startsWith("Cancelled"), state);
+            ((javax.swing.JButton) WorkbenchEditingTest.find(w.getContentPane(), "evaluateAgain")).doClick();
+            return null;
+        });
+        waitFor("the range evaluated again", () -> w.result() != null);
+        onEdt(() -> {
+            assertEquals(1000, w.pointsTable().getRowCount());
+            assertTrue(!WorkbenchEditingTest.find(w.getContentPane(), "flowRangeProgress").isVisible());
+            w.dispose();
+            return null;
+        });
+    }
 }

@@ -78,6 +78,41 @@ class Jcgm102FlowRangeCovarianceTest {
     }
 
     @Test
+    void theListenerHearsOfEachPointAndCanStopTheEvaluation() throws Exception {
+        Budget b = budget("y = k * q", List.of(normal("k", 2, 0.1), normal("q", 1, 0.05)))
+                .withFlowPoints(table(List.of("q"), new double[] {1, 1}, new double[] {2, 2}, new double[] {3, 3}));
+        List<String> heard = new java.util.ArrayList<>();
+        FlowRangeResult r = FlowRange.evaluate(b, LIB, new FlowRange.Listener() {
+            @Override
+            public void pointDone(int done, int of) {
+                heard.add(done + "/" + of);
+            }
+
+            @Override
+            public boolean cancelled() {
+                return false;
+            }
+        });
+        assertEquals(List.of("1/3", "2/3", "3/3"), heard);
+        assertEquals(FlowRange.evaluate(b, LIB).points(), r.points(), "the listener changes no figure");
+        java.util.concurrent.CancellationException e = assertThrows(java.util.concurrent.CancellationException.class,
+                () -> FlowRange.evaluate(b, LIB, new FlowRange.Listener() {
+                    private int done;
+
+                    @Override
+                    public void pointDone(int d, int of) {
+                        done = d;
+                    }
+
+                    @Override
+                    public boolean cancelled() {
+                        return done == 2;
+                    }
+                }));
+        assertTrue(e.getMessage().contains("after 2 of 3 points"), e.getMessage());
+    }
+
+    @Test
     void withNoSharedInputThePointResultsAreUncorrelated() throws Exception {
         Budget b = budget("y = k * q", List.of(normal("k", 2, 0.1), normal("q", 1, 0.05)));
         FlowRangeResult r = FlowRange.evaluate(b, table(List.of("k", "q"), new double[] {1, 2, 1},

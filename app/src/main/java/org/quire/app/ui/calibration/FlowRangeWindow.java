@@ -56,7 +56,7 @@ public final class FlowRangeWindow extends JFrame {
     private final ChartView chart = new ChartView();
     private Budget budget;
     private FlowRangeResult result;
-    private SwingWorker<FlowRangeResult, Void> worker;
+    private SwingWorker<FlowRangeResult, Integer> worker;
 
     /**
      * @param name the budget's name, for the title
@@ -88,7 +88,7 @@ public final class FlowRangeWindow extends JFrame {
         cancel.setName("cancelFlowRange");
         cancel.addActionListener(e -> cancelRun());
         progress.setName("flowRangeProgress");
-        progress.setIndeterminate(true);
+        progress.setStringPainted(true);
         progress.setVisible(false);
         state.setName("flowRangeState");
         JPanel tools = new JPanel(new FlowLayout(FlowLayout.LEFT, 6, 2));
@@ -134,15 +134,40 @@ public final class FlowRangeWindow extends JFrame {
     public void evaluate(Budget b) {
         cancelRun();
         Budget evaluated = b;
-        state.setText("Evaluating the budget at " + b.flowPoints().rows().size() + " flow points\u2026");
+        state.setText("Evaluating the budget at each flow point\u2026");
         state.setForeground(Colors.get("Label.foreground"));
         progress.setVisible(true);
         cancel.setEnabled(true);
         again.setEnabled(false);
-        SwingWorker<FlowRangeResult, Void> w = new SwingWorker<>() {
+        int m = b.flowPoints().rows().size();
+        progress.setIndeterminate(false);
+        progress.setMaximum(m);
+        progress.setValue(0);
+        progress.setString("0 of " + m + " points");
+        SwingWorker<FlowRangeResult, Integer> w = new SwingWorker<>() {
             @Override
             protected FlowRangeResult doInBackground() throws Exception {
-                return FlowRange.evaluate(evaluated, library);
+                SwingWorker<FlowRangeResult, Integer> self = this;
+                return FlowRange.evaluate(evaluated, library, new FlowRange.Listener() {
+                    @Override
+                    public void pointDone(int done, int of) {
+                        publish(done);
+                    }
+
+                    @Override
+                    public boolean cancelled() {
+                        return self.isCancelled();
+                    }
+                });
+            }
+
+            @Override
+            protected void process(List<Integer> done) {
+                if (worker == this) {
+                    int d = done.get(done.size() - 1);
+                    progress.setValue(d);
+                    progress.setString(d + " of " + m + " points");
+                }
             }
 
             @Override
