@@ -171,6 +171,7 @@ public final class WorkbenchFrame extends JFrame {
     public BudgetEditor open(BudgetDocument doc) {
         BudgetEditor ed = new BudgetEditor(doc, library, runner);
         ed.reviewPanel().useTemplates(() -> templates().library());
+        ed.setFlowRangeOpener(() -> openFlowRange(ed, w -> { }));
         InspectorPanel insp = new InspectorPanel(ed);
         editors.put(ed, insp);
         inspectors.add(insp, String.valueOf(System.identityHashCode(ed)));

@@ -48,7 +48,24 @@ class FlowRangeViewGuiTest extends GuiTestSupport {
         BudgetEditor ed = await(onEdt(() -> frame.open(FILE))).orElseThrow();
         waitForCurrentResult(ed);
         AtomicReference<FlowRangeWindow> window = new AtomicReference<>();
-        onEdt(() -> { frame.openFlowRange(ed, window::set); return null; });
+        // the Results section offers the flow range of a budget that has flow points
+        onEdt(() -> {
+            javax.swing.JButton show = named(ed, "showFlowRange");
+            assertTrue(show.getParent().isVisible(), "the Results section offers the flow range");
+            show.doClick();
+            return null;
+        });
+        waitFor("the flow range window", () -> java.util.Arrays.stream(java.awt.Window.getWindows())
+                .anyMatch(x -> x instanceof FlowRangeWindow && x.isShowing()));
+        onEdt(() -> {
+            for (java.awt.Window x : java.awt.Window.getWindows()) {
+                if (x instanceof FlowRangeWindow) {
+                    x.dispose();
+                }
+            }
+            frame.openFlowRange(ed, window::set);
+            return null;
+        });
         waitFor("the flow range evaluated", () -> window.get() != null && window.get().result() != null);
         FlowRangeWindow w = window.get();
         JTable t = w.pointsTable();

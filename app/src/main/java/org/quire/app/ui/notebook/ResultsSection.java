@@ -39,6 +39,9 @@ final class ResultsSection implements Section {
     private final JCheckBox higher = new JCheckBox("Higher-order terms");
     private final JCheckBox truncate = new JCheckBox("Truncate \u03bd_eff");
     private final JLabel lock = new JLabel();
+    private final JPanel flowRange = new JPanel(new org.quire.app.ui.common.WrapLayout(FlowLayout.LEFT, 6, 2));
+    private final JLabel flowRangeText = new JLabel();
+    private Runnable flowRangeOpener;
     /** The settings' own tooltips, shown again when they are not locked. */
     private final Map<JComponent, String> tips = new LinkedHashMap<>();
     private boolean updating;
@@ -76,7 +79,20 @@ final class ResultsSection implements Section {
         for (JComponent c : new JComponent[] {byP, byK, p, k, digits, higher, truncate}) {
             tips.put(c, c.getToolTipText());
         }
-        body.add(north, BorderLayout.NORTH);
+        javax.swing.JButton showRange = new javax.swing.JButton("Show the flow range\u2026");
+        showRange.setName("showFlowRange");
+        showRange.addActionListener(e -> {
+            if (flowRangeOpener != null) {
+                flowRangeOpener.run();
+            }
+        });
+        flowRange.add(flowRangeText);
+        flowRange.add(showRange);
+        flowRange.setVisible(false);
+        JPanel northAndRange = new JPanel(new BorderLayout());
+        northAndRange.add(north, BorderLayout.NORTH);
+        northAndRange.add(flowRange, BorderLayout.SOUTH);
+        body.add(northAndRange, BorderLayout.NORTH);
         outputs.setLayout(new BoxLayout(outputs, BoxLayout.Y_AXIS));
         body.add(outputs, BorderLayout.CENTER);
         p.addActionListener(e -> commitSettings());
@@ -118,8 +134,21 @@ final class ResultsSection implements Section {
     @Override public String title() { return "Results (GUM)"; }
     @Override public JComponent body() { return body; }
 
+    void setFlowRangeOpener(Runnable opener) {
+        flowRangeOpener = opener;
+        showFlowPoints(ctx.document().budget());
+    }
+
+    private void showFlowPoints(Budget b) {
+        int points = b.flowPoints() == null ? 0 : b.flowPoints().rows().size();
+        flowRange.setVisible(points > 0 && flowRangeOpener != null);
+        flowRangeText.setText(points == 0 ? "" : "This budget has " + points + " flow points; the results below are "
+                + "those of the inputs as entered.");
+    }
+
     @Override
     public void budgetChanged(Budget b) {
+        showFlowPoints(b);
         updating = true;
         try {
             EvaluationSettings s = b.settings();
