@@ -69,9 +69,15 @@ class SmallScreenGuiTest extends GuiTestSupport {
             frame.validate();
             return null;
         });
-        BudgetEditor ed = await(onEdt(() -> frame.open(java.nio.file.Path.of("..", "worked-examples",
+        BudgetEditor six = await(onEdt(() -> frame.open(java.nio.file.Path.of("..", "worked-examples",
                 "tarrow-vale-emf-six-point.json")))).orElseThrow();
-        waitForCurrentResult(ed);
+        waitForCurrentResult(six);
+        fitsTheWidth(six, true);
+        // the demo budget has 13 inputs with long estimates: even its headers' longest words are too wide
+        fitsTheWidth(openDemo(), false);
+    }
+
+    private void fitsTheWidth(BudgetEditor ed, boolean wider) throws Exception {
         onEdt(() -> { ed.revealSection("Results (GUM)"); return null; });
         Thread.sleep(300);
         onEdt(() -> {
@@ -91,8 +97,10 @@ class SmallScreenGuiTest extends GuiTestSupport {
                 }
                 natural += w;
             }
-            assertTrue(natural > view.getWidth(), "the case needs a table wider than the view: " + natural + " > "
-                    + view.getWidth());
+            if (wider) {
+                assertTrue(natural > view.getWidth(), "the case needs a table wider than the view: " + natural + " > "
+                        + view.getWidth());
+            }
             assertEquals(9, t.getColumnCount());
             assertTrue(t.getPreferredSize().width <= view.getWidth(), "table " + t.getPreferredSize().width
                     + " px in a view of " + view.getWidth() + " px");

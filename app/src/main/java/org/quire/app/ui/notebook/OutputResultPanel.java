@@ -245,8 +245,10 @@ final class OutputResultPanel extends JPanel {
                 }
             }
             natural[c] = w + 14;
-            // the input's name is never cut short; other columns give way down to their header's longest word
-            least[c] = c == ContributionTableModel.INPUT ? natural[c] : Math.min(natural[c], word + 14);
+            // the input's name and the degrees of freedom are never cut short; other columns give way down to their
+            // header's longest word
+            least[c] = c == ContributionTableModel.INPUT || c == ContributionTableModel.DOF ? natural[c]
+                    : Math.min(natural[c], word + 14);
         }
         layoutColumns();
     }
@@ -278,6 +280,22 @@ final class OutputResultPanel extends JPanel {
                 take = Math.min(take, Math.min(left, natural[c] - least[c]));
                 w[c] -= take;
                 left -= take;
+            }
+            if (left > 0) {
+                // even the headers' longest words do not fit: every column gives way in proportion to its width,
+                // down to a few characters (the tooltips keep the full text)
+                int floor = table.getFontMetrics(table.getFont()).stringWidth("0000");
+                int room = 0;
+                for (int c = 0; c < n; c++) {
+                    room += Math.max(0, w[c] - floor);
+                }
+                int still = left;
+                for (int c = 0; c < n && room > 0; c++) {
+                    int take = (int) Math.ceil((double) left * Math.max(0, w[c] - floor) / room);
+                    take = Math.min(take, Math.min(still, Math.max(0, w[c] - floor)));
+                    w[c] -= take;
+                    still -= take;
+                }
             }
         }
         for (int c = 0; c < n; c++) {
