@@ -133,6 +133,12 @@ public final class FlowRangeWindow extends JFrame {
     /** Evaluates {@code b} at its flow points off the event thread; a run already going is cancelled. */
     public void evaluate(Budget b) {
         cancelRun();
+        if (b.flowPoints() == null) {
+            worker = null;
+            finished();
+            cleared("The budget has no flow points any more: add a 'flowPoints' table to see its flow range.");
+            return;
+        }
         Budget evaluated = b;
         state.setText("Evaluating the budget at each flow point\u2026");
         state.setForeground(Colors.get("Label.foreground"));
