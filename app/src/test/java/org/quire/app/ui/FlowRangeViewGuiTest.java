@@ -192,4 +192,39 @@ class FlowRangeViewGuiTest extends GuiTestSupport {
             return null;
         });
     }
+
+    /**
+     * The same flow points tabulating the calibrated flow q_cal, with no conformity asked for: U/|y| is shown (the
+     * output is not already relative) and no MPE or decision; the figures are the engine's.
+     */
+    @Test
+    void anOutputThatIsNotAnErrorShowsItsRelativeUncertaintyAndNoDecision() throws Exception {
+        Budget six = DocumentStore.open(FILE).budget();
+        org.quire.engine.budget.FlowPoints fp = six.flowPoints();
+        Budget qcal = six.withFlowPoints(org.quire.engine.budget.FlowPoints.of(fp.flowUnit(), fp.columns(), fp.rows())
+                .withOutput("q_cal"));
+        FlowRangeResult expected = FlowRange.evaluate(qcal, Engine.standard().library());
+        BudgetEditor ed = onEdt(() -> frame.open(org.quire.app.ui.document.BudgetDocument.ofBudget(qcal,
+                "calibrated flow", "Test Engineer")));
+        AtomicReference<FlowRangeWindow> window = new AtomicReference<>();
+        onEdt(() -> { frame.openFlowRange(ed, window::set); return null; });
+        waitFor("the flow range evaluated", () -> window.get() != null && window.get().result() != null);
+        JTable t = window.get().pointsTable();
+        onEdt(() -> {
+            java.util.List<String> names = new java.util.ArrayList<>();
+            for (int c = 0; c < t.getColumnCount(); c++) {
+                names.add(t.getColumnName(c));
+            }
+            assertEquals(java.util.List.of("Point", "Flow / m\u00b3/h", "q_cal / m\u00b3/h", "u(q_cal) / m\u00b3/h",
+                    "\u03bd_eff", "k", "U / m\u00b3/h", "Result, y \u00b1 U", "U/|y| / %"), names);
+            for (int i = 0; i < expected.points().size(); i++) {
+                FlowRangeResult.Point p = expected.points().get(i);
+                near(p.estimate(), (String) t.getValueAt(i, 2), "q_cal at point " + (i + 1));
+                near(p.expandedUncertainty(), (String) t.getValueAt(i, 6), "U at point " + (i + 1));
+                near(100 * p.relativeExpandedUncertainty(), (String) t.getValueAt(i, 8), "U/|y| at point " + (i + 1));
+            }
+            window.get().dispose();
+            return null;
+        });
+    }
 }
