@@ -80,7 +80,7 @@ class FlowRangeViewGuiTest extends GuiTestSupport {
             return out;
         });
         assertEquals(java.util.List.of("Point", "Flow / m\u00b3/h", "E / %", "u(E) / %", "\u03bd_eff", "k", "U / %",
-                "Result, y \u00b1 U", "MPE / %", "p_c", "Decision"), names,
+                "Result, y \u00b1 U", "MPE", "p_c", "Decision"), names,
                 "E is an error in % already, so no U/|y| column; the budget declares conformity, so MPE and decision");
         for (int i = 0; i < m; i++) {
             int row = i;

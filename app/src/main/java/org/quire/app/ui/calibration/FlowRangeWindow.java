@@ -281,7 +281,7 @@ public final class FlowRangeWindow extends JFrame {
                     columns.add("U/|y| / %");
                 }
                 if (r.conformity() != null) {
-                    columns.addAll(List.of("MPE / %", "p_c", "Decision"));
+                    columns.addAll(List.of("MPE", "p_c", "Decision"));
                 }
             }
             fireTableStructureChanged();
