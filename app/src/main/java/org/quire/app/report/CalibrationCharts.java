@@ -6,12 +6,15 @@ import org.quire.engine.calibration.AdjustmentResult;
 import org.quire.engine.calibration.CalibrationResult;
 import org.quire.engine.calibration.PointResult;
 import org.quire.engine.calibration.SeriesResult;
+import org.quire.engine.conformity.ConformityAssessment;
+import org.quire.engine.gum.FlowRangeResult;
 import org.quire.engine.line.CalibrationPoint;
 import org.quire.engine.line.LineFit;
 
 /**
- * The charts of a meter calibration, for the certificate and the workbench alike: the error curve against flow
- * and the residuals of a fitted line. Only the engine's figures are drawn.
+ * The charts of a meter calibration and of a budget's flow range, for the certificate, the report and the
+ * workbench alike: the error curve against flow and the residuals of a fitted line. Only the engine's figures are
+ * drawn.
  *
  * <p>Stateless and thread-safe.
  */
@@ -64,6 +67,41 @@ public final class CalibrationCharts {
         return new Chart.Plot("Errors of the meter against flow with their reported expanded uncertainties"
                 + (shownLimits == null ? "" : " and the maximum permissible errors"), flow, "error (%)", log, series,
                 List.of(0.0));
+    }
+
+    /**
+     * @return the tabulated output of a flow-range evaluation against flow with its expanded uncertainty U as bars
+     *     and, when the budget asks for conformity decisions, the maximum permissible errors of the envelope zone
+     *     by zone as dashed limits and the zero line
+     */
+    public static Chart.Plot flowRange(FlowRangeResult r) {
+        int m = r.points().size();
+        double[] q = new double[m];
+        double[] y = new double[m];
+        double[] big = new double[m];
+        for (int i = 0; i < m; i++) {
+            FlowRangeResult.Point p = r.points().get(i);
+            q[i] = p.flow();
+            y[i] = p.estimate();
+            big[i] = p.expandedUncertainty();
+        }
+        boolean log = positive(q) && max(q) / min(q) > 20;
+        String fu = r.flowUnit().strip();
+        String flowAxis = "flow" + (fu.isEmpty() ? "" : " (" + fu.replace(' ', '*') + ")") + (log ? ", logarithmic scale" : "");
+        String name = Typesetter.name(r.output()).plain();
+        String yu = r.unit().strip();
+        String yAxis = name + (yu.isEmpty() ? "" : " (" + yu.replace(' ', '*') + ")");
+        List<Chart.Series> series = new ArrayList<>();
+        series.add(new Chart.Series((r.conformity() != null ? "error " : "") + name + " with its U", q, y, big,
+                Chart.Style.POINTS, Chart.Tone.FIRST));
+        ConformityAssessment a = r.conformity();
+        if (a == null) {
+            return new Chart.Plot(name + " against flow with its expanded uncertainty U at each flow point", flowAxis,
+                    yAxis, log, series, List.of());
+        }
+        CalibrationSections.envelope(a.envelope(), a.decisions().get(0).point().temperature(), q, log, series);
+        return new Chart.Plot("Errors of the meter with their expanded uncertainties and the maximum permissible "
+                + "errors (" + a.envelope().name() + ")", flowAxis, yAxis, log, series, List.of(0.0));
     }
 
     /** @return the residuals of the line fitted for the adjustment against its abscissae, or null when none */

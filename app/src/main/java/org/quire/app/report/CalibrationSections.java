@@ -185,14 +185,12 @@ public final class CalibrationSections {
         double[] q = new double[m];
         double[] big = new double[m];
         double[] rel = new double[m];
-        double[] est = new double[m];
         boolean relOk = !relativeAlready;
         List<Block> pointBudgets = new ArrayList<>();
         for (int i = 0; i < m; i++) {
             FlowRangeResult.Point p = r.points().get(i);
             q[i] = p.flow();
             big[i] = p.expandedUncertainty();
-            est[i] = p.estimate();
             rel[i] = 100 * p.relativeExpandedUncertainty();
             relOk &= Figures.relativeUncertaintyMeaningful(yu, p.estimate(), p.expandedUncertainty());
             rows.add(List.of(Cell.number(Integer.toString(i + 1), i + 1), Cell.number(Figures.estimate(p.flow()), p.flow()),
@@ -264,19 +262,16 @@ public final class CalibrationSections {
         blocks.addAll(pointBudgets);
         ConformityAssessment a = r.conformity();
         if (a != null) {
-            conformity(a, y, q, est, fu, blocks, log, flowAxis);
+            conformity(r, a, y, fu, blocks);
         }
         return ReportSection.of("flow-range", "Flow range" + (a != null ? " and conformity" : ""), blocks);
     }
 
-    private static void conformity(ConformityAssessment a, String y, double[] q, double[] est, String fu, List<Block> blocks,
-            boolean log, String flowAxis) {
+    private static void conformity(FlowRangeResult r, ConformityAssessment a, String y, String fu, List<Block> blocks) {
         List<List<Cell>> rows = new ArrayList<>();
         int m = a.decisions().size();
-        double[] bigU = new double[m];
         for (int i = 0; i < m; i++) {
             PointDecision d = a.decisions().get(i);
-            bigU[i] = d.expandedUncertainty();
             String acc = Double.isNaN(d.acceptanceLower()) ? "none"
                     : Figures.compact(d.acceptanceLower(), 4) + " … " + Figures.compact(d.acceptanceUpper(), 4);
             rows.add(List.of(Cell.number(Figures.estimate(d.point().flow()), d.point().flow()),
@@ -306,15 +301,11 @@ public final class CalibrationSections {
                 + "acceptance for a point that conforms and of false rejection for one that does not (JCGM 106:2012 "
                 + "9.5)."));
         blocks.add(new Statement(Typesetter.prose(a.statement())));
-        List<Chart.Series> series = new ArrayList<>();
-        series.add(new Chart.Series("error " + y + " with its U", q, est, bigU, Chart.Style.POINTS, Chart.Tone.FIRST));
-        envelope(a.envelope(), a.decisions().get(0).point().temperature(), q, log, series);
-        blocks.add(new ChartBlock(new Chart.Plot("Errors of the meter with their expanded uncertainties and the maximum permissible "
-                + "errors (" + a.envelope().name() + ")", flowAxis, y + " (%)", log, series, List.of(0.0))));
+        blocks.add(new ChartBlock(CalibrationCharts.flowRange(r)));
     }
 
     /** Adds the upper and lower limits of the envelope, zone by zone, over the plotted flows. */
-    private static void envelope(MpeEnvelope env, double temperature, double[] q, boolean log,
+    static void envelope(MpeEnvelope env, double temperature, double[] q, boolean log,
             List<Chart.Series> series) {
         double lo = min(q);
         double hi = max(q);

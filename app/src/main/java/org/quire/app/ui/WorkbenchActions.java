@@ -38,6 +38,7 @@ final class WorkbenchActions {
     final Action newFromTemplate;
     final Action exportReport;
     final Action compareWith;
+    final Action flowRange;
 
     WorkbenchActions(WorkbenchFrame frame) {
         this.frame = frame;
@@ -67,6 +68,7 @@ final class WorkbenchActions {
                 e -> active().ifPresent(frame::exportReport));
         compareWith = action("Compare with\u2026", KeyEvent.VK_D, InputEvent.SHIFT_DOWN_MASK,
                 e -> active().ifPresent(frame::compareWith));
+        flowRange = action("Flow range\u2026", 0, 0, e -> frame.openFlowRange());
         preferences = action("Preferences\u2026", KeyEvent.VK_COMMA, 0, e -> PreferencesDialog.show(frame));
         update();
     }
@@ -99,6 +101,7 @@ final class WorkbenchActions {
         runMonteCarlo.setEnabled(d != null);
         exportReport.setEnabled(d != null);
         compareWith.setEnabled(d != null);
+        flowRange.setEnabled(d != null && d.budget().flowPoints() != null);
         undo.setEnabled(editable && d.history().canUndo());
         redo.setEnabled(editable && d.history().canRedo());
         undo.putValue(Action.NAME, undo.isEnabled() ? "Undo " + d.history().undoName() : "Undo");
@@ -153,6 +156,7 @@ final class WorkbenchActions {
         bar.add(view);
         JMenu budget = menu("Budget", KeyEvent.VK_B);
         budget.add(runMonteCarlo);
+        budget.add(flowRange);
         budget.addSeparator();
         budget.add(exportReport);
         budget.add(compareWith);

@@ -170,6 +170,8 @@ public final class WorkbenchFrame extends JFrame {
     /** Opens a budget document in a new tab and makes it active. */
     public BudgetEditor open(BudgetDocument doc) {
         BudgetEditor ed = new BudgetEditor(doc, library, runner);
+        ed.reviewPanel().useTemplates(() -> templates().library());
+        ed.setFlowRangeOpener(() -> openFlowRange(ed, w -> { }));
         InspectorPanel insp = new InspectorPanel(ed);
         editors.put(ed, insp);
         inspectors.add(insp, String.valueOf(System.identityHashCode(ed)));
@@ -393,6 +395,35 @@ public final class WorkbenchFrame extends JFrame {
             status("Opened the calibration " + file.getFileName(), false);
             shown.accept(w);
         }, this::showError);
+    }
+
+    /** Budget &gt; Flow range: the active budget evaluated at each of its flow points, in its own window. */
+    void openFlowRange() {
+        activeEditor().ifPresent(ed -> openFlowRange(ed, w -> { }));
+    }
+
+    /**
+     * Shows the editor's budget evaluated at its flow points (off the event thread); a point's full budget opens
+     * here as a review copy.
+     *
+     * @param shown told of the window once it is shown
+     */
+    public void openFlowRange(BudgetEditor ed, java.util.function.Consumer<org.quire.app.ui.calibration.FlowRangeWindow> shown) {
+        if (ed.document().budget().flowPoints() == null) {
+            status("This budget has no flow points: add a 'flowPoints' table to evaluate it across a flow range", true);
+            return;
+        }
+        String name = ed.document().name();
+        org.quire.app.ui.calibration.FlowRangeWindow w = new org.quire.app.ui.calibration.FlowRangeWindow(name,
+                () -> ed.document().budget(), library, (p, b) -> {
+                    BudgetEditor point = open(BudgetDocument.ofBudget(b, p + " of " + name,
+                            prefs.userName()));
+                    point.document().setReadOnly(true);
+                    toFront();
+                });
+        w.setLocationRelativeTo(this);
+        w.setVisible(true);
+        shown.accept(w);
     }
 
     // ----- report and comparison ------------------------------------------------------------------------------

@@ -14,7 +14,7 @@ import org.quire.app.ui.notebook.BudgetEditor;
 /**
  * Pictures of the main screens in the light and the dark theme at 1366 x 768, saved to
  * {@code app/target/screenshots/} to be looked at: the results with the ranking chart, the inspector, a model
- * error, the Monte Carlo check, and the calibration view. Each picture is checked for the component it is
+ * error, the Monte Carlo check, the calibration view and the flow range of a budget with flow points. Each picture is checked for the component it is
  * taken for (see {@link ScreenshotsTest#assertShows}), and the dark theme's pictures must be darker than the
  * light theme's.
  */
@@ -93,6 +93,17 @@ class ScreenshotsLightDarkTest extends GuiTestSupport {
         ScreenshotsTest.assertShows(shot(w.get().getRootPane(), t + "-6-calibration"), w.get().getRootPane(),
                 named(w.get(), "errorCurve"), t + ": the error curve");
         onEdt(() -> { w.get().dispose(); return null; });
+        BudgetEditor six = await(onEdt(() -> f.open(Path.of("..", "worked-examples", "tarrow-vale-emf-six-point.json"))))
+                .orElseThrow();
+        waitForCurrentResult(six);
+        AtomicReference<org.quire.app.ui.calibration.FlowRangeWindow> range = new AtomicReference<>();
+        onEdt(() -> { f.openFlowRange(six, range::set); return null; });
+        waitFor("the flow range", () -> range.get() != null && range.get().result() != null);
+        onEdt(() -> { range.get().setBounds(0, 0, 1366, 768); range.get().validate(); return null; });
+        Thread.sleep(400);
+        ScreenshotsTest.assertShows(shot(range.get().getRootPane(), t + "-7-flow-range"), range.get().getRootPane(),
+                named(range.get(), "flowRangeChart"), t + ": the flow range's error curve");
+        onEdt(() -> { range.get().dispose(); return null; });
         return ScreenshotsTest.meanLuminance(results);
     }
 

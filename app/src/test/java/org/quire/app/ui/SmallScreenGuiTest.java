@@ -56,6 +56,71 @@ class SmallScreenGuiTest extends GuiTestSupport {
                 .getWidth()) > 200, "the inspector has room");
     }
 
+    /**
+     * The results table of the six-point Tarrow Vale budget (invented data), whose columns at their natural widths
+     * are wider than the notebook of a 1366 x 768 window: every column is inside the visible width (no sideways
+     * scrolling), the headers wrap onto more lines, and each header and cell has its full text as tooltip.
+     */
+    @Test
+    void theResultsTableShowsEveryColumnInA1366By768Window() throws Exception {
+        onEdt(() -> {
+            frame.setExtendedState(java.awt.Frame.NORMAL);
+            frame.setBounds(WorkbenchFrame.clamp(new Rectangle(0, 0, 1366, 768), new Rectangle(0, 0, 1366, 768)));
+            frame.validate();
+            return null;
+        });
+        BudgetEditor six = await(onEdt(() -> frame.open(java.nio.file.Path.of("..", "worked-examples",
+                "tarrow-vale-emf-six-point.json")))).orElseThrow();
+        waitForCurrentResult(six);
+        fitsTheWidth(six, true);
+        // the demo budget has 13 inputs with long estimates: even its headers' longest words are too wide
+        fitsTheWidth(openDemo(), false);
+    }
+
+    private void fitsTheWidth(BudgetEditor ed, boolean wider) throws Exception {
+        onEdt(() -> { ed.revealSection("Results (GUM)"); return null; });
+        Thread.sleep(300);
+        onEdt(() -> {
+            ed.validate();
+            javax.swing.JTable t = named(ed, "budget:E");
+            javax.swing.JViewport view = (javax.swing.JViewport) t.getParent();
+            javax.swing.JScrollPane sp = (javax.swing.JScrollPane) view.getParent();
+            int natural = 0;
+            for (int c = 0; c < t.getColumnCount(); c++) {
+                int w = 0;
+                // the header as the model writes it, on its lines (<br>), and every cell
+                for (String l : t.getColumnName(c).replaceAll("</?html>", "").split("<br>")) {
+                    w = Math.max(w, t.getFontMetrics(t.getTableHeader().getFont()).stringWidth(l));
+                }
+                for (int r = 0; r < t.getRowCount(); r++) {
+                    w = Math.max(w, t.prepareRenderer(t.getCellRenderer(r, c), r, c).getPreferredSize().width);
+                }
+                natural += w;
+            }
+            if (wider) {
+                assertTrue(natural > view.getWidth(), "the case needs a table wider than the view: " + natural + " > "
+                        + view.getWidth());
+            }
+            assertEquals(9, t.getColumnCount());
+            assertTrue(t.getPreferredSize().width <= view.getWidth(), "table " + t.getPreferredSize().width
+                    + " px in a view of " + view.getWidth() + " px");
+            assertTrue(!sp.getHorizontalScrollBar().isVisible(), "no sideways scrolling");
+            for (int c = 0; c < t.getColumnCount(); c++) {
+                Rectangle cell = t.getCellRect(0, c, true);
+                assertTrue(cell.x + cell.width <= view.getWidth() && cell.width > 0, "column " + c + " is visible");
+            }
+            int line = t.getFontMetrics(t.getTableHeader().getFont()).getHeight();
+            assertTrue(t.getTableHeader().getHeight() >= 2 * line, "headers wrap: " + t.getTableHeader().getHeight());
+            Rectangle h = t.getTableHeader().getHeaderRect(4);
+            assertEquals(t.getColumnName(4), t.getTableHeader().getToolTipText(new java.awt.event.MouseEvent(
+                    t.getTableHeader(), java.awt.event.MouseEvent.MOUSE_MOVED, 0, 0, h.x + 2, h.y + 2, 0, false)));
+            Component cell = t.prepareRenderer(t.getCellRenderer(0, 5), 0, 5);
+            assertEquals(((javax.swing.JLabel) cell).getText(), ((JComponent) cell).getToolTipText(),
+                    "a cell has its full text as tooltip");
+            return null;
+        });
+    }
+
     @Test
     void boundsLargerThanTheScreenAreClampedIntoIt() {
         Rectangle screen = new Rectangle(0, 0, 1366, 728);

@@ -127,6 +127,25 @@ class WorkbenchTemplatesTest extends GuiTestSupport {
             if (correlations.getRowCount() > 1) {
                 assertTrue(!correlations.isCellEditable(0, 2), "the template locks the correlations");
             }
+            // the template locks the settings: coverage, digits, trials, seed and adaptive mode, with the reason
+            assertTrue(shipped.spec().locked().contains("settings"), "the shipped template locks its settings");
+            for (String name : List.of("coverageProbability", "significantDigits")) {
+                javax.swing.JComponent c = named(ed, name);
+                assertTrue(!c.isEnabled(), name + " is read-only");
+                assertTrue(String.valueOf(c.getToolTipText()).startsWith(reason), c.getToolTipText());
+            }
+            assertEquals("Coverage and evaluation settings: " + reason + ", read-only.",
+                    ((JLabel) named(ed, "resultsLock")).getText());
+            assertTrue(((JLabel) named(ed, "resultsLock")).isVisible());
+            for (String name : List.of("mcTrials", "mcSeed")) {
+                JTextField f = named(ed, name);
+                assertTrue(!f.isEditable(), name + " is read-only");
+                assertTrue(String.valueOf(f.getToolTipText()).startsWith(reason), f.getToolTipText());
+            }
+            assertTrue(!((javax.swing.JCheckBox) named(ed, "mcAdaptive")).isEnabled(), "adaptive mode is read-only");
+            assertEquals("Trials, seed and adaptive mode: " + reason + ", read-only.",
+                    ((JLabel) named(ed, "mcLock")).getText());
+            assertTrue(((JLabel) named(ed, "mcLock")).isVisible());
             return null;
         });
         onEdt(() -> { ed.selectInput("t_tank"); return null; });
@@ -149,6 +168,63 @@ class WorkbenchTemplatesTest extends GuiTestSupport {
         if (out != null) {
             javax.imageio.ImageIO.write(shot, "png", Path.of(out, "template-locks.png").toFile());
         }
+    }
+
+    /**
+     * A budget made from the shipped proving-tank template whose locked drain allowance d_drain was narrowed from
+     * a half-width of 0.03 L to 0.001 L, opened for review: the review panel shows the deviations the engine's
+     * template check finds (computed here apart from the workbench), the same sentences {@code quire template
+     * check} prints, and the checklist item of the template's locks is not met.
+     */
+    @Test
+    void theReviewPanelShowsTheDeviationsFromTheTemplateThatTemplateCheckPrints(@TempDir Path dir) throws Exception {
+        org.quire.engine.document.Template shipped = org.quire.engine.document.Template.of(base);
+        BudgetDocument made = shipped.instantiate(java.util.Map.of("V_20", 500.08, "h_neck", 0.62, "t_tank", 17.8,
+                "t_meter", 17.5, "p_meter", 250000.0, "V_ind", 498.95, "V_ind_s", 0.054, "V_ind_n", 5.0),
+                "Test Engineer", Instant.parse("2026-12-01T10:00:00Z"));
+        org.quire.engine.budget.TypeB drain = (org.quire.engine.budget.TypeB) made.budget().input("d_drain").evaluation();
+        assertEquals(0.03, drain.parameters().get("halfWidth"), "the template's drain allowance");
+        BudgetDocument narrowed = made.withBudget(made.budget().withInput("d_drain", made.budget().input("d_drain")
+                .withEvaluation(drain.with("halfWidth", 0.001))), "Test Engineer", made.modified());
+        Path file = dir.resolve("tank-run-narrowed.json");
+        DocumentStore.save(narrowed, file);
+        org.quire.engine.document.TemplateConformance.Finding expected = org.quire.engine.document.TemplateConformance
+                .check(DocumentStore.open(file), org.quire.engine.document.TemplateLibrary.withShipped(personal, null));
+        assertEquals(org.quire.engine.document.TemplateConformance.State.DEVIATES, expected.state());
+        assertEquals(1, expected.messages().size(), expected.messages().toString());
+        assertTrue(expected.messages().get(0).contains("d_drain.evaluation.halfWidth"), expected.messages().get(0));
+
+        java.io.ByteArrayOutputStream out = new java.io.ByteArrayOutputStream();
+        java.io.ByteArrayOutputStream err = new java.io.ByteArrayOutputStream();
+        int status = org.quire.app.cli.CommandLine.run(new String[] {"template", "check", file.toString(),
+            "--personal", personal.toString()}, new java.io.PrintStream(out, true, java.nio.charset.StandardCharsets.UTF_8),
+                new java.io.PrintStream(err, true, java.nio.charset.StandardCharsets.UTF_8));
+        String printed = out.toString(java.nio.charset.StandardCharsets.UTF_8)
+                + err.toString(java.nio.charset.StandardCharsets.UTF_8);
+        assertEquals(2, status, printed);
+
+        BudgetEditor ed = await(onEdt(() -> frame.open(file, true))).orElseThrow();
+        waitForCurrentResult(ed);
+        waitFor("the template check", () -> ed.reviewPanel().templateFinding() != null);
+        onEdt(() -> {
+            JLabel shown = named(ed, "templateFindings");
+            assertTrue(shown.isVisible(), "the review panel shows the template check");
+            assertTrue(shown.getText().contains("1 deviation from template " + shipped.id() + " v" + shipped.version()),
+                    shown.getText());
+            for (String m : expected.messages()) {
+                assertTrue(shown.getText().contains(m), "shown: " + shown.getText() + "\nexpected: " + m);
+                assertTrue(printed.contains(m), "template check prints: " + printed + "\nexpected: " + m);
+            }
+            JTable checklist = named(ed, "checklist");
+            String outcome = null;
+            for (int r = 0; r < checklist.getRowCount(); r++) {
+                if ("The budget keeps every field its template locks".equals(checklist.getValueAt(r, 0))) {
+                    outcome = String.valueOf(checklist.getValueAt(r, 2));
+                }
+            }
+            assertEquals(org.quire.app.review.Outcome.NOT_MET.label(), outcome, "the checklist item of the locks");
+            return null;
+        });
     }
 
     private static void collect(java.awt.Container c, List<JTextField> out) {
@@ -272,6 +348,14 @@ class WorkbenchTemplatesTest extends GuiTestSupport {
         assertEquals(1, ed.document().content().revision());
         waitForCurrentResult(ed);
         assertNotNull(onEdt(() -> ed.resultSummary("E")));
+        onEdt(() -> {
+            // without a template nothing locks the settings
+            assertTrue(((javax.swing.JComponent) named(ed, "coverageProbability")).isEnabled());
+            assertTrue(((JTextField) named(ed, "mcTrials")).isEditable());
+            assertTrue(!((JLabel) named(ed, "resultsLock")).isVisible());
+            assertTrue(!((JLabel) named(ed, "mcLock")).isVisible());
+            return null;
+        });
     }
 
     @Test

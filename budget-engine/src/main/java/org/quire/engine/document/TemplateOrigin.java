@@ -44,6 +44,19 @@ public record TemplateOrigin(String id, int version, String contentHash, java.ut
         return TemplateSpec.isLocked(locked, input, field);
     }
 
+    /**
+     * @param part one of {@link TemplateSpec#BUDGET_PARTS} ({@code model}, {@code outputs}, {@code settings},
+     *     {@code correlations})
+     * @return whether the recorded locks cover that part of the budget
+     */
+    public boolean locksPart(String part) {
+        if (!TemplateSpec.BUDGET_PARTS.contains(part)) {
+            throw new IllegalArgumentException("'" + part + "' is not a part of a budget a template can lock; the parts "
+                    + "are " + String.join(", ", TemplateSpec.BUDGET_PARTS));
+        }
+        return locked.contains(part);
+    }
+
     /** @return whether {@code o} names the same template: id, version and content hash (the recorded locks aside) */
     public boolean sameTemplate(TemplateOrigin o) {
         return o != null && id.equals(o.id) && version == o.version && contentHash.equals(o.contentHash);

@@ -58,6 +58,45 @@ public final class FlowRange {
     }
 
     /**
+     * Hears of the points evaluated and says when to stop: for a caller that shows progress and offers Cancel.
+     * Called on the evaluating thread.
+     */
+    public interface Listener {
+        /** A listener that hears nothing and never stops the evaluation. */
+        Listener NONE = new Listener() {
+            @Override
+            public void pointDone(int done, int of) {
+            }
+
+            @Override
+            public boolean cancelled() {
+                return false;
+            }
+        };
+
+        /** @param done the points evaluated so far, of {@code of} */
+        void pointDone(int done, int of);
+
+        /** @return whether to stop; the evaluation then ends with a {@link java.util.concurrent.CancellationException} */
+        boolean cancelled();
+    }
+
+    /**
+     * Evaluates the budget at its own {@link Budget#flowPoints()}, telling {@code listener} of each point done.
+     *
+     * @throws java.util.concurrent.CancellationException when the listener says to stop
+     * @see #evaluate(Budget, FunctionLibrary)
+     */
+    public static FlowRangeResult evaluate(Budget budget, FunctionLibrary library, Listener listener)
+            throws ModelException {
+        if (budget.flowPoints() == null) {
+            throw new IllegalArgumentException("the budget has no flow points: add a 'flowPoints' table with one row "
+                    + "per flow");
+        }
+        return evaluate(budget, budget.flowPoints(), library, listener);
+    }
+
+    /**
      * Evaluates the budget at the given flow points.
      *
      * @throws IllegalArgumentException naming the point, column or input at fault
@@ -65,6 +104,18 @@ public final class FlowRange {
      */
     public static FlowRangeResult evaluate(Budget budget, FlowPoints points, FunctionLibrary library)
             throws ModelException {
+        return evaluate(budget, points, library, Listener.NONE);
+    }
+
+    /**
+     * Evaluates the budget at the given flow points, telling {@code listener} of each point done.
+     *
+     * @throws IllegalArgumentException naming the point, column or input at fault
+     * @throws ModelException for a model that does not compile or leaves a function's domain at a point
+     * @throws java.util.concurrent.CancellationException when the listener says to stop
+     */
+    public static FlowRangeResult evaluate(Budget budget, FlowPoints points, FunctionLibrary library,
+            Listener listener) throws ModelException {
         if (budget == null || points == null) {
             throw new IllegalArgumentException("a flow-range evaluation needs a budget and its flow points");
         }
@@ -93,6 +144,10 @@ public final class FlowRange {
         int m = rows.size();
         List<OutputResult> results = new ArrayList<>();
         for (int p = 0; p < m; p++) {
+            if (listener.cancelled()) {
+                throw new java.util.concurrent.CancellationException("the flow-range evaluation was cancelled after "
+                        + p + " of " + m + " points");
+            }
             Budget bp = atPoint(budget, points, p);
             CorrelationMatrix r = bp.correlationMatrix();
             GumResult g;
@@ -103,6 +158,7 @@ public final class FlowRange {
                         + e.getMessage(), e);
             }
             results.add(g.output(outName));
+            listener.pointDone(p + 1, m);
         }
         // cross-point covariance through the shared inputs (JCGM 102:2011 6.2.1.3)
         List<InputQuantity> inputs = budget.inputs();
@@ -139,7 +195,31 @@ public final class FlowRange {
                 points.flowUnit(), table, cov, corr, assessment);
     }
 
-    /** The budget with the varying inputs' estimates and uncertainties of point p. */
+    /**
+     * The budget of one of its own flow points, as {@link #evaluate(Budget, FunctionLibrary)} evaluates it there:
+     * for a drill-down from a point of the flow range to its full budget.
+     *
+     * @param p the point, from 0 in table order
+     * @throws IllegalArgumentException when the budget has no flow points or {@code p} is not one of them
+     */
+    public static Budget atPoint(Budget budget, int p) {
+        if (budget == null || budget.flowPoints() == null) {
+            throw new IllegalArgumentException("the budget has no flow points: add a 'flowPoints' table with one row "
+                    + "per flow");
+        }
+        int m = budget.flowPoints().rows().size();
+        if (p < 0 || p >= m) {
+            throw new IllegalArgumentException("flow point " + (p + 1) + " does not exist: the budget has " + m
+                    + " flow points");
+        }
+        return atPoint(budget, budget.flowPoints(), p);
+    }
+
+    /**
+     * The budget with the varying inputs' estimates and uncertainties of point p: each input with a column becomes
+     * a normal Type B evaluation with the point's estimate and standard uncertainty (its degrees of freedom kept),
+     * or a constant when its uncertainty is zero; the result carries no flow points.
+     */
     private static Budget atPoint(Budget budget, FlowPoints points, int p) {
         Map<String, Double> estimate = new HashMap<>();
         Map<String, Double> uncertainty = new HashMap<>();

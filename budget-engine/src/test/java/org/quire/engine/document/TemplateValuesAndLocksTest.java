@@ -55,6 +55,15 @@ class TemplateValuesAndLocksTest {
     }
 
     @Test
+    void anOriginLocksAPartOfTheBudgetOnlyWhenItsTemplateListsIt() {
+        TemplateOrigin o = new TemplateOrigin("tvfl-tank", 1, "0".repeat(64), List.of("model", "settings", "V_20"));
+        assertTrue(o.locksPart("settings"));
+        assertTrue(o.locksPart("model"));
+        assertTrue(!o.locksPart("correlations"));
+        assertThrows(IllegalArgumentException.class, () -> o.locksPart("V_20"), "an input is not a part");
+    }
+
+    @Test
     void theExampleReadingsAreNeverCarriedIntoANewBudget() throws Exception {
         Template t = counter(COUNTER);
         IllegalArgumentException e = assertThrows(IllegalArgumentException.class, () -> t.budgetFor(

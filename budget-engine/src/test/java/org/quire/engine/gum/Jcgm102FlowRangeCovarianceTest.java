@@ -62,6 +62,57 @@ class Jcgm102FlowRangeCovarianceTest {
     }
 
     @Test
+    void theBudgetOfAPointIsTheOneTheRangeEvaluatesThere() throws Exception {
+        // y = k q with the second point's q = 2, u(q) = 0.05 and the shared k = 2, u(k) = 0.1 (by hand):
+        // y = 4, u^2(y) = q^2 u^2(k) + k^2 u^2(q) = 4 * 0.01 + 4 * 0.0025 = 0.05
+        Budget b = budget("y = k * q", List.of(normal("k", 2, 0.1), normal("q", 1, 0.05)))
+                .withFlowPoints(table(List.of("q", "u(q)"), new double[] {1, 1, 0.05}, new double[] {2, 2, 0.05}));
+        Budget second = FlowRange.atPoint(b, 1);
+        assertEquals(null, second.flowPoints(), "the budget of a point is a budget of that point only");
+        OutputResult y = GumEvaluator.evaluate(second, LIB).output("y");
+        assertEquals(4.0, y.estimate(), 1e-15);
+        assertEquals(Math.sqrt(0.05), y.standardUncertainty(), 1e-15);
+        assertEquals(FlowRange.evaluate(b, LIB).points().get(1).standardUncertainty(), y.standardUncertainty(), 0.0);
+        assertThrows(IllegalArgumentException.class, () -> FlowRange.atPoint(b, 2));
+        assertThrows(IllegalArgumentException.class, () -> FlowRange.atPoint(b.withFlowPoints(null), 0));
+    }
+
+    @Test
+    void theListenerHearsOfEachPointAndCanStopTheEvaluation() throws Exception {
+        Budget b = budget("y = k * q", List.of(normal("k", 2, 0.1), normal("q", 1, 0.05)))
+                .withFlowPoints(table(List.of("q"), new double[] {1, 1}, new double[] {2, 2}, new double[] {3, 3}));
+        List<String> heard = new java.util.ArrayList<>();
+        FlowRangeResult r = FlowRange.evaluate(b, LIB, new FlowRange.Listener() {
+            @Override
+            public void pointDone(int done, int of) {
+                heard.add(done + "/" + of);
+            }
+
+            @Override
+            public boolean cancelled() {
+                return false;
+            }
+        });
+        assertEquals(List.of("1/3", "2/3", "3/3"), heard);
+        assertEquals(FlowRange.evaluate(b, LIB).points(), r.points(), "the listener changes no figure");
+        java.util.concurrent.CancellationException e = assertThrows(java.util.concurrent.CancellationException.class,
+                () -> FlowRange.evaluate(b, LIB, new FlowRange.Listener() {
+                    private int done;
+
+                    @Override
+                    public void pointDone(int d, int of) {
+                        done = d;
+                    }
+
+                    @Override
+                    public boolean cancelled() {
+                        return done == 2;
+                    }
+                }));
+        assertTrue(e.getMessage().contains("after 2 of 3 points"), e.getMessage());
+    }
+
+    @Test
     void withNoSharedInputThePointResultsAreUncorrelated() throws Exception {
         Budget b = budget("y = k * q", List.of(normal("k", 2, 0.1), normal("q", 1, 0.05)));
         FlowRangeResult r = FlowRange.evaluate(b, table(List.of("k", "q"), new double[] {1, 2, 1},

@@ -26,7 +26,6 @@ import org.quire.app.ui.common.FileDropHandler;
 import org.quire.app.ui.common.Fmt;
 import org.quire.app.ui.common.Windows;
 import org.quire.app.ui.chart.ChartView;
-import org.quire.app.ui.table.SpreadsheetTable;
 import org.quire.engine.calibration.Adjustment;
 import org.quire.engine.calibration.AdjustmentResult;
 import org.quire.engine.calibration.Calibration;
@@ -85,30 +84,10 @@ public final class CalibrationWindow extends JFrame {
         setDefaultCloseOperation(DISPOSE_ON_CLOSE);
         Windows.closeOnEscapeAndCtrlW(getRootPane(), this);
         table.setName("calibrationRuns");
-        table.setAutoResizeMode(JTable.AUTO_RESIZE_OFF);
-        table.setCellSelectionEnabled(true);
-        SpreadsheetTable.install(table, c -> false, Runnable::run, m -> { });
-        table.setDefaultRenderer(Object.class, new javax.swing.table.DefaultTableCellRenderer() {
-            @Override
-            public java.awt.Component getTableCellRendererComponent(JTable t, Object v, boolean sel, boolean focus,
-                    int r, int c) {
-                super.getTableCellRendererComponent(t, v, sel, focus, r, c);
-                setHorizontalAlignment(c >= 3 && c <= 10 ? RIGHT : LEFT);
-                setFont(getFont().deriveFont(rows.row(r).run() == null ? java.awt.Font.BOLD : java.awt.Font.PLAIN));
-                setToolTipText(rows.row(r).run() == null && rows.row(r).point().budget() != null
-                        ? "Double-click to open the full budget of point " + rows.row(r).point().label() : null);
-                return this;
-            }
-        });
-        table.addMouseListener(new java.awt.event.MouseAdapter() {
-            @Override
-            public void mouseClicked(java.awt.event.MouseEvent e) {
-                int r = table.rowAtPoint(e.getPoint());
-                if (e.getClickCount() == 2 && r >= 0) {
-                    drillDown(r);
-                }
-            }
-        });
+        PointsTable.install(table, c -> c >= 3 && c <= 10, r -> rows.row(r).run() == null,
+                r -> rows.row(r).run() == null && rows.row(r).point().budget() != null
+                        ? "Double-click to open the full budget of point " + rows.row(r).point().label() : null,
+                this::drillDown);
         JButton importRuns = new JButton("Import runs CSV\u2026");
         importRuns.setName("importRuns");
         importRuns.setMnemonic('I');
@@ -264,14 +243,7 @@ public final class CalibrationWindow extends JFrame {
                     + (adj.notes().isEmpty() ? "" : "<br>" + esc(String.join(" ", adj.notes()))) + "</html>");
         }
         rows.set(r);
-        for (int c = 0; c < table.getColumnCount(); c++) {
-            int w = table.getTableHeader().getDefaultRenderer().getTableCellRendererComponent(table,
-                    table.getColumnName(c), false, false, -1, c).getPreferredSize().width;
-            for (int row = 0; row < table.getRowCount(); row++) {
-                w = Math.max(w, table.prepareRenderer(table.getCellRenderer(row, c), row, c).getPreferredSize().width);
-            }
-            table.getColumnModel().getColumn(c).setPreferredWidth(w + 12);
-        }
+        PointsTable.fitColumns(table);
         errorCurve.setChart(CalibrationCharts.errorCurve(r));
         residuals.setChart(CalibrationCharts.residuals(r));
         state.setText(r.asFound().points().size() + (r.asFound().points().size() == 1 ? " point" : " points")

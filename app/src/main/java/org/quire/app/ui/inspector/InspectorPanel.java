@@ -54,8 +54,8 @@ public final class InspectorPanel extends JPanel {
             EvaluationSettings s = b.settings();
             String text = ("<html><b>" + esc(b.title().isEmpty() ? editor.document().name() : b.title()) + "</b><br><br>"
                     + (editor.document().file() == null ? "Not saved to a file yet." : esc(String.valueOf(editor.document().file())))
-                    + "<br><br>" + b.inputs().size() + " inputs, " + b.outputs().size() + " outputs, "
-                    + b.correlations().size() + " correlations<br>"
+                    + "<br><br>" + count(b.inputs().size(), "input") + ", " + count(b.outputs().size(), "output") + ", "
+                    + count(b.correlations().size(), "correlation") + "<br>"
                     + (s.hasFixedCoverageFactor() ? "k = " + Fmt.num(s.coverageFactor())
                             : "p = " + Fmt.probability(s.coverageProbability()))
                     + ", " + s.significantDigits() + " significant digits<br>Monte Carlo: " + Fmt.count(s.trials())
@@ -86,5 +86,10 @@ public final class InspectorPanel extends JPanel {
 
     private static String esc(String s) {
         return s.replace("&", "&amp;").replace("<", "&lt;");
+    }
+
+    /** @return e.g. "1 output", "2 outputs" */
+    private static String count(int n, String noun) {
+        return n + " " + noun + (n == 1 ? "" : "s");
     }
 }

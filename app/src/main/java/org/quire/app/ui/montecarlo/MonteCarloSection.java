@@ -46,6 +46,8 @@ public final class MonteCarloSection implements Section {
     private final javax.swing.JTextField trials = new javax.swing.JTextField(8);
     private final javax.swing.JTextField seed = new javax.swing.JTextField(10);
     private final javax.swing.JCheckBox adaptive = new javax.swing.JCheckBox("Adaptive (JCGM 101:2008 7.9)");
+    private final JLabel lock = new JLabel();
+    private final java.util.Map<JComponent, String> tips = new java.util.LinkedHashMap<>();
     private boolean updating;
 
     /**
@@ -92,8 +94,17 @@ public final class MonteCarloSection implements Section {
         progress.setPreferredSize(new java.awt.Dimension(fm.stringWidth(progressText(9_999_999, 9_999_999)) + 24,
                 progress.getPreferredSize().height));
         cancel.setEnabled(false);
+        for (JComponent c : new JComponent[] {trials, seed, adaptive}) {
+            tips.put(c, c.getToolTipText());
+        }
+        lock.setName("mcLock");
+        lock.setForeground(Colors.get("Quire.warning"));
+        lock.setVisible(false);
+        JPanel settingsAndLock = new JPanel(new BorderLayout());
+        settingsAndLock.add(settings, BorderLayout.CENTER);
+        settingsAndLock.add(lock, BorderLayout.SOUTH);
         JPanel top = new JPanel(new BorderLayout());
-        top.add(settings, BorderLayout.NORTH);
+        top.add(settingsAndLock, BorderLayout.NORTH);
         top.add(bar, BorderLayout.SOUTH);
         body.add(top, BorderLayout.NORTH);
         outputs.setLayout(new BoxLayout(outputs, BoxLayout.Y_AXIS));
@@ -113,7 +124,7 @@ public final class MonteCarloSection implements Section {
 
     /** Takes the trials, seed and adaptive mode typed into the budget's settings (one undoable edit). */
     private void commitSettings() {
-        if (updating || ctx.readOnly() || budget == null) {
+        if (updating || ctx.readOnly() || budget == null || lockedBy() != null) {
             return;
         }
         org.quire.engine.budget.EvaluationSettings s = budget.settings();
@@ -167,11 +178,32 @@ public final class MonteCarloSection implements Section {
         updateButtons();
     }
 
+    /** @return the template that locks the budget's settings (trials, seed and adaptive mode among them), or null */
+    private org.quire.engine.document.TemplateOrigin lockedBy() {
+        org.quire.engine.document.TemplateOrigin o = ctx.document().content().templateOrigin();
+        return o != null && o.locksPart("settings") ? o : null;
+    }
+
+    @Override
+    public void documentChanged(org.quire.engine.document.BudgetDocument content) {
+        readOnlyChanged(ctx.readOnly());
+    }
+
     @Override
     public void readOnlyChanged(boolean ro) {
-        trials.setEditable(!ro);
-        seed.setEditable(!ro);
-        adaptive.setEnabled(!ro);
+        org.quire.engine.document.TemplateOrigin o = lockedBy();
+        trials.setEditable(!ro && o == null);
+        seed.setEditable(!ro && o == null);
+        adaptive.setEnabled(!ro && o == null);
+        for (java.util.Map.Entry<JComponent, String> e : tips.entrySet()) {
+            e.getKey().setToolTipText(o == null ? e.getValue() : o.lockReason() + " (a setting of the method)");
+        }
+        String text = o == null ? "" : "Trials, seed and adaptive mode: " + o.lockReason() + ", read-only.";
+        if (!text.equals(lock.getText())) {
+            lock.setText(text);
+            lock.setToolTipText(o == null ? null : "The settings are values of the method: " + o.lockReason());
+        }
+        lock.setVisible(o != null);
     }
 
     @Override

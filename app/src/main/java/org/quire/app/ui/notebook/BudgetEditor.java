@@ -374,6 +374,9 @@ public final class BudgetEditor extends JPanel implements EditorContext {
     /** @return the assessor's review section (shown on review copies) */
     public ReviewPanel reviewPanel() { return review; }
 
+    /** @param opener shows the budget evaluated at its flow points (the Results section offers it) */
+    public void setFlowRangeOpener(Runnable opener) { results.setFlowRangeOpener(opener); }
+
     /** Starts a Monte Carlo run, when one can start. */
     public void runMonteCarlo() { monteCarlo.start(); }
 

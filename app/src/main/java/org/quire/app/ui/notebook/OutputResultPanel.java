@@ -51,6 +51,9 @@ final class OutputResultPanel extends JPanel {
     private final TableRowSorter<ContributionTableModel> sorter = new TableRowSorter<>(model);
     private final ContributionChart chart = new ContributionChart();
     private OutputResult shown;
+    /** Each column's width to show everything, and the least it is given (its header's longest word). */
+    private int[] natural;
+    private int[] least;
 
     OutputResultPanel(String output) {
         super(new BorderLayout(4, 4));
@@ -100,6 +103,13 @@ final class OutputResultPanel extends JPanel {
         add(top, BorderLayout.NORTH);
         JScrollPane sp = new JScrollPane(table);
         sp.setColumnHeaderView(table.getTableHeader());
+        table.getTableHeader().setDefaultRenderer(new WrappingHeader(table.getTableHeader().getDefaultRenderer()));
+        sp.getViewport().addComponentListener(new java.awt.event.ComponentAdapter() {
+            @Override
+            public void componentResized(java.awt.event.ComponentEvent e) {
+                layoutColumns();
+            }
+        });
         JPanel tableAndTotal = new JPanel(new BorderLayout());
         tableAndTotal.add(sp, BorderLayout.CENTER);
         JScrollPane totalScroll = new JScrollPane(total, JScrollPane.VERTICAL_SCROLLBAR_NEVER,
@@ -192,40 +202,183 @@ final class OutputResultPanel extends JPanel {
         }
         applyFilter();
         fitColumns();
-        javax.swing.table.JTableHeader header = table.getTableHeader();
-        int headerHeight = 0;
-        for (int c = 0; c < table.getColumnCount(); c++) {
-            headerHeight = Math.max(headerHeight, header.getDefaultRenderer().getTableCellRendererComponent(table,
-                    table.getColumnModel().getColumn(c).getHeaderValue(), false, false, -1, c).getPreferredSize().height);
-        }
-        header.setPreferredSize(new Dimension(table.getColumnModel().getTotalColumnWidth(), headerHeight + 4));
-        header.revalidate();
         chart.show(o);
-        int h = table.getRowHeight() * Math.max(3, table.getRowCount()) + table.getTableHeader().getPreferredSize().height + 4;
-        table.getParent().getParent().setPreferredSize(new Dimension(700, h));
+        fitHeight();
     }
 
-    /** Sizes every column to its header and its widest cell, so that nothing is clipped. */
+    /** Makes the table's scroll pane as high as its header and rows, so that it never scrolls up and down. */
+    private void fitHeight() {
+        int h = table.getRowHeight() * Math.max(3, table.getRowCount()) + table.getTableHeader().getPreferredSize().height + 4;
+        java.awt.Component sp = table.getParent().getParent();
+        if (sp.getPreferredSize().height != h) {
+            sp.setPreferredSize(new Dimension(700, h));
+            sp.revalidate();
+        }
+    }
+
+    /**
+     * Works out each column's natural width (its header on the lines it is written in, and its widest cell) and
+     * its least width (the longest word of its header), then lays the columns out in the visible width.
+     */
     private void fitColumns() {
-        for (int c = 0; c < table.getColumnCount(); c++) {
+        int n = table.getColumnCount();
+        natural = new int[n];
+        least = new int[n];
+        java.awt.FontMetrics fm = table.getTableHeader().getFontMetrics(table.getTableHeader().getFont());
+        for (int c = 0; c < n; c++) {
             TableColumn col = table.getColumnModel().getColumn(c);
-            Component h = table.getTableHeader().getDefaultRenderer().getTableCellRendererComponent(table,
-                    col.getHeaderValue(), false, false, -1, c);
-            int w = h.getPreferredSize().width;
+            String header = String.valueOf(col.getHeaderValue());
+            int w = 0;
+            for (String line : WrappingHeader.lines(header)) {
+                w = Math.max(w, fm.stringWidth(line));
+            }
+            int word = 0;
+            for (String line : WrappingHeader.lines(header)) {
+                for (String part : line.split(" ")) {
+                    word = Math.max(word, fm.stringWidth(part));
+                }
+            }
             for (JTable t : new JTable[] {table, total}) {
                 for (int r = 0; r < t.getRowCount(); r++) {
                     Component k = t.prepareRenderer(t.getCellRenderer(r, c), r, c);
                     w = Math.max(w, k.getPreferredSize().width);
                 }
             }
-            col.setPreferredWidth(w + 14);
+            natural[c] = w + 14;
+            // the input's name and the degrees of freedom are never cut short; other columns give way down to their
+            // header's longest word
+            least[c] = c == ContributionTableModel.INPUT || c == ContributionTableModel.DOF ? natural[c]
+                    : Math.min(natural[c], word + 14);
         }
+        layoutColumns();
+    }
+
+    /**
+     * Gives every column its natural width when they all fit the visible width of the table; else takes the
+     * missing width from the columns in proportion to what each can give above its least width, so that the
+     * table never scrolls sideways. A cell that no longer shows its whole text has it in its tooltip; headers
+     * wrap onto more lines ({@link WrappingHeader}).
+     */
+    private void layoutColumns() {
+        if (natural == null || natural.length != table.getColumnCount()) {
+            return;
+        }
+        int n = natural.length;
+        int avail = ((javax.swing.JViewport) table.getParent()).getWidth();
+        int want = 0;
+        int give = 0;
+        for (int c = 0; c < n; c++) {
+            want += natural[c];
+            give += natural[c] - least[c];
+        }
+        int[] w = natural.clone();
+        if (avail > 0 && want > avail) {
+            int missing = want - avail;
+            int left = missing;
+            for (int c = 0; c < n && give > 0; c++) {
+                int take = (int) Math.ceil((double) missing * (natural[c] - least[c]) / give);
+                take = Math.min(take, Math.min(left, natural[c] - least[c]));
+                w[c] -= take;
+                left -= take;
+            }
+            if (left > 0) {
+                // even the headers' longest words do not fit: every column gives way in proportion to its width,
+                // down to a few characters (the tooltips keep the full text)
+                int floor = table.getFontMetrics(table.getFont()).stringWidth("0000");
+                int room = 0;
+                for (int c = 0; c < n; c++) {
+                    room += Math.max(0, w[c] - floor);
+                }
+                int still = left;
+                for (int c = 0; c < n && room > 0; c++) {
+                    int take = (int) Math.ceil((double) left * Math.max(0, w[c] - floor) / room);
+                    take = Math.min(take, Math.min(still, Math.max(0, w[c] - floor)));
+                    w[c] -= take;
+                    still -= take;
+                }
+            }
+        }
+        for (int c = 0; c < n; c++) {
+            TableColumn col = table.getColumnModel().getColumn(c);
+            if (col.getPreferredWidth() != w[c] || col.getWidth() != w[c]) {
+                col.setPreferredWidth(w[c]);
+                col.setWidth(w[c]);
+            }
+        }
+        // the header UI measures only the first column of a shared renderer: the height of the wrapped headers
+        // is worked out here, over every column at its width
+        javax.swing.table.JTableHeader header = table.getTableHeader();
+        int height = 0;
+        for (int c = 0; c < n; c++) {
+            height = Math.max(height, header.getDefaultRenderer().getTableCellRendererComponent(table,
+                    table.getColumnModel().getColumn(c).getHeaderValue(), false, false, -1, c).getPreferredSize().height);
+        }
+        Dimension size = new Dimension(table.getColumnModel().getTotalColumnWidth(), height + 4);
+        if (!size.equals(header.getPreferredSize())) {
+            header.setPreferredSize(size);
+            header.revalidate();
+            fitHeight();
+        }
+        header.repaint();
     }
 
     JTable table() { return table; }
 
     /** @return the ranking chart beside the table */
     ContributionChart chart() { return chart; }
+
+    /**
+     * The table's header renderer (the look and feel's own) with the header's words wrapped onto as many lines as
+     * the column's width needs, each line centred; the full text is the header's tooltip.
+     */
+    static final class WrappingHeader implements javax.swing.table.TableCellRenderer {
+        private final javax.swing.table.TableCellRenderer base;
+
+        WrappingHeader(javax.swing.table.TableCellRenderer base) {
+            this.base = base;
+        }
+
+        /** @return the lines a header is written in ({@code <br>} in an HTML header), tags removed */
+        static List<String> lines(String header) {
+            String t = header.replaceAll("(?i)</?html>", "");
+            List<String> out = new java.util.ArrayList<>();
+            for (String l : t.split("(?i)<br>")) {
+                out.add(l.replaceAll("<[^>]*>", "").strip());
+            }
+            return out;
+        }
+
+        @Override
+        public Component getTableCellRendererComponent(JTable t, Object v, boolean sel, boolean focus, int r, int c) {
+            Component k = base.getTableCellRendererComponent(t, v, sel, focus, r, c);
+            if (!(k instanceof JLabel) || c < 0 || c >= t.getColumnCount()) {
+                return k;
+            }
+            JLabel l = (JLabel) k;
+            int width = t.getColumnModel().getColumn(c).getWidth() - 10;
+            java.awt.FontMetrics fm = l.getFontMetrics(l.getFont());
+            List<String> out = new java.util.ArrayList<>();
+            for (String line : lines(String.valueOf(v))) {
+                StringBuilder cur = new StringBuilder();
+                for (String word : line.split(" ")) {
+                    String next = cur.length() == 0 ? word : cur + " " + word;
+                    if (cur.length() > 0 && fm.stringWidth(next) > width) {
+                        out.add(cur.toString());
+                        cur = new StringBuilder(word);
+                    } else {
+                        cur = new StringBuilder(next);
+                    }
+                }
+                out.add(cur.toString());
+            }
+            StringBuilder html = new StringBuilder("<html><center>");
+            for (int i = 0; i < out.size(); i++) {
+                html.append(i == 0 ? "" : "<br>").append(out.get(i).replace("&", "&amp;").replace("<", "&lt;"));
+            }
+            l.setText(html.append("</center></html>").toString());
+            return l;
+        }
+    }
 
     /**
      * Puts the chart (the second component) beside the table (the first) when both fit the width at their

@@ -38,6 +38,12 @@ final class ResultsSection implements Section {
     private final JSpinner digits = new JSpinner(new SpinnerNumberModel(2, 1, 4, 1));
     private final JCheckBox higher = new JCheckBox("Higher-order terms");
     private final JCheckBox truncate = new JCheckBox("Truncate \u03bd_eff");
+    private final JLabel lock = new JLabel();
+    private final JPanel flowRange = new JPanel(new org.quire.app.ui.common.WrapLayout(FlowLayout.LEFT, 6, 2));
+    private final JLabel flowRangeText = new JLabel();
+    private Runnable flowRangeOpener;
+    /** The settings' own tooltips, shown again when they are not locked. */
+    private final Map<JComponent, String> tips = new LinkedHashMap<>();
     private boolean updating;
     private GumResult last;
 
@@ -65,8 +71,28 @@ final class ResultsSection implements Section {
         state.setName("resultsState");
         state.setFont(state.getFont().deriveFont(java.awt.Font.BOLD));
         north.add(state, BorderLayout.NORTH);
+        lock.setName("resultsLock");
+        lock.setForeground(Colors.get("Quire.warning"));
+        lock.setVisible(false);
+        north.add(lock, BorderLayout.CENTER);
         north.add(settings, BorderLayout.SOUTH);
-        body.add(north, BorderLayout.NORTH);
+        for (JComponent c : new JComponent[] {byP, byK, p, k, digits, higher, truncate}) {
+            tips.put(c, c.getToolTipText());
+        }
+        javax.swing.JButton showRange = new javax.swing.JButton("Show the flow range\u2026");
+        showRange.setName("showFlowRange");
+        showRange.addActionListener(e -> {
+            if (flowRangeOpener != null) {
+                flowRangeOpener.run();
+            }
+        });
+        flowRange.add(flowRangeText);
+        flowRange.add(showRange);
+        flowRange.setVisible(false);
+        JPanel northAndRange = new JPanel(new BorderLayout());
+        northAndRange.add(north, BorderLayout.NORTH);
+        northAndRange.add(flowRange, BorderLayout.SOUTH);
+        body.add(northAndRange, BorderLayout.NORTH);
         outputs.setLayout(new BoxLayout(outputs, BoxLayout.Y_AXIS));
         body.add(outputs, BorderLayout.CENTER);
         p.addActionListener(e -> commitSettings());
@@ -85,7 +111,7 @@ final class ResultsSection implements Section {
     }
 
     private void commitSettings() {
-        if (updating || ctx.readOnly()) {
+        if (updating || ctx.readOnly() || lockedBy() != null) {
             return;
         }
         EvaluationSettings s = ctx.document().budget().settings();
@@ -108,8 +134,21 @@ final class ResultsSection implements Section {
     @Override public String title() { return "Results (GUM)"; }
     @Override public JComponent body() { return body; }
 
+    void setFlowRangeOpener(Runnable opener) {
+        flowRangeOpener = opener;
+        showFlowPoints(ctx.document().budget());
+    }
+
+    private void showFlowPoints(Budget b) {
+        int points = b.flowPoints() == null ? 0 : b.flowPoints().rows().size();
+        flowRange.setVisible(points > 0 && flowRangeOpener != null);
+        flowRangeText.setText(points == 0 ? "" : "This budget has " + points + " flow points; the results below are "
+                + "those of the inputs as entered.");
+    }
+
     @Override
     public void budgetChanged(Budget b) {
+        showFlowPoints(b);
         updating = true;
         try {
             EvaluationSettings s = b.settings();
@@ -169,11 +208,30 @@ final class ResultsSection implements Section {
         outputs.repaint();
     }
 
+    /** @return the template that locks the budget's settings (the method's), or null when none does */
+    private org.quire.engine.document.TemplateOrigin lockedBy() {
+        org.quire.engine.document.TemplateOrigin o = ctx.document().content().templateOrigin();
+        return o != null && o.locksPart("settings") ? o : null;
+    }
+
+    @Override
+    public void documentChanged(org.quire.engine.document.BudgetDocument content) {
+        readOnlyChanged(ctx.readOnly());
+    }
+
     @Override
     public void readOnlyChanged(boolean ro) {
-        for (JComponent c : new JComponent[] {byP, byK, p, k, digits, higher, truncate}) {
-            c.setEnabled(!ro);
+        org.quire.engine.document.TemplateOrigin o = lockedBy();
+        for (Map.Entry<JComponent, String> e : tips.entrySet()) {
+            e.getKey().setEnabled(!ro && o == null);
+            e.getKey().setToolTipText(o == null ? e.getValue() : o.lockReason() + " (a setting of the method)");
         }
+        String text = o == null ? "" : "Coverage and evaluation settings: " + o.lockReason() + ", read-only.";
+        if (!text.equals(lock.getText())) {
+            lock.setText(text);
+            lock.setToolTipText(o == null ? null : "The settings are values of the method: " + o.lockReason());
+        }
+        lock.setVisible(o != null);
     }
 
     /** @return the result panel of an output, for tests and reports */

@@ -72,6 +72,9 @@ public final class ReviewPanel implements Section {
     private final JTextField reason = new JTextField(30);
     private final JButton record = new JButton("Record decision");
     private final JLabel outcome = new JLabel(" ");
+    private final JLabel templateFindings = new JLabel(" ");
+    /** The template library the budget is checked against (shipped, personal and team folders), or null. */
+    private java.util.function.Supplier<org.quire.engine.document.TemplateLibrary> templates;
     private Review base;
     /** The document whose checklist is being worked out off the event thread, or null. */
     private BudgetDocument pending;
@@ -93,6 +96,9 @@ public final class ReviewPanel implements Section {
         record.setName("recordDecision");
         outcome.setName("decisionOutcome");
         head.setName("reviewHead");
+        templateFindings.setName("templateFindings");
+        templateFindings.setVisible(false);
+        templateFindings.setBorder(BorderFactory.createEmptyBorder(2, 0, 4, 0));
 
         checklist.setSelectionMode(ListSelectionModel.SINGLE_SELECTION);
         checklist.getColumnModel().getColumn(0).setPreferredWidth(360);
@@ -159,7 +165,10 @@ public final class ReviewPanel implements Section {
         outcome.setBorder(BorderFactory.createEmptyBorder(2, 4, 2, 4));
 
         JPanel top = new JPanel(new BorderLayout(0, 4));
-        top.add(head, BorderLayout.NORTH);
+        JPanel heads = new JPanel(new BorderLayout(0, 2));
+        heads.add(head, BorderLayout.NORTH);
+        heads.add(templateFindings, BorderLayout.SOUTH);
+        top.add(heads, BorderLayout.NORTH);
         top.add(tableScroll, BorderLayout.CENTER);
         top.add(detailScroll, BorderLayout.SOUTH);
         JPanel bottom = new JPanel(new BorderLayout(0, 6));
@@ -171,6 +180,14 @@ public final class ReviewPanel implements Section {
         assessor.setText(ctx.document().user());
         date.setText(LocalDate.now(clock).toString());
         setOpen(false);
+    }
+
+    /**
+     * @param library the template library a budget made from a template is checked against (the engine's
+     *     {@link org.quire.engine.document.TemplateConformance}, the check {@code quire template check} makes)
+     */
+    public void useTemplates(java.util.function.Supplier<org.quire.engine.document.TemplateLibrary> library) {
+        templates = library;
     }
 
     @Override public String title() { return TITLE; }
@@ -200,16 +217,30 @@ public final class ReviewPanel implements Section {
         BudgetDocument d = ctx.document().content();
         Review prior = base;
         pending = d;
-        // the content hash of a large budget (200 000 readings) takes seconds: worked out off the event thread
+        java.util.function.Supplier<org.quire.engine.document.TemplateLibrary> library = templates;
+        // the content hash of a large budget (200 000 readings) takes seconds, and the template library is read from
+        // its folders: both worked out off the event thread
         new javax.swing.SwingWorker<Review, Void>() {
+            private org.quire.engine.document.TemplateConformance.Finding finding;
+            private String unchecked;
+
             @Override
             protected Review doInBackground() {
                 if (prior != null && prior.contentHash().equals(d.contentHash())) {
+                    finding = shownFinding;
                     return prior;
                 }
-                return Review.start(r.budget(), r.result(), ReviewContext.none().withUnits(
-                        new org.quire.app.review.EngineUnitChecker(ctx.library())),
-                        org.quire.app.report.ContentHasher.of(d));
+                ReviewContext rc = ReviewContext.none().withUnits(new org.quire.app.review.EngineUnitChecker(ctx.library()));
+                if (library != null && d.templateOrigin() != null) {
+                    try {
+                        finding = org.quire.engine.document.TemplateConformance.check(d, library.get());
+                        rc = rc.withTemplate(finding);
+                    } catch (java.io.IOException | UncheckedIOException e) {
+                        unchecked = "The template library cannot be read (" + e.getMessage() + "): the fields the "
+                                + "template locks are not checked.";
+                    }
+                }
+                return Review.start(r.budget(), r.result(), rc, org.quire.app.report.ContentHasher.of(d));
             }
 
             @Override
@@ -228,6 +259,7 @@ public final class ReviewPanel implements Section {
                     head.setText("The checklist cannot be drawn up: " + e.getCause().getMessage());
                     return;
                 }
+                showTemplate(finding, unchecked);
                 if (started == prior) {
                     return;
                 }
@@ -242,6 +274,54 @@ public final class ReviewPanel implements Section {
                 }
             }
         }.execute();
+    }
+
+    private org.quire.engine.document.TemplateConformance.Finding shownFinding;
+
+    /**
+     * Shows the engine's template check of the budget above the checklist: each deviation from the template's
+     * locked fields as the sentence {@code quire template check} prints, or that the budget keeps them all.
+     */
+    private void showTemplate(org.quire.engine.document.TemplateConformance.Finding f,
+            String unchecked) {
+        shownFinding = f;
+        String text;
+        java.awt.Color colour = Colors.get("Label.foreground");
+        if (unchecked != null) {
+            text = "<html>" + esc(unchecked) + "</html>";
+            colour = Colors.get("Quire.warning");
+        } else if (f == null || f.state() == org.quire.engine.document.TemplateConformance.State.NOT_FROM_TEMPLATE) {
+            text = "";
+        } else if (f.state() == org.quire.engine.document.TemplateConformance.State.FOLLOWS) {
+            text = "<html>Template " + esc(f.origin().id()) + " v" + f.origin().version() + ": the budget keeps every "
+                    + "field the template locks.</html>";
+            colour = Colors.get("Quire.ok");
+        } else {
+            int n = f.messages().size();
+            StringBuilder b = new StringBuilder("<html><b>");
+            b.append(f.state() == org.quire.engine.document.TemplateConformance.State.DEVIATES
+                    ? n + (n == 1 ? " deviation" : " deviations") + " from template " + esc(f.origin().id()) + " v"
+                            + f.origin().version() + ":"
+                    : "The template cannot be checked:").append("</b>");
+            for (String m : f.messages()) {
+                b.append("<br>\u2022 ").append(esc(m));
+            }
+            text = b.append("</html>").toString();
+            colour = f.state() == org.quire.engine.document.TemplateConformance.State.DEVIATES
+                    ? Colors.get("Quire.error") : Colors.get("Quire.warning");
+        }
+        templateFindings.setText(text);
+        templateFindings.setForeground(colour);
+        templateFindings.setVisible(!text.isEmpty());
+    }
+
+    private static String esc(String s) {
+        return s.replace("&", "&amp;").replace("<", "&lt;");
+    }
+
+    /** @return the engine's template check shown above the checklist, or null when none was made */
+    public org.quire.engine.document.TemplateConformance.Finding templateFinding() {
+        return shownFinding;
     }
 
     /** @return whether the checklist is drawn up for the latest result (none is being worked out) */
