@@ -28,13 +28,12 @@ import org.quire.engine.montecarlo.CoverageInterval;
 import org.quire.engine.montecarlo.ProgressListener;
 import org.quire.engine.document.BudgetDocument;
 import org.quire.engine.document.DocumentStore;
+import org.quire.engine.document.PreparedTemplate;
 import org.quire.engine.document.Template;
 import org.quire.engine.document.TemplateParameter;
-import org.quire.engine.gum.GumEvaluator;
 import org.quire.engine.gum.GumResult;
 import org.quire.engine.gum.OutputResult;
 import org.quire.engine.io.BudgetFormatException;
-import org.quire.engine.model.CompiledModel;
 import org.quire.engine.model.ModelException;
 import java.util.concurrent.Callable;
 import picocli.CommandLine.Command;
@@ -110,9 +109,9 @@ final class BatchCommand implements Callable<Integer> {
             base = base.withSettings(trials.apply(base.settings()));
         }
         EvaluationSettings settings = base.settings();
-        CompiledModel model;
+        PreparedTemplate prepared;
         try {
-            model = base.compile(quire.engine.library());
+            prepared = PreparedTemplate.of(template, quire.engine.library());
         } catch (ModelException e) {
             throw Files.modelProblem(templateName, e);
         }
@@ -126,7 +125,7 @@ final class BatchCommand implements Callable<Integer> {
         Outcome[] outcomes;
         try {
             outcomes = IntStream.range(0, n).parallel().mapToObj(i -> {
-                Outcome o = evaluate(template, model, rows.get(i), mc ? settings : null);
+                Outcome o = evaluate(prepared, rows.get(i), mc ? settings : null);
                 synchronized (err) {
                     int d = done.incrementAndGet();
                     if (o.error() != null) {
@@ -248,7 +247,8 @@ final class BatchCommand implements Callable<Integer> {
      * @param mc the settings for the Monte Carlo method (one thread per row, the rows run in parallel), or null
      *     for the GUM only
      */
-    private static Outcome evaluate(Template template, CompiledModel model, Row row, EvaluationSettings mc) {
+    private static Outcome evaluate(PreparedTemplate prepared, Row row, EvaluationSettings mc) {
+        Template template = prepared.template();
         Map<String, Double> values = new LinkedHashMap<>();
         Map<String, double[]> readings = new LinkedHashMap<>();
         List<String> header = row.cells().table().header();
@@ -275,8 +275,8 @@ final class BatchCommand implements Callable<Integer> {
             given = given.withReadings(r.getKey(), r.getValue());
         }
         try {
-            Budget b = template.budgetFor(given);
-            GumResult r = GumEvaluator.evaluate(b, model, b.correlationMatrix(), b.settings());
+            Budget b = prepared.budgetFor(given);
+            GumResult r = prepared.evaluate(b);
             List<String> cells = new ArrayList<>();
             for (OutputResult o : r.outputs()) {
                 cells.add(EvaluateCommand.num(o.estimate()));
@@ -288,7 +288,7 @@ final class BatchCommand implements Callable<Integer> {
                 }
             }
             if (mc != null) {
-                org.quire.engine.montecarlo.MonteCarloOutcome m = BudgetSimulation.run(b, model, r,
+                org.quire.engine.montecarlo.MonteCarloOutcome m = BudgetSimulation.run(b, prepared.model(), r,
                         BudgetSimulation.settings(mc, r).withThreads(1), ProgressListener.NONE);
                 int per = 7;
                 for (int k = 0; k < r.outputs().size(); k++) {
