@@ -25,6 +25,7 @@ import org.quire.engine.csv.CsvRow;
 import org.quire.engine.csv.CsvTable;
 import org.quire.engine.montecarlo.BudgetSimulation;
 import org.quire.engine.montecarlo.CoverageInterval;
+import org.quire.engine.montecarlo.MonteCarlo;
 import org.quire.engine.montecarlo.ProgressListener;
 import org.quire.engine.document.BudgetDocument;
 import org.quire.engine.document.DocumentStore;
@@ -45,7 +46,7 @@ import picocli.CommandLine.Parameters;
 /**
  * {@code quire batch TEMPLATE DATA.csv -o RESULTS.csv}: evaluates a template (GUM) for every row of a CSV
  * file whose columns are named after the template's parameters (an optional {@code id} column is copied
- * through), on all processor cores, and writes per row the estimate, u, k and U of every output and an
+ * through), on all processor cores (with --mc, row after row on one set of Monte Carlo worker threads), and writes per row the estimate, u, k and U of every output and an
  * {@code error} column. A bad row is reported on stderr with its line number and does not stop the others.
  * Exit status 0 when every row was evaluated, 1 when some failed, 2 for unusable files or arguments.
  */
@@ -123,9 +124,13 @@ final class BatchCommand implements Callable<Integer> {
         info(err, "quire batch: " + n + " rows of " + dataName + " with template " + template.id() + " version "
                 + template.version() + " on " + Runtime.getRuntime().availableProcessors() + " cores");
         Outcome[] outcomes;
+        // the GUM rows in parallel; with the Monte Carlo method, row after row, each on one set of worker threads
+        // and arrays for the whole batch
+        IntStream order = mc ? IntStream.range(0, n) : IntStream.range(0, n).parallel();
+        MonteCarlo.Workers workers = mc ? MonteCarlo.Workers.of(Runtime.getRuntime().availableProcessors()) : null;
         try {
-            outcomes = IntStream.range(0, n).parallel().mapToObj(i -> {
-                Outcome o = evaluate(prepared, rows.get(i), mc ? settings : null);
+            outcomes = order.mapToObj(i -> {
+                Outcome o = evaluate(prepared, rows.get(i), mc ? settings : null, workers);
                 synchronized (err) {
                     int d = done.incrementAndGet();
                     if (o.error() != null) {
@@ -138,6 +143,9 @@ final class BatchCommand implements Callable<Integer> {
             }).toArray(Outcome[]::new);
         } finally {
             progress.finish();
+            if (workers != null) {
+                workers.close();
+            }
         }
         List<String> header = new ArrayList<>();
         header.add("id");
@@ -244,10 +252,11 @@ final class BatchCommand implements Callable<Integer> {
     }
 
     /**
-     * @param mc the settings for the Monte Carlo method (one thread per row, the rows run in parallel), or null
-     *     for the GUM only
+     * @param mc the settings for the Monte Carlo method, or null for the GUM only
+     * @param workers the Monte Carlo workers of the batch, or null for the GUM only
      */
-    private static Outcome evaluate(PreparedTemplate prepared, Row row, EvaluationSettings mc) {
+    private static Outcome evaluate(PreparedTemplate prepared, Row row, EvaluationSettings mc,
+            MonteCarlo.Workers workers) {
         Template template = prepared.template();
         Map<String, Double> values = new LinkedHashMap<>();
         Map<String, double[]> readings = new LinkedHashMap<>();
@@ -289,7 +298,7 @@ final class BatchCommand implements Callable<Integer> {
             }
             if (mc != null) {
                 org.quire.engine.montecarlo.MonteCarloOutcome m = BudgetSimulation.run(b, prepared.model(), r,
-                        BudgetSimulation.settings(mc, r).withThreads(1), ProgressListener.NONE);
+                        BudgetSimulation.settings(mc, r).withThreads(workers.threads()), ProgressListener.NONE, workers);
                 int per = 7;
                 for (int k = 0; k < r.outputs().size(); k++) {
                     CoverageInterval ci = m.output(k).symmetricInterval();
