@@ -47,7 +47,8 @@ import picocli.CommandLine.Parameters;
  * {@code quire batch TEMPLATE DATA.csv -o RESULTS.csv}: evaluates a template (GUM) for every row of a CSV
  * file whose columns are named after the template's parameters (an optional {@code id} column is copied
  * through), on all processor cores (with --mc, row after row on one set of Monte Carlo worker threads), and
- * writes per row the estimate, u, k and U of every output and an {@code error} column. A bad row is reported on stderr with its line number and does not stop the others.
+ * writes per row the estimate, u, k and U of every output and an {@code error} column. A bad row is reported
+ * on stderr with its line number and does not stop the others.
  * Exit status 0 when every row was evaluated, 1 when some failed, 2 for unusable files or arguments.
  */
 @Command(name = "batch", mixinStandardHelpOptions = true, sortOptions = false,
@@ -298,7 +299,8 @@ final class BatchCommand implements Callable<Integer> {
             }
             if (mc != null) {
                 org.quire.engine.montecarlo.MonteCarloOutcome m = BudgetSimulation.run(b, prepared.model(), r,
-                        BudgetSimulation.settings(mc, r).withThreads(workers.threads()), ProgressListener.NONE, workers);
+                        BudgetSimulation.settings(mc, r).withThreads(workers.threads()), ProgressListener.NONE,
+                        workers);
                 int per = 7;
                 for (int k = 0; k < r.outputs().size(); k++) {
                     CoverageInterval ci = m.output(k).symmetricInterval();

@@ -160,7 +160,8 @@ class BatchCommandTest {
      */
     @Test
     void everyRowEqualsTheEvaluationOfTheBudgetMadeFromTheTemplateWithItsValues(@TempDir Path dir) throws Exception {
-        Path template = Path.of(System.getProperty("quire.projectRoot", ".."), "templates", "gravimetric-emf-flow-point.json");
+        Path template = Path.of(System.getProperty("quire.projectRoot", ".."), "templates",
+                "gravimetric-emf-flow-point.json");
         String[] header = {"I_net", "t_tank", "t_meter", "p_meter", "t_c", "p_a", "t_a", "h_a", "U_bal", "N_ind",
             "k_pulse", "d_conv"};
         String[][] rows = {
@@ -217,8 +218,8 @@ class BatchCommandTest {
                     double expected = o.getJsonNumber(fields[f]).doubleValue();
                     double printed = Double.parseDouble(cells[1 + 4 * k + f]);
                     // printed with 10 significant digits: half a unit in the 10th digit
-                    assertEquals(expected, printed, 5e-10 * Math.abs(expected), "row " + (r + 1) + " " + o.getString("name")
-                            + " " + fields[f]);
+                    assertEquals(expected, printed, 5e-10 * Math.abs(expected), "row " + (r + 1) + " "
+                            + o.getString("name") + " " + fields[f]);
                 }
             }
         }

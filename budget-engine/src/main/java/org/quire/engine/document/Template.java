@@ -122,7 +122,8 @@ public final class Template {
                                 + "') must be given: the template's example readings are not carried over");
                     } else {
                         int i = indexOf(inputs, p);
-                        inputs.set(i, inputs.get(i).withEvaluation(p.readingsEvaluationFor(inputs.get(i).evaluation(), r)));
+                        InputQuantity q = inputs.get(i);
+                        inputs.set(i, q.withEvaluation(p.readingsEvaluationFor(q.evaluation(), r)));
                     }
                     continue;
                 }
@@ -136,7 +137,8 @@ public final class Template {
                 }
                 p.checkNumber(v);
                 int i = indexOf(inputs, p);
-                inputs.set(i, inputs.get(i).withEvaluation(p.evaluationFor(inputs.get(i).evaluation(), v)));
+                InputQuantity q = inputs.get(i);
+                inputs.set(i, q.withEvaluation(p.evaluationFor(q.evaluation(), v)));
             } catch (IllegalArgumentException e) {
                 problems.add(e.getMessage());
             }

@@ -35,6 +35,8 @@ class MonteCarloWorkersTest {
         }
     }
 
+    private static final ProgressListener NONE = ProgressListener.NONE;
+
     @Test
     void runsOnSharedWorkersEqualRunsOnTheirOwnThreads() {
         MonteCarloSettings big = MonteCarloSettings.defaults().withTrials(50_001).withSeed(7L).withThreads(2);
@@ -44,16 +46,16 @@ class MonteCarloWorkersTest {
         MonteCarloResult alone3 = MonteCarlo.run(TestModels.additive(4), MIXED, big.withSeed(9L));
         try (MonteCarlo.Workers workers = MonteCarlo.Workers.of(2)) {
             // the first and third run have the same size, so the third reuses the first run's arrays
-            assertSameResults(alone1, MonteCarlo.run(TestModels.additive(4), MIXED, big, ProgressListener.NONE, workers));
-            assertSameResults(alone2, MonteCarlo.run(TestModels.massCalibration(), MASS, small, ProgressListener.NONE, workers));
-            assertSameResults(alone3, MonteCarlo.run(TestModels.additive(4), MIXED, big.withSeed(9L), ProgressListener.NONE,
+            assertSameResults(alone1, MonteCarlo.run(TestModels.additive(4), MIXED, big, NONE, workers));
+            assertSameResults(alone2, MonteCarlo.run(TestModels.massCalibration(), MASS, small, NONE, workers));
+            assertSameResults(alone3, MonteCarlo.run(TestModels.additive(4), MIXED, big.withSeed(9L), NONE,
                     workers));
-            assertSameResults(alone1, MonteCarlo.run(TestModels.additive(4), MIXED, big, ProgressListener.NONE, workers));
+            assertSameResults(alone1, MonteCarlo.run(TestModels.additive(4), MIXED, big, NONE, workers));
             // values kept by a run are its own: a later run on the same workers does not change them
             MonteCarloResult kept = MonteCarlo.run(TestModels.additive(4), MIXED, big.withKeepValues(true),
-                    ProgressListener.NONE, workers);
+                    NONE, workers);
             double first = kept.values(0)[0];
-            MonteCarlo.run(TestModels.additive(4), MIXED, big.withSeed(10L), ProgressListener.NONE, workers);
+            MonteCarlo.run(TestModels.additive(4), MIXED, big.withSeed(10L), NONE, workers);
             assertEquals(first, kept.values(0)[0], 0.0);
             assertEquals(2, workers.threads());
         }
@@ -69,10 +71,10 @@ class MonteCarloWorkersTest {
         long before = workerThreads();
         MonteCarlo.Workers workers = MonteCarlo.Workers.of(3);
         MonteCarlo.run(TestModels.additive(4), MIXED, MonteCarloSettings.defaults().withTrials(20_000),
-                ProgressListener.NONE, workers);
+                NONE, workers);
         workers.close();
         IllegalArgumentException e = assertThrows(IllegalArgumentException.class, () -> MonteCarlo.run(
-                TestModels.additive(4), MIXED, MonteCarloSettings.defaults().withTrials(1000), ProgressListener.NONE,
+                TestModels.additive(4), MIXED, MonteCarloSettings.defaults().withTrials(1000), NONE,
                 workers));
         assertTrue(e.getMessage().contains("closed"), e.getMessage());
         assertEquals(before, workerThreads(), "the workers' threads have ended");
