@@ -189,7 +189,7 @@ public final class TypeB implements Evaluation {
             throw new InvalidParameterException("distribution", "unknown distribution '" + distribution
                     + "'; expected one of " + String.join(", ", DISTRIBUTIONS));
         }
-        Map<String, Double> p = new LinkedHashMap<>(parameters);
+        Map<String, Double> p = new LinkedHashMap<>(parameters); // this evaluation's own copy, frozen at the end
         for (Map.Entry<String, Double> e : p.entrySet()) {
             if (!PARAMETERS.contains(e.getKey())) {
                 throw new InvalidParameterException(e.getKey(), "'" + e.getKey()
@@ -334,8 +334,9 @@ public final class TypeB implements Evaluation {
         return new TypeB(distribution, freeze(p), d, nu, basis);
     }
 
+    /** @return {@code p}, which is the evaluation's own copy, unmodifiable */
     private static Map<String, Double> freeze(Map<String, Double> p) {
-        return Collections.unmodifiableMap(new LinkedHashMap<>(p));
+        return Collections.unmodifiableMap(p);
     }
 
     static String fmt(double v) {
