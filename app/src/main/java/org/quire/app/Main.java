@@ -17,6 +17,17 @@ public final class Main {
 
     public static void main(String[] args) {
         String[] words = args;
+        if (args.length == 0 && !java.awt.GraphicsEnvironment.isHeadless()) {
+            // the workbench with the demo budget: nothing to parse, so the command line is not built
+            // (without a display, 'quire open' below says so)
+            try {
+                Workbench.start(null, false);
+                return;
+            } catch (AWTError | HeadlessException e) {
+                System.err.println(noDisplay(e));
+                System.exit(CommandLine.USER_ERROR);
+            }
+        }
         if (args.length == 0) {
             words = new String[] {"open"};
         } else if (args.length == 1 && args[0].endsWith(".json") && !args[0].startsWith("-")) {
@@ -28,13 +39,17 @@ public final class Main {
                 Workbench.start(file, review);
                 opened[0] = true;
             } catch (AWTError | HeadlessException e) {
-                System.err.println("quire open: the workbench cannot reach a display (" + e.getMessage()
-                        + "); the other commands work without one: see 'quire --help'");
+                System.err.println(noDisplay(e));
                 System.exit(CommandLine.USER_ERROR);
             }
         });
         if (!opened[0]) {
             System.exit(status);
         }
+    }
+
+    private static String noDisplay(Throwable e) {
+        return "quire open: the workbench cannot reach a display (" + e.getMessage()
+                + "); the other commands work without one: see 'quire --help'";
     }
 }

@@ -25,16 +25,16 @@ import org.quire.engine.csv.CsvRow;
 import org.quire.engine.csv.CsvTable;
 import org.quire.engine.montecarlo.BudgetSimulation;
 import org.quire.engine.montecarlo.CoverageInterval;
+import org.quire.engine.montecarlo.MonteCarlo;
 import org.quire.engine.montecarlo.ProgressListener;
 import org.quire.engine.document.BudgetDocument;
 import org.quire.engine.document.DocumentStore;
+import org.quire.engine.document.PreparedTemplate;
 import org.quire.engine.document.Template;
 import org.quire.engine.document.TemplateParameter;
-import org.quire.engine.gum.GumEvaluator;
 import org.quire.engine.gum.GumResult;
 import org.quire.engine.gum.OutputResult;
 import org.quire.engine.io.BudgetFormatException;
-import org.quire.engine.model.CompiledModel;
 import org.quire.engine.model.ModelException;
 import java.util.concurrent.Callable;
 import picocli.CommandLine.Command;
@@ -46,8 +46,9 @@ import picocli.CommandLine.Parameters;
 /**
  * {@code quire batch TEMPLATE DATA.csv -o RESULTS.csv}: evaluates a template (GUM) for every row of a CSV
  * file whose columns are named after the template's parameters (an optional {@code id} column is copied
- * through), on all processor cores, and writes per row the estimate, u, k and U of every output and an
- * {@code error} column. A bad row is reported on stderr with its line number and does not stop the others.
+ * through), on all processor cores (with --mc, row after row on one set of Monte Carlo worker threads), and
+ * writes per row the estimate, u, k and U of every output and an {@code error} column. A bad row is reported
+ * on stderr with its line number and does not stop the others.
  * Exit status 0 when every row was evaluated, 1 when some failed, 2 for unusable files or arguments.
  */
 @Command(name = "batch", mixinStandardHelpOptions = true, sortOptions = false,
@@ -110,9 +111,9 @@ final class BatchCommand implements Callable<Integer> {
             base = base.withSettings(trials.apply(base.settings()));
         }
         EvaluationSettings settings = base.settings();
-        CompiledModel model;
+        PreparedTemplate prepared;
         try {
-            model = base.compile(quire.engine.library());
+            prepared = PreparedTemplate.of(template, quire.engine.library());
         } catch (ModelException e) {
             throw Files.modelProblem(templateName, e);
         }
@@ -124,9 +125,13 @@ final class BatchCommand implements Callable<Integer> {
         info(err, "quire batch: " + n + " rows of " + dataName + " with template " + template.id() + " version "
                 + template.version() + " on " + Runtime.getRuntime().availableProcessors() + " cores");
         Outcome[] outcomes;
+        // the GUM rows in parallel; with the Monte Carlo method, row after row, each on one set of worker threads
+        // and arrays for the whole batch
+        IntStream order = mc ? IntStream.range(0, n) : IntStream.range(0, n).parallel();
+        MonteCarlo.Workers workers = mc ? MonteCarlo.Workers.of(Runtime.getRuntime().availableProcessors()) : null;
         try {
-            outcomes = IntStream.range(0, n).parallel().mapToObj(i -> {
-                Outcome o = evaluate(template, model, rows.get(i), mc ? settings : null);
+            outcomes = order.mapToObj(i -> {
+                Outcome o = evaluate(prepared, rows.get(i), mc ? settings : null, workers);
                 synchronized (err) {
                     int d = done.incrementAndGet();
                     if (o.error() != null) {
@@ -139,6 +144,9 @@ final class BatchCommand implements Callable<Integer> {
             }).toArray(Outcome[]::new);
         } finally {
             progress.finish();
+            if (workers != null) {
+                workers.close();
+            }
         }
         List<String> header = new ArrayList<>();
         header.add("id");
@@ -245,10 +253,12 @@ final class BatchCommand implements Callable<Integer> {
     }
 
     /**
-     * @param mc the settings for the Monte Carlo method (one thread per row, the rows run in parallel), or null
-     *     for the GUM only
+     * @param mc the settings for the Monte Carlo method, or null for the GUM only
+     * @param workers the Monte Carlo workers of the batch, or null for the GUM only
      */
-    private static Outcome evaluate(Template template, CompiledModel model, Row row, EvaluationSettings mc) {
+    private static Outcome evaluate(PreparedTemplate prepared, Row row, EvaluationSettings mc,
+            MonteCarlo.Workers workers) {
+        Template template = prepared.template();
         Map<String, Double> values = new LinkedHashMap<>();
         Map<String, double[]> readings = new LinkedHashMap<>();
         List<String> header = row.cells().table().header();
@@ -275,8 +285,8 @@ final class BatchCommand implements Callable<Integer> {
             given = given.withReadings(r.getKey(), r.getValue());
         }
         try {
-            Budget b = template.budgetFor(given);
-            GumResult r = GumEvaluator.evaluate(b, model, b.correlationMatrix(), b.settings());
+            Budget b = prepared.budgetFor(given);
+            GumResult r = prepared.evaluate(b);
             List<String> cells = new ArrayList<>();
             for (OutputResult o : r.outputs()) {
                 cells.add(EvaluateCommand.num(o.estimate()));
@@ -288,8 +298,9 @@ final class BatchCommand implements Callable<Integer> {
                 }
             }
             if (mc != null) {
-                org.quire.engine.montecarlo.MonteCarloOutcome m = BudgetSimulation.run(b, model, r,
-                        BudgetSimulation.settings(mc, r).withThreads(1), ProgressListener.NONE);
+                org.quire.engine.montecarlo.MonteCarloOutcome m = BudgetSimulation.run(b, prepared.model(), r,
+                        BudgetSimulation.settings(mc, r).withThreads(workers.threads()), ProgressListener.NONE,
+                        workers);
                 int per = 7;
                 for (int k = 0; k < r.outputs().size(); k++) {
                     CoverageInterval ci = m.output(k).symmetricInterval();

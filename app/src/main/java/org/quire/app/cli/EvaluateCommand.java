@@ -3,7 +3,6 @@ package org.quire.app.cli;
 import jakarta.json.JsonObject;
 import java.io.PrintStream;
 import java.util.List;
-import java.util.Locale;
 import java.util.Set;
 import java.util.concurrent.Callable;
 import org.quire.app.common.Cautions;
@@ -145,6 +144,7 @@ final class EvaluateCommand implements Callable<Integer> {
         return s.toString();
     }
 
+    /** @return a number of a CSV table: 10 significant digits, {@code inf}, or empty for NaN */
     static String num(double v) {
         if (Double.isInfinite(v)) {
             return "inf";
@@ -152,6 +152,99 @@ final class EvaluateCommand implements Callable<Integer> {
         if (Double.isNaN(v)) {
             return "";
         }
-        return String.format(Locale.ROOT, "%.10g", v);
+        return tenDigits(v);
+    }
+
+    /** The significant digits of {@link #num}. */
+    private static final int DIGITS = 10;
+
+    /**
+     * {@code String.format(Locale.ROOT, "%.10g", v)} for a finite {@code v}, written directly (a batch writes
+     * tens of thousands of numbers, and the formatter parses its pattern at every call): the shortest decimal
+     * digits that give back {@code v} ({@link Double#toString}, the digits the formatter starts from) rounded
+     * half up to 10 significant digits; then, as the formatter's {@code g} conversion, plain notation with 10
+     * significant digits when the rounded magnitude is at least 10^-4 and below 10^10, otherwise
+     * {@code d.ddddddddde+XX}.
+     */
+    static String tenDigits(double v) {
+        StringBuilder out = new StringBuilder(24);
+        if (Double.compare(v, 0.0) < 0) {
+            out.append('-');
+        }
+        double a = Math.abs(v);
+        char[] d = new char[DIGITS];
+        int point; // a = 0.d1 d2 ... x 10^point, d1 not 0
+        if (a == 0) {
+            java.util.Arrays.fill(d, '0');
+            point = 1;
+        } else {
+            String s = Double.toString(a);
+            int e = s.indexOf('E');
+            int exponent = e < 0 ? 0 : Integer.parseInt(s, e + 1, s.length(), 10);
+            int end = e < 0 ? s.length() : e;
+            int dot = s.indexOf('.');
+            point = dot + exponent;
+            int n = 0;
+            boolean roundUp = false;
+            boolean leading = true;
+            for (int i = 0; i < end; i++) {
+                char c = s.charAt(i);
+                if (c == '.') {
+                    continue;
+                }
+                if (leading && c == '0') {
+                    point--;
+                    continue;
+                }
+                leading = false;
+                if (n < DIGITS) {
+                    d[n++] = c;
+                } else {
+                    roundUp = c >= '5'; // half up, on the first digit dropped
+                    break;
+                }
+            }
+            while (n < DIGITS) {
+                d[n++] = '0';
+            }
+            if (roundUp) {
+                int i = DIGITS - 1;
+                while (i >= 0 && d[i] == '9') {
+                    d[i--] = '0';
+                }
+                if (i >= 0) {
+                    d[i]++;
+                } else {
+                    d[0] = '1';
+                    point++;
+                }
+            }
+        }
+        int exponent = point - 1; // of the rounded value, d1.d2 ... x 10^exponent
+        if (a == 0 || (exponent >= -4 && exponent < DIGITS)) {
+            if (a == 0) {
+                out.append("0.");
+                out.append(d, 0, DIGITS - 1);
+            } else if (exponent >= 0) {
+                out.append(d, 0, exponent + 1);
+                if (exponent + 1 < DIGITS) {
+                    out.append('.').append(d, exponent + 1, DIGITS - exponent - 1);
+                }
+            } else {
+                out.append("0.");
+                for (int i = 0; i < -exponent - 1; i++) {
+                    out.append('0');
+                }
+                out.append(d, 0, DIGITS);
+            }
+        } else {
+            out.append(d[0]).append('.').append(d, 1, DIGITS - 1).append('e').append(exponent < 0 ? '-' : '+');
+            int x = Math.abs(exponent);
+            if (x < 10) {
+                out.append('0');
+            }
+            out.append(x);
+        }
+        return out.toString();
     }
 }

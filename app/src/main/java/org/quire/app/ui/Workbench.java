@@ -23,6 +23,13 @@ public final class Workbench {
      * @param review whether to open the file read-only, for an assessor
      */
     public static void start(Path file, boolean review) {
+        // what needs no look and feel is made on the other core meanwhile: the engine's function set and the demo
+        // budget, read from the application
+        java.util.concurrent.FutureTask<Prepared> prepared = new java.util.concurrent.FutureTask<>(
+                () -> prepare(file == null));
+        Thread preparing = new Thread(prepared, "quire-start");
+        preparing.setDaemon(true);
+        preparing.start();
         System.setProperty("apple.laf.useScreenMenuBar", "true");
         System.setProperty("apple.awt.application.name", "Quire");
         System.setProperty("flatlaf.uiScale.allowScaleDown", "true");
@@ -30,14 +37,15 @@ public final class Workbench {
         installLookAndFeel(prefs.theme());
         Thread.setDefaultUncaughtExceptionHandler(Workbench::uncaught);
         EventQueue.invokeLater(() -> {
-            Engine engine = Engine.standard();
+            Prepared p = join(prepared);
+            Engine engine = p.engine();
             WorkbenchFrame frame = new WorkbenchFrame(prefs, engine.library(),
                     MonteCarloRunner.engine(engine.library()));
             frame.setIconImages(AppIcon.images());
             // the demo budget first, then the window: its first paint shows the content, not an empty grey frame;
             // a file is read off the event thread once the window shows
             if (file == null) {
-                frame.openDemo();
+                frame.openDemo(p.demo());
             }
             frame.showRestored();
             if (file != null) {
@@ -48,6 +56,42 @@ public final class Workbench {
             }
             EventQueue.invokeLater(frame::offerRecovery);
         });
+    }
+
+    /** What the start-up makes off the event thread: the engine configuration, and the demo budget or null. */
+    private record Prepared(Engine engine, org.quire.engine.document.BudgetDocument demo) {
+    }
+
+    private static Prepared prepare(boolean demo) {
+        Engine engine = Engine.standard();
+        org.quire.engine.document.BudgetDocument d = demo ? WorkbenchFrame.readDemo() : null;
+        return new Prepared(engine, d);
+    }
+
+    /** @return the prepared start-up, waiting for it; its failure is thrown as it was */
+    private static Prepared join(java.util.concurrent.FutureTask<Prepared> prepared) {
+        boolean interrupted = false;
+        try {
+            while (true) {
+                try {
+                    return prepared.get();
+                } catch (InterruptedException e) {
+                    interrupted = true;
+                } catch (java.util.concurrent.ExecutionException e) {
+                    if (e.getCause() instanceof RuntimeException r) {
+                        throw r;
+                    }
+                    if (e.getCause() instanceof Error r) {
+                        throw r;
+                    }
+                    throw new IllegalStateException(e.getCause());
+                }
+            }
+        } finally {
+            if (interrupted) {
+                Thread.currentThread().interrupt();
+            }
+        }
     }
 
     /**

@@ -308,18 +308,33 @@ public final class WorkbenchFrame extends JFrame {
 
     /** Opens the built-in demo budget of the Tarrow Vale Flow Laboratory. */
     public BudgetEditor openDemo() {
+        return openDemo(readDemo());
+    }
+
+    /**
+     * Opens the demo budget read by {@link #readDemo()} (which the start-up reads off the event thread while the
+     * look and feel is set up) as a new draft of this user.
+     */
+    public BudgetEditor openDemo(org.quire.engine.document.BudgetDocument shipped) {
+        String user = prefs.userName();
+        Instant now = Instant.now();
+        org.quire.engine.document.BudgetDocument d = org.quire.engine.document.BudgetDocument
+                .newDraft(shipped.budget(), user, now)
+                .withDetails(shipped.laboratory(), shipped.deviceUnderTest(), user, user, now);
+        return open(new BudgetDocument(d, null, "Tarrow Vale demo", user));
+    }
+
+    /**
+     * @return the demo budget as shipped; may be called on any thread
+     * @throws IllegalStateException when it is missing or cannot be read (a fault of the build)
+     */
+    public static org.quire.engine.document.BudgetDocument readDemo() {
         try (InputStream in = WorkbenchFrame.class.getResourceAsStream(DEMO)) {
             if (in == null) {
                 throw new IllegalStateException("the demo budget " + DEMO + " is missing from the application");
             }
-            String user = prefs.userName();
-            Instant now = Instant.now();
-            org.quire.engine.document.BudgetDocument shipped = org.quire.engine.document.DocumentJson.read(
-                    new String(in.readAllBytes(), StandardCharsets.UTF_8), now);
-            org.quire.engine.document.BudgetDocument d = org.quire.engine.document.BudgetDocument
-                    .newDraft(shipped.budget(), user, now)
-                    .withDetails(shipped.laboratory(), shipped.deviceUnderTest(), user, user, now);
-            return open(new BudgetDocument(d, null, "Tarrow Vale demo", user));
+            return org.quire.engine.document.DocumentJson.read(new String(in.readAllBytes(), StandardCharsets.UTF_8),
+                    Instant.now());
         } catch (IOException | BudgetFormatException e) {
             throw new IllegalStateException("the demo budget cannot be read: " + e.getMessage(), e);
         }

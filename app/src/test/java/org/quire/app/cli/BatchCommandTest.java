@@ -151,4 +151,77 @@ class BatchCommandTest {
         m = err.toString(StandardCharsets.UTF_8);
         assertTrue(m.contains("runs.csv line 3: parameter 'm_net': \"1,002\" is ambiguous"), m);
     }
+    /**
+     * Every row of a batch is the budget a user would make from the template with that row's values: here each
+     * row is also made by {@code quire template new} (the values applied to the template, written to a budget
+     * file) and evaluated by {@code quire evaluate --format json} (the file read back by the normal load path,
+     * compiled and evaluated on its own), and the figures must agree to the batch's 10 printed digits. The
+     * values are invented flow points of the Tarrow Vale gravimetric rig.
+     */
+    @Test
+    void everyRowEqualsTheEvaluationOfTheBudgetMadeFromTheTemplateWithItsValues(@TempDir Path dir) throws Exception {
+        Path template = Path.of(System.getProperty("quire.projectRoot", ".."), "templates",
+                "gravimetric-emf-flow-point.json");
+        String[] header = {"I_net", "t_tank", "t_meter", "p_meter", "t_c", "p_a", "t_a", "h_a", "U_bal", "N_ind",
+            "k_pulse", "d_conv"};
+        String[][] rows = {
+            {"850.741", "19.32", "18.75", "261690", "140.569", "100946", "19.55", "0.55", "0.0510",
+                "8508.2;8517.8;8523.1;8500.3;8516.5", "10", "0.0002"},
+            {"218.231", "17.72", "18.02", "185488", "230.722", "98861", "22.74", "0.68", "0.0131",
+                "2184.1;2183.7;2178.9;2178.2;2181.3", "10", "0.0002"},
+            {"1933.05", "23.1", "22.64", "390100", "31.5", "102870", "18.2", "0.31", "0.116",
+                "19322.4;19340.2;19329.9;19335.0", "10", "0.0003"},
+        };
+        StringBuilder csv = new StringBuilder("id," + String.join(",", header) + "\n");
+        for (int r = 0; r < rows.length; r++) {
+            csv.append("P").append(r + 1).append(',').append(String.join(",", rows[r])).append('\n');
+        }
+        Path data = dir.resolve("points.csv");
+        Files.writeString(data, csv);
+        Path out = dir.resolve("results.csv");
+        ByteArrayOutputStream err = new ByteArrayOutputStream();
+        assertEquals(0, run(err, "batch", template.toString(), data.toString(), "-o", out.toString(), "-q"),
+                err.toString(StandardCharsets.UTF_8));
+        List<String> lines = Files.readAllLines(out);
+        assertEquals("id,E_estimate,E_u,E_k,E_U,q_estimate,q_u,q_k,q_U,error", lines.get(0));
+        for (int r = 0; r < rows.length; r++) {
+            List<String> args = new java.util.ArrayList<>(List.of("template", "new", template.toString(), "-o",
+                    dir.resolve("p" + r + ".json").toString()));
+            for (int c = 0; c < header.length; c++) {
+                if (header[c].equals("N_ind")) {
+                    Path readings = dir.resolve("n" + r + ".csv");
+                    Files.writeString(readings, "reading\n" + rows[r][c].replace(';', '\n') + "\n");
+                    args.addAll(List.of("--readings", "N_ind=" + readings));
+                } else {
+                    args.addAll(List.of("--set", header[c] + "=" + rows[r][c]));
+                }
+            }
+            assertEquals(0, run(err, args.toArray(String[]::new)), err.toString(StandardCharsets.UTF_8));
+            ByteArrayOutputStream json = new ByteArrayOutputStream();
+            assertEquals(0, CommandLine.run(new String[] {"evaluate", dir.resolve("p" + r + ".json").toString(),
+                "--format", "json"}, new PrintStream(json, true, StandardCharsets.UTF_8),
+                    new PrintStream(err, true, StandardCharsets.UTF_8)), err.toString(StandardCharsets.UTF_8));
+            jakarta.json.JsonArray outputs;
+            try (jakarta.json.JsonReader reader = jakarta.json.Json.createReader(
+                    new java.io.StringReader(json.toString(StandardCharsets.UTF_8)))) {
+                outputs = reader.readObject().getJsonArray("outputs");
+            }
+            String[] cells = lines.get(r + 1).split(",", -1);
+            assertEquals("P" + (r + 1), cells[0]);
+            assertEquals("", cells[9], lines.get(r + 1));
+            assertEquals(2, outputs.size());
+            for (int k = 0; k < 2; k++) {
+                jakarta.json.JsonObject o = outputs.getJsonObject(k);
+                assertEquals(k == 0 ? "E" : "q", o.getString("name"));
+                String[] fields = {"estimate", "standardUncertainty", "coverageFactor", "expandedUncertainty"};
+                for (int f = 0; f < 4; f++) {
+                    double expected = o.getJsonNumber(fields[f]).doubleValue();
+                    double printed = Double.parseDouble(cells[1 + 4 * k + f]);
+                    // printed with 10 significant digits: half a unit in the 10th digit
+                    assertEquals(expected, printed, 5e-10 * Math.abs(expected), "row " + (r + 1) + " "
+                            + o.getString("name") + " " + fields[f]);
+                }
+            }
+        }
+    }
 }

@@ -57,8 +57,14 @@ public final class InputQuantity {
     public InputQuantity withUnit(String v) { return new InputQuantity(name, description, text(v), source, notes, evaluation); }
     public InputQuantity withSource(String v) { return new InputQuantity(name, description, unit, text(v), notes, evaluation); }
     public InputQuantity withNotes(String v) { return new InputQuantity(name, description, unit, source, text(v), evaluation); }
-    public InputQuantity withEvaluation(Evaluation v) { return of(name, v).withDescription(description)
-            .withUnit(unit).withSource(source).withNotes(notes); }
+    /** @return a copy with the evaluation replaced (checked as {@link #of} checks it; the name is already valid) */
+    public InputQuantity withEvaluation(Evaluation v) {
+        Objects.requireNonNull(v, "evaluation");
+        if (v instanceof TypeA) {
+            ((TypeA) v).validated();
+        }
+        return new InputQuantity(name, description, unit, source, notes, v);
+    }
     public InputQuantity withName(String v) { checkName(v); return new InputQuantity(v, description, unit, source, notes, evaluation); }
 
     private static String text(String v) {

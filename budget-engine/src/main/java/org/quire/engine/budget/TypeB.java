@@ -47,7 +47,8 @@ public final class TypeB implements Evaluation {
     private final Map<String, Double> given;
     private final Distribution distribution;
     private final double dof;
-    private final String basis;
+    /** The basis, written when first asked for ({@link #basis()}): a batch of evaluations never needs it. */
+    private volatile String basis;
 
     private TypeB(String distributionName, Map<String, Double> given, Distribution distribution, double dof,
             String basis) {
@@ -67,6 +68,22 @@ public final class TypeB implements Evaluation {
      * @throws InvalidParameterException for an unknown distribution
      */
     public static List<String> parametersOf(String distribution) {
+        List<String> own = distribution == null ? null : OWN.get(distribution);
+        return own != null ? own : listOf(distribution);
+    }
+
+    /** {@link #parametersOf} of every distribution, listed once. */
+    private static final Map<String, List<String>> OWN = own();
+
+    private static Map<String, List<String>> own() {
+        Map<String, List<String>> m = new java.util.HashMap<>();
+        for (String d : DISTRIBUTIONS) {
+            m.put(d, listOf(d));
+        }
+        return Map.copyOf(m);
+    }
+
+    private static List<String> listOf(String distribution) {
         List<String> limits = List.of("estimate", "halfWidth", "lower", "upper");
         List<String> nu = List.of("dof", "relativeUncertaintyOfU");
         switch (distribution == null ? "" : distribution) {
@@ -160,11 +177,19 @@ public final class TypeB implements Evaluation {
      * @throws InvalidParameterException naming the parameter that is missing, superfluous or out of range
      */
     public static TypeB of(String distribution, Map<String, Double> parameters) {
+        return build(distribution, parameters, false);
+    }
+
+    /**
+     * {@link #of}, with the basis written when {@code text} (and left null otherwise, to be written by
+     * {@link #basis()} when first asked for), so that the checks and the figures are those of one method.
+     */
+    private static TypeB build(String distribution, Map<String, Double> parameters, boolean text) {
         if (distribution == null || !DISTRIBUTIONS.contains(distribution)) {
             throw new InvalidParameterException("distribution", "unknown distribution '" + distribution
                     + "'; expected one of " + String.join(", ", DISTRIBUTIONS));
         }
-        Map<String, Double> p = new LinkedHashMap<>(parameters);
+        Map<String, Double> p = new LinkedHashMap<>(parameters); // this evaluation's own copy, frozen at the end
         for (Map.Entry<String, Double> e : p.entrySet()) {
             if (!PARAMETERS.contains(e.getKey())) {
                 throw new InvalidParameterException(e.getKey(), "'" + e.getKey()
@@ -192,13 +217,13 @@ public final class TypeB implements Evaluation {
                 if (p.containsKey("standardUncertainty")) {
                     r.forbid("expandedUncertainty", "coverageFactor", "coverageProbability");
                     u = r.positive("standardUncertainty");
-                    basis = "normal, u = " + fmt(u);
+                    basis = !text ? null : "normal, u = " + fmt(u);
                 } else if (p.containsKey("coverageFactor")) {
                     r.forbid("coverageProbability");
                     double big = r.positive("expandedUncertainty");
                     double k = r.positive("coverageFactor");
                     u = big / k;
-                    basis = "normal, U = " + fmt(big) + " with k = " + fmt(k);
+                    basis = !text ? null : "normal, U = " + fmt(big) + " with k = " + fmt(k);
                 } else if (p.containsKey("coverageProbability")) {
                     double big = r.positive("expandedUncertainty");
                     double prob = r.need("coverageProbability");
@@ -209,7 +234,7 @@ public final class TypeB implements Evaluation {
                     double nu = p.containsKey("dof") ? r.positive("dof") : Double.POSITIVE_INFINITY;
                     double k = CoverageFactor.of(prob, nu);
                     u = big / k;
-                    basis = "normal, U = " + fmt(big) + " at p = " + fmt(100 * prob) + " %"
+                    basis = !text ? null : "normal, U = " + fmt(big) + " at p = " + fmt(100 * prob) + " %"
                             + (Double.isInfinite(nu) ? "" : " with nu = " + fmt(nu)) + ", k = " + fmt(k);
                     if (!Double.isInfinite(nu)) {
                         r.forbid("relativeUncertaintyOfU");
@@ -230,7 +255,7 @@ public final class TypeB implements Evaluation {
             case "curvilinear-trapezoid": {
                 double[] lim = r.limits();
                 String what = distribution.equals("arcsine") ? "U-shaped" : distribution;
-                basis = what + " within [" + fmt(lim[0]) + ", " + fmt(lim[1]) + "]";
+                basis = !text ? null : what + " within [" + fmt(lim[0]) + ", " + fmt(lim[1]) + "]";
                 if (distribution.equals("rectangular")) {
                     r.forbid("beta", "halfWidthUncertainty");
                     d = Distribution.Rectangular.of(lim[0], lim[1]);
@@ -247,7 +272,9 @@ public final class TypeB implements Evaluation {
                         throw new InvalidParameterException("beta", "beta must lie between 0 and 1, not " + beta);
                     }
                     d = Distribution.Trapezoidal.of(lim[0], lim[1], beta);
-                    basis += ", beta = " + fmt(beta);
+                    if (text) {
+                        basis += ", beta = " + fmt(beta);
+                    }
                 } else {
                     r.forbid("beta");
                     double dd = r.positive("halfWidthUncertainty");
@@ -256,7 +283,9 @@ public final class TypeB implements Evaluation {
                                 "halfWidthUncertainty must not exceed the half-width " + fmt(0.5 * (lim[1] - lim[0])));
                     }
                     d = Distribution.CurvilinearTrapezoid.of(lim[0], lim[1], dd);
-                    basis += ", limits known to +-" + fmt(dd);
+                    if (text) {
+                        basis += ", limits known to +-" + fmt(dd);
+                    }
                 }
                 break;
             }
@@ -265,13 +294,13 @@ public final class TypeB implements Evaluation {
                 double scale = r.positive("scale");
                 double nu = r.positive("dof");
                 r.forbid("relativeUncertaintyOfU");
-                basis = "Student t, scale " + fmt(scale) + ", nu = " + fmt(nu);
+                basis = !text ? null : "Student t, scale " + fmt(scale) + ", nu = " + fmt(nu);
                 return new TypeB(distribution, freeze(p), Distribution.StudentT.of(x, scale, nu), nu, basis);
             }
             case "exponential": {
                 double x = r.positive("estimate");
                 d = Distribution.Exponential.of(x);
-                basis = "exponential with mean " + fmt(x);
+                basis = !text ? null : "exponential with mean " + fmt(x);
                 break;
             }
             default: {
@@ -289,20 +318,25 @@ public final class TypeB implements Evaluation {
         }
         if (p.containsKey("dof")) {
             nu = r.positive("dof");
-            basis += ", nu = " + fmt(nu);
+            if (text) {
+                basis += ", nu = " + fmt(nu);
+            }
         } else if (p.containsKey("relativeUncertaintyOfU")) {
             double rel = r.positive("relativeUncertaintyOfU");
             nu = 0.5 / (rel * rel);
             if (Math.abs(nu - Math.rint(nu)) < 1e-9 * nu) {
                 nu = Math.rint(nu);
             }
-            basis += ", u reliable to " + fmt(100 * rel) + " % (nu = " + fmt(nu) + ")";
+            if (text) {
+                basis += ", u reliable to " + fmt(100 * rel) + " % (nu = " + fmt(nu) + ")";
+            }
         }
         return new TypeB(distribution, freeze(p), d, nu, basis);
     }
 
+    /** @return {@code p}, which is the evaluation's own copy, unmodifiable */
     private static Map<String, Double> freeze(Map<String, Double> p) {
-        return Collections.unmodifiableMap(new LinkedHashMap<>(p));
+        return Collections.unmodifiableMap(p);
     }
 
     static String fmt(double v) {
@@ -412,7 +446,15 @@ public final class TypeB implements Evaluation {
     @Override public double dof() { return dof; }
     @Override public Distribution distribution() { return distribution; }
     @Override public String type() { return "B"; }
-    @Override public String basis() { return basis; }
+    @Override
+    public String basis() {
+        String b = basis;
+        if (b == null) {
+            b = build(distributionName, given, true).basis;
+            basis = b;
+        }
+        return b;
+    }
 
     @Override
     public boolean equals(Object o) {

@@ -6,6 +6,7 @@ import java.util.List;
 import java.util.Map;
 import java.util.Objects;
 import org.quire.engine.budget.Budget;
+import org.quire.engine.budget.InputQuantity;
 
 /**
  * A budget document that carries a {@link TemplateSpec}: the starting point for budgets of one method. Its
@@ -68,10 +69,28 @@ public final class Template {
      *     whose example value would be carried over
      */
     public Budget budgetFor(TemplateValues values) {
+        return substitute(document.budget(), values, carriedProblems());
+    }
+
+    /** @return the refusals of {@link TemplateSpec#carriedValues}, each naming this template */
+    List<String> carriedProblems() {
         List<String> problems = new ArrayList<>();
         for (String c : spec().carriedValues(document.budget())) {
             problems.add("template " + id() + " v" + version() + ": " + c);
         }
+        return problems;
+    }
+
+    /**
+     * The rule of {@link #budgetFor(TemplateValues)}, on a budget with this template's inputs: every parameter
+     * sets its input's evaluation ({@link TemplateParameter#evaluationFor}, {@link
+     * TemplateParameter#readingsEvaluationFor}) and the budget is made once with the changed inputs.
+     *
+     * @param b this template's budget (its settings may differ)
+     * @param problems the problems found before (the carried values), to which the values' own are added
+     * @throws IllegalArgumentException listing every problem
+     */
+    Budget substitute(Budget b, TemplateValues values, List<String> problems) {
         Map<String, Double> numbers = values.numbers();
         Map<String, double[]> readings = values.readings();
         for (String k : numbers.keySet()) {
@@ -93,7 +112,7 @@ public final class Template {
                 problems.add("parameter '" + k + "' takes one value, not a list of readings");
             }
         }
-        Budget b = document.budget();
+        List<InputQuantity> inputs = new ArrayList<>(b.inputs());
         for (TemplateParameter p : spec().parameters()) {
             try {
                 if (p.isReadings()) {
@@ -102,7 +121,9 @@ public final class Template {
                         problems.add("parameter '" + p.name() + "' (the readings of input '" + p.input()
                                 + "') must be given: the template's example readings are not carried over");
                     } else {
-                        b = p.applyReadings(b, r);
+                        int i = indexOf(inputs, p);
+                        InputQuantity q = inputs.get(i);
+                        inputs.set(i, q.withEvaluation(p.readingsEvaluationFor(q.evaluation(), r)));
                     }
                     continue;
                 }
@@ -114,7 +135,10 @@ public final class Template {
                     }
                     v = p.defaultValue();
                 }
-                b = p.applyTo(b, v);
+                p.checkNumber(v);
+                int i = indexOf(inputs, p);
+                InputQuantity q = inputs.get(i);
+                inputs.set(i, q.withEvaluation(p.evaluationFor(q.evaluation(), v)));
             } catch (IllegalArgumentException e) {
                 problems.add(e.getMessage());
             }
@@ -122,7 +146,17 @@ public final class Template {
         if (!problems.isEmpty()) {
             throw new IllegalArgumentException(String.join("; ", problems));
         }
-        return b;
+        return b.withInputs(inputs);
+    }
+
+    /** @throws IllegalArgumentException when the budget has no input of the parameter */
+    private static int indexOf(List<InputQuantity> inputs, TemplateParameter p) {
+        for (int i = 0; i < inputs.size(); i++) {
+            if (inputs.get(i).name().equals(p.input())) {
+                return i;
+            }
+        }
+        throw p.noSuchInput();
     }
 
     /** @return the parameter names in order */

@@ -158,8 +158,7 @@ public record TemplateParameter(String name, String description, String unit, St
     private InputQuantity target(Budget b) {
         InputQuantity q = b.input(input);
         if (q == null) {
-            throw new IllegalArgumentException("parameter '" + name + "' sets input '" + input
-                    + "', which the budget does not have");
+            throw noSuchInput();
         }
         return q;
     }
@@ -172,13 +171,22 @@ public record TemplateParameter(String name, String description, String unit, St
      *     it gives is invalid
      */
     public Budget applyTo(Budget b, double v) {
-        if (isReadings()) {
-            throw new IllegalArgumentException("parameter '" + name + "' takes the readings of input '" + input
-                    + "', a list of numbers, not one value");
-        }
-        checkValue(v);
+        checkNumber(v);
         InputQuantity q = target(b);
-        Evaluation e = q.evaluation();
+        return b.withInput(input, q.withEvaluation(evaluationFor(q.evaluation(), v)));
+    }
+
+    /**
+     * The rule of {@link #applyTo}, on the evaluation of the input alone (a batch changes all the inputs of a
+     * budget at once, {@link PreparedTemplate}).
+     *
+     * @param e the evaluation of this parameter's input
+     * @param v the value, checked against the range
+     * @return {@code e} with the field set to {@code v}
+     * @throws IllegalArgumentException as {@link #applyTo}
+     */
+    Evaluation evaluationFor(Evaluation e, double v) {
+        checkNumber(v);
         Evaluation changed;
         try {
             if (e instanceof TypeA) {
@@ -189,7 +197,25 @@ public record TemplateParameter(String name, String description, String unit, St
         } catch (InvalidParameterException x) {
             throw new IllegalArgumentException("parameter '" + name + "' = " + v + ": " + x.getMessage(), x);
         }
-        return b.withInput(input, q.withEvaluation(changed));
+        return changed;
+    }
+
+    /**
+     * @throws IllegalArgumentException when this parameter takes readings, or {@code v} is not finite or outside
+     *     [minimum, maximum]
+     */
+    void checkNumber(double v) {
+        if (isReadings()) {
+            throw new IllegalArgumentException("parameter '" + name + "' takes the readings of input '" + input
+                    + "', a list of numbers, not one value");
+        }
+        checkValue(v);
+    }
+
+    /** @return the refusal of a parameter whose input the budget does not have */
+    IllegalArgumentException noSuchInput() {
+        return new IllegalArgumentException("parameter '" + name + "' sets input '" + input
+                + "', which the budget does not have");
     }
 
     private Evaluation setTypeA(TypeA a, double v) {
@@ -236,16 +262,28 @@ public record TemplateParameter(String name, String description, String unit, St
             throw new IllegalArgumentException("parameter '" + name + "' takes one value, not a list of readings");
         }
         InputQuantity q = target(b);
-        if (!(q.evaluation() instanceof TypeA)) {
+        return b.withInput(input, q.withEvaluation(readingsEvaluationFor(q.evaluation(), readings)));
+    }
+
+    /**
+     * The rule of {@link #applyReadings}, on the evaluation of the input alone ({@link PreparedTemplate}).
+     *
+     * @throws IllegalArgumentException as {@link #applyReadings}
+     */
+    Evaluation readingsEvaluationFor(Evaluation e, double[] readings) {
+        if (!isReadings()) {
+            throw new IllegalArgumentException("parameter '" + name + "' takes one value, not a list of readings");
+        }
+        if (!(e instanceof TypeA)) {
             throw new IllegalArgumentException("parameter '" + name + "' sets the readings of input '" + input
                     + "', whose evaluation is not Type A");
         }
-        TypeA a = (TypeA) q.evaluation();
+        TypeA a = (TypeA) e;
         for (int i = 0; i < readings.length; i++) {
             try {
                 checkValue(readings[i]);
-            } catch (IllegalArgumentException e) {
-                throw new IllegalArgumentException("reading " + (i + 1) + " of " + e.getMessage(), e);
+            } catch (IllegalArgumentException x) {
+                throw new IllegalArgumentException("reading " + (i + 1) + " of " + x.getMessage(), x);
             }
         }
         int least = a.isPooled() ? 1 : 2;
@@ -257,7 +295,7 @@ public record TemplateParameter(String name, String description, String unit, St
         if (a.isPooled()) {
             r = r.withPooled(a.pooledStandardDeviation(), a.dof());
         }
-        return b.withInput(input, q.withEvaluation(r));
+        return r;
     }
 
     private Evaluation setTypeB(TypeB t, double v) {

@@ -82,8 +82,18 @@ public final class BudgetSimulation {
      */
     public static MonteCarloOutcome run(Budget budget, CompiledModel model, GumResult gum,
             MonteCarloSettings settings, ProgressListener listener) throws org.quire.engine.model.ModelException {
+        return run(budget, model, gum, settings, listener, null);
+    }
+
+    /**
+     * As {@link #run(Budget, CompiledModel, GumResult, MonteCarloSettings, ProgressListener)}, on the threads and
+     * arrays of {@code workers} (a batch of budgets run one after another), or on threads of its own when null.
+     */
+    public static MonteCarloOutcome run(Budget budget, CompiledModel model, GumResult gum,
+            MonteCarloSettings settings, ProgressListener listener, MonteCarlo.Workers workers)
+            throws org.quire.engine.model.ModelException {
         Conversion[] shown = org.quire.engine.gum.GumEvaluator.displayConversions(budget, model);
-        MonteCarloResult r = MonteCarlo.run(displayed(model, shown), sampler(budget), settings, listener);
+        MonteCarloResult r = MonteCarlo.run(displayed(model, shown), sampler(budget), settings, listener, workers);
         List<MonteCarloOutcome.Output> outputs = new ArrayList<>();
         for (int k = 0; k < r.outputCount(); k++) {
             OutputResult g = gum.outputs().get(k);

@@ -59,6 +59,14 @@ final class Messages {
         return name + " must not be null";
     }
 
+    static String workersClosed() {
+        return "the Monte Carlo workers were closed before this run";
+    }
+
+    static String workerThreads(int threads) {
+        return fmt("the Monte Carlo workers need at least 1 thread, not %d", threads);
+    }
+
     static String matrixSizeMismatch(int matrixSize, int inputs) {
         return fmt("correlation matrix is %d x %d but there are %d input(s)", matrixSize, matrixSize, inputs);
     }

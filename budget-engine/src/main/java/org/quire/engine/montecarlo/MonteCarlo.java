@@ -70,6 +70,20 @@ public final class MonteCarlo {
      */
     public static MonteCarloResult run(BlockEvaluator model, InputSampler inputs, MonteCarloSettings settings,
             ProgressListener listener) {
+        return run(model, inputs, settings, listener, null);
+    }
+
+    /**
+     * Runs the Monte Carlo method on the threads of {@code workers} (its own threads, made for this run and ended
+     * with it, when null), which keep their arrays for the next run; the results are those of
+     * {@link #run(BlockEvaluator, InputSampler, MonteCarloSettings, ProgressListener)}, trial for trial.
+     *
+     * @param workers the worker threads and arrays of many runs one after another, or null; runs on the same
+     *     workers wait for each other
+     * @throws IllegalArgumentException as the other {@code run}, and when {@code workers} are closed
+     */
+    public static MonteCarloResult run(BlockEvaluator model, InputSampler inputs, MonteCarloSettings settings,
+            ProgressListener listener, Workers workers) {
         if (model == null) {
             throw new IllegalArgumentException(Messages.nullArgument("model"));
         }
@@ -94,8 +108,98 @@ public final class MonteCarlo {
                     Messages.maxTrialsTooSmall(settings.maxTrials(), settings.adaptiveRunLength()));
         }
         checkMemory(maxTrials, model.outputCount(), settings.keepValues());
-        try (Runner runner = new Runner(model, inputs, settings, listener)) {
-            return settings.adaptive() ? runner.adaptive() : runner.fixed();
+        if (workers == null) {
+            try (Runner runner = new Runner(model, inputs, settings, listener, null)) {
+                return settings.adaptive() ? runner.adaptive() : runner.fixed();
+            }
+        }
+        synchronized (workers) {
+            if (workers.executor.isShutdown()) {
+                throw new IllegalArgumentException(Messages.workersClosed());
+            }
+            try (Runner runner = new Runner(model, inputs, settings, listener, workers)) {
+                return settings.adaptive() ? runner.adaptive() : runner.fixed();
+            }
+        }
+    }
+
+    /**
+     * Worker threads, and the arrays of the trial values, kept for many runs one after another (a batch of
+     * budgets, {@link #run(BlockEvaluator, InputSampler, MonteCarloSettings, ProgressListener, Workers)}), so
+     * that a run neither starts threads nor allocates its values afresh. The values are reused only when a run
+     * does not keep them ({@link MonteCarloSettings#keepValues()}). Thread-safe: runs on the same workers take
+     * turns. Close to end the threads.
+     */
+    public static final class Workers implements AutoCloseable {
+        private final int threads;
+        private final ExecutorService executor;
+        /** The values of the last run that did not keep them, for the next one of the same size. */
+        private double[][] values;
+
+        private Workers(int threads) {
+            this.threads = threads;
+            this.executor = newPool(threads);
+        }
+
+        /**
+         * @param threads the number of worker threads, at least 1
+         * @return started workers
+         * @throws IllegalArgumentException when {@code threads} is less than 1
+         */
+        public static Workers of(int threads) {
+            if (threads < 1) {
+                throw new IllegalArgumentException(Messages.workerThreads(threads));
+            }
+            return new Workers(threads);
+        }
+
+        /** @return the number of worker threads */
+        public int threads() {
+            return threads;
+        }
+
+        /** @return arrays for {@code outputs} x {@code trials} values, those of the last run when they fit */
+        private double[][] values(int outputs, int trials) {
+            if (values == null || values.length != outputs || values[0].length != trials) {
+                values = null; // the old arrays may go before the new ones are made
+                values = new double[outputs][trials];
+            }
+            return values;
+        }
+
+        /** Ends the worker threads, waiting for them. */
+        @Override
+        public void close() {
+            shutdown(executor);
+        }
+    }
+
+    private static ExecutorService newPool(int threads) {
+        int pool = POOL_NUMBER.incrementAndGet();
+        AtomicInteger n = new AtomicInteger();
+        ThreadFactory factory = r -> {
+            Thread t = new Thread(r, THREAD_PREFIX + pool + "-" + n.incrementAndGet());
+            t.setDaemon(true);
+            return t;
+        };
+        return Executors.newFixedThreadPool(threads, factory);
+    }
+
+    /** Stops an executor's threads and waits for them to end. */
+    private static void shutdown(ExecutorService executor) {
+        executor.shutdownNow();
+        boolean interrupted = false;
+        while (true) {
+            try {
+                if (executor.awaitTermination(1, TimeUnit.MINUTES)) {
+                    break;
+                }
+            } catch (InterruptedException e) {
+                interrupted = true;
+            }
+        }
+        if (interrupted) {
+            Thread.currentThread().interrupt();
         }
     }
 
@@ -134,8 +238,8 @@ public final class MonteCarlo {
         final Moments[] moments;
         final int trials;
 
-        Batch(int outputs, int trials, int blocks) {
-            this.values = new double[outputs][trials];
+        Batch(double[][] values, int trials, int blocks) {
+            this.values = values;
             this.moments = new Moments[blocks];
             this.trials = trials;
         }
@@ -148,30 +252,43 @@ public final class MonteCarlo {
         private final MonteCarloSettings settings;
         private final ProgressListener listener;
         private final ExecutorService executor;
+        /** The workers lent for this run, or null when the executor is this run's own. */
+        private final Workers workers;
+        /** The tasks given to lent workers, waited for when the run ends. */
+        private final List<Future<?>> tasks = new ArrayList<>();
         private final AtomicBoolean stop = new AtomicBoolean();
         private final AtomicLong done = new AtomicLong();
         private final long start = System.nanoTime();
         private long planned;
 
-        Runner(BlockEvaluator model, InputSampler inputs, MonteCarloSettings settings, ProgressListener listener) {
+        Runner(BlockEvaluator model, InputSampler inputs, MonteCarloSettings settings, ProgressListener listener,
+                Workers workers) {
             this.model = model;
             this.inputs = inputs;
             this.settings = settings;
             this.listener = listener;
-            int pool = POOL_NUMBER.incrementAndGet();
-            AtomicInteger n = new AtomicInteger();
-            ThreadFactory factory = r -> {
-                Thread t = new Thread(r, THREAD_PREFIX + pool + "-" + n.incrementAndGet());
-                t.setDaemon(true);
-                return t;
-            };
-            this.executor = Executors.newFixedThreadPool(settings.threads(), factory);
+            this.workers = workers;
+            this.executor = workers == null ? newPool(settings.threads()) : workers.executor;
+        }
+
+        private int threads() {
+            return workers == null ? settings.threads() : workers.threads();
+        }
+
+        private <T> Future<T> submit(java.util.concurrent.Callable<T> task) {
+            Future<T> f = executor.submit(task);
+            if (workers != null) {
+                tasks.add(f);
+            }
+            return f;
         }
 
         MonteCarloResult fixed() {
             int trials = (int) settings.trials();
             planned = trials;
-            Batch batch = simulate(0, trials);
+            int k = model.outputCount();
+            Batch batch = simulate(0, trials, workers != null && !settings.keepValues() ? workers.values(k, trials)
+                    : new double[k][trials]);
             Moments total = combine(List.of(batch));
             return finish(batch.values, trials, total, 1, true);
         }
@@ -193,7 +310,7 @@ public final class MonteCarlo {
                     break;
                 }
                 planned = used + m;
-                Batch batch = simulate(block, m);
+                Batch batch = simulate(block, m, new double[k][m]);
                 block += blocks(m);
                 batches.add(batch);
                 Moments runMoments = combine(List.of(batch));
@@ -271,7 +388,7 @@ public final class MonteCarlo {
             for (int o = 0; o < k; o++) {
                 int output = o;
                 double[] v = settings.keepValues() ? values[o].clone() : values[o];
-                futures.add(executor.submit(() -> OutputSummary.summarize(output, v, trials, moments,
+                futures.add(submit(() -> OutputSummary.summarize(output, v, trials, moments,
                         settings.coverageProbability())));
             }
             List<OutputSummary> summaries = new ArrayList<>();
@@ -284,15 +401,15 @@ public final class MonteCarlo {
         }
 
         /** Evaluates trials of blocks firstBlock, firstBlock + 1, ... on the worker threads. */
-        private Batch simulate(long firstBlock, int trials) {
+        private Batch simulate(long firstBlock, int trials, double[][] values) {
             int nBlocks = blocks(trials);
             int k = model.outputCount();
-            Batch batch = new Batch(k, trials, nBlocks);
+            Batch batch = new Batch(values, trials, nBlocks);
             AtomicInteger next = new AtomicInteger();
-            int workers = Math.min(settings.threads(), nBlocks);
+            int parts = Math.min(threads(), nBlocks);
             List<Future<?>> futures = new ArrayList<>();
-            for (int w = 0; w < workers; w++) {
-                futures.add(executor.submit(() -> {
+            for (int w = 0; w < parts; w++) {
+                futures.add(submit(() -> {
                     BlockEvaluator.Session session = model.newSession(BLOCK_SIZE);
                     InputSampler.Block sampler = inputs.newBlock(BLOCK_SIZE);
                     double[][] in = new double[inputs.inputCount()][BLOCK_SIZE];
@@ -355,19 +472,28 @@ public final class MonteCarlo {
             }
         }
 
-        /** Stops the workers and waits for them to end, so that no thread outlives the run. */
+        /**
+         * Stops the workers and waits for them to end, so that no thread outlives the run; lent workers are
+         * kept, once every task of this run has ended (none then touches the arrays the next run reuses).
+         */
         @Override
         public void close() {
             stop.set(true);
-            executor.shutdownNow();
+            if (workers == null) {
+                shutdown(executor);
+                return;
+            }
             boolean interrupted = false;
-            while (true) {
-                try {
-                    if (executor.awaitTermination(1, TimeUnit.MINUTES)) {
+            for (Future<?> f : tasks) {
+                while (true) {
+                    try {
+                        f.get();
+                        break;
+                    } catch (InterruptedException e) {
+                        interrupted = true;
+                    } catch (ExecutionException | java.util.concurrent.CancellationException e) {
                         break;
                     }
-                } catch (InterruptedException e) {
-                    interrupted = true;
                 }
             }
             if (interrupted) {

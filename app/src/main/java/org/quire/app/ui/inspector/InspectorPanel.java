@@ -21,36 +21,46 @@ public final class InspectorPanel extends JPanel {
     private final BudgetEditor editor;
     private final CardLayout cards = new CardLayout();
     private final JLabel overview = new JLabel();
-    private final InputInspector input;
+    /** The options of the selected input: built when an input is first selected, not before the first paint. */
+    private InputInspector input;
 
     public InspectorPanel(BudgetEditor editor) {
         this.editor = editor;
         setLayout(cards);
         setName("inspector");
-        input = new InputInspector(editor);
         JPanel ov = new JPanel(new BorderLayout());
         overview.setVerticalAlignment(JLabel.TOP);
         ov.add(overview, BorderLayout.NORTH);
         ov.setBorder(BorderFactory.createEmptyBorder(8, 8, 8, 8));
         add(ov, "overview");
-        JPanel wrap = new WidthTracking();
-        wrap.add(input, BorderLayout.NORTH);
-        wrap.setBorder(BorderFactory.createEmptyBorder(8, 8, 8, 8));
-        JScrollPane sp = new JScrollPane(wrap, ScrollPaneConstants.VERTICAL_SCROLLBAR_AS_NEEDED,
-                ScrollPaneConstants.HORIZONTAL_SCROLLBAR_NEVER);
-        sp.setBorder(BorderFactory.createEmptyBorder());
-        sp.getVerticalScrollBar().setUnitIncrement(20);
-        add(sp, "input");
         editor.addSelectionListener(this::selectionChanged);
         editor.document().addListener((doc, before, after, cause) -> selectionChanged(editor.selectedInput()));
         selectionChanged(null);
+    }
+
+    /** @return the input's options, built (with their card) on the first call */
+    private InputInspector input() {
+        if (input == null) {
+            input = new InputInspector(editor);
+            JPanel wrap = new WidthTracking();
+            wrap.add(input, BorderLayout.NORTH);
+            wrap.setBorder(BorderFactory.createEmptyBorder(8, 8, 8, 8));
+            JScrollPane sp = new JScrollPane(wrap, ScrollPaneConstants.VERTICAL_SCROLLBAR_AS_NEEDED,
+                    ScrollPaneConstants.HORIZONTAL_SCROLLBAR_NEVER);
+            sp.setBorder(BorderFactory.createEmptyBorder());
+            sp.getVerticalScrollBar().setUnitIncrement(20);
+            add(sp, "input");
+        }
+        return input;
     }
 
     private void selectionChanged(String name) {
         Budget b = editor.document().budget();
         InputQuantity q = name == null ? null : b.input(name);
         if (q == null) {
-            input.leave();
+            if (input != null) {
+                input.leave();
+            }
             EvaluationSettings s = b.settings();
             String text = ("<html><b>" + esc(b.title().isEmpty() ? editor.document().name() : b.title()) + "</b><br><br>"
                     + (editor.document().file() == null ? "Not saved to a file yet." : esc(String.valueOf(editor.document().file())))
@@ -66,7 +76,7 @@ public final class InspectorPanel extends JPanel {
             }
             cards.show(this, "overview");
         } else {
-            input.show(q);
+            input().show(q);
             cards.show(this, "input");
         }
     }
