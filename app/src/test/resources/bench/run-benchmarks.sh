@@ -11,6 +11,10 @@
 # A jar given as JAR@OPTS is run with the extra java options OPTS (spaces as commas), so one run can compare
 # app/target/quire.jar with app/target/quire.jar@-XX:SharedArchiveFile=app/target/quire.jsa; CDS=1 does that
 # for every jar with an archive it makes first.
+# A spec may also name the launcher the build leaves beside the jar (app/target/quire, with the archive
+# app/target/quire.jsa; DEVELOPERS.md, "Start-up"): it is run as the user runs it, with JAVA_OPTS and its own
+# OPTS passed in QUIRE_JAVA_OPTS. LAUNCHER=1 adds, for each jar, the launcher beside it when there is one, e.g.
+#   LAUNCHER=1 app/src/test/resources/bench/run-benchmarks.sh        # java -jar against the launcher
 #
 # Targets (issue 16): bench trials/s and its ratio to the matched NumPy peer; montecarlo of the gravimetric
 # template with 10^6 trials end to end against its NumPy peer; evaluate of a worked example end to end; GUM
@@ -76,7 +80,9 @@ wall() {
     t1=$(now)
     echo "scale=3; ($t1 - $t0) / 1000000000" | bc
 }
-# java with the jar spec's options: run_java SPEC args...
+# a spec names a launcher (not a jar): the build's app/target/quire
+is_launcher() { [[ "${1%%@*}" != *.jar ]]; }
+# java with the jar spec's options, or the launcher with them: run_java SPEC args...
 run_java() {
     local spec=$1
     shift
@@ -84,6 +90,10 @@ run_java() {
     if [ "$spec" != "$jar" ]; then
         opts=${spec#*@}
         opts=${opts//,/ }
+    fi
+    if is_launcher "$spec"; then
+        QUIRE_JAVA_OPTS="${JAVA_OPTS:-} $opts" "$jar" "$@"
+        return
     fi
     # shellcheck disable=SC2086
     java ${JAVA_OPTS:-} $opts -jar "$jar" "$@"
@@ -100,8 +110,13 @@ workbench_ms() {
     fi
     : > "$log"
     rm -f "$work/wb.pid"
-    xvfb-run -a bash -c "echo \$\$ > $work/wb.pid; exec java ${JAVA_OPTS:-} $opts -Dquire.timing=true \
-        -Duser.home=$work/home -jar ${spec%%@*}" > "$log" 2>&1 &
+    if is_launcher "$spec"; then
+        xvfb-run -a bash -c "echo \$\$ > $work/wb.pid; QUIRE_JAVA_OPTS='${JAVA_OPTS:-} $opts -Dquire.timing=true \
+            -Duser.home=$work/home' exec ${spec%%@*}" > "$log" 2>&1 &
+    else
+        xvfb-run -a bash -c "echo \$\$ > $work/wb.pid; exec java ${JAVA_OPTS:-} $opts -Dquire.timing=true \
+            -Duser.home=$work/home -jar ${spec%%@*}" > "$log" 2>&1 &
+    fi
     for _ in $(seq 1 300); do
         grep -q workbench_content_painted_ms "$log" && break
         sleep 0.1
@@ -117,12 +132,29 @@ workbench_ms() {
 if [ "${CDS:-0}" = 1 ]; then
     with_cds=()
     for spec in "${jars[@]}"; do
+        if is_launcher "$spec"; then
+            with_cds+=("$spec")
+            continue
+        fi
         jar=${spec%%@*}
         archive="$work/$(basename "$jar" .jar)-$(echo "$jar" | md5sum | cut -c1-8).jsa"
         java -XX:ArchiveClassesAtExit="$archive" -jar "$jar" montecarlo "$example" --trials 20000 > /dev/null 2>&1
         with_cds+=("$spec" "$jar@-XX:SharedArchiveFile=$archive")
     done
     jars=("${with_cds[@]}")
+fi
+
+# LAUNCHER=1 adds, after each jar, the launcher the build left beside it (app/target/quire)
+if [ "${LAUNCHER:-0}" = 1 ]; then
+    with_launcher=()
+    for spec in "${jars[@]}"; do
+        with_launcher+=("$spec")
+        launcher=$(dirname "${spec%%@*}")/quire
+        if ! is_launcher "$spec" && [ -x "$launcher" ] && [[ " ${with_launcher[*]} " != *" $launcher "* ]]; then
+            with_launcher+=("$launcher")
+        fi
+    done
+    jars=("${with_launcher[@]}")
 fi
 
 for round in $(seq 1 "$repeats"); do

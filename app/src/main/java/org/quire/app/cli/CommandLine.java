@@ -42,6 +42,20 @@ public final class CommandLine {
         throw new IllegalStateException("no workbench launcher in this call");
     };
 
+    /**
+     * picocli registers its converters for the {@code java.sql} and {@code java.time} types by reflection when the
+     * first parser is built, which loads the {@code java.sql} module and some 40 classes on every start. No option
+     * of Quire has such a type without its own converter ({@link Options.IsoDate} reads every date), so they are
+     * left out; a value set by the user (the same system property) is kept.
+     */
+    static final String CONVERTER_EXCLUDES = "java\\.sql\\..*,java\\.time\\..*";
+
+    static {
+        if (System.getProperty("picocli.converters.excludes") == null) {
+            System.setProperty("picocli.converters.excludes", CONVERTER_EXCLUDES);
+        }
+    }
+
     private CommandLine() {
     }
 
