@@ -40,7 +40,10 @@ final class ContributionTableModel extends AbstractTableModel {
         fireTableDataChanged();
     }
 
-    /** @param on whether the evaluation column writes "B" under "Type" rather than "Type B" under "Evaluation" */
+    /**
+     * @param on whether the evaluation column writes "B" rather than "Type B" (its header then says "Type"; the
+     *     copy and the tooltips keep the full words)
+     */
     void shortEvaluation(boolean on) {
         shortEvaluation = on;
     }
@@ -54,7 +57,7 @@ final class ContributionTableModel extends AbstractTableModel {
         // two lines a header (the copy and the tooltip read them as one), so the table fits a 1366-pixel screen
         switch (c) {
             case 0: return "Input";
-            case 1: return shortEvaluation ? "Type" : "Evaluation";
+            case 1: return "Evaluation";
             case 2: return "Distribution";
             case 3: return "<html>Estimate<br>x\u1d62</html>";
             case 4: return "<html>Std. uncertainty<br>u(x\u1d62)</html>";

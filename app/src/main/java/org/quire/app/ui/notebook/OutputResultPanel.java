@@ -102,6 +102,7 @@ final class OutputResultPanel extends JPanel {
                 }
                 String full = m.full(mr, mc);
                 setToolTipText(full.isEmpty() ? null : full);
+                putClientProperty(SpreadsheetTable.COPY_TEXT, full);
                 return this;
             }
         };
@@ -308,7 +309,9 @@ final class OutputResultPanel extends JPanel {
                     word = Math.max(word, fm.stringWidth(part));
                 }
             }
-            int min = mc == ContributionTableModel.EVALUATION ? fm.stringWidth("Type") : word;
+            // a header's words may be cut as a last resort (its tooltip has them), a figure or unit never
+            int min = mc == ContributionTableModel.EVALUATION ? fm.stringWidth("Type")
+                    : mc == ContributionTableModel.DISTRIBUTION ? word : 0;
             for (JTable t : new JTable[] {table, total}) {
                 ContributionTableModel m = (ContributionTableModel) t.getModel();
                 java.awt.FontMetrics cf = t.getFontMetrics(t.getFont());
@@ -394,8 +397,9 @@ final class OutputResultPanel extends JPanel {
         boolean shortEvaluation = w[ContributionTableModel.EVALUATION] < natural[ContributionTableModel.EVALUATION];
         model.shortEvaluation(shortEvaluation);
         TableColumn evaluation = table.getColumnModel().getColumn(ContributionTableModel.EVALUATION);
-        if (!model.getColumnName(ContributionTableModel.EVALUATION).equals(evaluation.getHeaderValue())) {
-            evaluation.setHeaderValue(model.getColumnName(ContributionTableModel.EVALUATION));
+        String title = shortEvaluation ? "Type" : model.getColumnName(ContributionTableModel.EVALUATION);
+        if (!title.equals(evaluation.getHeaderValue())) {
+            evaluation.setHeaderValue(title);
         }
         for (int c = 0; c < n; c++) {
             TableColumn col = table.getColumnModel().getColumn(c);
