@@ -516,8 +516,12 @@ final class OutputResultPanel extends JPanel {
             Dimension a = p.getComponent(0).getPreferredSize();
             Dimension b = p.getComponent(1).getPreferredSize();
             int w = p.getWidth() > 0 ? p.getWidth() : a.width + GAP + b.width;
-            return beside(p, w) ? new Dimension(a.width + GAP + b.width, Math.max(a.height, b.height))
-                    : new Dimension(Math.max(a.width, b.width), a.height + GAP + b.height);
+            if (beside(p, w)) {
+                return new Dimension(a.width + GAP + b.width, Math.max(a.height, b.height));
+            }
+            // below, the chart is scaled to the width as in layoutContainer: the table gets no empty band
+            int bh = b.width == 0 ? 0 : b.height * Math.min(w, b.width) / b.width;
+            return new Dimension(Math.max(a.width, b.width), a.height + GAP + bh);
         }
 
         @Override
