@@ -31,6 +31,21 @@ final class PaneLayout {
             s.setContinuousLayout(true);
             s.setOneTouchExpandable(false);
         }
+        // the split's height is known only once the window is laid out (and changes with it): the problems pane
+        // keeps its title line's height while it has nothing to list, and gets its remembered height at first
+        vertical.addComponentListener(new java.awt.event.ComponentAdapter() {
+            private int laidOut;
+
+            @Override
+            public void componentResized(java.awt.event.ComponentEvent e) {
+                int h = vertical.getHeight();
+                if (h > 0 && isShown(Pane.PROBLEMS) && (collapsedTo > 0 || laidOut == 0)) {
+                    int bottom = collapsedTo > 0 ? collapsedTo + vertical.getDividerSize() : problemsHeight;
+                    vertical.setDividerLocation(Math.max(200, h - bottom));
+                }
+                laidOut = h;
+            }
+        });
     }
 
     boolean isShown(Pane p) {

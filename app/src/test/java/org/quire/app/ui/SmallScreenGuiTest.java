@@ -92,8 +92,12 @@ class SmallScreenGuiTest extends GuiTestSupport {
                 for (String l : t.getColumnName(c).replaceAll("</?html>", "").split("<br>")) {
                     w = Math.max(w, t.getFontMetrics(t.getTableHeader().getFont()).stringWidth(l));
                 }
+                // every cell on one line: its full text (its tooltip), as the renderer would need it
                 for (int r = 0; r < t.getRowCount(); r++) {
-                    w = Math.max(w, t.prepareRenderer(t.getCellRenderer(r, c), r, c).getPreferredSize().width);
+                    JComponent k = (JComponent) t.prepareRenderer(t.getCellRenderer(r, c), r, c);
+                    String full = k.getToolTipText() == null ? "" : k.getToolTipText();
+                    w = Math.max(w, k.getFontMetrics(k.getFont()).stringWidth(full) + k.getInsets().left
+                            + k.getInsets().right);
                 }
                 natural += w;
             }
@@ -115,10 +119,86 @@ class SmallScreenGuiTest extends GuiTestSupport {
             assertEquals(t.getColumnName(4), t.getTableHeader().getToolTipText(new java.awt.event.MouseEvent(
                     t.getTableHeader(), java.awt.event.MouseEvent.MOUSE_MOVED, 0, 0, h.x + 2, h.y + 2, 0, false)));
             Component cell = t.prepareRenderer(t.getCellRenderer(0, 5), 0, 5);
-            assertEquals(((javax.swing.JLabel) cell).getText(), ((JComponent) cell).getToolTipText(),
+            assertEquals(lines(((javax.swing.JLabel) cell).getText()).stream().collect(
+                    java.util.stream.Collectors.joining(" ")), ((JComponent) cell).getToolTipText(),
                     "a cell has its full text as tooltip");
+            noCellIsCut(ed, t);
+            noCellIsCut(ed, named(ed, "budgetTotal:E"));
             return null;
         });
+    }
+
+    /** @return the lines a cell's text is written in (an HTML text split at its line breaks), tags removed */
+    private static List<String> lines(String text) {
+        List<String> out = new ArrayList<>();
+        for (String l : text.replaceAll("(?i)</?html>", "").split("(?i)<br>")) {
+            out.add(l.replaceAll("<[^>]*>", "").replace("&lt;", "<").replace("&amp;", "&").strip());
+        }
+        return out;
+    }
+
+    /**
+     * Every cell of a results table shows its whole text: each of its lines is as wide as its column at most (no
+     * "…"), and the figure in it is the engine's, written by the one rule ({@link org.quire.app.ui.common.Fmt},
+     * which calls {@link org.quire.engine.gum.Figures}), followed by its unit (on the same line or the next).
+     */
+    private static void noCellIsCut(BudgetEditor ed, javax.swing.JTable t) {
+        org.quire.engine.gum.OutputResult o = ed.latest().result().output("E");
+        boolean total = t.getName().startsWith("budgetTotal");
+        for (int r = 0; r < t.getRowCount(); r++) {
+            org.quire.engine.gum.Contribution k = null;
+            if (!total) {
+                String input = lines(((javax.swing.JLabel) t.prepareRenderer(t.getCellRenderer(r, 0), r, 0)).getText())
+                        .get(0);
+                for (org.quire.engine.gum.Contribution x : o.contributions()) {
+                    k = x.input().equals(input) ? x : k;
+                }
+                assertTrue(k != null, "row " + r + " is the input " + input);
+            }
+            for (int c = 0; c < t.getColumnCount(); c++) {
+                javax.swing.JLabel cell = (javax.swing.JLabel) t.prepareRenderer(t.getCellRenderer(r, c), r, c);
+                int width = t.getColumnModel().getColumn(c).getWidth();
+                java.awt.Insets in = cell.getInsets();
+                java.awt.FontMetrics fm = cell.getFontMetrics(cell.getFont());
+                List<String> shown = lines(cell.getText());
+                String where = t.getName() + " row " + r + " column " + c + " " + shown + " in " + width + " px";
+                assertTrue(!cell.getText().contains("\u2026"), where);
+                assertTrue(cell.getPreferredSize().width <= width, where + ": needs " + cell.getPreferredSize().width);
+                for (String l : shown) {
+                    assertTrue(fm.stringWidth(l) + in.left + in.right <= width, where + ": the line " + l);
+                }
+                String number = total ? totalFigure(o, c) : figure(k, c);
+                if (number != null) {
+                    String joined = String.join(" ", shown);
+                    assertTrue(joined.equals(number) || joined.startsWith(number + " "), where + " shows the figure "
+                            + number);
+                    assertTrue(shown.get(0).equals(number) || shown.get(0).startsWith(number + " "), where
+                            + ": the figure whole on the first line");
+                }
+            }
+        }
+    }
+
+    /** @return the figure a column shows for a contribution, by the one rule; null for a column of words */
+    private static String figure(org.quire.engine.gum.Contribution k, int c) {
+        switch (c) {
+            case 3: return org.quire.app.ui.common.Fmt.num(k.estimate());
+            case 4: return org.quire.app.ui.common.Fmt.working(k.standardUncertainty());
+            case 5: return org.quire.app.ui.common.Fmt.working(k.sensitivity());
+            case 6: return org.quire.app.ui.common.Fmt.working(k.contribution());
+            case 7: return org.quire.app.ui.common.Fmt.dof(k.dof());
+            case 8: return org.quire.app.ui.common.Fmt.percent(k.share()).replace(" %", "");
+            default: return null;
+        }
+    }
+
+    /** @return the figure the total row shows in a column, by the one rule; null where it shows none */
+    private static String totalFigure(org.quire.engine.gum.OutputResult o, int c) {
+        switch (c) {
+            case 6: return org.quire.app.ui.common.Fmt.working(o.standardUncertainty());
+            case 7: return org.quire.app.ui.common.Fmt.dof(o.effectiveDof());
+            default: return null;
+        }
     }
 
     @Test

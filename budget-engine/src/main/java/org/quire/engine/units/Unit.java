@@ -225,11 +225,17 @@ public final class Unit {
                 factor * other.factor, 0.0);
     }
 
-    /** @return the unit of a quotient, e.g. m^3/h; any offset is dropped (so 1/°C is a difference unit) */
+    /**
+     * @return the unit of a quotient, e.g. m^3/h; any offset is dropped (so 1/°C is a difference unit); a unit
+     *     divided by the unit one is itself, and divided by itself the unit one (not "%/1" or "(m^3/h)/(m^3/h)")
+     */
     public Unit divide(Unit other) {
         Objects.requireNonNull(other, "other unit");
-        if (other == ONE) {
+        if (other == ONE || other.equals(ONE)) {
             return this;
+        }
+        if (other.equals(this)) {
+            return ONE;
         }
         return new Unit(Symbols.quotient(symbol, other.symbol), dimension.divide(other.dimension),
                 factor / other.factor, 0.0);

@@ -119,6 +119,19 @@ class UnitTest {
     }
 
     @Test
+    void aUnitDividedByOneOrByItselfIsWrittenSimply() {
+        // a unit divided by itself is the unit one (SI Brochure, 9th edition, 2.3.3; from memory)
+        Unit one = Units.parse("m^3/h").divide(Units.parse("m^3/h"));
+        assertEquals("1", one.symbol());
+        assertTrue(one.isDimensionless());
+        assertEquals(1.0, one.factor(), 0.0);
+        assertEquals("%", Units.parse("%").divide(Units.parse("1")).symbol());
+        assertEquals("m^3/h", Units.parse("m^3/h").divide(Units.parse("1")).symbol());
+        // not the same unit: written as a quotient
+        assertEquals("(m^3/h)/(L/min)", Units.parse("m^3/h").divide(Units.parse("L/min")).symbol());
+    }
+
+    @Test
     void composedSymbolsReadBack() {
         Unit a = Units.parse("m^3/h").multiply(Units.parse("kg/m^3"));
         assertEquals("(m^3/h)·(kg/m^3)", a.symbol());

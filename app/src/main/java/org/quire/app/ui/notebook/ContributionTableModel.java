@@ -13,6 +13,8 @@ import org.quire.engine.units.Units;
  */
 final class ContributionTableModel extends AbstractTableModel {
     static final int INPUT = 0;
+    static final int EVALUATION = 1;
+    static final int DISTRIBUTION = 2;
     static final int ESTIMATE = 3;
     static final int U = 4;
     static final int SENSITIVITY = 5;
@@ -23,6 +25,8 @@ final class ContributionTableModel extends AbstractTableModel {
     private OutputResult total;
     private String outputUnit = "";
     private final boolean totalRow;
+    /** The evaluation written short: "A" or "B" under the header "Type" (a narrow column), else "Type A". */
+    private boolean shortEvaluation;
 
     /** @param totalRow whether this model is the one-row total under the table */
     ContributionTableModel(boolean totalRow) {
@@ -34,6 +38,14 @@ final class ContributionTableModel extends AbstractTableModel {
         total = o;
         outputUnit = o.unit();
         fireTableDataChanged();
+    }
+
+    /**
+     * @param on whether the evaluation column writes "B" rather than "Type B" (its header then says "Type"; the
+     *     copy and the tooltips keep the full words)
+     */
+    void shortEvaluation(boolean on) {
+        shortEvaluation = on;
     }
 
     @Override public int getRowCount() { return totalRow ? (total == null ? 0 : 1) : rows.size(); }
@@ -65,6 +77,32 @@ final class ContributionTableModel extends AbstractTableModel {
 
     /** @return the text of a cell as shown, with the unit where it varies from row to row */
     String shown(int r, int c) {
+        if (!totalRow && c == EVALUATION && shortEvaluation) {
+            return rows.get(r).type();
+        }
+        return full(r, c);
+    }
+
+    /** @return the text of a cell written in full ("Type B" even where the column shows "B"): its tooltip */
+    String full(int r, int c) {
+        if (!totalRow && (c == ESTIMATE || c == U || c == SENSITIVITY)) {
+            return withUnit(figure(r, c), unit(r, c));
+        }
+        return figure(r, c);
+    }
+
+    /** @return the unit a cell shows after its figure, as displayed; "" for none */
+    String unit(int r, int c) {
+        if (totalRow || !(c == ESTIMATE || c == U || c == SENSITIVITY)) {
+            return "";
+        }
+        Contribution k = rows.get(r);
+        String u = c == SENSITIVITY ? sensitivityUnit(k.unit()) : k.unit();
+        return u == null || u.isBlank() || u.equals("1") || figure(r, c).isEmpty() ? "" : Units.display(u);
+    }
+
+    /** @return a cell's figure (or words) without its unit */
+    String figure(int r, int c) {
         if (totalRow) {
             switch (c) {
                 case 0: return "Combined";
@@ -80,9 +118,9 @@ final class ContributionTableModel extends AbstractTableModel {
             case 1: return "Type " + k.type();
             case 2: return org.quire.engine.budget.TypeB.DISTRIBUTIONS.contains(k.distribution())
                     ? org.quire.engine.budget.TypeB.screenName(k.distribution()) : k.distribution();
-            case 3: return withUnit(Fmt.num(k.estimate()), k.unit());
-            case 4: return withUnit(Fmt.working(k.standardUncertainty()), k.unit());
-            case 5: return withUnit(Fmt.working(k.sensitivity()), sensitivityUnit(k.unit()));
+            case 3: return Fmt.num(k.estimate());
+            case 4: return Fmt.working(k.standardUncertainty());
+            case 5: return Fmt.working(k.sensitivity());
             case 6: return Fmt.working(k.contribution());
             case 7: return Fmt.dof(k.dof());
             default: return Fmt.percent(k.share()).replace(" %", "");
@@ -99,8 +137,7 @@ final class ContributionTableModel extends AbstractTableModel {
         }
     }
 
-    private static String withUnit(String v, String unit) {
-        String u = unit == null || unit.isBlank() || unit.equals("1") ? "" : Units.display(unit);
+    private static String withUnit(String v, String u) {
         return u.isEmpty() || v.isEmpty() ? v : v + " " + u;
     }
 

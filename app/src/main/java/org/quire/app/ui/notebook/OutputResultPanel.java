@@ -51,9 +51,21 @@ final class OutputResultPanel extends JPanel {
     private final TableRowSorter<ContributionTableModel> sorter = new TableRowSorter<>(model);
     private final ContributionChart chart = new ContributionChart();
     private OutputResult shown;
-    /** Each column's width to show everything, and the least it is given (its header's longest word). */
+    /**
+     * Each column's width to show everything on one line; the width down to which it gives way before a header's
+     * longest word is cut; and the least it is ever given (its widest figure or unit, which are never cut).
+     */
     private int[] natural;
+    private int[] soft;
     private int[] least;
+    /** The columns of figures, whose unit goes onto a second line when the column is narrow. */
+    private static final int[] FIGURES = {ContributionTableModel.ESTIMATE, ContributionTableModel.U,
+        ContributionTableModel.SENSITIVITY, ContributionTableModel.CONTRIBUTION, ContributionTableModel.SHARE};
+    /** The columns of words, which give way first (wrapping their words, the evaluation written short). */
+    private static final int[] WORDS = {ContributionTableModel.EVALUATION, ContributionTableModel.DISTRIBUTION};
+    private static final int PAD = 14;
+    /** A row's height with one line of text. */
+    private final int lineRow;
 
     OutputResultPanel(String output) {
         super(new BorderLayout(4, 4));
@@ -71,15 +83,33 @@ final class OutputResultPanel extends JPanel {
                 ContributionTableModel m = (ContributionTableModel) t.getModel();
                 int mr = t.getRowSorter() == null ? r : t.convertRowIndexToModel(r);
                 int mc = t.convertColumnIndexToModel(c);
-                setText(m.shown(mr, mc));
                 setHorizontalAlignment(mc <= 2 ? LEFT : RIGHT);
-                setToolTipText(getText().isEmpty() ? null : getText());
+                java.awt.Insets in = getInsets();
+                List<String> lines = lines(m, mr, mc, getFontMetrics(getFont()),
+                        t.getColumnModel().getColumn(c).getWidth() - in.left - in.right);
+                if (lines.size() == 1) {
+                    setText(lines.get(0));
+                } else {
+                    // the unit under its figure, right-aligned like it, in the secondary colour
+                    StringBuilder html = new StringBuilder(mc <= 2 ? "<html>" : "<html><div align=right>");
+                    for (int i = 0; i < lines.size(); i++) {
+                        String line = lines.get(i).replace("&", "&amp;").replace("<", "&lt;");
+                        boolean unit = i > 0 && mc > 2 && !sel;
+                        html.append(i == 0 ? "" : "<br>").append(unit ? "<font color=" + hex(
+                                Colors.get("Label.disabledForeground")) + ">" + line + "</font>" : line);
+                    }
+                    setText(html.append(mc <= 2 ? "</html>" : "</div></html>").toString());
+                }
+                String full = m.full(mr, mc);
+                setToolTipText(full.isEmpty() ? null : full);
+                putClientProperty(SpreadsheetTable.COPY_TEXT, full);
                 return this;
             }
         };
         table.setDefaultRenderer(Object.class, cells);
         table.setDefaultRenderer(String.class, cells);
         table.setDefaultRenderer(Double.class, cells);
+        lineRow = table.getRowHeight();
         SpreadsheetTable.install(table, c -> false, Runnable::run, m -> { });
         total = new JTable(totalModel, table.getColumnModel());
         total.setName("budgetTotal:" + output);
@@ -92,7 +122,10 @@ final class OutputResultPanel extends JPanel {
         total.setRowSelectionAllowed(false);
         total.setTableHeader(null);
         showIdle.setName("showIdle:" + output);
-        showIdle.addActionListener(e -> applyFilter());
+        showIdle.addActionListener(e -> {
+            applyFilter();
+            fitColumns();
+        });
         headline.setFont(headline.getFont().deriveFont(java.awt.Font.BOLD, headline.getFont().getSize2D() + 1));
         headline.setForeground(Colors.get("Quire.result.emphasis"));
         JPanel top = new JPanel(new java.awt.GridLayout(3, 1));
@@ -206,9 +239,45 @@ final class OutputResultPanel extends JPanel {
         fitHeight();
     }
 
+    /**
+     * The lines a cell is written in at a width: its text on one line when it fits; else a figure on the first
+     * line and its unit on the second, words wrapped onto lines. A figure is never cut ({@link #fitColumns} gives
+     * its column the width of the widest).
+     */
+    private static List<String> lines(ContributionTableModel m, int r, int c, java.awt.FontMetrics fm, int room) {
+        String text = m.shown(r, c);
+        if (fm.stringWidth(text) <= room) {
+            return List.of(text);
+        }
+        String unit = m.unit(r, c);
+        if (!unit.isEmpty()) {
+            return List.of(m.figure(r, c), unit);
+        }
+        if (c != ContributionTableModel.EVALUATION && c != ContributionTableModel.DISTRIBUTION) {
+            return List.of(text);
+        }
+        List<String> out = new java.util.ArrayList<>();
+        String cur = "";
+        for (String word : text.split(" ")) {
+            String next = cur.isEmpty() ? word : cur + " " + word;
+            if (!cur.isEmpty() && fm.stringWidth(next) > room) {
+                out.add(cur);
+                cur = word;
+            } else {
+                cur = next;
+            }
+        }
+        out.add(cur);
+        return out;
+    }
+
+    private static String hex(java.awt.Color c) {
+        return String.format("#%06x", c.getRGB() & 0xffffff);
+    }
+
     /** Makes the table's scroll pane as high as its header and rows, so that it never scrolls up and down. */
     private void fitHeight() {
-        int h = table.getRowHeight() * Math.max(3, table.getRowCount()) + table.getTableHeader().getPreferredSize().height + 4;
+        int h = Math.max(table.getPreferredSize().height, lineRow * 3) + table.getTableHeader().getPreferredSize().height + 4;
         java.awt.Component sp = table.getParent().getParent();
         if (sp.getPreferredSize().height != h) {
             sp.setPreferredSize(new Dimension(700, h));
@@ -217,47 +286,96 @@ final class OutputResultPanel extends JPanel {
     }
 
     /**
-     * Works out each column's natural width (its header on the lines it is written in, and its widest cell) and
-     * its least width (the longest word of its header), then lays the columns out in the visible width.
+     * Works out each column's natural width (its header on the lines it is written in, and its widest cell on one
+     * line), the width down to which it gives way before its header's longest word is cut, and its least width:
+     * its widest figure or unit for a column of figures (never cut), its widest word for a column of words ("B"
+     * and "Type" for the evaluation written short), the natural width for the input and the degrees of freedom.
      */
     private void fitColumns() {
         int n = table.getColumnCount();
         natural = new int[n];
+        soft = new int[n];
         least = new int[n];
         java.awt.FontMetrics fm = table.getTableHeader().getFontMetrics(table.getTableHeader().getFont());
         for (int c = 0; c < n; c++) {
             TableColumn col = table.getColumnModel().getColumn(c);
-            String header = String.valueOf(col.getHeaderValue());
+            int mc = col.getModelIndex();
+            String header = mc == ContributionTableModel.EVALUATION ? "Evaluation" : model.getColumnName(mc);
             int w = 0;
-            for (String line : WrappingHeader.lines(header)) {
-                w = Math.max(w, fm.stringWidth(line));
-            }
             int word = 0;
             for (String line : WrappingHeader.lines(header)) {
+                w = Math.max(w, fm.stringWidth(line));
                 for (String part : line.split(" ")) {
                     word = Math.max(word, fm.stringWidth(part));
                 }
             }
+            // a header's words may be cut as a last resort (its tooltip has them), a figure or unit never
+            int min = mc == ContributionTableModel.EVALUATION ? fm.stringWidth("Type")
+                    : mc == ContributionTableModel.DISTRIBUTION ? word : 0;
             for (JTable t : new JTable[] {table, total}) {
-                for (int r = 0; r < t.getRowCount(); r++) {
-                    Component k = t.prepareRenderer(t.getCellRenderer(r, c), r, c);
-                    w = Math.max(w, k.getPreferredSize().width);
+                ContributionTableModel m = (ContributionTableModel) t.getModel();
+                java.awt.FontMetrics cf = t.getFontMetrics(t.getFont());
+                int in = 6;
+                if (t.getRowCount() > 0) {
+                    java.awt.Insets i = ((javax.swing.JComponent) t.prepareRenderer(t.getCellRenderer(0, c), 0, c))
+                            .getInsets();
+                    in = i.left + i.right;
+                }
+                // the rows shown (an input with c_i = 0 may be hidden)
+                for (int vr = 0; vr < t.getRowCount(); vr++) {
+                    int r = t.convertRowIndexToModel(vr);
+                    w = Math.max(w, cf.stringWidth(m.full(r, mc)) + in);
+                    if (mc == ContributionTableModel.EVALUATION) {
+                        min = Math.max(min, cf.stringWidth(m == model ? m.row(r).type() : m.full(r, mc)) + in);
+                    } else if (mc == ContributionTableModel.DISTRIBUTION) {
+                        for (String part : m.full(r, mc).split(" ")) {
+                            min = Math.max(min, cf.stringWidth(part) + in);
+                        }
+                    } else {
+                        min = Math.max(min, Math.max(cf.stringWidth(m.figure(r, mc)), cf.stringWidth(m.unit(r, mc)))
+                                + in);
+                    }
                 }
             }
-            natural[c] = w + 14;
-            // the input's name and the degrees of freedom are never cut short; other columns give way down to their
-            // header's longest word
-            least[c] = c == ContributionTableModel.INPUT || c == ContributionTableModel.DOF ? natural[c]
-                    : Math.min(natural[c], word + 14);
+            natural[c] = w + PAD;
+            boolean whole = mc == ContributionTableModel.INPUT || mc == ContributionTableModel.DOF;
+            least[c] = whole ? natural[c] : Math.min(natural[c], min + 6);
+            soft[c] = whole ? natural[c] : Math.max(least[c], Math.min(natural[c], word + PAD));
         }
         layoutColumns();
     }
 
     /**
-     * Gives every column its natural width when they all fit the visible width of the table; else takes the
-     * missing width from the columns in proportion to what each can give above its least width, so that the
-     * table never scrolls sideways. A cell that no longer shows its whole text has it in its tooltip; headers
-     * wrap onto more lines ({@link WrappingHeader}).
+     * Takes up to {@code missing} pixels from the given columns, in proportion to what each can give above its
+     * floor.
+     *
+     * @return the pixels still missing
+     */
+    private static int giveWay(int[] w, int[] floor, int[] cols, int missing) {
+        int room = 0;
+        for (int c : cols) {
+            room += Math.max(0, w[c] - floor[c]);
+        }
+        int left = missing;
+        for (int c : cols) {
+            if (room <= 0 || left <= 0) {
+                break;
+            }
+            int can = Math.max(0, w[c] - floor[c]);
+            int take = Math.min(Math.min(left, can), (int) Math.ceil((double) missing * can / room));
+            w[c] -= take;
+            left -= take;
+        }
+        return left;
+    }
+
+    /**
+     * Gives every column its natural width when they all fit the visible width of the table; else the columns of
+     * words give way first (wrapping, the evaluation written short), then the columns of figures down to their
+     * headers' longest words, then down to their widest figure or unit, so that the table does not scroll
+     * sideways and no figure is cut: a figure whose unit does not fit beside it has it on a second line, and the
+     * rows grow to their lines. Headers wrap onto more lines ({@link WrappingHeader}); the tooltips keep the full
+     * text.
      */
     private void layoutColumns() {
         if (natural == null || natural.length != table.getColumnCount()) {
@@ -266,37 +384,22 @@ final class OutputResultPanel extends JPanel {
         int n = natural.length;
         int avail = ((javax.swing.JViewport) table.getParent()).getWidth();
         int want = 0;
-        int give = 0;
         for (int c = 0; c < n; c++) {
             want += natural[c];
-            give += natural[c] - least[c];
         }
         int[] w = natural.clone();
         if (avail > 0 && want > avail) {
-            int missing = want - avail;
-            int left = missing;
-            for (int c = 0; c < n && give > 0; c++) {
-                int take = (int) Math.ceil((double) missing * (natural[c] - least[c]) / give);
-                take = Math.min(take, Math.min(left, natural[c] - least[c]));
-                w[c] -= take;
-                left -= take;
-            }
-            if (left > 0) {
-                // even the headers' longest words do not fit: every column gives way in proportion to its width,
-                // down to a few characters (the tooltips keep the full text)
-                int floor = table.getFontMetrics(table.getFont()).stringWidth("0000");
-                int room = 0;
-                for (int c = 0; c < n; c++) {
-                    room += Math.max(0, w[c] - floor);
-                }
-                int still = left;
-                for (int c = 0; c < n && room > 0; c++) {
-                    int take = (int) Math.ceil((double) left * Math.max(0, w[c] - floor) / room);
-                    take = Math.min(take, Math.min(still, Math.max(0, w[c] - floor)));
-                    w[c] -= take;
-                    still -= take;
-                }
-            }
+            int missing = giveWay(w, least, WORDS, want - avail);
+            missing = giveWay(w, soft, FIGURES, missing);
+            giveWay(w, least, FIGURES, missing);
+        }
+        // one rule for the evaluation: written short whenever its column is narrower than its natural width
+        boolean shortEvaluation = w[ContributionTableModel.EVALUATION] < natural[ContributionTableModel.EVALUATION];
+        model.shortEvaluation(shortEvaluation);
+        TableColumn evaluation = table.getColumnModel().getColumn(ContributionTableModel.EVALUATION);
+        String title = shortEvaluation ? "Type" : model.getColumnName(ContributionTableModel.EVALUATION);
+        if (!title.equals(evaluation.getHeaderValue())) {
+            evaluation.setHeaderValue(title);
         }
         for (int c = 0; c < n; c++) {
             TableColumn col = table.getColumnModel().getColumn(c);
@@ -317,8 +420,20 @@ final class OutputResultPanel extends JPanel {
         if (!size.equals(header.getPreferredSize())) {
             header.setPreferredSize(size);
             header.revalidate();
-            fitHeight();
         }
+        // every row as high as its most lines
+        for (JTable t : new JTable[] {table, total}) {
+            for (int r = 0; r < t.getRowCount(); r++) {
+                int h = lineRow;
+                for (int c = 0; c < n; c++) {
+                    h = Math.max(h, t.prepareRenderer(t.getCellRenderer(r, c), r, c).getPreferredSize().height);
+                }
+                if (t.getRowHeight(r) != h) {
+                    t.setRowHeight(r, h);
+                }
+            }
+        }
+        fitHeight();
         header.repaint();
     }
 
@@ -401,8 +516,12 @@ final class OutputResultPanel extends JPanel {
             Dimension a = p.getComponent(0).getPreferredSize();
             Dimension b = p.getComponent(1).getPreferredSize();
             int w = p.getWidth() > 0 ? p.getWidth() : a.width + GAP + b.width;
-            return beside(p, w) ? new Dimension(a.width + GAP + b.width, Math.max(a.height, b.height))
-                    : new Dimension(Math.max(a.width, b.width), a.height + GAP + b.height);
+            if (beside(p, w)) {
+                return new Dimension(a.width + GAP + b.width, Math.max(a.height, b.height));
+            }
+            // below, the chart is scaled to the width as in layoutContainer: the table gets no empty band
+            int bh = b.width == 0 ? 0 : b.height * Math.min(w, b.width) / b.width;
+            return new Dimension(Math.max(a.width, b.width), a.height + GAP + bh);
         }
 
         @Override

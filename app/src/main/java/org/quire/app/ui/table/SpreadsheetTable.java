@@ -127,10 +127,20 @@ public final class SpreadsheetTable {
         return s.toString();
     }
 
-    /** @return the text a cell shows (its renderer's), view indices */
+    /**
+     * The client property of a renderer component whose value (a String) is the cell's text in full, where the
+     * cell shows it shortened or on several lines for its column's width: Copy takes it.
+     */
+    public static final String COPY_TEXT = "SpreadsheetTable.copyText";
+
+    /** @return the text a cell shows (its renderer's, or its {@link #COPY_TEXT}), view indices */
     public static String displayed(JTable t, int row, int col) {
         TableCellRenderer r = t.getCellRenderer(row, col);
         Component c = r.getTableCellRendererComponent(t, t.getValueAt(row, col), false, false, row, col);
+        if (c instanceof javax.swing.JComponent
+                && ((javax.swing.JComponent) c).getClientProperty(COPY_TEXT) instanceof String) {
+            return (String) ((javax.swing.JComponent) c).getClientProperty(COPY_TEXT);
+        }
         if (c instanceof JLabel) {
             return ((JLabel) c).getText();
         }
