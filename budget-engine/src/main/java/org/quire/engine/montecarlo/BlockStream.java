@@ -86,6 +86,69 @@ public final class BlockStream implements UniformRandomProvider {
     }
 
     /**
+     * Sets {@code out[t] = lo + width u_t} for t in {@code from .. from+n-1}, u_t the uniform variates of n calls
+     * of nextDouble: a rectangular variate in one pass, the same values as drawing u and scaling it after.
+     */
+    void uniforms(double[] out, int from, int n, double lo, double width) {
+        long a = s0;
+        long b = s1;
+        for (int t = from, end = from + n; t < end; t++) {
+            long result = Long.rotateLeft(a + b, 17) + a;
+            b ^= a;
+            a = Long.rotateLeft(a, 49) ^ b ^ (b << 21);
+            b = Long.rotateLeft(b, 28);
+            out[t] = lo + width * ((result >>> 11) * TWO_POW_MINUS_53);
+        }
+        s0 = a;
+        s1 = b;
+    }
+
+    /**
+     * Fills {@code first[from .. from+n-1]} and {@code second[from .. from+n-1]} with pairs of uniform variates in
+     * [0, 1), trial by trial: {@code first[t]} and {@code second[t]} are the values of two consecutive calls of
+     * nextDouble, so a sampler that combines two uniforms per trial gets the same values as drawing them one by
+     * one.
+     */
+    void uniformPairs(double[] first, double[] second, int from, int n) {
+        long a = s0;
+        long b = s1;
+        for (int t = from, end = from + n; t < end; t++) {
+            long r = Long.rotateLeft(a + b, 17) + a;
+            b ^= a;
+            a = Long.rotateLeft(a, 49) ^ b ^ (b << 21);
+            b = Long.rotateLeft(b, 28);
+            long q = Long.rotateLeft(a + b, 17) + a;
+            b ^= a;
+            a = Long.rotateLeft(a, 49) ^ b ^ (b << 21);
+            b = Long.rotateLeft(b, 28);
+            first[t] = (r >>> 11) * TWO_POW_MINUS_53;
+            second[t] = (q >>> 11) * TWO_POW_MINUS_53;
+        }
+        s0 = a;
+        s1 = b;
+    }
+
+    /** Fills {@code out[from .. from+n-1]} with uniform variates in (0, 1), the same as n calls of nextOpenDouble. */
+    void openUniforms(double[] out, int from, int n) {
+        long a = s0;
+        long b = s1;
+        for (int t = from, end = from + n; t < end; t++) {
+            long result = Long.rotateLeft(a + b, 17) + a;
+            b ^= a;
+            a = Long.rotateLeft(a, 49) ^ b ^ (b << 21);
+            b = Long.rotateLeft(b, 28);
+            out[t] = ((result >>> 11) + 0.5) * TWO_POW_MINUS_53;
+        }
+        s0 = a;
+        s1 = b;
+    }
+
+    /** @return a scratch column of at least {@code n} values for a sampler's second variate, content undefined */
+    double[] second(int n) {
+        return scratch(n);
+    }
+
+    /**
      * Fills {@code out[from .. from+n-1]} with variates of Student's t distribution with {@code nu} degrees of
      * freedom (finite, &gt; 0) by Bailey's polar method: draw u, v uniform on (-1, 1) until w = u^2 + v^2 &lt;= 1,
      * then t = u sqrt(nu (w^(-2/nu) - 1) / w). Two uniforms per attempt, accepted with probability pi/4, and no

@@ -144,10 +144,7 @@ public abstract class Marginal {
 
         @Override
         public void fill(BlockStream rng, double[] out, int from, int n) {
-            rng.uniforms(out, from, n);
-            for (int t = from, end = from + n; t < end; t++) {
-                out[t] = a + w * out[t];
-            }
+            rng.uniforms(out, from, n, a, w);
         }
 
         @Override public double cdf(double x) { return x <= a ? 0.0 : x >= a + w ? 1.0 : (x - a) / w; }
@@ -171,8 +168,10 @@ public abstract class Marginal {
         @Override
         public void fill(BlockStream rng, double[] out, int from, int n) {
             double h = 0.5 * w;
+            double[] r2 = rng.second(n);
+            rng.uniformPairs(out, r2, from, n);
             for (int t = from, end = from + n; t < end; t++) {
-                out[t] = a + h * (rng.nextDouble() + rng.nextDouble());
+                out[t] = a + h * (out[t] + r2[t - from]);
             }
         }
 
@@ -214,8 +213,9 @@ public abstract class Marginal {
         @Override
         public void fill(BlockStream rng, double[] out, int from, int n) {
             double twoPi = 2.0 * Math.PI;
+            rng.uniforms(out, from, n);
             for (int t = from, end = from + n; t < end; t++) {
-                out[t] = c + h * Math.sin(twoPi * rng.nextDouble());
+                out[t] = c + h * Math.sin(twoPi * out[t]);
             }
         }
 
@@ -263,8 +263,10 @@ public abstract class Marginal {
             double h = 0.5 * (b - a);
             double c1 = h * (1.0 + beta);
             double c2 = h * (1.0 - beta);
+            double[] r2 = rng.second(n);
+            rng.uniformPairs(out, r2, from, n);
             for (int t = from, end = from + n; t < end; t++) {
-                out[t] = a + c1 * rng.nextDouble() + c2 * rng.nextDouble();
+                out[t] = a + c1 * out[t] + c2 * r2[t - from];
             }
         }
 
@@ -334,10 +336,12 @@ public abstract class Marginal {
             double lo = a - d;
             double twoD = 2.0 * d;
             double sum = a + b;
+            double[] r2 = rng.second(n);
+            rng.uniformPairs(out, r2, from, n);
             for (int t = from, end = from + n; t < end; t++) {
-                double as = lo + twoD * rng.nextDouble();
+                double as = lo + twoD * out[t];
                 double bs = sum - as;
-                out[t] = as + (bs - as) * rng.nextDouble();
+                out[t] = as + (bs - as) * r2[t - from];
             }
         }
 
@@ -486,8 +490,9 @@ public abstract class Marginal {
 
         @Override
         public void fill(BlockStream rng, double[] out, int from, int n) {
+            rng.openUniforms(out, from, n);
             for (int t = from, end = from + n; t < end; t++) {
-                out[t] = -mean * Math.log(rng.nextOpenDouble());
+                out[t] = -mean * Math.log(out[t]);
             }
         }
 
