@@ -144,10 +144,7 @@ public abstract class Marginal {
 
         @Override
         public void fill(BlockStream rng, double[] out, int from, int n) {
-            rng.uniforms(out, from, n);
-            for (int t = from, end = from + n; t < end; t++) {
-                out[t] = a + w * out[t];
-            }
+            rng.uniforms(out, from, n, a, w);
         }
 
         @Override public double cdf(double x) { return x <= a ? 0.0 : x >= a + w ? 1.0 : (x - a) / w; }
@@ -171,8 +168,10 @@ public abstract class Marginal {
         @Override
         public void fill(BlockStream rng, double[] out, int from, int n) {
             double h = 0.5 * w;
+            double[] r2 = rng.second(n);
+            rng.uniformPairs(out, r2, from, n);
             for (int t = from, end = from + n; t < end; t++) {
-                out[t] = a + h * (rng.nextDouble() + rng.nextDouble());
+                out[t] = a + h * (out[t] + r2[t - from]);
             }
         }
 
@@ -214,8 +213,9 @@ public abstract class Marginal {
         @Override
         public void fill(BlockStream rng, double[] out, int from, int n) {
             double twoPi = 2.0 * Math.PI;
+            rng.uniforms(out, from, n);
             for (int t = from, end = from + n; t < end; t++) {
-                out[t] = c + h * Math.sin(twoPi * rng.nextDouble());
+                out[t] = c + h * Math.sin(twoPi * out[t]);
             }
         }
 
@@ -263,8 +263,10 @@ public abstract class Marginal {
             double h = 0.5 * (b - a);
             double c1 = h * (1.0 + beta);
             double c2 = h * (1.0 - beta);
+            double[] r2 = rng.second(n);
+            rng.uniformPairs(out, r2, from, n);
             for (int t = from, end = from + n; t < end; t++) {
-                out[t] = a + c1 * rng.nextDouble() + c2 * rng.nextDouble();
+                out[t] = a + c1 * out[t] + c2 * r2[t - from];
             }
         }
 
@@ -334,10 +336,12 @@ public abstract class Marginal {
             double lo = a - d;
             double twoD = 2.0 * d;
             double sum = a + b;
+            double[] r2 = rng.second(n);
+            rng.uniformPairs(out, r2, from, n);
             for (int t = from, end = from + n; t < end; t++) {
-                double as = lo + twoD * rng.nextDouble();
+                double as = lo + twoD * out[t];
                 double bs = sum - as;
-                out[t] = as + (bs - as) * rng.nextDouble();
+                out[t] = as + (bs - as) * r2[t - from];
             }
         }
 
@@ -411,29 +415,16 @@ public abstract class Marginal {
     }
 
     /**
-     * t_nu(mu, s^2): xi = mu + s t, t = z / sqrt(w / nu) with z standard normal and w chi-squared with nu degrees
-     * of freedom, drawn independently; JCGM 101:2008 6.4.9.5. The chi-squared variate w = 2 G, G gamma with
-     * shape nu/2 and unit scale, is drawn
-     * <ul>
-     * <li>for whole nu up to {@value #SUM_LIMIT}: as -2 ln(r_1 ... r_k), the sum of k = floor(nu/2) unit
-     *     exponentials doubled, plus the square of a further standard normal when nu is odd (Devroye 1986,
-     *     IX.3: a gamma variate of whole shape k is the sum of k exponentials; a chi-squared variate with one
-     *     degree of freedom is a squared normal);</li>
-     * <li>otherwise by the method of Marsaglia and Tsang (ACM Trans. Math. Softw. 26 (2000) 363-372): for shape
-     *     a &gt;= 1, d = a - 1/3, c = 1/sqrt(9d), draw a normal x and v = (1 + c x)^3 until v &gt; 0 and
-     *     r &lt; 1 - 0.0331 x^4 or ln r &lt; x^2/2 + d - d v + d ln v, giving d v; for a &lt; 1, the variate of
-     *     shape a + 1 times r^(1/a) (their section 6).</li>
-     * </ul>
-     * The normals are drawn by the Ziggurat method of {@link BlockStream}, a column at a time: first the normals z
-     * of the block, then its chi-squared variates, so the values depend only on the stream.
+     * t_nu(mu, s^2): xi = mu + s t, t a variate of the standard t distribution with nu degrees of freedom
+     * (JCGM 101:2008 6.4.9), drawn by Bailey's polar method ({@link BlockStream#studentT}), which gives the same
+     * distribution as the procedure t = z / sqrt(w / nu) of JCGM 101:2008 6.4.9.5 (z standard normal, w
+     * chi-squared) at the cost of about 2.5 uniforms and two square roots per value; for nu without bound, the
+     * normal.
      *
-     * <p>References: L. Devroye, Non-Uniform Random Variate Generation, Springer 1986, chapter IX; G. Marsaglia,
-     * W. W. Tsang, A simple method for generating gamma variables, ACM Trans. Math. Softw. 26 (2000) 363-372.
+     * <p>References: JCGM 101:2008 6.4.9; R. W. Bailey, Polar generation of random variates with the
+     * t-distribution, Math. Comp. 62 (1994) 779-781.
      */
     private static final class StudentTMarginal extends Marginal {
-        /** Largest whole nu drawn through a product of uniforms. */
-        static final int SUM_LIMIT = 30;
-
         private final double mu;
         private final double s;
         private final double nu;
@@ -449,71 +440,15 @@ public abstract class Marginal {
 
         @Override
         public void fill(BlockStream rng, double[] out, int from, int n) {
-            int end = from + n;
             if (Double.isInfinite(nu)) {
-                rng.normals(out, from, n);
-                for (int i = from; i < end; i++) {
-                    out[i] = mu + s * out[i]; // the limit of t as nu grows: the standard normal
-                }
-                return;
+                rng.normals(out, from, n); // the limit of t as nu grows: the standard normal
+            } else {
+                rng.studentT(out, from, n, nu);
             }
-            if (nu == Math.rint(nu) && nu <= SUM_LIMIT) {
-                int k = (int) nu / 2;
-                boolean odd = ((int) nu & 1) == 1;
-                double twoOverNu = 2.0 / nu;
-                double[] w = rng.scratch(0, n);
-                rng.normals(out, from, n); // z
-                if (k > 0) {
-                    rng.logProducts(w, 0, n, k); // half the chi-squared variate, from the exponentials
-                    for (int i = 0; i < n; i++) {
-                        w[i] *= twoOverNu;
-                    }
-                } else {
-                    java.util.Arrays.fill(w, 0, n, 0.0);
-                }
-                if (odd) {
-                    double[] y = rng.scratch(1, n);
-                    rng.normals(y, 0, n);
-                    for (int i = 0; i < n; i++) {
-                        w[i] += y[i] * y[i] / nu;
-                    }
-                }
-                for (int i = 0; i < n; i++) {
-                    out[from + i] = mu + s * (out[from + i] / Math.sqrt(w[i]));
-                }
-                return;
-            }
-            double a = 0.5 * nu;
-            boolean boost = a < 1.0;
-            double shape = boost ? a + 1.0 : a;
-            double d = shape - 1.0 / 3.0;
-            double c = 1.0 / Math.sqrt(9.0 * d);
-            double inverseA = 1.0 / a;
-            double twoOverNu = 2.0 / nu;
-            for (int i = from; i < end; i++) {
-                double z = rng.nextNormal();
-                double gamma;
-                while (true) {
-                    double x = rng.nextNormal();
-                    double v = 1.0 + c * x;
-                    if (v <= 0.0) {
-                        continue;
-                    }
-                    v = v * v * v;
-                    double r = rng.nextOpenDouble();
-                    double x2 = x * x;
-                    if (r < 1.0 - 0.0331 * x2 * x2 || Math.log(r) < 0.5 * x2 + d * (1.0 - v + Math.log(v))) {
-                        gamma = d * v;
-                        break;
-                    }
-                }
-                if (boost) {
-                    gamma *= Math.pow(rng.nextOpenDouble(), inverseA);
-                }
-                out[i] = mu + s * (z / Math.sqrt(gamma * twoOverNu));
+            for (int i = from, end = from + n; i < end; i++) {
+                out[i] = mu + s * out[i];
             }
         }
-
 
         @Override public double cdf(double x) { return t.cumulativeProbability((x - mu) / s); }
 
@@ -555,8 +490,9 @@ public abstract class Marginal {
 
         @Override
         public void fill(BlockStream rng, double[] out, int from, int n) {
+            rng.openUniforms(out, from, n);
             for (int t = from, end = from + n; t < end; t++) {
-                out[t] = -mean * Math.log(rng.nextOpenDouble());
+                out[t] = -mean * Math.log(out[t]);
             }
         }
 

@@ -26,8 +26,9 @@ import org.quire.engine.model.BlockEvaluator;
  * any number of threads. Each output's values are held in one {@code double[]} (8 bytes per trial and output);
  * the coverage intervals need only the two tails of the sorted values, so only the tails are sorted.
  *
- * <p>Stateless and thread-safe: every call of {@link #run} makes its own worker threads and ends them before
- * it returns or throws.
+ * <p>Thread-safe: every call of {@link #run} makes its own worker threads and ends them before it returns or
+ * throws. The arrays of output values are taken from, and given back to, {@link SpareArrays}, so that runs of
+ * the same size one after another do not allocate them again.
  *
  * <p>References: JCGM 101:2008 5.9 and 7 (the propagation of distributions and its steps: 7.2 number of
  * trials, 7.3 sampling, 7.4 model evaluation, 7.5 discrete representation, 7.6 estimate and standard
@@ -288,7 +289,7 @@ public final class MonteCarlo {
             planned = trials;
             int k = model.outputCount();
             Batch batch = simulate(0, trials, workers != null && !settings.keepValues() ? workers.values(k, trials)
-                    : new double[k][trials]);
+                    : spare(k, trials));
             Moments total = combine(List.of(batch));
             return finish(batch.values, trials, total, 1, true);
         }
@@ -310,13 +311,16 @@ public final class MonteCarlo {
                     break;
                 }
                 planned = used + m;
-                Batch batch = simulate(block, m, new double[k][m]);
+                Batch batch = simulate(block, m, spare(k, m));
                 block += blocks(m);
                 batches.add(batch);
                 Moments runMoments = combine(List.of(batch));
                 double[][] stats = new double[k][];
                 for (int o = 0; o < k; o++) {
-                    OutputSummary s = OutputSummary.summarize(o, batch.values[o].clone(), m, runMoments, p);
+                    double[] copy = SpareArrays.take(m);
+                    System.arraycopy(batch.values[o], 0, copy, 0, m);
+                    OutputSummary s = OutputSummary.summarize(o, copy, m, runMoments, p);
+                    SpareArrays.give(copy);
                     stats[o] = new double[] {s.mean(), s.standardUncertainty(), s.symmetricInterval().lower(),
                         s.symmetricInterval().upper(), s.shortestInterval().lower(), s.shortestInterval().upper()};
                 }
@@ -340,15 +344,28 @@ public final class MonteCarlo {
                 }
             }
             int total = batches.size() * m;
-            double[][] values = new double[k][total];
+            double[][] values = new double[k][];
+            for (int o = 0; o < k; o++) {
+                values[o] = SpareArrays.take(total);
+            }
             for (int b = 0; b < batches.size(); b++) {
                 for (int o = 0; o < k; o++) {
                     System.arraycopy(batches.get(b).values[o], 0, values[o], b * m, m);
+                    SpareArrays.give(batches.get(b).values[o]);
                 }
             }
             Moments moments = combine(batches);
             batches.clear();
             return finish(values, total, moments, runStats.size(), stable);
+        }
+
+        /** @return arrays for {@code outputs} x {@code trials} values from {@link SpareArrays} */
+        private static double[][] spare(int outputs, int trials) {
+            double[][] values = new double[outputs][];
+            for (int o = 0; o < outputs; o++) {
+                values[o] = SpareArrays.take(trials);
+            }
+            return values;
         }
 
         /** s_z with s_z^2 = sum (z_r - mean z)^2 / (h (h - 1)), JCGM 101:2008 7.9.4 f). */
@@ -385,15 +402,29 @@ public final class MonteCarlo {
             int k = values.length;
             double[][] kept = settings.keepValues() ? values : null;
             List<Future<OutputSummary>> futures = new ArrayList<>();
+            // the summaries reorder the values: of kept values they work on a copy
+            double[][] work = new double[k][];
             for (int o = 0; o < k; o++) {
                 int output = o;
-                double[] v = settings.keepValues() ? values[o].clone() : values[o];
+                if (settings.keepValues()) {
+                    work[o] = SpareArrays.take(trials);
+                    System.arraycopy(values[o], 0, work[o], 0, trials);
+                } else {
+                    work[o] = values[o];
+                }
+                double[] v = work[o];
                 futures.add(submit(() -> OutputSummary.summarize(output, v, trials, moments,
                         settings.coverageProbability())));
             }
             List<OutputSummary> summaries = new ArrayList<>();
             for (Future<OutputSummary> f : futures) {
                 summaries.add(await(f));
+            }
+            // nothing refers to the reordered values any more; arrays of lent workers stay theirs for the next run
+            if (settings.keepValues() || workers == null) {
+                for (double[] w : work) {
+                    SpareArrays.give(w);
+                }
             }
             listener.progress(done.get(), planned);
             return new MonteCarloResult(settings, trials, summaries, moments.correlation(), inputs.usesCopula(),

@@ -15,13 +15,14 @@ import java.util.Arrays;
  *     deviations (plus two ranks) further out, so that the low threshold has at least {@code tail} values at or
  *     below it, and the high one at least {@code tail} values above it, except with negligible probability.</li>
  * <li>One pass puts every value at or below the low threshold at the front of the array and every value above
- *     the high threshold at the back (a three-way partition); the two ends are then sorted. They hold at least
+ *     the high threshold at the back (a three-way partition); the two ends are then sorted (by distribution into
+ *     buckets, {@link #sort}). They hold at least
  *     the {@code tail} extreme values on each side, which are now in order. When the check fails (the pilot
  *     was unlucky, or the thresholds meet because the tails are wide) the whole array is sorted instead, so
  *     the result never depends on the pilot.</li>
- * <li>Ranks that fall between the two ends: one pass counts the middle values in {@value #BINS} equal bins
- *     between the thresholds (the bin of a value never decreases as the value grows, so the bins are in
- *     order), a second pass gathers the values of the bins that hold a requested rank, and those are
+ * <li>Ranks that fall between the two ends: the partition's pass counts the middle values in {@value #BINS}
+ *     equal bins between the thresholds (the bin of a value never decreases as the value grows, so the bins are in
+ *     order), a further pass gathers the values of the bins that hold a requested rank, and those are
  *     sorted.</li>
  * </ol>
  * Every figure is an exact order statistic of the values; none is interpolated from bins. Small arrays (up to
@@ -43,6 +44,12 @@ final class OrderStatistics {
     static final double MARGIN_SIGMAS = 6.0;
     /** Bins of the counting pass over the middle values. */
     static final int BINS = 4096;
+    /** Ranges shorter than this are sorted by {@link Arrays#sort(double[], int, int)}, longer by distribution. */
+    static final int SMALL_SORT = 1 << 12;
+    /** Values per bucket, on average, of the distribution sort. */
+    static final int PER_BUCKET = 2;
+    /** Buckets up to this size are sorted by straight insertion. */
+    static final int INSERTION_LIMIT = 32;
 
     private final double[] a;
     private final int size;
@@ -56,6 +63,8 @@ final class OrderStatistics {
     /** the thresholds of the partition: the front holds the values &lt;= lowT, the back those &gt; highT */
     private double lowT;
     private double highT;
+    /** middleCount[b] = the number of middle values in bin b of step 3, counted by the partition */
+    private int[] middleCount;
 
     private OrderStatistics(double[] a, int size) {
         this.a = a;
@@ -111,7 +120,7 @@ final class OrderStatistics {
         for (int i = 0; i < pilotSize; i++) {
             pilot[i] = a[(int) (i * stride)];
         }
-        Arrays.sort(pilot);
+        sort(pilot, 0, pilotSize);
         double f = (double) tail / n;
         double sigma = Math.sqrt(pilotSize * f * (1.0 - f));
         int k = (int) Math.ceil(f * pilotSize + MARGIN_SIGMAS * sigma) + 2;
@@ -123,8 +132,12 @@ final class OrderStatistics {
         if (!(lowT < highT)) {
             return false;
         }
-        // three-way partition: [0, lt) <= lowT < [lt, gt) <= highT < [gt, n)
+        // three-way partition: [0, lt) <= lowT < [lt, gt) <= highT < [gt, n); the middle values are counted in
+        // the bins of step 3 on the way
         double[] v = a;
+        double scale = BINS / (highT - lowT);
+        int last = BINS - 1;
+        int[] count = new int[BINS];
         int lt = 0;
         int i = 0;
         int gt = n;
@@ -137,19 +150,90 @@ final class OrderStatistics {
                 v[i] = v[--gt];
                 v[gt] = x;
             } else {
+                int b = (int) ((x - lowT) * scale);
+                count[b > last ? last : b]++;
                 i++;
             }
         }
         if (lt < tail || n - gt < tail) {
             return false;
         }
-        Arrays.sort(v, 0, lt);
-        Arrays.sort(v, gt, n);
+        sort(v, 0, lt);
+        sort(v, gt, n);
         lowEnd = lt;
         highStart = gt;
         this.lowT = lowT;
         this.highT = highT;
+        this.middleCount = count;
         return true;
+    }
+
+    /**
+     * Sorts {@code v[from..to)} by distribution into about one bucket per {@value #PER_BUCKET} values of equal
+     * width between the least and the greatest value, then sorting each bucket (by insertion when small). The
+     * bucket of a value, floor((x - min) * scale), never decreases as x grows, so the buckets are in order; a
+     * bucket that receives many values (a heavy tail) is sorted by {@link Arrays#sort(double[], int, int)}, so
+     * the result is always the sorted range. Ranges of fewer than {@value #SMALL_SORT} values are sorted
+     * directly.
+     *
+     * <p>References: D. E. Knuth, The Art of Computer Programming 3, 2nd ed., Addison-Wesley 1998, 5.2.5
+     * (distribution sorting) and 5.2.1 (straight insertion).
+     */
+    static void sort(double[] v, int from, int to) {
+        int n = to - from;
+        if (n < SMALL_SORT) {
+            Arrays.sort(v, from, to);
+            return;
+        }
+        double min = v[from];
+        double max = min;
+        for (int t = from + 1; t < to; t++) {
+            double x = v[t];
+            min = Math.min(min, x);
+            max = Math.max(max, x);
+        }
+        int buckets = n / PER_BUCKET;
+        double scale = buckets / (max - min);
+        if (!(max > min) || !(scale > 0) || Double.isInfinite(scale)) {
+            Arrays.sort(v, from, to);
+            return;
+        }
+        int last = buckets - 1;
+        int[] start = new int[buckets + 1];
+        for (int t = from; t < to; t++) {
+            int b = (int) ((v[t] - min) * scale);
+            start[(b > last ? last : b) + 1]++;
+        }
+        for (int b = 0; b < buckets; b++) {
+            start[b + 1] += start[b];
+        }
+        double[] sorted = new double[n];
+        int[] fill = Arrays.copyOf(start, buckets);
+        for (int t = from; t < to; t++) {
+            double x = v[t];
+            int b = (int) ((x - min) * scale);
+            sorted[fill[b > last ? last : b]++] = x;
+        }
+        // insertion keeps -0.0 and 0.0 in the order met; Arrays.sort puts -0.0 first, so zero's bucket goes there
+        int zero = min <= 0.0 && max >= 0.0 ? Math.min(last, (int) ((0.0 - min) * scale)) : -1;
+        for (int b = 0; b < buckets; b++) {
+            int lo = start[b];
+            int hi = start[b + 1];
+            if (hi - lo > INSERTION_LIMIT || b == zero) {
+                Arrays.sort(sorted, lo, hi);
+            } else {
+                for (int i = lo + 1; i < hi; i++) {
+                    double x = sorted[i];
+                    int j = i - 1;
+                    while (j >= lo && sorted[j] > x) {
+                        sorted[j + 1] = sorted[j];
+                        j--;
+                    }
+                    sorted[j + 1] = x;
+                }
+            }
+        }
+        System.arraycopy(sorted, 0, v, from, n);
     }
 
     /** Step 3 of the class description. */
@@ -166,11 +250,7 @@ final class OrderStatistics {
         double lo = lowT;
         double scale = BINS / (highT - lowT);
         int last = BINS - 1;
-        int[] count = new int[BINS];
-        for (int t = from; t < to; t++) {
-            int b = (int) ((v[t] - lo) * scale);
-            count[b > last ? last : b]++;
-        }
+        int[] count = middleCount;
         // the bin of each wanted rank, and where each needed bin's values go in the gathered array
         int[] binOf = new int[wanted.length];
         int[] before = new int[BINS + 1];

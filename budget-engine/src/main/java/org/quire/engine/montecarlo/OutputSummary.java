@@ -52,15 +52,20 @@ public final class OutputSummary {
      *
      * @param values the output's value in every trial
      * @param trials the number of trials, {@code values[0..trials-1]}
-     * @param moments the moments combined in block order, which give the estimate and standard uncertainty
+     * @param moments the moments of these values combined in block order, which give the estimate, the standard
+     *     uncertainty and the number of finite values
      * @param p the coverage probability
      */
     static OutputSummary summarize(int index, double[] values, int trials, Moments moments, double p) {
         int m = 0;
-        for (int t = 0; t < trials; t++) {
-            double v = values[t];
-            if (Double.isFinite(v)) {
-                values[m++] = v;
+        if (moments.count[index] == trials) {
+            m = trials; // the moments counted every value as finite: nothing to move
+        } else {
+            for (int t = 0; t < trials; t++) {
+                double v = values[t];
+                if (Double.isFinite(v)) {
+                    values[m++] = v;
+                }
             }
         }
         if (m == 0) {

@@ -31,6 +31,34 @@ class BlockStreamTest {
     }
 
     @Test
+    void bulkDrawsGiveTheValuesOfDrawingOneByOne() {
+        // the column methods keep the generator's state in locals; they must give exactly the sequence of the
+        // single-value methods (Blackman and Vigna's generator as above), trial by trial and pair by pair
+        int n = 1001;
+        BlockStream single = MonteCarlo.blockStream(99, 3);
+        BlockStream bulk = MonteCarlo.blockStream(99, 3);
+        double[] first = new double[n + 2];
+        double[] second = new double[n + 2];
+        bulk.uniformPairs(first, second, 2, n);
+        for (int t = 2; t < n + 2; t++) {
+            assertEquals(single.nextDouble(), first[t], 0.0, "first of pair " + t);
+            assertEquals(single.nextDouble(), second[t], 0.0, "second of pair " + t);
+        }
+        double[] open = new double[n];
+        bulk.openUniforms(open, 0, n);
+        for (int t = 0; t < n; t++) {
+            assertEquals(single.nextOpenDouble(), open[t], 0.0, "open uniform " + t);
+            assertTrue(open[t] > 0.0 && open[t] < 1.0);
+        }
+        double[] scaled = new double[n];
+        bulk.uniforms(scaled, 0, n, -2.5, 0.75);
+        for (int t = 0; t < n; t++) {
+            assertEquals(-2.5 + 0.75 * single.nextDouble(), scaled[t], 0.0, "rectangular " + t);
+        }
+        assertEquals(single.nextLong(), bulk.nextLong(), "the streams end in the same state");
+    }
+
+    @Test
     void normalsHaveTheMomentsAndTailsOfTheStandardNormal() {
         int n = 4_000_000;
         double[] z = new double[n];

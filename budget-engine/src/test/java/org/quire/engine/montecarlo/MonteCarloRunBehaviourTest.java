@@ -51,6 +51,33 @@ class MonteCarloRunBehaviourTest {
     }
 
     @Test
+    void runsThatReuseSpareArraysGiveTheSameResultsAsTheFirst() {
+        // the value arrays of one run are taken by the next run of the same size (SpareArrays): a run after runs
+        // of other seeds, kept values or not, fixed or adaptive, must equal the first run of its seed bit for bit
+        MonteCarloSettings s = MonteCarloSettings.defaults().withTrials(50_001).withSeed(777L);
+        MonteCarloResult first = run(s.withKeepValues(true));
+        for (int r = 0; r < 3; r++) {
+            run(s.withSeed(r));
+            run(s.withSeed(r).withKeepValues(true));
+        }
+        MonteCarloResult kept = run(s.withKeepValues(true));
+        MonteCarloResult notKept = run(s);
+        assertArrayEquals(first.values(0), kept.values(0));
+        for (MonteCarloResult other : List.of(kept, notKept)) {
+            assertEquals(first.output(0).toString(), other.output(0).toString());
+            assertEquals(first.output(0).histogram(), other.output(0).histogram());
+            assertEquals(first.output(0).percentiles(), other.output(0).percentiles());
+        }
+        MonteCarloSettings adaptive = MonteCarloSettings.defaults().withAdaptive(true).withSeed(778L);
+        MonteCarloResult a = run(adaptive);
+        run(adaptive.withSeed(1));
+        MonteCarloResult b = run(adaptive);
+        assertEquals(a.trials(), b.trials());
+        assertEquals(a.output(0).toString(), b.output(0).toString());
+        assertEquals(a.output(0).percentiles(), b.output(0).percentiles());
+    }
+
+    @Test
     void differentSeedsGiveDifferentValues() {
         MonteCarloSettings s = MonteCarloSettings.defaults().withTrials(10_000).withKeepValues(true);
         MonteCarloResult a = run(s.withSeed(1));

@@ -77,6 +77,36 @@ class OrderStatisticsTest {
     }
 
     @Test
+    void distributionSortEqualsArraysSort() {
+        // the tails' distribution sort against Arrays.sort, bit for bit (-0.0 before 0.0 included), on ranges
+        // of every shape that can reach it: light and heavy tails, many ties, signed zeros, extreme spreads
+        Random rng = new Random(1616);
+        int[] sizes = {OrderStatistics.SMALL_SORT - 1, OrderStatistics.SMALL_SORT, 10_007, 250_000};
+        for (int m : sizes) {
+            double[][] shapes = {
+                draw(m, i -> rng.nextGaussian()),
+                draw(m, i -> Math.tan(Math.PI * (rng.nextDouble() - 0.5))),
+                draw(m, i -> -Math.log(rng.nextDouble())),
+                draw(m, i -> Math.rint(3 * rng.nextGaussian())),
+                draw(m, i -> rng.nextBoolean() ? 0.0 : -0.0),
+                draw(m, i -> rng.nextInt(5) == 0 ? (rng.nextBoolean() ? 0.0 : -0.0) : rng.nextGaussian() * 1e-300),
+                draw(m, i -> (rng.nextBoolean() ? -1 : 1) * Double.MAX_VALUE * rng.nextDouble()),
+                draw(m, i -> 1000.0 + Math.ulp(1000.0) * rng.nextInt(7)),
+                draw(m, i -> i == 0 ? 1e300 : rng.nextGaussian()),
+                draw(m, i -> m - i),
+            };
+            for (double[] v : shapes) {
+                double[] reference = v.clone();
+                Arrays.sort(reference);
+                double[] a = new double[m + 6];
+                System.arraycopy(v, 0, a, 3, m);
+                OrderStatistics.sort(a, 3, 3 + m);
+                assertArrayEquals(reference, Arrays.copyOfRange(a, 3, 3 + m), "sorted " + m + " values");
+            }
+        }
+    }
+
+    @Test
     void allEqualValuesAndOrderedInput() {
         Random rng = new Random(7);
         int m = 200_000;
