@@ -269,6 +269,13 @@ public final class BudgetDocument {
     public List<RevisionEntry> history() { return history; }
     /** @return the template this document was made from, or null */
     public TemplateOrigin templateOrigin() { return templateOrigin; }
+    /**
+     * @return the template whose locks cover the budget's settings (coverage, digits, Monte Carlo trials, seed and
+     *     adaptive mode), or null when none does
+     */
+    public TemplateOrigin settingsLockedBy() {
+        return templateOrigin != null && templateOrigin.locksPart("settings") ? templateOrigin : null;
+    }
     /** @return the template section when this document is a template, or null */
     public TemplateSpec template() { return template; }
     /** @return the format version the document was read from when it was migrated (1), else 0 */

@@ -178,10 +178,9 @@ public final class MonteCarloSection implements Section {
         updateButtons();
     }
 
-    /** @return the template that locks the budget's settings (trials, seed and adaptive mode among them), or null */
+    /** @return the template that locks the budget's settings, or null: the engine's rule */
     private org.quire.engine.document.TemplateOrigin lockedBy() {
-        org.quire.engine.document.TemplateOrigin o = ctx.document().content().templateOrigin();
-        return o != null && o.locksPart("settings") ? o : null;
+        return ctx.document().content().settingsLockedBy();
     }
 
     @Override

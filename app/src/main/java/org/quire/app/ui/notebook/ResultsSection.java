@@ -208,10 +208,9 @@ final class ResultsSection implements Section {
         outputs.repaint();
     }
 
-    /** @return the template that locks the budget's settings (the method's), or null when none does */
+    /** @return the template that locks the budget's settings, or null: the engine's rule */
     private org.quire.engine.document.TemplateOrigin lockedBy() {
-        org.quire.engine.document.TemplateOrigin o = ctx.document().content().templateOrigin();
-        return o != null && o.locksPart("settings") ? o : null;
+        return ctx.document().content().settingsLockedBy();
     }
 
     @Override
