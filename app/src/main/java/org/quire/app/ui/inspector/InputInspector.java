@@ -329,7 +329,7 @@ final class InputInspector extends JPanel {
         updating = true;
         try {
             heading.setText("Input " + q.name());
-            plot.show(q.evaluation().distribution());
+            plot.show(q.evaluation().distribution(), q.name(), q.unit());
             basis.setText(q.evaluation().basis());
             for (Map.Entry<String, JTextField> e : texts.entrySet()) {
                 if (!pendingFields.contains(e.getKey())) {
