@@ -65,17 +65,31 @@ public final class ChartLayout {
      * @return the shapes of a chart, in points from the top left
      */
     public static Layout of(Chart c, float width) {
+        return of(c, width, PLOT_HEIGHT);
+    }
+
+    /** The height of the data area of a plot or histogram in the reports, in points. */
+    public static final float PLOT_HEIGHT = 160f;
+
+    /**
+     * @param width the width to fill, in points; at least {@link #MIN_WIDTH} is used
+     * @param plotHeight the height of the data area of a plot or histogram, in points (at least 40); bars and
+     *     rankings take a row per bar
+     * @return the shapes of a chart, in points from the top left
+     */
+    public static Layout of(Chart c, float width, float plotHeight) {
         float w = Math.max(MIN_WIDTH, width);
+        float h = Math.max(40f, plotHeight);
         if (c instanceof Chart.Bars) {
             return bars((Chart.Bars) c, w);
         }
         if (c instanceof Chart.Plot) {
-            return plot((Chart.Plot) c, w);
+            return plot((Chart.Plot) c, w, h);
         }
         if (c instanceof Chart.Ranking) {
             return ranking((Chart.Ranking) c, w);
         }
-        return histogram((Chart.Histogram) c, w);
+        return histogram((Chart.Histogram) c, w, h);
     }
 
     /** @return a rough width of {@code t} in points at {@code size}, for laying out label columns */
@@ -265,13 +279,13 @@ public final class ChartLayout {
     /** The title of a histogram's vertical axis. */
     static final String HISTOGRAM_COUNT = "trials per bin";
 
-    private static Layout histogram(Chart.Histogram c, float width) {
+    private static Layout histogram(Chart.Histogram c, float width, float plotHeight) {
         List<Shape> s = new ArrayList<>();
         double[] e = c.edges();
         long[] n = c.counts();
         float right = width - 14f;
         float top = 24f;
-        float bottom = 180f;
+        float bottom = top + plotHeight;
         double max = 1;
         for (long k : n) {
             max = Math.max(max, k);
@@ -367,12 +381,12 @@ public final class ChartLayout {
         return new Layout(width, end + 7f, s);
     }
 
-    private static Layout plot(Chart.Plot c, float width) {
+    private static Layout plot(Chart.Plot c, float width, float plotHeight) {
         List<Shape> s = new ArrayList<>();
         float left = 48f;
         float right = width - 14f;
         float top = 20f;
-        float bottom = 180f;
+        float bottom = top + plotHeight;
         boolean log = c.logX();
         double xlo = Double.POSITIVE_INFINITY;
         double xhi = Double.NEGATIVE_INFINITY;

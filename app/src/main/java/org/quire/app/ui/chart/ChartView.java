@@ -29,6 +29,7 @@ public class ChartView extends JComponent {
     private Chart chart;
     private ChartLayout.Layout layout;
     private String caption = "";
+    private float plotHeight = ChartLayout.PLOT_HEIGHT;
 
     public ChartView() {
         setOpaque(true);
@@ -40,6 +41,14 @@ public class ChartView extends JComponent {
         layout = null;
         caption = c == null ? "" : c.caption();
         setToolTipText(caption.isEmpty() ? null : caption);
+        revalidate();
+        repaint();
+    }
+
+    /** Sets the height of a plot's or histogram's data area, in points of the layout (the reports use 160). */
+    public void setPlotHeight(float points) {
+        plotHeight = points;
+        layout = null;
         revalidate();
         repaint();
     }
@@ -65,7 +74,7 @@ public class ChartView extends JComponent {
         }
         float width = (getWidth() > 0 ? getWidth() : preferredWidth()) / scale();
         if (layout == null || Math.abs(layout.width() - Math.max(ChartLayout.MIN_WIDTH, width)) > 0.5f) {
-            layout = ChartLayout.of(chart, width);
+            layout = ChartLayout.of(chart, width, plotHeight);
         }
         return layout;
     }
@@ -98,6 +107,13 @@ public class ChartView extends JComponent {
         float sc = scale();
         int w = getWidth() > 0 ? getWidth() : preferredWidth();
         return new Dimension(w, Math.round(l.height() * sc) + 1);
+    }
+
+    /** As wide as there is room for, never taller than the chart. */
+    @Override
+    public Dimension getMaximumSize() {
+        return isMaximumSizeSet() ? super.getMaximumSize()
+                : new Dimension(Integer.MAX_VALUE, getPreferredSize().height);
     }
 
     @Override

@@ -19,6 +19,7 @@ final class DistributionPlot extends ChartView {
 
     DistributionPlot() {
         setName("distributionPlot");
+        setPlotHeight(60f); // a sketch beside the parameters: the parameters come first
     }
 
     /** Shows the distribution of input {@code name} in {@code unit} (may be empty); null shows nothing. */

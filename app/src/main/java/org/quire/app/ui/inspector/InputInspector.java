@@ -112,8 +112,8 @@ final class InputInspector extends JPanel {
         problem.setName("inspectorProblem");
         lock.setName("inspectorLock");
         lock.setVisible(false);
-        for (javax.swing.JComponent j : new javax.swing.JComponent[] {heading, lock, plot, basis, fields, problem,
-            evaluation}) {
+        for (javax.swing.JComponent j : new javax.swing.JComponent[] {heading, lock, basis, fields, problem,
+            evaluation, plot}) {
             j.setAlignmentX(LEFT_ALIGNMENT);
             add(j);
         }
