@@ -351,7 +351,7 @@ public final class ChartLayout {
         s.add(new Line(left, bottom, right, bottom, AXIS, 0.8f, false));
         s.add(new Line(left, top, left, bottom, AXIS, 0.8f, false));
         s.add(new Label(4f, top - 10f, MathText.upright(HISTOGRAM_COUNT), FONT + 0.5f, Anchor.START, AXIS));
-        double[] ticks = ticks(lo, hi, Math.max(3, Math.round((right - left) / 70f)));
+        double[] ticks = inside(lo, hi, Math.max(3, Math.round((right - left) / 70f)));
         for (double t : ticks) {
             if (t < lo || t > hi) {
                 continue;
@@ -465,7 +465,7 @@ public final class ChartLayout {
                 }
             }
         } else {
-            for (double t : ticks(xlo, xhi, xTicks)) {
+            for (double t : inside(xlo, xhi, xTicks)) {
                 if (t >= xlo && t <= xhi) {
                     xticks.add(new double[] {t, 1});
                 }
@@ -475,7 +475,7 @@ public final class ChartLayout {
             float x = (float) px.applyAsDouble(t[0]);
             s.add(new Line(x, top, x, bottom, GRID, t[1] == 1 ? 0.5f : 0.3f, false));
             s.add(new Line(x, bottom, x, bottom + 3f, AXIS, 0.8f, false));
-            String text = log ? Figures.compact(t[0], 3) : tick(t[0], ticks(x0, x0 + xs, xTicks));
+            String text = log ? Figures.compact(t[0], 3) : tick(t[0], inside(x0, x0 + xs, xTicks));
             s.add(new Label(x, bottom + 12f, MathText.upright(text), FONT, Anchor.MIDDLE, AXIS));
         }
         for (double r : c.yRules()) {
@@ -546,6 +546,27 @@ public final class ChartLayout {
         double[] t = new double[Math.max(2, Math.min(count, 50))];
         for (int i = 0; i < t.length; i++) {
             t[i] = first + i * step;
+        }
+        return t;
+    }
+
+    /**
+     * @return ticks as {@link #ticks}, asking for more until at least three fall inside [lo, hi] (a narrow range
+     *     can otherwise keep a single tick inside), the step decimals fitting those inside
+     */
+    static double[] inside(double lo, double hi, int wanted) {
+        double[] t = ticks(lo, hi, wanted);
+        for (int w = wanted; w < 40; w++) {
+            t = ticks(lo, hi, w);
+            int in = 0;
+            for (double v : t) {
+                if (v >= lo && v <= hi) {
+                    in++;
+                }
+            }
+            if (in >= 3) {
+                break;
+            }
         }
         return t;
     }

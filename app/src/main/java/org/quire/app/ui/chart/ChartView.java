@@ -79,9 +79,25 @@ public class ChartView extends JComponent {
         return layout;
     }
 
-    /** Before the component has a width: the narrowest layout, so that a chart never widens its container. */
+    private float naturalWidth = 0.75f * ChartLayout.WIDTH;
+
+    /** Sets the width the chart asks its container for, in points of the layout (it fills any width given). */
+    public void setNaturalWidth(float points) {
+        naturalWidth = Math.max(ChartLayout.MIN_WIDTH, points);
+        revalidate();
+    }
+
     private int preferredWidth() {
-        return Math.round(ChartLayout.MIN_WIDTH * scale());
+        return Math.round(naturalWidth * scale());
+    }
+
+    /** @return the height in pixels the chart needs when it is {@code widthPx} wide */
+    public int heightFor(int widthPx) {
+        if (chart == null) {
+            return 0;
+        }
+        float sc = scale();
+        return Math.round(ChartLayout.of(chart, widthPx / sc, plotHeight).height() * sc) + 1;
     }
 
     /** A new width can wrap the legend onto more or fewer rows: the container is asked for a new height. */
@@ -103,10 +119,8 @@ public class ChartView extends JComponent {
         if (isPreferredSizeSet() || chart == null) {
             return isPreferredSizeSet() ? super.getPreferredSize() : new Dimension(0, 0);
         }
-        ChartLayout.Layout l = layoutShown();
-        float sc = scale();
-        int w = getWidth() > 0 ? getWidth() : preferredWidth();
-        return new Dimension(w, Math.round(l.height() * sc) + 1);
+        int w = preferredWidth();
+        return new Dimension(w, heightFor(getWidth() > 0 ? getWidth() : w));
     }
 
     /** As wide as there is room for, never taller than the chart. */

@@ -20,6 +20,7 @@ final class DistributionPlot extends ChartView {
     DistributionPlot() {
         setName("distributionPlot");
         setPlotHeight(60f); // a sketch beside the parameters: the parameters come first
+        setNaturalWidth(org.quire.app.report.ChartLayout.MIN_WIDTH); // the inspector's column is narrow
     }
 
     /** Shows the distribution of input {@code name} in {@code unit} (may be empty); null shows nothing. */
@@ -48,7 +49,8 @@ final class DistributionPlot extends ChartView {
             hi = mean + 1;
         }
         String shape = TypeB.DISTRIBUTIONS.contains(d.shape()) ? TypeB.screenName(d.shape()) : d.shape();
-        String u1 = unit == null || unit.isBlank() ? "" : unit.strip().replace(' ', '*');
+        // a dimensionless input ("1") has no unit to show on the axes
+        String u1 = unit == null || unit.isBlank() || unit.strip().equals("1") ? "" : unit.strip().replace(' ', '*');
         String xLabel = name + (u1.isEmpty() ? "" : " (" + u1 + ")");
         String yLabel = "probability density" + (u1.isEmpty() ? "" : " (1/" + u1 + ")");
         List<Chart.Series> series = new ArrayList<>();
