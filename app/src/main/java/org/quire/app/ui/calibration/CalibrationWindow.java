@@ -147,7 +147,10 @@ public final class CalibrationWindow extends JFrame {
         errorCurve.setName("errorCurve");
         residuals.setName("residuals");
         JScrollPane charts = org.quire.app.ui.chart.ChartStack.of(errorCurve, residuals);
-        JSplitPane split = new JSplitPane(JSplitPane.HORIZONTAL_SPLIT, new JScrollPane(table), charts);
+        JScrollPane runs = new JScrollPane(table);
+        // the table scrolls sideways; the charts get about half the width, their text at the UI font size
+        runs.setPreferredSize(new Dimension(600, 300));
+        JSplitPane split = new JSplitPane(JSplitPane.HORIZONTAL_SPLIT, runs, charts);
         split.setResizeWeight(0.55);
         getContentPane().add(north, BorderLayout.NORTH);
         getContentPane().add(split, BorderLayout.CENTER);
