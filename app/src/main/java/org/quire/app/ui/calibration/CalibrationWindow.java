@@ -151,11 +151,12 @@ public final class CalibrationWindow extends JFrame {
         // the table scrolls sideways; the charts get about half the width, their text at the UI font size
         runs.setPreferredSize(new Dimension(600, 300));
         JSplitPane split = new JSplitPane(JSplitPane.HORIZONTAL_SPLIT, runs, charts);
-        split.setResizeWeight(0.55);
+        split.setResizeWeight(0.5);
         getContentPane().add(north, BorderLayout.NORTH);
         getContentPane().add(split, BorderLayout.CENTER);
         setTransferHandler(new FileDropHandler(this::importRuns));
         setSize(new Dimension(1280, 720));
+        split.setDividerLocation(1280 / 2);
         evaluate(calibration);
     }
 
