@@ -48,6 +48,8 @@ public sealed interface Chart permits Chart.Bars, Chart.Histogram, Chart.Plot, C
     enum Style {
         /** Points joined by straight lines. */
         LINE_POINTS,
+        /** A solid line without points (a density curve). */
+        LINE,
         /** Points only, with error bars when given. */
         POINTS,
         /** A dashed line without points (limits, envelopes). */

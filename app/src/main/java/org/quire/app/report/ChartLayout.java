@@ -12,16 +12,28 @@ import org.quire.engine.gum.Figures;
  * <p>References: axis ticks by P. S. Heckbert, "Nice numbers for graph labels", in Graphics Gems (1990),
  * pp. 61-63: a step of 1, 2 or 5 times a power of ten.
  *
+ * <p>Every chart has its axes with ticks and tick labels, a title on each axis and a legend naming every
+ * series, bar and mark. The colours are the report's (on white paper); the workbench draws the same shapes and
+ * replaces each of these colour constants by its theme colour ({@code Quire.chart.*}).
+ *
  * <p>Stateless and thread-safe.
  */
 public final class ChartLayout {
+    /** The width of a chart in the reports, in points. */
     public static final float WIDTH = 480f;
-    static final float FONT = 7.5f;
+    /** The narrowest a chart is laid out, in points. */
+    public static final float MIN_WIDTH = 170f;
+    /** The smallest text of a chart (tick labels, legend), in points; titles and names are a little larger. */
+    public static final float FONT = 7.5f;
     public static final int BAR = 0x2f5d8a;
     public static final int GRID = 0xd5dae1;
     public static final int AXIS = 0x5a6472;
     public static final int MARK = 0xb3261e;
     public static final int TEXT = 0x1d2430;
+    /** The colour of {@link Chart.Tone#THIRD}. */
+    public static final int THIRD = 0x2e7d32;
+    /** The colour of {@link Chart.Tone#FOURTH}. */
+    public static final int FOURTH = 0xb36b00;
 
     public enum Anchor { START, MIDDLE, END }
 
@@ -43,18 +55,41 @@ public final class ChartLayout {
     private ChartLayout() {
     }
 
-    /** @return the shapes of a chart, in points from the top left */
+    /** @return the shapes of a chart {@link #WIDTH} wide, in points from the top left */
     public static Layout of(Chart c) {
+        return of(c, WIDTH);
+    }
+
+    /**
+     * @param width the width to fill, in points; at least {@link #MIN_WIDTH} is used
+     * @return the shapes of a chart, in points from the top left
+     */
+    public static Layout of(Chart c, float width) {
+        return of(c, width, PLOT_HEIGHT);
+    }
+
+    /** The height of the data area of a plot or histogram in the reports, in points. */
+    public static final float PLOT_HEIGHT = 160f;
+
+    /**
+     * @param width the width to fill, in points; at least {@link #MIN_WIDTH} is used
+     * @param plotHeight the height of the data area of a plot or histogram, in points (at least 40); bars and
+     *     rankings take a row per bar
+     * @return the shapes of a chart, in points from the top left
+     */
+    public static Layout of(Chart c, float width, float plotHeight) {
+        float w = Math.max(MIN_WIDTH, width);
+        float h = Math.max(40f, plotHeight);
         if (c instanceof Chart.Bars) {
-            return bars((Chart.Bars) c);
+            return bars((Chart.Bars) c, w);
         }
         if (c instanceof Chart.Plot) {
-            return plot((Chart.Plot) c);
+            return plot((Chart.Plot) c, w, h);
         }
         if (c instanceof Chart.Ranking) {
-            return ranking((Chart.Ranking) c);
+            return ranking((Chart.Ranking) c, w);
         }
-        return histogram((Chart.Histogram) c);
+        return histogram((Chart.Histogram) c, w, h);
     }
 
     /** @return a rough width of {@code t} in points at {@code size}, for laying out label columns */
@@ -67,7 +102,7 @@ public final class ChartLayout {
         return w;
     }
 
-    private static Layout bars(Chart.Bars c) {
+    private static Layout bars(Chart.Bars c, float width) {
         List<Shape> s = new ArrayList<>();
         float row = 15f;
         float top = 6f;
@@ -77,7 +112,7 @@ public final class ChartLayout {
         }
         labelWidth = Math.min(labelWidth, 150f);
         float x0 = labelWidth;
-        float x1 = WIDTH - 40f;
+        float x1 = width - 40f;
         double max = 0;
         for (double v : c.values()) {
             max = Math.max(max, v);
@@ -88,7 +123,8 @@ public final class ChartLayout {
         for (double t : ticks) {
             float x = (float) (x0 + (x1 - x0) * t / top0);
             s.add(new Line(x, top - 2, x, plotBottom, GRID, 0.5f, false));
-            s.add(new Label(x, plotBottom + 10f, MathText.upright(tick(t, ticks)), FONT, Anchor.MIDDLE, AXIS));
+            s.add(new Line(x, plotBottom, x, plotBottom + 3f, AXIS, 0.8f, false));
+            s.add(new Label(x, plotBottom + 11f, MathText.upright(tick(t, ticks)), FONT, Anchor.MIDDLE, AXIS));
         }
         for (int i = 0; i < c.labels().size(); i++) {
             float y = top + row * i;
@@ -99,15 +135,17 @@ public final class ChartLayout {
             s.add(new Label(x0 + w + 3f, y + row - 4.5f, MathText.upright(Figures.sig(v, 3)), FONT, Anchor.START, TEXT));
         }
         s.add(new Line(x0, top - 2, x0, plotBottom, AXIS, 0.8f, false));
-        s.add(new Label((x0 + x1) / 2, plotBottom + 22f, Typesetter.labelWithUnit(c.axisLabel()), FONT + 0.5f, Anchor.MIDDLE, AXIS));
-        return new Layout(WIDTH, plotBottom + 28f, s);
+        s.add(new Line(x0, plotBottom, x1, plotBottom, AXIS, 0.8f, false));
+        s.add(new Label((x0 + x1) / 2, plotBottom + 24f, Typesetter.labelWithUnit(c.axisLabel()), FONT + 0.5f, Anchor.MIDDLE, AXIS));
+        float end = legend(s, List.of(new Entry(c.axisLabel(), BAR, false, true)), x0, x1, plotBottom + 38f);
+        return new Layout(width, end + 7f, s);
     }
 
     /**
      * Bars of u_i(y) against the lower axis, the cumulative share of u_c^2(y) as a line with points against the
      * upper axis (0 to 100 %), the inputs' names on the left, both axis titles and a legend.
      */
-    private static Layout ranking(Chart.Ranking c) {
+    private static Layout ranking(Chart.Ranking c, float width) {
         List<Shape> s = new ArrayList<>();
         float row = 15f;
         float top = 30f;
@@ -116,7 +154,7 @@ public final class ChartLayout {
             labelWidth = Math.max(labelWidth, estimateWidth(l, FONT + 1) + 10f);
         }
         float x0 = Math.min(labelWidth, 150f);
-        float x1 = WIDTH - 20f;
+        float x1 = width - 20f;
         double max = 0;
         for (double v : c.contributions()) {
             max = Math.max(max, v);
@@ -165,14 +203,14 @@ public final class ChartLayout {
                 Anchor.MIDDLE, AXIS));
         float endY = legend(s, List.of(new Entry("contribution u_i(y)", BAR, false, true),
                 new Entry("cumulative share of u_c^2(y)", MARK, false, false)), x0, x1, bottom + 38f);
-        return new Layout(WIDTH, endY + 7f, s);
+        return new Layout(width, endY + 7f, s);
     }
 
     static int rgb(Chart.Tone t) {
         switch (t) {
             case SECOND: return MARK;
-            case THIRD: return 0x2e7d32;
-            case FOURTH: return 0xc77700;
+            case THIRD: return THIRD;
+            case FOURTH: return FOURTH;
             default: return BAR;
         }
     }
@@ -181,14 +219,20 @@ public final class ChartLayout {
     private record Entry(String text, int rgb, boolean dashed, boolean square) {
     }
 
-    /** Lays legend entries out in rows from {@code y}, left to right; returns the y below the last row. */
+    /**
+     * Lays legend entries out in rows from {@code y}, left to right; an entry wider than the chart is broken at
+     * its spaces onto lines of its own. @return the y below the last row
+     */
     private static float legend(List<Shape> s, List<Entry> entries, float left, float right, float y) {
         float x = left;
         float row = y;
         for (Entry e : entries) {
-            MathText text = Typesetter.labelWithUnit(e.text());
-            float w = 18f + estimateWidth(text, FONT) + 12f;
-            if (x > left && x + w > right) {
+            List<MathText> lines = wrap(e.text(), right - left - 30f);
+            float w = 18f;
+            for (MathText l : lines) {
+                w = Math.max(w, 18f + estimateWidth(l, FONT) + 12f);
+            }
+            if (x > left && (x + w > right || lines.size() > 1)) {
                 x = left;
                 row += 11f;
             }
@@ -197,20 +241,51 @@ public final class ChartLayout {
             } else {
                 s.add(new Line(x, row - 2.5f, x + 14f, row - 2.5f, e.rgb(), 1.2f, e.dashed()));
             }
-            s.add(new Label(x + 18f, row, text, FONT, Anchor.START, TEXT));
-            x += w;
+            for (int i = 0; i < lines.size(); i++) {
+                s.add(new Label(x + 18f, row + 10f * i, lines.get(i), FONT, Anchor.START, TEXT));
+            }
+            row += 10f * (lines.size() - 1);
+            if (lines.size() > 1) {
+                x = right; // the next entry starts a row of its own
+            } else {
+                x += w;
+            }
         }
         return entries.isEmpty() ? y - 11f : row;
     }
 
-    private static Layout histogram(Chart.Histogram c) {
+    /** @return label markup broken at spaces into lines no wider than {@code width} points (estimated) */
+    static List<MathText> wrap(String markup, float width) {
+        List<MathText> out = new ArrayList<>();
+        StringBuilder line = new StringBuilder();
+        java.util.regex.Matcher words = java.util.regex.Pattern.compile("[^\\s(]*\\([^)]*\\)\\S*|\\S+")
+                .matcher(markup);
+        while (words.find()) {
+            String word = words.group();
+            String next = line.length() == 0 ? word : line + " " + word;
+            if (line.length() > 0 && estimateWidth(Typesetter.labelWithUnit(next), FONT) > width) {
+                out.add(Typesetter.labelWithUnit(line.toString()));
+                line.setLength(0);
+                line.append(word);
+            } else {
+                line.setLength(0);
+                line.append(next);
+            }
+        }
+        out.add(Typesetter.labelWithUnit(line.toString()));
+        return out;
+    }
+
+    /** The title of a histogram's vertical axis. */
+    static final String HISTOGRAM_COUNT = "trials per bin";
+
+    private static Layout histogram(Chart.Histogram c, float width, float plotHeight) {
         List<Shape> s = new ArrayList<>();
         double[] e = c.edges();
         long[] n = c.counts();
-        float left = 14f;
-        float right = WIDTH - 14f;
-        float top = 14f;
-        float bottom = 170f;
+        float right = width - 14f;
+        float top = 24f;
+        float bottom = top + plotHeight;
         double max = 1;
         for (long k : n) {
             max = Math.max(max, k);
@@ -233,9 +308,22 @@ public final class ChartLayout {
             lo -= pad;
             hi += pad;
         }
+        double[] yt = ticks(0, max, 5);
+        max = yt[yt.length - 1];
+        float left = 14f;
+        for (double t : yt) {
+            left = Math.max(left, estimateWidth(MathText.upright(tick(t, yt)), FONT) + 10f);
+        }
+        final float x0 = left;
         final double l0 = lo;
         final double span = hi - lo;
-        java.util.function.DoubleUnaryOperator px = v -> left + (right - left) * (v - l0) / span;
+        java.util.function.DoubleUnaryOperator px = v -> x0 + (right - x0) * (v - l0) / span;
+        for (double t : yt) {
+            float y = (float) (bottom - (bottom - top) * t / max);
+            s.add(new Line(left, y, right, y, GRID, 0.5f, false));
+            s.add(new Line(left - 3f, y, left, y, AXIS, 0.8f, false));
+            s.add(new Label(left - 5f, y + 2.5f, MathText.upright(tick(t, yt)), FONT, Anchor.END, AXIS));
+        }
         for (int i = 0; i < n.length; i++) {
             float xa = (float) px.applyAsDouble(e[i]);
             float xb = (float) px.applyAsDouble(e[i + 1]);
@@ -246,6 +334,7 @@ public final class ChartLayout {
             }
         }
         List<Entry> legend = new ArrayList<>();
+        legend.add(new Entry(HISTOGRAM_COUNT, BAR, false, true));
         if (cx != null && cx.length > 1) {
             int rgb = rgb(Chart.Tone.THIRD);
             for (int i = 1; i < cx.length; i++) {
@@ -260,7 +349,9 @@ public final class ChartLayout {
             }
         }
         s.add(new Line(left, bottom, right, bottom, AXIS, 0.8f, false));
-        double[] ticks = ticks(lo, hi, 6);
+        s.add(new Line(left, top, left, bottom, AXIS, 0.8f, false));
+        s.add(new Label(4f, top - 10f, MathText.upright(HISTOGRAM_COUNT), FONT + 0.5f, Anchor.START, AXIS));
+        double[] ticks = inside(lo, hi, Math.max(3, Math.round((right - left) / 70f)));
         for (double t : ticks) {
             if (t < lo || t > hi) {
                 continue;
@@ -274,28 +365,28 @@ public final class ChartLayout {
             s.add(new Line(x, top - 6f, x, bottom, MARK, 1f, true));
         }
         if (!c.markerLegend().isEmpty() && c.markers().length > 0) {
-            legend.add(0, new Entry(c.markerLegend(), MARK, true, false));
+            legend.add(1, new Entry(c.markerLegend(), MARK, true, false));
         }
         int k = 0;
         for (Chart.Interval iv : c.intervals()) {
             int rgb = rgb(iv.tone());
             // intervals drawn later start a little lower, so that coinciding ends stay visible
-            float y0 = top - 6f + 7f * k++;
+            float y0 = top - 4f + 7f * k++;
             s.add(new Line((float) px.applyAsDouble(iv.low()), y0, (float) px.applyAsDouble(iv.low()), bottom, rgb, 1f, true));
             s.add(new Line((float) px.applyAsDouble(iv.high()), y0, (float) px.applyAsDouble(iv.high()), bottom, rgb, 1f, true));
             legend.add(new Entry(iv.legend(), rgb, true, false));
         }
         s.add(new Label((left + right) / 2, bottom + 25f, Typesetter.labelWithUnit(c.axisLabel()), FONT + 0.5f, Anchor.MIDDLE, AXIS));
         float end = legend(s, legend, left, right, bottom + 39f);
-        return new Layout(WIDTH, end + 7f, s);
+        return new Layout(width, end + 7f, s);
     }
 
-    private static Layout plot(Chart.Plot c) {
+    private static Layout plot(Chart.Plot c, float width, float plotHeight) {
         List<Shape> s = new ArrayList<>();
         float left = 48f;
-        float right = WIDTH - 14f;
+        float right = width - 14f;
         float top = 20f;
-        float bottom = 180f;
+        float bottom = top + plotHeight;
         boolean log = c.logX();
         double xlo = Double.POSITIVE_INFINITY;
         double xhi = Double.NEGATIVE_INFINITY;
@@ -355,9 +446,11 @@ public final class ChartLayout {
         for (double t : yt) {
             float y = (float) py.applyAsDouble(t);
             s.add(new Line(left, y, right, y, GRID, 0.5f, false));
-            s.add(new Label(left - 4f, y + 2.5f, MathText.upright(tick(t, yt)), FONT, Anchor.END, AXIS));
+            s.add(new Line(left - 3f, y, left, y, AXIS, 0.8f, false));
+            s.add(new Label(left - 5f, y + 2.5f, MathText.upright(tick(t, yt)), FONT, Anchor.END, AXIS));
         }
         List<double[]> xticks = new ArrayList<>();
+        int xTicks = Math.max(3, Math.round((right - left) / 60f));
         if (log) {
             int d0 = (int) Math.floor(xlo);
             int d1 = (int) Math.ceil(xhi);
@@ -372,7 +465,7 @@ public final class ChartLayout {
                 }
             }
         } else {
-            for (double t : ticks(xlo, xhi, 7)) {
+            for (double t : inside(xlo, xhi, xTicks)) {
                 if (t >= xlo && t <= xhi) {
                     xticks.add(new double[] {t, 1});
                 }
@@ -381,7 +474,8 @@ public final class ChartLayout {
         for (double[] t : xticks) {
             float x = (float) px.applyAsDouble(t[0]);
             s.add(new Line(x, top, x, bottom, GRID, t[1] == 1 ? 0.5f : 0.3f, false));
-            String text = log ? Figures.compact(t[0], 3) : tick(t[0], ticks(x0, x0 + xs, 7));
+            s.add(new Line(x, bottom, x, bottom + 3f, AXIS, 0.8f, false));
+            String text = log ? Figures.compact(t[0], 3) : tick(t[0], inside(x0, x0 + xs, xTicks));
             s.add(new Label(x, bottom + 12f, MathText.upright(text), FONT, Anchor.MIDDLE, AXIS));
         }
         for (double r : c.yRules()) {
@@ -409,7 +503,7 @@ public final class ChartLayout {
                             se.style() == Chart.Style.DASHED ? 1f : 1.2f, se.style() == Chart.Style.DASHED));
                 }
             }
-            if (se.style() != Chart.Style.DASHED) {
+            if (se.style() == Chart.Style.POINTS || se.style() == Chart.Style.LINE_POINTS) {
                 for (int i = 0; i < x.length; i++) {
                     if (!drawable(px, py, x[i], y[i])) {
                         continue;
@@ -432,7 +526,7 @@ public final class ChartLayout {
         s.add(new Label(left - 40f, top - 8f, Typesetter.labelWithUnit(c.yLabel()), FONT + 0.5f, Anchor.START, AXIS));
         s.add(new Label((left + right) / 2, bottom + 25f, Typesetter.labelWithUnit(c.xLabel()), FONT + 0.5f, Anchor.MIDDLE, AXIS));
         float end = legend(s, legend, left, right, bottom + 39f);
-        return new Layout(WIDTH, end + 7f, s);
+        return new Layout(width, end + 7f, s);
     }
 
     private static boolean drawable(java.util.function.DoubleUnaryOperator px, java.util.function.DoubleUnaryOperator py,
@@ -452,6 +546,27 @@ public final class ChartLayout {
         double[] t = new double[Math.max(2, Math.min(count, 50))];
         for (int i = 0; i < t.length; i++) {
             t[i] = first + i * step;
+        }
+        return t;
+    }
+
+    /**
+     * @return ticks as {@link #ticks}, asking for more until at least three fall inside [lo, hi] (a narrow range
+     *     can otherwise keep a single tick inside), the step decimals fitting those inside
+     */
+    static double[] inside(double lo, double hi, int wanted) {
+        double[] t = ticks(lo, hi, wanted);
+        for (int w = wanted; w < 40; w++) {
+            t = ticks(lo, hi, w);
+            int in = 0;
+            for (double v : t) {
+                if (v >= lo && v <= hi) {
+                    in++;
+                }
+            }
+            if (in >= 3) {
+                break;
+            }
         }
         return t;
     }

@@ -69,6 +69,9 @@ public final class WorkbenchFrame extends JFrame {
     private final WorkbenchActions actions;
     private final WorkbenchRecovery recovery;
     private final WorkbenchFiles files;
+    private final WorkbenchReportExport reports = new WorkbenchReportExport(this);
+    private final WorkbenchCompare compare = new WorkbenchCompare(this);
+    private CompletableFuture<Void> recoveryClosed;
     private final WorkbenchTemplates templates;
     private BiConsumer<String, Boolean> statusHook = (m, e) -> { };
 
@@ -301,6 +304,14 @@ public final class WorkbenchFrame extends JFrame {
         recovery.applyPeriod();
     }
 
+    /**
+     * @return done once the recovery copies of a disposed window are written and its folder released (off the
+     *     event thread), or null while the window is open; for tests
+     */
+    public CompletableFuture<Void> recoveryClosed() {
+        return recoveryClosed;
+    }
+
     /** Offers the recovery copies left by workbenches that are no longer running. */
     public void offerRecovery() {
         recovery.offer();
@@ -373,7 +384,9 @@ public final class WorkbenchFrame extends JFrame {
     /** Closes the window; copies of changed budgets still open are written to the recovery folder first. */
     @Override
     public void dispose() {
-        recovery.close();
+        if (recoveryClosed == null) {
+            recoveryClosed = recovery.close();
+        }
         files.cancelAll();
         super.dispose();
     }
@@ -445,50 +458,17 @@ public final class WorkbenchFrame extends JFrame {
 
     /** Budget &gt; Export report: asks for a .pdf or .html file and writes the report off the event thread. */
     void exportReport(BudgetEditor ed) {
-        Path target = FileChooser.reportTarget(this, ed.document().name());
-        if (target != null) {
-            exportReport(ed, target);
-        }
+        reports.exportReport(ed);
     }
 
     /** Writes the report of the editor's budget to {@code target} off the event thread. */
     public void exportReport(BudgetEditor ed, Path target) {
-        org.quire.engine.document.BudgetDocument content = ed.document().content();
-        if (ed.latest() == null || !ed.latest().budget().equals(content.budget()) || ed.latest().result() == null) {
-            showError("No report", "The budget has no current GUM result (see the problems list); a report needs "
-                    + "one.");
-            return;
-        }
-        GumResult gum = ed.latest().result();
-        org.quire.engine.montecarlo.MonteCarloOutcome mc = ed.monteCarloOutcome(content.budget());
-        status("Writing the report to " + target + "\u2026", false);
-        new SwingWorker<Void, Void>() {
-            @Override
-            protected Void doInBackground() throws Exception {
-                ReportExport.write(content, gum, mc, target, LocalDate.now(), library);
-                return null;
-            }
-
-            @Override
-            protected void done() {
-                try {
-                    get();
-                    status("Report written to " + target, false);
-                } catch (InterruptedException e) {
-                    Thread.currentThread().interrupt();
-                } catch (ExecutionException e) {
-                    showError("The report was not written", target + ":\n" + e.getCause().getMessage());
-                }
-            }
-        }.execute();
+        reports.exportReport(ed, target);
     }
 
     /** Budget &gt; Compare with: asks for a second budget file and shows both side by side. */
     void compareWith(BudgetEditor ed) {
-        Path other = FileChooser.openTarget(this, "Compare " + ed.document().name() + " with");
-        if (other != null) {
-            compareWith(ed, other);
-        }
+        compare.compareWith(ed);
     }
 
     /**
@@ -496,30 +476,7 @@ public final class WorkbenchFrame extends JFrame {
      * event thread, and shows the two side by side.
      */
     public void compareWith(BudgetEditor ed, Path other) {
-        Budget b = ed.document().budget();
-        String nameB = ed.document().name() + " (open)";
-        status("Comparing with " + other + "\u2026", false);
-        new SwingWorker<Comparison, Void>() {
-            @Override
-            protected Comparison doInBackground() throws Exception {
-                Budget a = DocumentStore.open(other).budget();
-                return BudgetComparison.compare(a, b, library);
-            }
-
-            @Override
-            protected void done() {
-                try {
-                    Comparison c = get();
-                    status("Compared with " + other, false);
-                    new CompareWindow(WorkbenchFrame.this, c, String.valueOf(other.getFileName()), nameB)
-                            .setVisible(true);
-                } catch (InterruptedException e) {
-                    Thread.currentThread().interrupt();
-                } catch (ExecutionException e) {
-                    showError("Cannot compare", other + ":\n" + e.getCause().getMessage());
-                }
-            }
-        }.execute();
+        compare.compareWith(ed, other);
     }
 
     void status(String message, boolean error) {

@@ -7,7 +7,6 @@ import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
-import java.util.Optional;
 import javax.swing.SwingWorker;
 import org.quire.app.ui.common.WorkbenchPrefs;
 import org.quire.app.ui.document.BudgetDocument;
@@ -69,16 +68,22 @@ final class WorkbenchRecovery {
         keeper.setPeriod(period());
     }
 
-    /** Writes what is pending, stops copying and releases this workbench's folder (kept when copies remain). */
-    void close() {
-        keeper.close();
-        if (session != null) {
-            try {
-                session.close();
-            } catch (IOException e) {
-                // the lock goes with the process anyway; nothing the engineer can do about it
+    /**
+     * Writes what is pending, stops copying and releases this workbench's folder (kept when copies remain), on
+     * the recovery thread: the event thread touches no file.
+     *
+     * @return done once the last copy is written and the folder released
+     */
+    java.util.concurrent.CompletableFuture<Void> close() {
+        return keeper.close(() -> {
+            if (session != null) {
+                try {
+                    session.close();
+                } catch (IOException e) {
+                    // the lock goes with the process anyway; nothing the engineer can do about it
+                }
             }
-        }
+        });
     }
 
     /**
@@ -117,67 +122,107 @@ final class WorkbenchRecovery {
                             + e.getCause().getMessage(), true);
                     return;
                 }
-                try {
-                    offer(f.of(), f.unreadable());
-                } finally {
-                    for (RecoverySessions.Session o : f.orphans()) {
-                        try {
-                            o.close();
-                        } catch (IOException e) {
-                            frame.status("Cannot release the recovery folder " + o.folder() + ": " + e.getMessage(),
-                                    true);
-                        }
+                offer(f.orphans(), f.of(), f.unreadable());
+            }
+        }.execute();
+    }
+
+    /**
+     * Shows the dialog, then reads the copies to restore, removes the others and releases the stopped
+     * workbenches' folders off the event thread; the restored budgets open on it.
+     */
+    private void offer(List<RecoverySessions.Session> orphans, Map<RecoveryStore.Pending, RecoverySessions.Session> of,
+            List<String> unreadable) {
+        if (!unreadable.isEmpty()) {
+            frame.status("Unreadable recovery copies in " + sessions.base() + ": " + String.join("; ", unreadable),
+                    true);
+        }
+        List<RecoveryStore.Pending> restore = new ArrayList<>();
+        List<RecoveryStore.Pending> discard = new ArrayList<>();
+        if (!of.isEmpty()) {
+            List<RecoveryStore.Pending> pending = new ArrayList<>(of.keySet());
+            pending.sort(java.util.Comparator.comparing(RecoveryStore.Pending::saved).reversed());
+            RecoveryDialog dlg = new RecoveryDialog(frame, pending);
+            dlg.setVisible(true);
+            if (!dlg.cancelled()) {
+                for (RecoveryStore.Pending p : pending) {
+                    (dlg.restore().contains(p) ? restore : discard).add(p);
+                }
+            }
+        }
+        record Restored(RecoveryStore.Pending copy, org.quire.engine.document.BudgetDocument content, String error) {
+        }
+        new SwingWorker<List<Restored>, Void>() {
+            private final List<String> problems = new ArrayList<>();
+
+            @Override
+            protected List<Restored> doInBackground() {
+                List<Restored> out = new ArrayList<>();
+                for (RecoveryStore.Pending p : restore) {
+                    out.add(read(p));
+                }
+                for (RecoveryStore.Pending p : discard) {
+                    try {
+                        of.get(p).store().discard(p.id());
+                    } catch (IOException e) {
+                        problems.add("Cannot discard the recovery copy " + p.file() + ": " + e.getMessage());
                     }
+                }
+                for (RecoverySessions.Session o : orphans) {
+                    try {
+                        o.close();
+                    } catch (IOException e) {
+                        problems.add("Cannot release the recovery folder " + o.folder() + ": " + e.getMessage());
+                    }
+                }
+                return out;
+            }
+
+            private Restored read(RecoveryStore.Pending p) {
+                try {
+                    org.quire.engine.document.BudgetDocument content = p.load();
+                    if (session != null && !p.file().getParent().equals(session.folder())) {
+                        session.adopt(p.file());
+                    }
+                    return new Restored(p, content, null);
+                } catch (IOException | BudgetFormatException e) {
+                    return new Restored(p, null, e.getMessage());
+                }
+            }
+
+            @Override
+            protected void done() {
+                List<Restored> read;
+                try {
+                    read = get();
+                } catch (InterruptedException e) {
+                    Thread.currentThread().interrupt();
+                    return;
+                } catch (java.util.concurrent.ExecutionException e) {
+                    frame.status("Cannot restore the recovery copies: " + e.getCause().getMessage(), true);
+                    return;
+                }
+                for (Restored r : read) {
+                    if (r.content() == null) {
+                        frame.showError("Cannot restore the recovery copy", r.copy().file() + ":\n" + r.error());
+                    } else {
+                        open(r.copy(), r.content());
+                    }
+                }
+                for (String p : problems) {
+                    frame.status(p, true);
                 }
             }
         }.execute();
     }
 
-    private void offer(Map<RecoveryStore.Pending, RecoverySessions.Session> of, List<String> unreadable) {
-        if (!unreadable.isEmpty()) {
-            frame.status("Unreadable recovery copies in " + sessions.base() + ": " + String.join("; ", unreadable),
-                    true);
-        }
-        if (of.isEmpty()) {
-            return;
-        }
-        List<RecoveryStore.Pending> pending = new ArrayList<>(of.keySet());
-        pending.sort(java.util.Comparator.comparing(RecoveryStore.Pending::saved).reversed());
-        RecoveryDialog dlg = new RecoveryDialog(frame, pending);
-        dlg.setVisible(true);
-        if (dlg.cancelled()) {
-            return;
-        }
-        for (RecoveryStore.Pending p : pending) {
-            if (dlg.restore().contains(p)) {
-                restore(p);
-            } else {
-                try {
-                    of.get(p).store().discard(p.id());
-                } catch (IOException e) {
-                    frame.status("Cannot discard the recovery copy " + p.file() + ": " + e.getMessage(), true);
-                }
-            }
-        }
-    }
-
-    /** Opens a recovery copy as a changed budget belonging to its original file; this workbench keeps it now. */
-    Optional<BudgetEditor> restore(RecoveryStore.Pending p) {
-        try {
-            org.quire.engine.document.BudgetDocument content = p.load();
-            if (session != null && !p.file().getParent().equals(session.folder())) {
-                session.adopt(p.file());
-            }
-            BudgetDocument doc = new BudgetDocument(content, p.originalPath(), "recovered " + content.title(),
-                    prefs.userName());
-            doc.markRecovered(p.id());
-            BudgetEditor ed = frame.open(doc);
-            frame.status("Restored the copy of " + doc.name() + " kept at " + p.saved() + "; save it to keep it",
-                    false);
-            return Optional.of(ed);
-        } catch (IOException | BudgetFormatException e) {
-            frame.showError("Cannot restore the recovery copy", p.file() + ":\n" + e.getMessage());
-            return Optional.empty();
-        }
+    /** Opens a recovery copy read off the event thread as a changed budget belonging to its original file. */
+    private BudgetEditor open(RecoveryStore.Pending p, org.quire.engine.document.BudgetDocument content) {
+        BudgetDocument doc = new BudgetDocument(content, p.originalPath(), "recovered " + content.title(),
+                prefs.userName());
+        doc.markRecovered(p.id());
+        BudgetEditor ed = frame.open(doc);
+        frame.status("Restored the copy of " + doc.name() + " kept at " + p.saved() + "; save it to keep it", false);
+        return ed;
     }
 }

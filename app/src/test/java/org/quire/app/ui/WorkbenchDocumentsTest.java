@@ -117,9 +117,10 @@ class WorkbenchDocumentsTest extends GuiTestSupport {
         WorkbenchFrame first = newFrameOnSamePreferences();
         BudgetEditor ed = await(onEdt(() -> first.open(file))).orElseThrow();
         onEdt(() -> ed.edit("Edit notes", "", b -> b.withNotes("work not saved when the power went")));
-        assertEquals(1, (int) onEdt(() -> first.recovery().flush()), "one copy written");
+        assertEquals(1, (int) onEdt(() -> first.recovery().flush()).get(10, java.util.concurrent.TimeUnit.SECONDS), "one copy written");
         assertEquals(1, recoveryCopies(), "the copy is in the recovery folder");
         onEdt(() -> { first.dispose(); return null; });
+        first.recoveryClosed().get(10, java.util.concurrent.TimeUnit.SECONDS); // written and released off the event thread
 
         WorkbenchFrame second = newFrameOnSamePreferences();
         try {

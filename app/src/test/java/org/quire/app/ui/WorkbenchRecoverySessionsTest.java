@@ -32,7 +32,7 @@ class WorkbenchRecoverySessionsTest extends GuiTestSupport {
         WorkbenchFrame first = newFrameOnSamePreferences();
         BudgetEditor ed = onEdt(first::openDemo);
         onEdt(() -> ed.edit("Edit notes", "", b -> b.withNotes("unsaved work of the first workbench")));
-        assertEquals(1, (int) onEdt(() -> first.recovery().flush()), "one copy written");
+        assertEquals(1, (int) onEdt(() -> first.recovery().flush()).get(10, java.util.concurrent.TimeUnit.SECONDS), "one copy written");
         Path firstFolder = onEdt(() -> first.recovery().store().folder());
 
         WorkbenchFrame second = newFrameOnSamePreferences();
@@ -44,7 +44,8 @@ class WorkbenchRecoverySessionsTest extends GuiTestSupport {
             assertFalse(onEdt(WorkbenchRecoverySessionsTest::recoveryDialogShowing),
                     "the running first workbench's copy is not offered to the second");
 
-            onEdt(() -> { first.dispose(); return null; }); // stops with the changed budget open: its copy stays
+            onEdt(() -> { first.dispose(); return null; });
+            first.recoveryClosed().get(10, java.util.concurrent.TimeUnit.SECONDS); // stops with the changed budget open: its copy stays
             assertEquals(1, recoveryCopies());
             WorkbenchFrame third = newFrameOnSamePreferences();
             try {

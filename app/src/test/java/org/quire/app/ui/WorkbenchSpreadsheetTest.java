@@ -159,4 +159,101 @@ class WorkbenchSpreadsheetTest extends GuiTestSupport {
         assertEquals("1002.3", onEdt(() -> grid.getValueAt(2, 1)));
         assertEquals("1002.6", onEdt(() -> grid.getValueAt(3, 1)));
     }
+
+    /** Each character as a real key press and release through the window system, as a user types it. */
+    private static void typeWithRobot(java.awt.Robot robot, String text) {
+        for (char ch : text.toCharArray()) {
+            int key = ch == '.' ? KeyEvent.VK_PERIOD : ch == '\n' ? KeyEvent.VK_ENTER
+                    : KeyEvent.getExtendedKeyCodeForChar(ch);
+            robot.keyPress(key);
+            robot.keyRelease(key);
+        }
+        robot.waitForIdle();
+    }
+
+    @Test
+    void aSemicolonBlockOfSeveralLinesPastedIntoTheReadingsGridIsReadInReadingOrder() throws Exception {
+        BudgetEditor ed = openDemo();
+        onEdt(() -> {
+            ed.revealSection("Inputs");
+            ed.selectInput("V_ind");
+            return null;
+        });
+        JTable grid = onEdt(() -> named(frame.getContentPane(), "readings"));
+        waitFor("the readings grid shown", grid::isShowing);
+        onEdt(() -> {
+            grid.clearSelection();
+            // two lines of two cells, semicolon-separated with decimal commas, as a European spreadsheet copies
+            Toolkit.getDefaultToolkit().getSystemClipboard().setContents(
+                    new StringSelection("1002,1;1002,5\n1002,2;1002,6\n"), null);
+            press(grid, KeyEvent.VK_V, menu());
+            return null;
+        });
+        assertEquals(5, (int) onEdt(grid::getRowCount), "four readings and the empty row");
+        String[] expected = {"1002.1", "1002.5", "1002.2", "1002.6"};
+        for (int i = 0; i < expected.length; i++) {
+            int r = i;
+            assertEquals(expected[i], onEdt(() -> grid.getValueAt(r, 1)), "reading " + (i + 1));
+        }
+    }
+
+    @Test
+    void typingIntoASelectedReadingReplacesIt() throws Exception {
+        BudgetEditor ed = openDemo();
+        onEdt(() -> {
+            ed.revealSection("Inputs");
+            ed.selectInput("V_ind");
+            return null;
+        });
+        JTable grid = onEdt(() -> named(frame.getContentPane(), "readings"));
+        waitFor("the readings grid shown", grid::isShowing);
+        onEdt(() -> {
+            grid.clearSelection();
+            Toolkit.getDefaultToolkit().getSystemClipboard().setContents(
+                    new StringSelection("1002.1\n1002.4\n1002.3\n"), null);
+            press(grid, KeyEvent.VK_V, menu());
+            frame.toFront();
+            grid.changeSelection(1, 1, false, false);
+            grid.requestFocusInWindow();
+            return null;
+        });
+        waitFor("the grid focused", grid::isFocusOwner);
+        java.awt.Robot robot = new java.awt.Robot();
+        robot.setAutoDelay(5);
+        typeWithRobot(robot, "1001.5\n");
+        waitFor("the edit ended", () -> !grid.isEditing());
+        assertEquals("1001.5", onEdt(() -> grid.getValueAt(1, 1)),
+                "the typed reading replaced 1002.4 instead of being appended to it");
+        assertEquals("1002.1", onEdt(() -> grid.getValueAt(0, 1)));
+        assertEquals("1002.3", onEdt(() -> grid.getValueAt(2, 1)));
+    }
+
+    @Test
+    void copyFromTheInputsTableWritesItsHeadersAndTheFiguresAsShown() throws Exception {
+        BudgetEditor ed = openDemo();
+        JTable t = ed.inputsTable();
+        String copied = onEdt(() -> {
+            int r = row(t, "T_tank");
+            t.changeSelection(r, 0, false, false);
+            t.changeSelection(r + 1, t.getColumnCount() - 1, false, true);
+            press(t, KeyEvent.VK_C, menu());
+            return (String) Toolkit.getDefaultToolkit().getSystemClipboard().getData(DataFlavor.stringFlavor);
+        });
+        String[] lines = copied.split("\n");
+        assertEquals(3, lines.length, "the headers and two rows: " + copied);
+        java.util.List<String> headers = onEdt(() -> {
+            java.util.List<String> h = new java.util.ArrayList<>();
+            for (int c = 0; c < t.getColumnCount(); c++) {
+                h.add(t.getColumnName(c).replaceAll("<[^>]*>", "").strip());
+            }
+            return h;
+        });
+        assertEquals(String.join("\t", headers), lines[0], "the full headers, without markup");
+        // the demo budget's T_tank: normal, estimate 20.42 degC, standard uncertainty 0.05 (the shipped demo file)
+        java.util.List<String> tank = java.util.List.of(lines[1].split("\t"));
+        assertEquals("T_tank", tank.get(0), lines[1]);
+        assertTrue(tank.contains("20.42") && tank.contains("0.05"), "the estimate and u as shown: " + lines[1]);
+        assertTrue(lines[2].startsWith("T_meter\t") && lines[2].contains("20.31"), lines[2]);
+        assertTrue(!copied.contains("E-") && !copied.contains("e-"), "no raw doubles: " + copied);
+    }
 }

@@ -47,6 +47,40 @@ public final class CsvReadings {
         return readings(CsvReader.parse(sourceName, text, options));
     }
 
+    /**
+     * Readings pasted as a block of cells from a spreadsheet (a cell, a column, a row or several rows of
+     * several cells), read in reading order: row by row, left to right, blank cells skipped. When the first row
+     * is not all numbers it is a header, and the block is read as by {@link #parse} (one column, or the column
+     * named {@code reading}).
+     *
+     * @param sourceName the name in messages ({@code pasted text})
+     * @return the readings, in reading order
+     * @throws CsvException naming the line and column of a bad cell
+     */
+    public static double[] parseBlock(String sourceName, String text, CsvOptions options) throws CsvException {
+        String first = firstRow(text);
+        if (first == null || !numbers(first)) {
+            return parse(sourceName, text, options);
+        }
+        CsvTable t = CsvReader.parse(sourceName, text, options.withHeader(false));
+        List<Double> out = new java.util.ArrayList<>();
+        for (CsvRow r : t.rows()) {
+            for (int c = 0; c < r.size(); c++) {
+                if (!r.isBlank(c)) {
+                    out.add(r.number(c));
+                }
+            }
+        }
+        if (out.isEmpty()) {
+            throw new CsvException(sourceName, 0, 0, null, CsvMessages.noData());
+        }
+        double[] d = new double[out.size()];
+        for (int i = 0; i < d.length; i++) {
+            d[i] = out.get(i);
+        }
+        return d;
+    }
+
     private static String firstRow(String text) {
         for (String line : text.split("\\R")) {
             String l = line.replace("\uFEFF", "").strip();

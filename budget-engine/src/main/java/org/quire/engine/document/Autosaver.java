@@ -83,6 +83,30 @@ public final class Autosaver implements AutoCloseable {
         store.discard(id);
     }
 
+    /**
+     * Forgets a document that was saved or closed at once, and removes its recovery copy later on the autosave
+     * thread, so that the caller (the event thread) touches no file; the copy stays when the document has been
+     * handed over again meanwhile (its next write replaces it).
+     */
+    public void discardLater(String id) {
+        dirty.remove(id);
+        if (executor.isShutdown()) {
+            throw new IllegalStateException("the autosaver is closed");
+        }
+        executor.execute(() -> {
+            synchronized (this) {
+                if (dirty.containsKey(id)) {
+                    return;
+                }
+                try {
+                    store.discard(id);
+                } catch (IOException e) {
+                    onError.accept(id, e);
+                }
+            }
+        });
+    }
+
     /** @return the number of documents waiting to be written */
     public int pendingCount() {
         return dirty.size();

@@ -29,6 +29,24 @@ class CsvReadingsTest {
     }
 
     @Test
+    void aPastedBlockIsReadRowByRowWhileAFileOfSeveralColumnsNeedsItsReadingColumnNamed() throws Exception {
+        CsvOptions semicolon = CsvOptions.defaults().withSeparator(CsvOptions.Separator.SEMICOLON);
+        assertArrayEquals(new double[] {1002.1, 1002.5, 1002.2, 1002.6},
+                CsvReadings.parseBlock("pasted text", "1002,1;1002,5\n1002,2;1002,6\n", semicolon), 0);
+        assertArrayEquals(new double[] {1.5, 2.5, 3.5, 4.5}, CsvReadings.parseBlock("pasted text",
+                "1.5\t\t2.5\n3.5\t4.5\t\n",
+                CsvOptions.defaults().withSeparator(CsvOptions.Separator.TAB)), 0, "blank cells are skipped");
+        assertArrayEquals(new double[] {20.41, 20.43}, CsvReadings.parseBlock("pasted text",
+                "value;run\n20,41;1\n20,43;2\n", semicolon), 0, "a header names the column as in a file");
+        // the same block as a file has two columns and neither is named: which one holds the readings is unknown
+        assertThrows(CsvException.class, () -> CsvReadings.parse("readings.csv", "1002,1;1002,5\n1002,2;1002,6\n",
+                semicolon));
+        CsvException bad = assertThrows(CsvException.class, () -> CsvReadings.parseBlock("pasted text",
+                "1.5\t2.5\n3.5\tx\n", CsvOptions.defaults().withSeparator(CsvOptions.Separator.TAB)));
+        assertEquals(2, bad.line(), bad.getMessage());
+    }
+
+    @Test
     void ambiguousReadingsAreRefusedNotReadAsOne() {
         // issue 11: 1,002 / 1,004 / 1,003 became 1.0, 1.0, 1.0 from a file and 1.002 from a paste
         CsvException e = assertThrows(CsvException.class, () -> parse("1,002\n1,004\n1,003\n"));

@@ -3,7 +3,6 @@ package org.quire.app.ui.calibration;
 import java.awt.BorderLayout;
 import java.awt.Dimension;
 import java.awt.FlowLayout;
-import java.awt.GridLayout;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
@@ -124,17 +123,19 @@ public final class CalibrationWindow extends JFrame {
         north.add(header, BorderLayout.NORTH);
         north.add(adjustmentText, BorderLayout.CENTER);
         north.add(tools, BorderLayout.SOUTH);
-        JPanel charts = new JPanel(new GridLayout(0, 1, 0, 8));
         errorCurve.setName("errorCurve");
         residuals.setName("residuals");
-        charts.add(errorCurve);
-        charts.add(residuals);
-        JSplitPane split = new JSplitPane(JSplitPane.HORIZONTAL_SPLIT, new JScrollPane(table), charts);
-        split.setResizeWeight(0.55);
+        JScrollPane charts = org.quire.app.ui.chart.ChartStack.of(errorCurve, residuals);
+        JScrollPane runs = new JScrollPane(table);
+        // the table scrolls sideways; the charts get about half the width, their text at the UI font size
+        runs.setPreferredSize(new Dimension(600, 300));
+        JSplitPane split = new JSplitPane(JSplitPane.HORIZONTAL_SPLIT, runs, charts);
+        split.setResizeWeight(0.5);
         getContentPane().add(north, BorderLayout.NORTH);
         getContentPane().add(split, BorderLayout.CENTER);
         setTransferHandler(new FileDropHandler(this::importRuns));
         setSize(new Dimension(1280, 720));
+        split.setDividerLocation(1280 / 2);
         evaluate(calibration);
     }
 

@@ -18,62 +18,155 @@ import org.quire.app.ui.common.Colors;
 
 /**
  * Draws a report {@link Chart} on screen from the same shapes ({@link ChartLayout}) the PDF and SVG reports
- * draw, scaled to the component's width, in the theme's colours ({@code Quire.chart.*}), so that the dark theme
- * keeps its contrast. One chart code for the workbench and the report.
+ * draw, in the theme's colours ({@code Quire.chart.*}), so that the dark theme keeps its contrast. One chart code
+ * for the workbench and the report: this class is only the Graphics2D backend.
+ *
+ * <p>The smallest text of the chart is drawn at the component's font size (the look and feel's default), never
+ * smaller: the chart is laid out as wide as the component allows at that scale, and grows in height instead of
+ * shrinking its text.
  */
 public class ChartView extends JComponent {
+    private Chart chart;
     private ChartLayout.Layout layout;
     private String caption = "";
+    private float plotHeight = ChartLayout.PLOT_HEIGHT;
 
     public ChartView() {
-        setOpaque(false);
+        setOpaque(true);
     }
 
     /** Shows a chart; null for none. */
     public void setChart(Chart c) {
-        layout = c == null ? null : ChartLayout.of(c);
+        chart = c;
+        layout = null;
         caption = c == null ? "" : c.caption();
         setToolTipText(caption.isEmpty() ? null : caption);
         revalidate();
         repaint();
     }
 
-    /** @return the layout shown, or null */
+    /** Sets the height of a plot's or histogram's data area, in points of the layout (the reports use 160). */
+    public void setPlotHeight(float points) {
+        plotHeight = points;
+        layout = null;
+        revalidate();
+        repaint();
+    }
+
+    /** @return how many pixels a point of the layout takes: the UI font size over the chart's smallest text */
+    public float scale() {
+        return baseFont().getSize2D() / ChartLayout.FONT;
+    }
+
+    /** @return the component's font, or the look and feel's label font while it has none (no parent yet) */
+    public Font baseFont() {
+        Font f = getFont();
+        if (f == null) {
+            f = javax.swing.UIManager.getFont("Label.font");
+        }
+        return f != null ? f : new Font(Font.SANS_SERIF, Font.PLAIN, 12);
+    }
+
+    /** @return the layout shown (at the present width), or null */
     public ChartLayout.Layout layoutShown() {
+        if (chart == null) {
+            return null;
+        }
+        float width = (getWidth() > 0 ? getWidth() : preferredWidth()) / scale();
+        if (layout == null || Math.abs(layout.width() - Math.max(ChartLayout.MIN_WIDTH, width)) > 0.5f) {
+            layout = ChartLayout.of(chart, width, plotHeight);
+        }
         return layout;
+    }
+
+    private float naturalWidth = 0.75f * ChartLayout.WIDTH;
+
+    /** Sets the width the chart asks its container for, in points of the layout (it fills any width given). */
+    public void setNaturalWidth(float points) {
+        naturalWidth = Math.max(ChartLayout.MIN_WIDTH, points);
+        revalidate();
+    }
+
+    private int preferredWidth() {
+        return Math.round(naturalWidth * scale());
+    }
+
+    /** @return the height in pixels the chart needs when it is {@code widthPx} wide */
+    public int heightFor(int widthPx) {
+        if (chart == null) {
+            return 0;
+        }
+        float sc = scale();
+        return Math.round(ChartLayout.of(chart, widthPx / sc, plotHeight).height() * sc) + 1;
+    }
+
+    /** A new width can wrap the legend onto more or fewer rows: the container is asked for a new height. */
+    @Override
+    @SuppressWarnings("deprecation")
+    public void reshape(int x, int y, int w, int h) {
+        boolean wider = w != getWidth();
+        super.reshape(x, y, w, h);
+        if (wider && chart != null) {
+            int want = Math.round(layoutShown().height() * scale()) + 1;
+            if (want != h) {
+                javax.swing.SwingUtilities.invokeLater(this::revalidate);
+            }
+        }
     }
 
     @Override
     public Dimension getPreferredSize() {
-        if (layout == null) {
-            return new Dimension(0, 0);
+        if (isPreferredSizeSet() || chart == null) {
+            return isPreferredSizeSet() ? super.getPreferredSize() : new Dimension(0, 0);
         }
-        float scale = 0.9f * getFont().getSize2D() / 7.5f;
-        return new Dimension(Math.round(layout.width() * scale), Math.round(layout.height() * scale));
+        int w = preferredWidth();
+        return new Dimension(w, heightFor(getWidth() > 0 ? getWidth() : w));
     }
 
-    private static Color colour(int rgb) {
+    /** As wide as there is room for, never taller than the chart. */
+    @Override
+    public Dimension getMaximumSize() {
+        return isMaximumSizeSet() ? super.getMaximumSize()
+                : new Dimension(Integer.MAX_VALUE, getPreferredSize().height);
+    }
+
+    @Override
+    public Dimension getMinimumSize() {
+        if (chart == null) {
+            return new Dimension(0, 0);
+        }
+        float sc = scale();
+        return new Dimension(Math.round(ChartLayout.MIN_WIDTH * sc), Math.round(layoutShown().height() * sc) + 1);
+    }
+
+    /** @return the theme colour that stands for one of the layout's colour constants */
+    public static Color colour(int rgb) {
         switch (rgb) {
             case ChartLayout.BAR: return Colors.get("Quire.chart.bar");
             case ChartLayout.GRID: return Colors.get("Quire.chart.grid");
             case ChartLayout.AXIS: return Colors.get("Quire.chart.axis");
             case ChartLayout.MARK: return Colors.get("Quire.chart.mark");
             case ChartLayout.TEXT: return Colors.get("Quire.chart.text");
+            case ChartLayout.THIRD: return Colors.get("Quire.chart.third");
+            case ChartLayout.FOURTH: return Colors.get("Quire.chart.fourth");
             default: return new Color(rgb);
         }
     }
 
     @Override
     protected void paintComponent(Graphics g0) {
+        g0.setColor(Colors.get("Quire.chart.background"));
+        g0.fillRect(0, 0, getWidth(), getHeight());
+        ChartLayout.Layout layout = layoutShown();
         if (layout == null) {
             return;
         }
         Graphics2D g = (Graphics2D) g0.create();
         g.setRenderingHint(RenderingHints.KEY_ANTIALIASING, RenderingHints.VALUE_ANTIALIAS_ON);
         g.setRenderingHint(RenderingHints.KEY_TEXT_ANTIALIASING, RenderingHints.VALUE_TEXT_ANTIALIAS_ON);
-        double scale = Math.min(getWidth() / layout.width(), getHeight() / layout.height());
+        double scale = scale();
         g.scale(scale, scale);
-        Font base = getFont();
+        Font base = baseFont();
         for (ChartLayout.Shape s : layout.shapes()) {
             if (s instanceof ChartLayout.Rect r) {
                 g.setColor(colour(r.rgb()));

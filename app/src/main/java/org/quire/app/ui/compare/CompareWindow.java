@@ -63,18 +63,16 @@ public final class CompareWindow extends JDialog {
         effects.setName("effects");
         changes = new JTable(new Rows(new String[] {"What", "Name", "Field", "A", "B"}, changeRows(c)));
         changes.setName("changes");
-        changes.getColumnModel().getColumn(0).setPreferredWidth(80);
-        changes.getColumnModel().getColumn(1).setPreferredWidth(80);
-        changes.getColumnModel().getColumn(2).setPreferredWidth(110);
-        changes.getColumnModel().getColumn(3).setPreferredWidth(200);
-        changes.getColumnModel().getColumn(4).setPreferredWidth(200);
         changes.setDefaultRenderer(Object.class, new TipRenderer());
+        // each column as wide as its widest entry (a long one keeps its tooltip), scrolled sideways when needed
+        org.quire.app.ui.table.SpreadsheetTable.fitColumns(changes, 420);
         effects.setDefaultRenderer(Object.class, new TipRenderer());
         model = new JTable(new Rows(new String[] {"A", "Model in A", "B", "Model in B"}, modelRows(c.model())));
         model.setName("modelSideBySide");
         model.getColumnModel().getColumn(0).setMaxWidth(36);
         model.getColumnModel().getColumn(2).setMaxWidth(36);
         model.setDefaultRenderer(Object.class, new ModelRenderer());
+        org.quire.app.ui.table.SpreadsheetTable.fitColumns(model, 900);
         JScrollPane effectScroll = titled(effects, "Effect on each output (GUM)");
         effectScroll.setPreferredSize(new java.awt.Dimension(600, effects.getRowHeight() * (c.effects().size() + 1) + 46));
         JSplitPane lower = new JSplitPane(JSplitPane.HORIZONTAL_SPLIT, titled(changes, "What changed from A to B"),

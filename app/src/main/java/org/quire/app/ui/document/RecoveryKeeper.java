@@ -6,6 +6,10 @@ import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.concurrent.CompletableFuture;
+import java.util.concurrent.LinkedBlockingQueue;
+import java.util.concurrent.ThreadPoolExecutor;
+import java.util.concurrent.TimeUnit;
 import java.util.function.BiConsumer;
 import org.quire.engine.document.Autosaver;
 import org.quire.engine.document.RecoveryStore;
@@ -16,14 +20,19 @@ import org.quire.engine.document.RecoveryStore;
  * a document saved, reverted to its saved state or closed without saving has its copy removed. At start-up the
  * workbench lists {@link #pending} copies and offers them back.
  *
- * <p>No user-interface imports. Not thread-safe: call it on the event thread; the autosaver writes on its own
- * thread and reports failures through {@code onError} there.
+ * <p>No user-interface imports. Not thread-safe: call it on the event thread. It touches no file on the calling
+ * thread: the autosaver writes and removes copies on its own thread, and what is left (removing a copy while
+ * copying is off, the last writes when the period changes or the workbench closes) runs on a recovery thread of
+ * its own, which keeps the application alive until it is done; failures reach {@code onError} there.
  */
 public final class RecoveryKeeper implements AutoCloseable {
     private final RecoveryStore store;
     private final BiConsumer<String, IOException> onError;
     private final Map<BudgetDocument, Boolean> tracked = new LinkedHashMap<>();
     private Autosaver autosaver;
+    /** File work that is not the autosaver's: one thread, in order, ending when idle. */
+    private final ThreadPoolExecutor io = new ThreadPoolExecutor(1, 1, 1, TimeUnit.SECONDS,
+            new LinkedBlockingQueue<>(), r -> new Thread(r, "quire-recovery"));
 
     /**
      * @param store the recovery folder
@@ -33,6 +42,7 @@ public final class RecoveryKeeper implements AutoCloseable {
     public RecoveryKeeper(RecoveryStore store, Duration period, BiConsumer<String, IOException> onError) {
         this.store = store;
         this.onError = onError;
+        io.allowCoreThreadTimeOut(true);
         setPeriod(period);
     }
 
@@ -43,7 +53,7 @@ public final class RecoveryKeeper implements AutoCloseable {
     /** Changes the period (null: stop copying); documents already changed are handed to the new autosaver. */
     public void setPeriod(Duration period) {
         if (autosaver != null) {
-            autosaver.close();
+            io.execute(autosaver::close); // writes what the old one still holds, off the calling thread
             autosaver = null;
         }
         if (period != null) {
@@ -102,20 +112,42 @@ public final class RecoveryKeeper implements AutoCloseable {
     }
 
     private void discard(String id) {
-        try {
-            if (autosaver != null) {
-                autosaver.markSaved(id);
-            } else {
-                store.discard(id);
-            }
-        } catch (IOException e) {
-            onError.accept(id, e);
+        if (autosaver != null) {
+            autosaver.discardLater(id);
+            return;
         }
+        io.execute(() -> {
+            try {
+                store.discard(id);
+            } catch (IOException e) {
+                onError.accept(id, e);
+            }
+        });
     }
 
-    /** Writes every pending copy now; @return how many were written */
-    public int flush() {
-        return autosaver == null ? 0 : autosaver.flush();
+    /** Writes every pending copy now, on the recovery thread; @return how many were written, once done */
+    public CompletableFuture<Integer> flush() {
+        Autosaver a = autosaver;
+        return a == null ? CompletableFuture.completedFuture(0) : CompletableFuture.supplyAsync(a::flush, io);
+    }
+
+    /**
+     * Writes what is pending and stops, on the recovery thread, then runs {@code after} there (e.g. releasing
+     * the folder, which must come after the last copy).
+     *
+     * @return done once all is written and {@code after} has run
+     */
+    public CompletableFuture<Void> close(Runnable after) {
+        Autosaver a = autosaver;
+        autosaver = null;
+        CompletableFuture<Void> done = CompletableFuture.runAsync(() -> {
+            if (a != null) {
+                a.close();
+            }
+            after.run();
+        }, io);
+        io.shutdown();
+        return done;
     }
 
     /**
@@ -133,12 +165,9 @@ public final class RecoveryKeeper implements AutoCloseable {
         return out;
     }
 
-    /** Writes what is pending and stops the autosaver. */
+    /** Writes what is pending and stops the autosaver, on the recovery thread. */
     @Override
     public void close() {
-        if (autosaver != null) {
-            autosaver.close();
-            autosaver = null;
-        }
+        close(() -> { });
     }
 }

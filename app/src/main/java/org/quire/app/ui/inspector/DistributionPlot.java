@@ -1,47 +1,34 @@
 package org.quire.app.ui.inspector;
 
-import java.awt.BasicStroke;
-import java.awt.Dimension;
-import java.awt.Graphics;
-import java.awt.Graphics2D;
-import java.awt.RenderingHints;
-import java.awt.geom.Path2D;
-import javax.swing.JComponent;
-import org.quire.app.ui.common.Colors;
+import java.util.ArrayList;
+import java.util.List;
+import org.quire.app.report.Chart;
+import org.quire.app.ui.chart.ChartView;
 import org.quire.app.ui.common.Fmt;
 import org.quire.engine.budget.Distribution;
+import org.quire.engine.budget.TypeB;
 
 /**
- * A small picture of an input's distribution: its shape drawn over estimate ± 4 u (or a little beyond its
- * limits), with the estimate marked. A drawing of the shape only; no figure of the budget comes from here.
+ * A picture of an input's distribution: its probability density drawn over estimate ± 4 u (or a little beyond its
+ * limits), with the estimate marked, drawn by the workbench's one chart code ({@link ChartView}) with axes, ticks,
+ * axis titles and a legend. The density of each point is the engine's distribution function over a narrow bin
+ * ({@code Marginal.cdf}); a drawing of the shape only, no figure of the budget comes from here.
  */
-final class DistributionPlot extends JComponent {
-    private Distribution d;
+final class DistributionPlot extends ChartView {
+    private static final int POINTS = 240;
 
     DistributionPlot() {
-        setPreferredSize(new Dimension(280, 110));
         setName("distributionPlot");
+        setPlotHeight(60f); // a sketch beside the parameters: the parameters come first
+        setNaturalWidth(org.quire.app.report.ChartLayout.MIN_WIDTH); // the inspector's column is narrow
     }
 
-    void show(Distribution d) {
-        this.d = d;
-        repaint();
+    /** Shows the distribution of input {@code name} in {@code unit} (may be empty); null shows nothing. */
+    void show(Distribution d, String name, String unit) {
+        setChart(d == null ? null : chart(d, name, unit));
     }
 
-    @Override
-    protected void paintComponent(Graphics g0) {
-        Graphics2D g = (Graphics2D) g0.create();
-        g.setRenderingHint(RenderingHints.KEY_ANTIALIASING, RenderingHints.VALUE_ANTIALIAS_ON);
-        g.setColor(Colors.get("Quire.plot.background"));
-        g.fillRect(0, 0, getWidth(), getHeight());
-        if (d == null) {
-            g.dispose();
-            return;
-        }
-        int left = 8;
-        int right = getWidth() - 8;
-        int top = 8;
-        int bottom = getHeight() - 20;
+    static Chart.Plot chart(Distribution d, String name, String unit) {
         double mean = d.mean();
         double u = d.standardUncertainty();
         double lo;
@@ -61,46 +48,32 @@ final class DistributionPlot extends JComponent {
             lo = mean - 1;
             hi = mean + 1;
         }
-        Path2D.Double path = new Path2D.Double();
-        int n = 240;
-        double[] ys = new double[n + 1];
-        double max = 0;
-        org.quire.engine.montecarlo.Marginal m = d instanceof Distribution.Constant ? null
-                : org.quire.engine.montecarlo.Marginal.of(d);
-        double h = (hi - lo) / n;
-        for (int i = 0; i <= n && m != null; i++) {
-            double x = lo + h * i;
-            // probability of a pixel-wide bin around x, from the engine's distribution function
-            ys[i] = m.cdf(x + 0.5 * h) - m.cdf(x - 0.5 * h);
-            max = Math.max(max, ys[i]);
-        }
-        g.setColor(Colors.get("Quire.plot.axis"));
-        g.drawLine(left, bottom, right, bottom);
-        if (d instanceof Distribution.Constant || max == 0) {
-            int x = (left + right) / 2;
-            g.setColor(Colors.get("Quire.plot.line"));
-            g.setStroke(new BasicStroke(2f));
-            g.drawLine(x, top, x, bottom);
-        } else {
-            path.moveTo(left, bottom);
-            for (int i = 0; i <= n; i++) {
-                path.lineTo(left + (right - left) * (double) i / n, bottom - (bottom - top) * ys[i] / max);
+        String shape = TypeB.DISTRIBUTIONS.contains(d.shape()) ? TypeB.screenName(d.shape()) : d.shape();
+        // a dimensionless input ("1") has no unit to show on the axes
+        String u1 = unit == null || unit.isBlank() || unit.strip().equals("1") ? "" : unit.strip().replace(' ', '*');
+        String xLabel = name + (u1.isEmpty() ? "" : " (" + u1 + ")");
+        String yLabel = "probability density" + (u1.isEmpty() ? "" : " (1/" + u1 + ")");
+        List<Chart.Series> series = new ArrayList<>();
+        double peak = 0;
+        if (!(d instanceof Distribution.Constant) && u > 0) {
+            org.quire.engine.montecarlo.Marginal m = org.quire.engine.montecarlo.Marginal.of(d);
+            double[] x = new double[POINTS + 1];
+            double[] y = new double[POINTS + 1];
+            double h = (hi - lo) / POINTS;
+            for (int i = 0; i <= POINTS; i++) {
+                x[i] = lo + h * i;
+                // probability of a narrow bin around x over its width: the density the engine's distribution has
+                double p = (m.cdf(x[i] + 0.5 * h) - m.cdf(x[i] - 0.5 * h)) / h;
+                y[i] = Double.isFinite(p) && p > 0 ? p : 0;
+                peak = Math.max(peak, y[i]);
             }
-            path.lineTo(right, bottom);
-            path.closePath();
-            g.setColor(Colors.get("Quire.plot.fill"));
-            g.fill(path);
-            g.setColor(Colors.get("Quire.plot.line"));
-            g.setStroke(new BasicStroke(1.5f));
-            g.draw(path);
-            int xm = left + (int) Math.round((right - left) * (mean - lo) / (hi - lo));
-            g.setStroke(new BasicStroke(1f, BasicStroke.CAP_BUTT, BasicStroke.JOIN_MITER, 10, new float[] {3, 3}, 0));
-            g.drawLine(xm, top, xm, bottom);
+            series.add(new Chart.Series(shape + " distribution", x, y, null, Chart.Style.LINE, Chart.Tone.FIRST));
         }
-        g.setColor(Colors.get("Label.disabledForeground"));
-        String label = (org.quire.engine.budget.TypeB.DISTRIBUTIONS.contains(d.shape()) ? org.quire.engine.budget.TypeB.screenName(d.shape()) : d.shape()) + "   x = " + Fmt.num(mean) + "   u = " + Fmt.working(u);
-        g.drawString(label, left, getHeight() - 5);
-        g.dispose();
+        String mark = "estimate x = " + Fmt.num(mean) + ", u(x) = " + Fmt.working(u);
+        series.add(new Chart.Series(mark, new double[] {mean, mean}, new double[] {0, peak > 0 ? peak : 1}, null,
+                Chart.Style.DASHED, Chart.Tone.SECOND));
+        return new Chart.Plot("The " + shape + " distribution of " + name, xLabel, peak > 0 ? yLabel
+                : "a constant: no spread", false, series, List.of(0.0));
     }
 
     private static double[] limits(Distribution d) {
@@ -122,5 +95,4 @@ final class DistributionPlot extends JComponent {
         }
         return null;
     }
-
 }

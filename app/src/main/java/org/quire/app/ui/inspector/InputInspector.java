@@ -44,7 +44,25 @@ final class InputInspector extends JPanel {
     private final JComboBox<String> type = new JComboBox<>(new String[] {"Type A (from observations)",
         "Type B (other information)"});
     private final CardLayout cards = new CardLayout();
-    private final JPanel evaluation = new JPanel(cards);
+    /** The form of the evaluation shown, only as tall as that form (a card layout sizes to its largest card). */
+    private final JPanel evaluation = new JPanel(cards) {
+        @Override
+        public java.awt.Dimension getPreferredSize() {
+            for (java.awt.Component c : getComponents()) {
+                if (c.isVisible()) {
+                    java.awt.Dimension d = c.getPreferredSize();
+                    java.awt.Insets in = getInsets();
+                    return new java.awt.Dimension(d.width + in.left + in.right, d.height + in.top + in.bottom);
+                }
+            }
+            return super.getPreferredSize();
+        }
+
+        @Override
+        public java.awt.Dimension getMaximumSize() {
+            return new java.awt.Dimension(Integer.MAX_VALUE, getPreferredSize().height);
+        }
+    };
     private final TypeBForm typeB;
     private final TypeAForm typeA;
     private final JLabel problem = new JLabel();
@@ -112,8 +130,8 @@ final class InputInspector extends JPanel {
         problem.setName("inspectorProblem");
         lock.setName("inspectorLock");
         lock.setVisible(false);
-        for (javax.swing.JComponent j : new javax.swing.JComponent[] {heading, lock, plot, basis, fields, problem,
-            evaluation}) {
+        for (javax.swing.JComponent j : new javax.swing.JComponent[] {heading, lock, basis, fields, problem,
+            evaluation, plot}) {
             j.setAlignmentX(LEFT_ALIGNMENT);
             add(j);
         }
@@ -229,12 +247,12 @@ final class InputInspector extends JPanel {
         try {
             if (wantA && e instanceof TypeB) {
                 typeA.show(null, e.estimate());
-                cards.show(evaluation, "A");
+                showCard("A");
                 pendingB = false;
             } else if (!wantA && e instanceof TypeA) {
                 typeB.show(TypeB.of("normal", java.util.Map.of("estimate", e.estimate(),
                         "standardUncertainty", e.standardUncertainty())));
-                cards.show(evaluation, "B");
+                showCard("B");
                 pendingA = false;
                 problem("Shown as a normal distribution with the present estimate and u; change a value and press "
                         + "Enter to make it a Type B evaluation.");
@@ -329,7 +347,7 @@ final class InputInspector extends JPanel {
         updating = true;
         try {
             heading.setText("Input " + q.name());
-            plot.show(q.evaluation().distribution());
+            plot.show(q.evaluation().distribution(), q.name(), q.unit());
             basis.setText(q.evaluation().basis());
             for (Map.Entry<String, JTextField> e : texts.entrySet()) {
                 if (!pendingFields.contains(e.getKey())) {
@@ -340,11 +358,11 @@ final class InputInspector extends JPanel {
                 if (q.evaluation() instanceof TypeA) {
                     type.setSelectedIndex(0);
                     typeA.show((TypeA) q.evaluation(), q.evaluation().estimate());
-                    cards.show(evaluation, "A");
+                    showCard("A");
                 } else {
                     type.setSelectedIndex(1);
                     typeB.show((TypeB) q.evaluation());
-                    cards.show(evaluation, "B");
+                    showCard("B");
                 }
             }
             if (fresh) {
@@ -395,12 +413,12 @@ final class InputInspector extends JPanel {
         if (d.typeB() != null) {
             type.setSelectedIndex(1);
             typeB.restore(d.typeB());
-            cards.show(evaluation, "B");
+            showCard("B");
             pendingB = true;
         } else if (d.typeA() != null) {
             type.setSelectedIndex(0);
             typeA.restore(d.typeA());
-            cards.show(evaluation, "A");
+            showCard("A");
             pendingA = true;
         }
         problem("Not applied yet: " + d.why());
@@ -413,5 +431,10 @@ final class InputInspector extends JPanel {
     /** @return the name of the input the form is bound to, or null */
     String bound() {
         return bound;
+    }
+
+    private void showCard(String name) {
+        cards.show(evaluation, name);
+        evaluation.revalidate();
     }
 }

@@ -67,7 +67,7 @@ final class ReadingsGrid extends JTable {
     void pasteAtSelection(String text) {
         double[] pasted;
         try {
-            pasted = text.isBlank() ? new double[0] : CsvReadings.parse("pasted text", text,
+            pasted = text.isBlank() ? new double[0] : CsvReadings.parseBlock("pasted text", text,
                     org.quire.app.ui.table.SpreadsheetTable.pasteOptions(text));
         } catch (CsvException e) {
             throw new IllegalArgumentException(e.getMessage(), e);

@@ -137,7 +137,8 @@ final class InputsSection implements Section {
     void select(String name) {
         for (int r = 0; r < model.getRowCount(); r++) {
             if (model.input(r).name().equals(name)) {
-                if (table.getSelectionModel().getLeadSelectionIndex() != r || table.getSelectedRowCount() != 1) {
+                // a block of rows selected by the user (Shift+click, for Copy) is kept while its lead row is the input
+                if (table.getSelectionModel().getLeadSelectionIndex() != r || !table.isRowSelected(r)) {
                     table.getSelectionModel().setSelectionInterval(r, r);
                 }
                 if (table.getSelectedColumnCount() == 0) {

@@ -516,12 +516,14 @@ final class OutputResultPanel extends JPanel {
             Dimension a = p.getComponent(0).getPreferredSize();
             Dimension b = p.getComponent(1).getPreferredSize();
             int w = p.getWidth() > 0 ? p.getWidth() : a.width + GAP + b.width;
-            if (beside(p, w)) {
-                return new Dimension(a.width + GAP + b.width, Math.max(a.height, b.height));
-            }
-            // below, the chart is scaled to the width as in layoutContainer: the table gets no empty band
-            int bh = b.width == 0 ? 0 : b.height * Math.min(w, b.width) / b.width;
-            return new Dimension(Math.max(a.width, b.width), a.height + GAP + bh);
+            return beside(p, w) ? new Dimension(a.width + GAP + b.width, Math.max(a.height, b.height))
+                    : new Dimension(Math.max(a.width, b.width), a.height + GAP + below(p, w));
+        }
+
+        /** @return the chart's height below the table, as wide as the panel (its text keeps the UI font size) */
+        private static int below(java.awt.Container p, int width) {
+            Component b = p.getComponent(1);
+            return b instanceof org.quire.app.ui.chart.ChartView v ? v.heightFor(width) : b.getPreferredSize().height;
         }
 
         @Override
@@ -540,10 +542,9 @@ final class OutputResultPanel extends JPanel {
                 a.setBounds(0, 0, w - pb.width - GAP, p.getHeight());
                 b.setBounds(w - pb.width, 0, pb.width, pb.height);
             } else {
-                int bw = Math.min(w, pb.width);
-                int bh = pb.width == 0 ? 0 : pb.height * bw / pb.width;
+                int bh = below(p, w);
                 a.setBounds(0, 0, w, Math.max(0, p.getHeight() - bh - GAP));
-                b.setBounds(0, p.getHeight() - bh, bw, bh);
+                b.setBounds(0, p.getHeight() - bh, w, bh);
             }
         }
     }

@@ -37,7 +37,7 @@ final class ResultsSection implements Section {
     private final JTextField k = new JTextField(4);
     private final JSpinner digits = new JSpinner(new SpinnerNumberModel(2, 1, 4, 1));
     private final JCheckBox higher = new JCheckBox("Higher-order terms");
-    private final JCheckBox truncate = new JCheckBox("Truncate \u03bd_eff");
+    private final JCheckBox truncate = new JCheckBox("<html>Truncate \u03bd<sub>eff</sub></html>");
     private final JLabel lock = new JLabel();
     private final JPanel flowRange = new JPanel(new org.quire.app.ui.common.WrapLayout(FlowLayout.LEFT, 6, 2));
     private final JLabel flowRangeText = new JLabel();

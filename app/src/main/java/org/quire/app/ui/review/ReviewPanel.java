@@ -265,6 +265,10 @@ public final class ReviewPanel implements Section {
                 }
                 base = started;
                 items.set(base.items());
+                // every item and clause readable in full: columns as wide as their text, scrolled sideways
+                org.quire.app.ui.table.SpreadsheetTable.fitColumns(checklist, 560);
+                javax.swing.table.TableColumn comment = checklist.getColumnModel().getColumn(4);
+                comment.setPreferredWidth(Math.max(220, comment.getPreferredWidth())); // room to type a comment
                 head.setText("<html>Checklist of revision " + d.revision() + " (" + d.status().label()
                         + "), content SHA-256 " + d.contentHash().substring(0, 16) + "\u2026. Items <i>not met</i> or "
                         + "<i>to confirm</i> need your mark before the budget can be endorsed.</html>");
