@@ -67,7 +67,9 @@ class CrashSafetyTest {
             Thread.sleep(random.nextInt(1, 400));
             p.destroyForcibly();
             assertTrue(p.waitFor(10, TimeUnit.SECONDS));
-            reader.join(5000);
+            // every "saved" line the child wrote before it was killed is read before the file is checked
+            reader.join(60000);
+            assertTrue(!reader.isAlive(), "the child's output was not read to its end");
             long saved = lastSaved.get();
             BudgetDocument onDisk = DocumentStore.open(file);
             long g = generationOf(onDisk);
