@@ -72,7 +72,7 @@ public final class ComparisonSection {
             eff.add(List.of(Cell.math(Typesetter.name(e.name())), Cell.number(Figures.sig(e.expandedA(), 4), e.expandedA()),
                     Cell.number(Figures.sig(e.expandedB(), 4), e.expandedB()),
                     Cell.number(Double.isNaN(pct) ? "–" : String.format(java.util.Locale.ROOT, "%+.2f", pct), pct),
-                    Cell.text(e.unit())));
+                    Cell.text(org.quire.engine.units.Units.display(e.unit()))));
         }
         tables.add(new Table("change-effect", "Effect on the expanded uncertainty", List.of(
                 Column.of("Y", "output", Align.LEFT, 1f),

@@ -59,7 +59,7 @@ public final class ComparisonText {
         s.append(String.format(Locale.ROOT, "  %-12s %-16s %-16s %-10s %-16s %-16s%n", "output", "U_A", "U_B", "change",
                 "y_A", "y_B"));
         for (OutputEffect e : c.effects()) {
-            String unit = e.unit().isEmpty() ? "" : " " + e.unit();
+            String unit = e.unit().isEmpty() ? "" : " " + org.quire.engine.units.Units.display(e.unit());
             double pct = e.changePercent();
             s.append(String.format(Locale.ROOT, "  %-12s %-16s %-16s %-10s %-16s %-16s%n", e.name(),
                     Figures.sig(e.expandedA(), 4) + unit, Figures.sig(e.expandedB(), 4) + unit,
@@ -71,7 +71,7 @@ public final class ComparisonText {
 
     static String describe(InputQuantity q) {
         var e = q.evaluation();
-        return q.name() + (q.unit().isEmpty() ? "" : " [" + q.unit() + "]") + ": x = " + Figures.estimate(e.estimate())
+        return q.name() + (q.unit().isEmpty() ? "" : " [" + org.quire.engine.units.Units.display(q.unit()) + "]") + ": x = " + Figures.estimate(e.estimate())
                 + ", u = " + Figures.sig(e.standardUncertainty(), 4) + ", Type " + e.type() + ", " + e.distribution().shape()
                 + (q.description().isEmpty() ? "" : " (" + q.description() + ")");
     }

@@ -107,8 +107,8 @@ class MeterCalibrationCommandTest {
         Path cal = dir.resolve("cal.json");
         Result r = build(RUNS, job, cal);
         assertEquals(2, r.status(), r.err());
-        assertTrue(r.err().contains("job.json: $.cmc.ranges: CMC table: range 1 ends at 10 m^3/h but range 2 starts at "
-                + "12 m^3/h: the table has a gap"), r.err());
+        assertTrue(r.err().contains("job.json: $.cmc.ranges: CMC table: range 1 ends at 10 m³/h but range 2 starts at "
+                + "12 m³/h: the table has a gap"), r.err());
         assertFalse(Files.exists(cal));
     }
 

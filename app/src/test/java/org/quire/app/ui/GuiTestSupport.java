@@ -184,8 +184,15 @@ abstract class GuiTestSupport {
 
     /** @return the recovery copies anywhere under the test's recovery folder (every workbench's own folder) */
     long recoveryCopies() throws java.io.IOException {
-        try (java.util.stream.Stream<Path> s = Files.walk(recoveryDir)) {
-            return s.filter(p -> p.getFileName().toString().endsWith(".recovery.json")).count();
+        // the recovery thread may remove a copy or a stopped workbench's folder while the tree is walked: walk again
+        for (int attempt = 0; ; attempt++) {
+            try (java.util.stream.Stream<Path> s = Files.walk(recoveryDir)) {
+                return s.filter(p -> p.getFileName().toString().endsWith(".recovery.json")).count();
+            } catch (java.io.UncheckedIOException e) {
+                if (!(e.getCause() instanceof java.nio.file.NoSuchFileException) || attempt == 20) {
+                    throw e;
+                }
+            }
         }
     }
 

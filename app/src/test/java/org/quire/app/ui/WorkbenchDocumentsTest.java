@@ -137,6 +137,11 @@ class WorkbenchDocumentsTest extends GuiTestSupport {
             assertEquals(file.toAbsolutePath(), restored.document().file(), "it belongs to its file again");
             assertTrue(restored.document().isDirty(), "and is marked as changed");
             assertTrue(await(onEdt(() -> second.saveTo(restored, file))));
+            // the copy is removed on the autosave thread, off the event thread: wait for it, at most 10 s
+            long until = System.nanoTime() + java.util.concurrent.TimeUnit.SECONDS.toNanos(10);
+            while (recoveryCopies() != 0 && System.nanoTime() < until) {
+                Thread.sleep(20);
+            }
             assertEquals(0, recoveryCopies(), "saving removes the copy");
             assertEquals("work not saved when the power went", DocumentStore.open(file).budget().notes());
         } finally {

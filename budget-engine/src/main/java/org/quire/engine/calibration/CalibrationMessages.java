@@ -4,6 +4,7 @@ import java.util.List;
 import java.util.Locale;
 import org.quire.engine.document.TemplateOrigin;
 import org.quire.engine.line.LineFit;
+import org.quire.engine.units.Units;
 
 /** The messages of the calibration package, kept in one place. */
 final class CalibrationMessages {
@@ -75,17 +76,20 @@ final class CalibrationMessages {
         return "CMC table: " + message;
     }
 
-    static String cmcGap(int prev, double join, int next, double from, String unit) {
+    static String cmcGap(int prev, double join, int next, double from, String written) {
+        String unit = Units.display(written);
         return cmc(fmt("range %d ends at %s %s but range %d starts at %s %s: the table has a gap; state the CMC "
                 + "for every flow between them", prev, num(join), unit, next, num(from), unit));
     }
 
-    static String cmcOverlap(int prev, double join, int next, double from, String unit) {
+    static String cmcOverlap(int prev, double join, int next, double from, String written) {
+        String unit = Units.display(written);
         return cmc(fmt("range %d ends at %s %s but range %d starts at %s %s: the ranges overlap", prev, num(join),
                 unit, next, num(from), unit));
     }
 
-    static String outsideCmc(double flow, String unit, double lo, double hi) {
+    static String outsideCmc(double flow, String written, double lo, double hi) {
+        String unit = Units.display(written);
         return cmc(fmt("the flow %s %s lies outside the table (%s to %s %s): the laboratory states no CMC there",
                 num(flow), unit, num(lo), num(hi), unit));
     }
@@ -209,7 +213,7 @@ final class CalibrationMessages {
 
     static String raisedToCmc(String label, double u, double cmc, double flow, String unit) {
         return "point '" + label + "': U = " + pct(u) + " % is below the laboratory's CMC of " + pct(cmc) + " % at "
-                + num(flow) + " " + unit + "; it is reported at the CMC (ILAC P14)";
+                + num(flow) + " " + Units.display(unit) + "; it is reported at the CMC (ILAC P14)";
     }
 
     static String flowUnitMismatch(String what, String from, String to, String message) {
@@ -250,7 +254,8 @@ final class CalibrationMessages {
                 + "; use the weighted mean error or a chosen constant";
     }
 
-    static String slopeNote(LineFit fit, String unit) {
+    static String slopeNote(LineFit fit, String written) {
+        String unit = Units.display(written);
         return "slope of indicated against reference flow by Gauss-Markov regression (ISO/TS 28037:2010 clause 8): "
                 + "b = " + num(fit.slope()) + ", u(b) = " + num(fit.slopeUncertainty()) + "; the intercept a = "
                 + num(fit.intercept()) + " " + unit + " (u = " + num(fit.interceptUncertainty()) + " " + unit

@@ -228,7 +228,7 @@ class MeterCalibrationTest {
     void aCmcTableWithAGapIsAnErrorAtItsJsonPath() throws Exception {
         BudgetFormatException e = badFile("{\"from\": 10, \"to\": 50", "{\"from\": 12, \"to\": 50");
         assertEquals("$.cmc.ranges", e.path());
-        assertTrue(e.getMessage().contains("range 1 ends at 10 m^3/h but range 2 starts at 12 m^3/h: the table has a gap"),
+        assertTrue(e.getMessage().contains("range 1 ends at 10 m³/h but range 2 starts at 12 m³/h: the table has a gap"),
                 e.getMessage());
     }
 

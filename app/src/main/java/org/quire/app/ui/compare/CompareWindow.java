@@ -125,7 +125,7 @@ public final class CompareWindow extends JDialog {
         List<Object[]> rows = new ArrayList<>();
         for (OutputEffect e : c.effects()) {
             double p = e.changePercent();
-            rows.add(new Object[] {e.name(), e.unit(), est(e.estimateA(), e.expandedA()), unc(e.expandedA()),
+            rows.add(new Object[] {e.name(), org.quire.engine.units.Units.display(e.unit()), est(e.estimateA(), e.expandedA()), unc(e.expandedA()),
                 unc(e.coverageFactorA()), est(e.estimateB(), e.expandedB()), unc(e.expandedB()), unc(e.coverageFactorB()),
                 Double.isNaN(p) ? "\u2014" : String.format(Locale.ROOT, "%+.1f %%", p)});
         }
