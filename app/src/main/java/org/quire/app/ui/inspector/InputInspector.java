@@ -150,7 +150,7 @@ final class InputInspector extends JPanel {
         p.add(l, c);
         c.weightx = 1;
         c.fill = GridBagConstraints.HORIZONTAL;
-        JTextField f = new JTextField();
+        JTextField f = new JTextField(1); // a width of its own, not its text's: a long description never squeezes the labels
         l.setLabelFor(f);
         p.add(f, c);
         f.setName("inspector:" + label);

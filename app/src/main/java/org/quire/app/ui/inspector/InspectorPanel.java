@@ -63,7 +63,7 @@ public final class InspectorPanel extends JPanel {
             }
             EvaluationSettings s = b.settings();
             String text = ("<html><b>" + esc(b.title().isEmpty() ? editor.document().name() : b.title()) + "</b><br><br>"
-                    + (editor.document().file() == null ? "Not saved to a file yet." : esc(String.valueOf(editor.document().file())))
+                    + (editor.document().file() == null ? "Not saved to a file yet." : fileLines(editor.document().file()))
                     + "<br><br>" + count(b.inputs().size(), "input") + ", " + count(b.outputs().size(), "output") + ", "
                     + count(b.correlations().size(), "correlation") + "<br>"
                     + (s.hasFixedCoverageFactor() ? "k = " + Fmt.num(s.coverageFactor())
@@ -73,12 +73,30 @@ public final class InspectorPanel extends JPanel {
                     + "<br><br>Select an input in the Inputs table to see and change all of its options here.</html>");
             if (!text.equals(overview.getText())) {
                 overview.setText(text);
+                overview.setToolTipText(editor.document().file() == null ? null
+                        : String.valueOf(editor.document().file().toAbsolutePath()));
             }
             cards.show(this, "overview");
         } else {
             input().show(q);
             cards.show(this, "input");
         }
+    }
+
+    /**
+     * The file as its name and, below it, its folder shortened to the last two folders: a long path would
+     * otherwise set the inspector's width (the full path is the overview's tooltip).
+     */
+    private static String fileLines(java.nio.file.Path file) {
+        java.nio.file.Path abs = file.toAbsolutePath();
+        java.nio.file.Path folder = abs.getParent();
+        String in = "";
+        if (folder != null) {
+            int n = folder.getNameCount();
+            in = n <= 2 ? folder.toString()
+                    : "\u2026" + java.io.File.separator + folder.subpath(n - 2, n);
+        }
+        return esc(String.valueOf(abs.getFileName())) + (in.isEmpty() ? "" : "<br>in " + esc(in));
     }
 
     /** A panel that takes the width of the scroll pane's viewport, so the inspector never clips on the right. */
