@@ -402,11 +402,11 @@ final class CalibrationCommand implements Callable<Integer> {
         }
         s.append("method: ").append(r.methodTitle()).append(" (").append(r.calibration().method().id())
                 .append(" version ").append(r.calibration().method().version()).append(")\n");
-        s.append("repeatability: ").append(r.calibration().repeatability().word()).append("\n\n");
+        s.append("repeatability: ").append(r.calibration().repeatability().text()).append("\n\n");
         series(s, r, r.asFound());
         AdjustmentResult adj = r.adjustment();
         if (adj != null) {
-            s.append(f("adjustment (%s):%n", adj.kind().word()));
+            s.append(f("adjustment (%s):%n", adj.kind().text()));
             String unit = adj.constantUnit().isEmpty() ? "" : " " + adj.constantUnit();
             s.append(f("  %-24s %16s   %16s%n", adj.constantName(), "as found", "as left"));
             s.append(f("  %-24s %16s   %16s%n", "", g(adj.oldConstant()) + unit, g(adj.newConstant()) + unit));

@@ -149,7 +149,7 @@ public final class CalibrationReport {
                 + c.method().version() + ", SHA-256 " + c.method().contentHash()));
         rows.add(fact("error of indication", c.errorOutput() + " (" + r.errorUnit() + " of the reading)"));
         rows.add(fact("flow", c.flowOutput() + " (" + r.flowUnit() + ")"));
-        rows.add(fact("repeatability", c.repeatability().word()));
+        rows.add(fact("repeatability", c.repeatability().text()));
         rows.add(fact("reference standards", String.join(", ", d.referenceStandards())));
         rows.add(fact("performed by", d.author()));
         List<Block> blocks = new ArrayList<>();

@@ -336,7 +336,7 @@ public final class CertificateBuilder {
         List<Block> blocks = new ArrayList<>();
         blocks.add(new TableBlock(new Table("certificate-constant", "Calibration constant", List.of(
                 Column.of("", "item", Align.LEFT, 3f), Column.of("Value", "value", Align.RIGHT, 2f)), rows)));
-        blocks.add(new Paragraph("The meter was adjusted by " + a.kind().word().replace('-', ' ') + ". Every "
+        blocks.add(new Paragraph("The meter was adjusted by " + a.kind().text() + ". Every "
                 + "indication changes by the ratio of the constants."));
         a.notes().forEach(n -> blocks.add(new Paragraph(sentence(n))));
         return new Part("Adjustment", blocks);

@@ -379,7 +379,7 @@ public final class ReportBuilder {
                             : Cell.number(Figures.compact(c.tolerance(), 1), c.tolerance()),
                     Cell.number(Figures.sig(c.lowerDifference(), 2), c.lowerDifference()),
                     Cell.number(Figures.sig(c.upperDifference(), 2), c.upperDifference()),
-                    Cell.text(c.verdict().word())));
+                    Cell.text(c.verdict().outcome())));
         }
         blocks.add(new TableBlock(new Table("monte-carlo", "Monte Carlo estimate, standard uncertainty and coverage "
                 + "intervals (JCGM 101:2008 7.6, 7.7.1 probabilistically symmetric, 7.7.2 shortest)", List.of(

@@ -33,6 +33,11 @@ public record Adjustment(Kind kind, double chosenConstant) {
             return word;
         }
 
+        /** @return the kind as screens, reports and the command line name it: the word with spaces */
+        public String text() {
+            return word.replace('-', ' ');
+        }
+
         /** @return the kind written {@code word}, or null */
         public static Kind byWord(String word) {
             for (Kind k : values()) {

@@ -26,6 +26,11 @@ public enum RepeatabilityBasis {
         return word;
     }
 
+    /** @return the basis as screens, reports and the command line name it: the word with spaces, e.g. mean of runs */
+    public String text() {
+        return word.replace('-', ' ');
+    }
+
     /** @return the basis written {@code word}, or null */
     public static RepeatabilityBasis byWord(String word) {
         for (RepeatabilityBasis b : values()) {

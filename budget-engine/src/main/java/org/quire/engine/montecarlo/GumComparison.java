@@ -47,7 +47,12 @@ public final class GumComparison {
          *     {@code GUM result NOT validated} (JCGM 101:2008 8.2 c)
          */
         public String statement() {
-            return this == VALIDATED ? "GUM result validated" : "GUM result NOT validated";
+            return "GUM result " + outcome();
+        }
+
+        /** @return the verdict in a table column headed "GUM result": {@code validated} or {@code NOT validated} */
+        public String outcome() {
+            return this == VALIDATED ? "validated" : "NOT validated";
         }
     }
 

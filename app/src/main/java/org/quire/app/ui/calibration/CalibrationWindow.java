@@ -227,7 +227,7 @@ public final class CalibrationWindow extends JFrame {
         StringBuilder h = new StringBuilder("<html><b>").append(esc(r.calibration().title())).append("</b><br>Method: ")
                 .append(esc(r.methodTitle())).append(" (").append(esc(r.calibration().method().id())).append(" version ")
                 .append(r.calibration().method().version()).append("); repeatability: ")
-                .append(esc(r.calibration().repeatability().word().replace('-', ' ')));
+                .append(esc(r.calibration().repeatability().text()));
         for (String f : r.findings()) {
             h.append("<br><span style='color:").append(hex("Quire.warning")).append("'>").append(esc(f)).append("</span>");
         }
@@ -237,7 +237,7 @@ public final class CalibrationWindow extends JFrame {
             adjustmentText.setText("<html>Not adjusted: the as-found results stand as left.</html>");
         } else {
             String unit = adj.constantUnit().isEmpty() ? "" : " " + adj.constantUnit();
-            adjustmentText.setText("<html><b>Adjustment</b> (" + esc(adj.kind().word().replace('-', ' ')) + "): " + esc(adj.constantName())
+            adjustmentText.setText("<html><b>Adjustment</b> (" + esc(adj.kind().text()) + "): " + esc(adj.constantName())
                     + " as found " + Fmt.num(adj.oldConstant()) + unit + ", as left " + org.quire.engine.gum.Figures.compact(adj.newConstant(), 6) + unit
                     + " (u = " + Fmt.working(adj.newConstantUncertainty()) + unit + "); error removed "
                     + Fmt.working(adj.errorRemoved()) + " %"
