@@ -125,17 +125,14 @@ public final class MonteCarlo {
     }
 
     /**
-     * Worker threads, and the arrays of the trial values, kept for many runs one after another (a batch of
-     * budgets, {@link #run(BlockEvaluator, InputSampler, MonteCarloSettings, ProgressListener, Workers)}), so
-     * that a run neither starts threads nor allocates its values afresh. The values are reused only when a run
-     * does not keep them ({@link MonteCarloSettings#keepValues()}). Thread-safe: runs on the same workers take
-     * turns. Close to end the threads.
+     * Worker threads kept for many runs one after another (a batch of budgets,
+     * {@link #run(BlockEvaluator, InputSampler, MonteCarloSettings, ProgressListener, Workers)}), so that a run
+     * starts no threads; the arrays of the trial values come from {@link SpareArrays}, as for every run.
+     * Thread-safe: runs on the same workers take turns. Close to end the threads.
      */
     public static final class Workers implements AutoCloseable {
         private final int threads;
         private final ExecutorService executor;
-        /** The values of the last run that did not keep them, for the next one of the same size. */
-        private double[][] values;
 
         private Workers(int threads) {
             this.threads = threads;
@@ -157,15 +154,6 @@ public final class MonteCarlo {
         /** @return the number of worker threads */
         public int threads() {
             return threads;
-        }
-
-        /** @return arrays for {@code outputs} x {@code trials} values, those of the last run when they fit */
-        private double[][] values(int outputs, int trials) {
-            if (values == null || values.length != outputs || values[0].length != trials) {
-                values = null; // the old arrays may go before the new ones are made
-                values = new double[outputs][trials];
-            }
-            return values;
         }
 
         /** Ends the worker threads, waiting for them. */
@@ -288,8 +276,7 @@ public final class MonteCarlo {
             int trials = (int) settings.trials();
             planned = trials;
             int k = model.outputCount();
-            Batch batch = simulate(0, trials, workers != null && !settings.keepValues() ? workers.values(k, trials)
-                    : spare(k, trials));
+            Batch batch = simulate(0, trials, spare(k, trials));
             Moments total = combine(List.of(batch));
             return finish(batch.values, trials, total, 1, true);
         }
@@ -420,11 +407,8 @@ public final class MonteCarlo {
             for (Future<OutputSummary> f : futures) {
                 summaries.add(await(f));
             }
-            // nothing refers to the reordered values any more; arrays of lent workers stay theirs for the next run
-            if (settings.keepValues() || workers == null) {
-                for (double[] w : work) {
-                    SpareArrays.give(w);
-                }
+            for (double[] w : work) {
+                SpareArrays.give(w); // nothing refers to the reordered values any more
             }
             listener.progress(done.get(), planned);
             return new MonteCarloResult(settings, trials, summaries, moments.correlation(), inputs.usesCopula(),
