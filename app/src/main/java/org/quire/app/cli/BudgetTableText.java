@@ -37,16 +37,16 @@ final class BudgetTableText {
             for (Contribution c : o.contributions()) {
                 s.append(String.format(Locale.ROOT, "  %-14s %-4s %-13s %16s %13s %13s %15s %6s %7s%n",
                         c.input(), c.type(), c.distribution(), Figures.estimate(c.estimate()),
-                        working(c.standardUncertainty()), working(c.sensitivity()), working(c.contribution()),
+                        Figures.working(c.standardUncertainty()), Figures.working(c.sensitivity()), Figures.working(c.contribution()),
                         Figures.dof(c.dof()), Figures.percent(c.share()) + " %"));
             }
             for (CorrelationTerm t : o.correlationTerms()) {
                 s.append(String.format(Locale.ROOT, "  correlation term %s, %s (r = %s): %s%s to u_c\u00b2(y)%n",
-                        t.first(), t.second(), Figures.estimate(t.r()), working(t.variance()), squared(shownUnit)));
+                        t.first(), t.second(), Figures.estimate(t.r()), Figures.working(t.variance()), squared(shownUnit)));
             }
             if (o.higherOrderTerms() == HigherOrderTerms.INCLUDED) {
                 s.append(String.format(Locale.ROOT, "  higher-order terms: %s%s to u_c\u00b2(y)%n",
-                        working(o.higherOrderVariance()), squared(shownUnit)));
+                        Figures.working(o.higherOrderVariance()), squared(shownUnit)));
             } else if (o.higherOrderTerms() == HigherOrderTerms.NOT_INCLUDED) {
                 s.append("  higher-order terms: ").append(o.higherOrderTerms().text()).append('\n');
             }
@@ -87,11 +87,6 @@ final class BudgetTableText {
         return s.toString();
     }
 
-    /** @return a working figure by {@link Figures#working}, "–" where it is not defined */
-    static String working(double v) {
-        return Figures.working(v);
-    }
-
     /** @return an uncertainty rounded to {@code digits} significant digits (JCGM 100:2008 7.2.6), as stated */
     static String uncertainty(double u, int digits) {
         return Double.isFinite(u) ? Rounding.uncertainty(u, digits).toPlainString() : Figures.sig(u, digits);
@@ -99,9 +94,5 @@ final class BudgetTableText {
 
     private static String squared(String unit) {
         return unit.isEmpty() ? "" : " (" + unit + ")\u00b2";
-    }
-
-    static String dof(double nu) {
-        return Figures.dofPlain(nu);
     }
 }

@@ -174,7 +174,8 @@ final class FitCommand implements Callable<Integer> {
         return org.quire.engine.gum.Figures.sig(v, 6);
     }
 
+    /** @return degrees of freedom by the one rule ({@link org.quire.engine.gum.Figures#dof}: ∞ where infinite) */
     static String dof(double v) {
-        return BudgetTableText.dof(v);
+        return org.quire.engine.gum.Figures.dof(v);
     }
 }
