@@ -37,7 +37,7 @@ public final class Terminal {
             Map.entry('\u03c1', "rho"), Map.entry('\u03c3', "sigma"), Map.entry('\u221e', "inf"),
             Map.entry('\u2264', "<="), Map.entry('\u2265', ">="), Map.entry('\u2260', "!="), Map.entry('\u2248', "~"),
             Map.entry('\u221a', "sqrt"), Map.entry('\u2026', "..."), Map.entry('\u2018', "'"), Map.entry('\u2019', "'"),
-            Map.entry('\u201c', "\""), Map.entry('\u201d', "\""), Map.entry('\u2022', "*"), Map.entry('\u2192', "->"),
+            Map.entry('\u201c', "'"), Map.entry('\u201d', "'"), Map.entry('\u2022', "*"), Map.entry('\u2192', "->"),
             Map.entry('\u2190', "<-"), Map.entry('\u2713', "ok"), Map.entry('\u2717', "x"), Map.entry('\u207b', "^-"),
             Map.entry('\u2080', "0"), Map.entry('\u2081', "1"), Map.entry('\u2082', "2"), Map.entry('\u2083', "3"),
             Map.entry('\u2084', "4"), Map.entry('\u2085', "5"), Map.entry('\u2086', "6"), Map.entry('\u2087', "7"),

@@ -78,8 +78,27 @@ class SmallScreenGuiTest extends GuiTestSupport {
     }
 
     private void fitsTheWidth(BudgetEditor ed, boolean wider) throws Exception {
-        onEdt(() -> { ed.revealSection("Results (GUM)"); return null; });
-        Thread.sleep(300);
+        onEdt(() -> {
+            // the inspector at its default width (PaneLayout: 340 px): now and then the start-up leaves it some
+            // 65 px wider at this size (a known fault of the pane layout, not of the table this test is about)
+            Component inspector = WorkbenchEditingTest.find(frame.getContentPane(), "inspector");
+            javax.swing.JSplitPane split = (javax.swing.JSplitPane) SwingUtilities.getAncestorOfClass(
+                    javax.swing.JSplitPane.class, inspector);
+            split.setDividerLocation(split.getWidth() - split.getDividerSize() - 340);
+            ed.revealSection("Results (GUM)");
+            return null;
+        });
+        // the layout settles (the frame's new size, then the split positions, then the columns) in events of
+        // its own: wait until the view has its width and the columns have followed it, at most WAIT_MILLIS
+        try {
+            waitFor("the results table fitted to its view", () -> {
+                ed.validate();
+                javax.swing.JTable t = named(ed, "budget:E");
+                return t.getParent() != null && t.getPreferredSize().width <= t.getParent().getWidth();
+            });
+        } catch (AssertionError e) {
+            // not fitted in time: the assertions below say by how much
+        }
         onEdt(() -> {
             ed.validate();
             javax.swing.JTable t = named(ed, "budget:E");
@@ -107,7 +126,9 @@ class SmallScreenGuiTest extends GuiTestSupport {
             }
             assertEquals(9, t.getColumnCount());
             assertTrue(t.getPreferredSize().width <= view.getWidth(), "table " + t.getPreferredSize().width
-                    + " px in a view of " + view.getWidth() + " px");
+                    + " px in a view of " + view.getWidth() + " px (frame " + frame.getWidth() + ", inspector "
+                    + WorkbenchEditingTest.find(frame.getContentPane(), "inspector").getWidth() + ", editor "
+                    + ed.getWidth() + ")");
             assertTrue(!sp.getHorizontalScrollBar().isVisible(), "no sideways scrolling");
             for (int c = 0; c < t.getColumnCount(); c++) {
                 Rectangle cell = t.getCellRect(0, c, true);

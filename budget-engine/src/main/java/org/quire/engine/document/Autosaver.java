@@ -130,6 +130,17 @@ public final class Autosaver implements AutoCloseable {
         return n;
     }
 
+    /**
+     * Stops without writing, for a successor that has been handed the same documents (a new period): the pending
+     * documents are forgotten at once, removals already asked for still run, and the autosave thread ends after
+     * them. Touches no file on the calling thread. Writing the old states here could bring back the copy of a
+     * document saved meanwhile, or overwrite the successor's newer copy.
+     */
+    public void abandon() {
+        dirty.clear();
+        executor.shutdown();
+    }
+
     /** Writes what is pending and stops the autosave thread. */
     @Override
     public void close() {

@@ -159,7 +159,9 @@ public final class MonteCarlo {
         /** Ends the worker threads, waiting for them. */
         @Override
         public void close() {
-            shutdown(executor);
+            synchronized (this) { // waits for a run on these workers to end (runs hold this lock)
+                shutdown(executor);
+            }
         }
     }
 

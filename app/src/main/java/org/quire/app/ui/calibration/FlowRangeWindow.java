@@ -107,7 +107,8 @@ public final class FlowRangeWindow extends JFrame {
         tableScroll.setPreferredSize(new Dimension(900, table.getRowHeight() * 8 + 32));
         tableScroll.setMinimumSize(new Dimension(200, table.getRowHeight() * 3 + 32));
         chart.setMinimumSize(new Dimension(200, 150));
-        JSplitPane split = new JSplitPane(JSplitPane.VERTICAL_SPLIT, tableScroll, chart);
+        JSplitPane split = new JSplitPane(JSplitPane.VERTICAL_SPLIT, tableScroll,
+                org.quire.app.ui.chart.ChartStack.of(chart)); // scrolls, never cuts, where the chart is taller
         split.setResizeWeight(0);
         getContentPane().add(north, BorderLayout.NORTH);
         getContentPane().add(split, BorderLayout.CENTER);
@@ -136,7 +137,7 @@ public final class FlowRangeWindow extends JFrame {
         if (b.flowPoints() == null) {
             worker = null;
             finished();
-            cleared("The budget has no flow points any more: add a 'flowPoints' table to see its flow range.");
+            cleared("The budget has no flow points any more: list the flow points in the budget file to see its flow range.");
             return;
         }
         Budget evaluated = b;
@@ -183,8 +184,9 @@ public final class FlowRangeWindow extends JFrame {
                 }
                 finished();
                 try {
-                    budget = evaluated;
-                    show(get());
+                    FlowRangeResult shown = get();
+                    budget = evaluated; // only a budget whose figures are shown is the one drilled into
+                    show(shown);
                 } catch (CancellationException e) {
                     cleared("Cancelled: no result shown; Evaluate again to start over.");
                 } catch (InterruptedException e) {

@@ -22,7 +22,7 @@ import org.quire.engine.document.RecoveryStore;
  *
  * <p>No user-interface imports. Not thread-safe: call it on the event thread. It touches no file on the calling
  * thread: the autosaver writes and removes copies on its own thread, and what is left (removing a copy while
- * copying is off, the last writes when the period changes or the workbench closes) runs on a recovery thread of
+ * copying is off, the last writes when the workbench closes) runs on a recovery thread of
  * its own, which keeps the application alive until it is done; failures reach {@code onError} there.
  */
 public final class RecoveryKeeper implements AutoCloseable {
@@ -30,6 +30,8 @@ public final class RecoveryKeeper implements AutoCloseable {
     private final BiConsumer<String, IOException> onError;
     private final Map<BudgetDocument, Boolean> tracked = new LinkedHashMap<>();
     private Autosaver autosaver;
+    /** Set by {@link #close(Runnable)}: later calls do nothing (a save that ends late keeps its copy, to be offered). */
+    private boolean closed;
     /** File work that is not the autosaver's: one thread, in order, ending when idle. */
     private final ThreadPoolExecutor io = new ThreadPoolExecutor(1, 1, 1, TimeUnit.SECONDS,
             new LinkedBlockingQueue<>(), r -> new Thread(r, "quire-recovery"));
@@ -52,8 +54,13 @@ public final class RecoveryKeeper implements AutoCloseable {
 
     /** Changes the period (null: stop copying); documents already changed are handed to the new autosaver. */
     public void setPeriod(Duration period) {
+        if (closed) {
+            return;
+        }
         if (autosaver != null) {
-            io.execute(autosaver::close); // writes what the old one still holds, off the calling thread
+            // the new one (or, with no period, nobody) takes over the changed documents: the old one writes
+            // nothing more, so it cannot bring back the copy of a budget saved meanwhile
+            autosaver.abandon();
             autosaver = null;
         }
         if (period != null) {
@@ -112,6 +119,9 @@ public final class RecoveryKeeper implements AutoCloseable {
     }
 
     private void discard(String id) {
+        if (closed) {
+            return;
+        }
         if (autosaver != null) {
             autosaver.discardLater(id);
             return;
@@ -128,7 +138,7 @@ public final class RecoveryKeeper implements AutoCloseable {
     /** Writes every pending copy now, on the recovery thread; @return how many were written, once done */
     public CompletableFuture<Integer> flush() {
         Autosaver a = autosaver;
-        return a == null ? CompletableFuture.completedFuture(0) : CompletableFuture.supplyAsync(a::flush, io);
+        return a == null || closed ? CompletableFuture.completedFuture(0) : CompletableFuture.supplyAsync(a::flush, io);
     }
 
     /**
@@ -138,13 +148,20 @@ public final class RecoveryKeeper implements AutoCloseable {
      * @return done once all is written and {@code after} has run
      */
     public CompletableFuture<Void> close(Runnable after) {
+        if (closed) {
+            return CompletableFuture.completedFuture(null);
+        }
+        closed = true;
         Autosaver a = autosaver;
         autosaver = null;
         CompletableFuture<Void> done = CompletableFuture.runAsync(() -> {
-            if (a != null) {
-                a.close();
+            try {
+                if (a != null) {
+                    a.close();
+                }
+            } finally {
+                after.run(); // the folder is released even when the last writes failed
             }
-            after.run();
         }, io);
         io.shutdown();
         return done;

@@ -137,6 +137,8 @@ final class OutputResultPanel extends JPanel {
         JScrollPane sp = new JScrollPane(table);
         sp.setColumnHeaderView(table.getTableHeader());
         table.getTableHeader().setDefaultRenderer(new WrappingHeader(table.getTableHeader().getDefaultRenderer()));
+        // the columns give way by their kind (figures, words), read by model index: they keep their order
+        table.getTableHeader().setReorderingAllowed(false);
         sp.getViewport().addComponentListener(new java.awt.event.ComponentAdapter() {
             @Override
             public void componentResized(java.awt.event.ComponentEvent e) {
