@@ -218,6 +218,9 @@ public final class ReviewPanel implements Section {
         Review prior = base;
         pending = d;
         java.util.function.Supplier<org.quire.engine.document.TemplateLibrary> library = templates;
+        // what is shown now, read here on the event thread: an unchanged budget keeps it
+        org.quire.engine.document.TemplateConformance.Finding shown = shownFinding;
+        String shownUnchecked = uncheckedShown;
         // the content hash of a large budget (200 000 readings) takes seconds, and the template library is read from
         // its folders: both worked out off the event thread
         new javax.swing.SwingWorker<Review, Void>() {
@@ -227,7 +230,8 @@ public final class ReviewPanel implements Section {
             @Override
             protected Review doInBackground() {
                 if (prior != null && prior.contentHash().equals(d.contentHash())) {
-                    finding = shownFinding;
+                    finding = shown;
+                    unchecked = shownUnchecked;
                     return prior;
                 }
                 ReviewContext rc = ReviewContext.none().withUnits(new org.quire.app.review.EngineUnitChecker(ctx.library()));
@@ -281,6 +285,8 @@ public final class ReviewPanel implements Section {
     }
 
     private org.quire.engine.document.TemplateConformance.Finding shownFinding;
+    /** Why the template check could not be made, as shown, or null. */
+    private String uncheckedShown;
 
     /**
      * Shows the engine's template check of the budget above the checklist: each deviation from the template's
@@ -289,6 +295,7 @@ public final class ReviewPanel implements Section {
     private void showTemplate(org.quire.engine.document.TemplateConformance.Finding f,
             String unchecked) {
         shownFinding = f;
+        uncheckedShown = unchecked;
         String text;
         java.awt.Color colour = Colors.get("Label.foreground");
         if (unchecked != null) {
