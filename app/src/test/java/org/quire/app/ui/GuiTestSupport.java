@@ -205,7 +205,18 @@ abstract class GuiTestSupport {
             }
             Thread.sleep(20);
         }
-        fail("timed out after " + WAIT_MILLIS + " ms waiting for: " + what);
+        // say what the background threads were doing, so that a timeout on a loaded machine can be told from a hang
+        StringBuilder busy = new StringBuilder();
+        for (java.util.Map.Entry<Thread, StackTraceElement[]> e : Thread.getAllStackTraces().entrySet()) {
+            String n = e.getKey().getName();
+            if (n.startsWith("SwingWorker") || n.startsWith("quire")) {
+                busy.append("\n  ").append(n).append(' ').append(e.getKey().getState());
+                for (int i = 0; i < Math.min(4, e.getValue().length); i++) {
+                    busy.append("\n    at ").append(e.getValue()[i]);
+                }
+            }
+        }
+        fail("timed out after " + WAIT_MILLIS + " ms waiting for: " + what + "; background threads:" + busy);
     }
 
     /** Opens the demo budget and waits for its first results. */
