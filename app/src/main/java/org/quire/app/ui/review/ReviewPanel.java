@@ -223,7 +223,7 @@ public final class ReviewPanel implements Section {
         String shownUnchecked = uncheckedShown;
         // the content hash of a large budget (200 000 readings) takes seconds, and the template library is read from
         // its folders: both worked out off the event thread
-        new javax.swing.SwingWorker<Review, Void>() {
+        REVIEWS.execute(new javax.swing.SwingWorker<Review, Void>() {
             private org.quire.engine.document.TemplateConformance.Finding finding;
             private String unchecked;
 
@@ -281,10 +281,21 @@ public final class ReviewPanel implements Section {
                     checklist.setRowSelectionInterval(0, 0);
                 }
             }
-        }.execute();
+        });
     }
 
     private org.quire.engine.document.TemplateConformance.Finding shownFinding;
+
+    /**
+     * The checklists' background work (content hash, template check), one at a time on a thread of its own: not
+     * on Swing's shared pool of ten, where long file work elsewhere could keep the checklist waiting.
+     */
+    private static final java.util.concurrent.ExecutorService REVIEWS = java.util.concurrent.Executors
+            .newSingleThreadExecutor(r -> {
+                Thread t = new Thread(r, "quire-review");
+                t.setDaemon(true);
+                return t;
+            });
     /** Why the template check could not be made, as shown, or null. */
     private String uncheckedShown;
 
