@@ -5,6 +5,7 @@ import java.util.concurrent.ExecutionException;
 import javax.swing.SwingWorker;
 import org.quire.app.compare.BudgetComparison;
 import org.quire.app.compare.Comparison;
+import org.quire.app.ui.common.GuardedWorker;
 import org.quire.app.ui.compare.CompareWindow;
 import org.quire.app.ui.notebook.BudgetEditor;
 import org.quire.engine.budget.Budget;
@@ -41,7 +42,7 @@ final class WorkbenchCompare {
         Budget b = ed.document().budget();
         String nameB = ed.document().name() + " (open)";
         frame.status("Comparing with " + other + "\u2026", false);
-        SwingWorker<Comparison, Void> w = new SwingWorker<>() {
+        SwingWorker<Comparison, Void> w = new GuardedWorker<>() {
             @Override
             protected Comparison doInBackground() throws Exception {
                 Budget a = DocumentStore.open(other).budget();
@@ -49,7 +50,7 @@ final class WorkbenchCompare {
             }
 
             @Override
-            protected void done() {
+            protected void finished() {
                 try {
                     Comparison c = get();
                     frame.status("Compared with " + other, false);

@@ -13,6 +13,7 @@ import java.util.concurrent.CompletableFuture;
 import java.util.concurrent.ExecutionException;
 import javax.swing.JOptionPane;
 import javax.swing.SwingWorker;
+import org.quire.app.ui.common.GuardedWorker;
 import org.quire.app.ui.common.WorkbenchPrefs;
 import org.quire.app.ui.document.BudgetDocument;
 import org.quire.app.ui.notebook.BudgetEditor;
@@ -68,14 +69,14 @@ final class WorkbenchFiles {
      */
     private <T> CompletableFuture<T> inBackground(String what, boolean cancellable, Work<T> work) {
         CompletableFuture<T> out = new CompletableFuture<>();
-        SwingWorker<T, Void> w = new SwingWorker<>() {
+        SwingWorker<T, Void> w = new GuardedWorker<>() {
             @Override
             protected T doInBackground() throws Exception {
                 return work.run();
             }
 
             @Override
-            protected void done() {
+            protected void finished() {
                 running.remove(this);
                 cancellableTasks.remove(this);
                 showTask();

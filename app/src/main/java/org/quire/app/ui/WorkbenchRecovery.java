@@ -8,6 +8,7 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import javax.swing.SwingWorker;
+import org.quire.app.ui.common.GuardedWorker;
 import org.quire.app.ui.common.WorkbenchPrefs;
 import org.quire.app.ui.document.BudgetDocument;
 import org.quire.app.ui.document.RecoveryKeeper;
@@ -95,7 +96,7 @@ final class WorkbenchRecovery {
         record Found(List<RecoverySessions.Session> orphans, Map<RecoveryStore.Pending, RecoverySessions.Session> of,
                 List<String> unreadable) {
         }
-        new SwingWorker<Found, Void>() {
+        new GuardedWorker<Found, Void>() {
             @Override
             protected Found doInBackground() throws Exception {
                 List<RecoverySessions.Session> orphans = sessions.orphans();
@@ -110,7 +111,7 @@ final class WorkbenchRecovery {
             }
 
             @Override
-            protected void done() {
+            protected void finished() {
                 Found f;
                 try {
                     f = get();
@@ -152,7 +153,7 @@ final class WorkbenchRecovery {
         }
         record Restored(RecoveryStore.Pending copy, org.quire.engine.document.BudgetDocument content, String error) {
         }
-        new SwingWorker<List<Restored>, Void>() {
+        new GuardedWorker<List<Restored>, Void>() {
             private final List<String> problems = new ArrayList<>();
 
             @Override
@@ -191,7 +192,7 @@ final class WorkbenchRecovery {
             }
 
             @Override
-            protected void done() {
+            protected void finished() {
                 List<Restored> read;
                 try {
                     read = get();

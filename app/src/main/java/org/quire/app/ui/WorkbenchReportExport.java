@@ -4,6 +4,7 @@ import java.nio.file.Path;
 import java.time.LocalDate;
 import java.util.concurrent.ExecutionException;
 import javax.swing.SwingWorker;
+import org.quire.app.ui.common.GuardedWorker;
 import org.quire.app.ui.export.ReportExport;
 import org.quire.app.ui.notebook.BudgetEditor;
 import org.quire.engine.gum.GumResult;
@@ -45,7 +46,7 @@ final class WorkbenchReportExport {
         GumResult gum = ed.latest().result();
         MonteCarloOutcome mc = ed.monteCarloOutcome(content.budget());
         frame.status("Writing the report to " + target + "\u2026", false);
-        SwingWorker<Void, Void> w = new SwingWorker<>() {
+        SwingWorker<Void, Void> w = new GuardedWorker<>() {
             @Override
             protected Void doInBackground() throws Exception {
                 ReportExport.write(content, gum, mc, target, LocalDate.now(), frame.library());
@@ -53,7 +54,7 @@ final class WorkbenchReportExport {
             }
 
             @Override
-            protected void done() {
+            protected void finished() {
                 try {
                     get();
                     frame.status("Report written to " + target, false);

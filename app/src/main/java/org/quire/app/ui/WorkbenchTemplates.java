@@ -6,6 +6,7 @@ import java.util.List;
 import java.util.Optional;
 import java.util.concurrent.ExecutionException;
 import javax.swing.SwingWorker;
+import org.quire.app.ui.common.GuardedWorker;
 import org.quire.app.ui.common.WorkbenchPrefs;
 import org.quire.app.ui.document.BudgetDocument;
 import org.quire.app.ui.notebook.BudgetEditor;
@@ -77,14 +78,14 @@ final class WorkbenchTemplates {
             return;
         }
         TemplateCatalog catalog = templates();
-        new SwingWorker<Optional<Template>, Void>() {
+        new GuardedWorker<Optional<Template>, Void>() {
             @Override
             protected Optional<Template> doInBackground() throws Exception {
                 return catalog.newerTemplate(content);
             }
 
             @Override
-            protected void done() {
+            protected void finished() {
                 try {
                     Optional<Template> newer = get();
                     if (newer.isPresent() && frame.editors().contains(ed)) {

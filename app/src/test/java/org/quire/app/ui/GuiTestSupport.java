@@ -81,13 +81,46 @@ abstract class GuiTestSupport {
         deleteTree(recoveryDir);
     }
 
-    static void deleteTree(Path dir) throws java.io.IOException {
-        if (dir == null || !Files.exists(dir)) {
-            return;
-        }
-        try (java.util.stream.Stream<Path> s = Files.walk(dir)) {
-            for (Path p : s.sorted(java.util.Comparator.reverseOrder()).toList()) {
-                Files.deleteIfExists(p);
+    /**
+     * Deletes a folder and what it holds. The workbench's recovery thread may still be releasing its session folder
+     * inside it (it works off the event thread, after the frame is gone): files that vanish meanwhile are skipped,
+     * and a folder that gains a file meanwhile is tried again.
+     */
+    static void deleteTree(Path dir) throws Exception {
+        for (int attempt = 0; dir != null && Files.exists(dir); attempt++) {
+            try {
+                Files.walkFileTree(dir, new java.nio.file.SimpleFileVisitor<Path>() {
+                    @Override
+                    public java.nio.file.FileVisitResult visitFile(Path f, java.nio.file.attribute.BasicFileAttributes a)
+                            throws java.io.IOException {
+                        Files.deleteIfExists(f);
+                        return java.nio.file.FileVisitResult.CONTINUE;
+                    }
+
+                    @Override
+                    public java.nio.file.FileVisitResult visitFileFailed(Path f, java.io.IOException e)
+                            throws java.io.IOException {
+                        if (e instanceof java.nio.file.NoSuchFileException) {
+                            return java.nio.file.FileVisitResult.CONTINUE;
+                        }
+                        throw e;
+                    }
+
+                    @Override
+                    public java.nio.file.FileVisitResult postVisitDirectory(Path d, java.io.IOException e)
+                            throws java.io.IOException {
+                        if (e != null && !(e instanceof java.nio.file.NoSuchFileException)) {
+                            throw e;
+                        }
+                        Files.deleteIfExists(d);
+                        return java.nio.file.FileVisitResult.CONTINUE;
+                    }
+                });
+            } catch (java.nio.file.DirectoryNotEmptyException | java.nio.file.NoSuchFileException e) {
+                if (attempt >= 50) {
+                    throw e;
+                }
+                Thread.sleep(20);
             }
         }
     }

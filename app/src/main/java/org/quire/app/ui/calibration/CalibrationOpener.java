@@ -5,6 +5,7 @@ import java.util.concurrent.ExecutionException;
 import java.util.function.BiConsumer;
 import java.util.function.Consumer;
 import javax.swing.SwingWorker;
+import org.quire.app.ui.common.GuardedWorker;
 import org.quire.engine.calibration.PointResult;
 import org.quire.engine.document.Template;
 import org.quire.engine.calibration.CalibrationJson;
@@ -26,7 +27,7 @@ public final class CalibrationOpener {
             Consumer<CalibrationWindow> shown, BiConsumer<String, String> failed) {
         record Loaded(CalibrationJson.Loaded calibration, Template method) {
         }
-        new SwingWorker<Loaded, Void>() {
+        new GuardedWorker<Loaded, Void>() {
             @Override
             protected Loaded doInBackground() throws Exception {
                 CalibrationJson.Loaded l = CalibrationJson.read(file);
@@ -34,7 +35,7 @@ public final class CalibrationOpener {
             }
 
             @Override
-            protected void done() {
+            protected void finished() {
                 try {
                     Loaded l = get();
                     CalibrationWindow w = new CalibrationWindow(l.calibration().calibration(), l.method(), library,

@@ -23,6 +23,7 @@ import org.quire.app.report.CalibrationCharts;
 import org.quire.app.ui.common.Colors;
 import org.quire.app.ui.common.FileDropHandler;
 import org.quire.app.ui.common.Fmt;
+import org.quire.app.ui.common.GuardedWorker;
 import org.quire.app.ui.common.Windows;
 import org.quire.app.ui.chart.ChartView;
 import org.quire.engine.calibration.Adjustment;
@@ -156,7 +157,7 @@ public final class CalibrationWindow extends JFrame {
     public void importRuns(Path csv) {
         state.setText("Reading " + csv.getFileName() + "\u2026");
         Calibration base = calibration;
-        new SwingWorker<Calibration, Void>() {
+        new GuardedWorker<Calibration, Void>() {
             @Override
             protected Calibration doInBackground() throws Exception {
                 List<RunsCsv.MeterRuns> all = RunsCsv.read(CsvReader.read(csv, CsvOptions.defaults()), method);
@@ -173,7 +174,7 @@ public final class CalibrationWindow extends JFrame {
             }
 
             @Override
-            protected void done() {
+            protected void finished() {
                 try {
                     evaluate(get());
                 } catch (InterruptedException e) {
@@ -188,14 +189,14 @@ public final class CalibrationWindow extends JFrame {
     private void evaluate(Calibration c) {
         state.setText("Evaluating\u2026");
         state.setForeground(Colors.get("Label.foreground"));
-        new SwingWorker<CalibrationResult, Void>() {
+        new GuardedWorker<CalibrationResult, Void>() {
             @Override
             protected CalibrationResult doInBackground() throws ModelException, CalibrationException {
                 return CalibrationEvaluator.of(method, library).evaluate(c);
             }
 
             @Override
-            protected void done() {
+            protected void finished() {
                 try {
                     CalibrationResult r = get();
                     calibration = c;

@@ -24,6 +24,7 @@ import org.quire.app.report.CalibrationCharts;
 import org.quire.app.ui.chart.ChartView;
 import org.quire.app.ui.common.Colors;
 import org.quire.app.ui.common.Fmt;
+import org.quire.app.ui.common.GuardedWorker;
 import org.quire.app.ui.common.Windows;
 import org.quire.engine.budget.Budget;
 import org.quire.engine.conformity.ConformityAssessment;
@@ -136,7 +137,7 @@ public final class FlowRangeWindow extends JFrame {
         cancelRun();
         if (b.flowPoints() == null) {
             worker = null;
-            finished();
+            runEnded();
             cleared("The budget has no flow points any more: list the flow points in the budget file to see its flow range.");
             return;
         }
@@ -151,7 +152,7 @@ public final class FlowRangeWindow extends JFrame {
         progress.setMaximum(m);
         progress.setValue(0);
         progress.setString("0 of " + m + " points");
-        SwingWorker<FlowRangeResult, Integer> w = new SwingWorker<>() {
+        SwingWorker<FlowRangeResult, Integer> w = new GuardedWorker<>() {
             @Override
             protected FlowRangeResult doInBackground() throws Exception {
                 SwingWorker<FlowRangeResult, Integer> self = this;
@@ -169,7 +170,7 @@ public final class FlowRangeWindow extends JFrame {
             }
 
             @Override
-            protected void process(List<Integer> done) {
+            protected void received(List<Integer> done) {
                 if (worker == this) {
                     int d = done.get(done.size() - 1);
                     progress.setValue(d);
@@ -178,11 +179,11 @@ public final class FlowRangeWindow extends JFrame {
             }
 
             @Override
-            protected void done() {
+            protected void finished() {
                 if (worker != this) {
                     return;
                 }
-                finished();
+                runEnded();
                 try {
                     FlowRangeResult shown = get();
                     budget = evaluated; // only a budget whose figures are shown is the one drilled into
@@ -207,7 +208,7 @@ public final class FlowRangeWindow extends JFrame {
         }
     }
 
-    private void finished() {
+    private void runEnded() {
         progress.setVisible(false);
         cancel.setEnabled(false);
         again.setEnabled(true);

@@ -73,10 +73,16 @@ public final class Recalculator implements AutoCloseable {
             if (generation.get() != g) {
                 return;
             }
-            Recalculation r = evaluate(budget, library);
+            Recalculation r;
+            try {
+                r = evaluate(budget, library);
+            } catch (RuntimeException | Error e) {
+                r = failed(budget, e);
+            }
+            Recalculation answer = r;
             deliver.execute(() -> {
                 if (generation.get() == g) {
-                    sink.accept(r);
+                    sink.accept(answer);
                 }
             });
         }, delay, TimeUnit.MILLISECONDS);
@@ -128,6 +134,17 @@ public final class Recalculator implements AutoCloseable {
             }
         }
         return new Recalculation(budget, result, problems, (System.nanoTime() - t0) / 1_000_000);
+    }
+
+    /**
+     * The answer when the engine itself failed (a bug, not the user's input): shown as an error in the problems
+     * list, so that the results never silently stay those of an older budget.
+     */
+    static Recalculation failed(Budget budget, Throwable e) {
+        e.printStackTrace();
+        return new Recalculation(budget, null, List.of(Problem.of(Problem.Severity.ERROR, Problem.Area.RESULTS,
+                "the engine failed on this budget (" + e + "): this is a fault in Quire, not in the budget; please "
+                        + "report it with the budget file")), 0);
     }
 
     private static Problem.Severity severity(ModelProblem p) {

@@ -4,6 +4,7 @@ import java.util.List;
 import java.util.concurrent.atomic.AtomicBoolean;
 import java.util.function.Consumer;
 import javax.swing.SwingWorker;
+import org.quire.app.ui.common.GuardedWorker;
 import org.quire.engine.budget.Budget;
 import org.quire.engine.gum.GumResult;
 import org.quire.engine.montecarlo.MonteCarloOutcome;
@@ -13,7 +14,7 @@ import org.quire.engine.montecarlo.ProgressListener;
  * Runs a {@link MonteCarloRunner} off the event thread, publishing progress and passing Cancel to the engine
  * through its {@link ProgressListener}.
  */
-final class MonteCarloWorker extends SwingWorker<MonteCarloOutcome, long[]> {
+final class MonteCarloWorker extends GuardedWorker<MonteCarloOutcome, long[]> {
     private final MonteCarloRunner runner;
     private final Budget budget;
     private final GumResult gum;
@@ -51,7 +52,7 @@ final class MonteCarloWorker extends SwingWorker<MonteCarloOutcome, long[]> {
     Budget budget() { return budget; }
 
     @Override
-    protected void process(List<long[]> chunks) {
+    protected void received(List<long[]> chunks) {
         onProgress.accept(chunks.get(chunks.size() - 1));
     }
 }

@@ -223,65 +223,77 @@ public final class ReviewPanel implements Section {
         String shownUnchecked = uncheckedShown;
         // the content hash of a large budget (200 000 readings) takes seconds, and the template library is read from
         // its folders: both worked out off the event thread
-        REVIEWS.execute(new javax.swing.SwingWorker<Review, Void>() {
-            private org.quire.engine.document.TemplateConformance.Finding finding;
-            private String unchecked;
-
-            @Override
-            protected Review doInBackground() {
-                if (prior != null && prior.contentHash().equals(d.contentHash())) {
-                    finding = shown;
-                    unchecked = shownUnchecked;
-                    return prior;
-                }
-                ReviewContext rc = ReviewContext.none().withUnits(new org.quire.app.review.EngineUnitChecker(ctx.library()));
-                if (library != null && d.templateOrigin() != null) {
-                    try {
-                        finding = org.quire.engine.document.TemplateConformance.check(d, library.get());
-                        rc = rc.withTemplate(finding);
-                    } catch (java.io.IOException | UncheckedIOException e) {
-                        unchecked = "The template library cannot be read (" + e.getMessage() + "): the fields the "
-                                + "template locks are not checked.";
-                    }
-                }
-                return Review.start(r.budget(), r.result(), rc, org.quire.app.report.ContentHasher.of(d));
+        // delivered by invokeLater, not by SwingWorker.done(): Swing hands every worker's done() to the event thread
+        // in shared batches, and one that throws loses the rest of its batch, which would leave this checklist
+        // waiting for ever
+        REVIEWS.execute(() -> {
+            Drawn drawn;
+            try {
+                drawn = draw(d, r, prior, shown, shownUnchecked, library);
+            } catch (RuntimeException | Error e) {
+                drawn = new Drawn(null, null, null, e);
             }
-
-            @Override
-            protected void done() {
-                if (pending != d || decided != null) {
-                    return;
-                }
-                pending = null;
-                Review started;
-                try {
-                    started = get();
-                } catch (InterruptedException e) {
-                    Thread.currentThread().interrupt();
-                    return;
-                } catch (java.util.concurrent.ExecutionException e) {
-                    head.setText("The checklist cannot be drawn up: " + e.getCause().getMessage());
-                    return;
-                }
-                showTemplate(finding, unchecked);
-                if (started == prior) {
-                    return;
-                }
-                base = started;
-                items.set(base.items());
-                // every item and clause readable in full: columns as wide as their text, scrolled sideways
-                org.quire.app.ui.table.SpreadsheetTable.fitColumns(checklist, 560);
-                javax.swing.table.TableColumn comment = checklist.getColumnModel().getColumn(4);
-                comment.setPreferredWidth(Math.max(220, comment.getPreferredWidth())); // room to type a comment
-                head.setText("<html>Checklist of revision " + d.revision() + " (" + d.status().label()
-                        + "), content SHA-256 " + d.contentHash().substring(0, 16) + "\u2026. Items <i>not met</i> or "
-                        + "<i>to confirm</i> need your mark before the budget can be endorsed.</html>");
-                setOpen(true);
-                if (checklist.getRowCount() > 0 && checklist.getSelectedRow() < 0) {
-                    checklist.setRowSelectionInterval(0, 0);
-                }
-            }
+            Drawn answer = drawn;
+            java.awt.EventQueue.invokeLater(() -> shown(d, prior, answer));
         });
+    }
+
+    /** What the background step worked out: the checklist, the template check shown with it, or the failure. */
+    private record Drawn(Review review, org.quire.engine.document.TemplateConformance.Finding finding,
+            String unchecked, Throwable failure) {
+    }
+
+    /** Draws up the checklist off the event thread; reuses the prior one for unchanged content. */
+    private Drawn draw(BudgetDocument d, Recalculation r, Review prior,
+            org.quire.engine.document.TemplateConformance.Finding shown, String shownUnchecked,
+            java.util.function.Supplier<org.quire.engine.document.TemplateLibrary> library) {
+        if (prior != null && prior.contentHash().equals(d.contentHash())) {
+            return new Drawn(prior, shown, shownUnchecked, null);
+        }
+        org.quire.engine.document.TemplateConformance.Finding finding = null;
+        String unchecked = null;
+        ReviewContext rc = ReviewContext.none().withUnits(new org.quire.app.review.EngineUnitChecker(ctx.library()));
+        if (library != null && d.templateOrigin() != null) {
+            try {
+                finding = org.quire.engine.document.TemplateConformance.check(d, library.get());
+                rc = rc.withTemplate(finding);
+            } catch (java.io.IOException | UncheckedIOException e) {
+                unchecked = "The template library cannot be read (" + e.getMessage() + "): the fields the "
+                        + "template locks are not checked.";
+            }
+        }
+        return new Drawn(Review.start(r.budget(), r.result(), rc, org.quire.app.report.ContentHasher.of(d)),
+                finding, unchecked, null);
+    }
+
+    /** Shows a checklist drawn up in the background, on the event thread, unless a newer one is on its way. */
+    private void shown(BudgetDocument d, Review prior, Drawn drawn) {
+        if (pending != d || decided != null) {
+            return;
+        }
+        pending = null;
+        if (drawn.failure() != null) {
+            head.setText("The checklist cannot be drawn up: " + drawn.failure());
+            return;
+        }
+        showTemplate(drawn.finding(), drawn.unchecked());
+        Review started = drawn.review();
+        if (started == prior) {
+            return;
+        }
+        base = started;
+        items.set(base.items());
+        // every item and clause readable in full: columns as wide as their text, scrolled sideways
+        org.quire.app.ui.table.SpreadsheetTable.fitColumns(checklist, 560);
+        javax.swing.table.TableColumn comment = checklist.getColumnModel().getColumn(4);
+        comment.setPreferredWidth(Math.max(220, comment.getPreferredWidth())); // room to type a comment
+        head.setText("<html>Checklist of revision " + d.revision() + " (" + d.status().label()
+                + "), content SHA-256 " + d.contentHash().substring(0, 16) + "\u2026. Items <i>not met</i> or "
+                + "<i>to confirm</i> need your mark before the budget can be endorsed.</html>");
+        setOpen(true);
+        if (checklist.getRowCount() > 0 && checklist.getSelectedRow() < 0) {
+            checklist.setRowSelectionInterval(0, 0);
+        }
     }
 
     private org.quire.engine.document.TemplateConformance.Finding shownFinding;
