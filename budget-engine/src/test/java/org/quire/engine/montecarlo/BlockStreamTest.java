@@ -59,6 +59,32 @@ class BlockStreamTest {
     }
 
     @Test
+    void bulkNormalsAreTheZigguratSamplerOfCommonsRngDrawByDraw() {
+        // McFarland's modified Ziggurat as Apache Commons RNG implements it, reading Commons RNG's own
+        // xoroshiro128++ started at the same state: the bulk fast path must give exactly its values, the rare
+        // draws outside the fast path included, and leave the stream where the sampler leaves it
+        assertTrue(BlockStream.FastPath.X != null, "the fast path's layers were read from the sampler");
+        long s0 = MonteCarlo.mix64(5 + 0x9E3779B97F4A7C15L);
+        long s1 = MonteCarlo.mix64(5 + 2 * 0x9E3779B97F4A7C15L);
+        UniformRandomProvider reference = RandomSource.XO_RO_SHI_RO_128_PP.create(new long[] {s0, s1});
+        org.apache.commons.rng.sampling.distribution.NormalizedGaussianSampler g =
+                org.apache.commons.rng.sampling.distribution.ZigguratSampler.NormalizedGaussian.of(reference);
+        BlockStream bulk = new BlockStream(s0, s1);
+        int n = 1_000_000;
+        double[] z = new double[n + 3];
+        bulk.normals(z, 3, n / 2);
+        bulk.normals(z, 3 + n / 2, n - n / 2);
+        int slow = 0;
+        for (int t = 3; t < n + 3; t++) {
+            double expected = g.sample();
+            assertEquals(expected, z[t], 0.0, "normal " + t);
+            slow += Math.abs(expected) > 3.6360066 ? 1 : 0; // beyond the base layer: drawn outside the fast path
+        }
+        assertTrue(slow > 0, "the tail, outside the fast path, was drawn (" + slow + " draws)");
+        assertEquals(reference.nextLong(), bulk.nextLong(), "the streams end in the same state");
+    }
+
+    @Test
     void normalsHaveTheMomentsAndTailsOfTheStandardNormal() {
         int n = 4_000_000;
         double[] z = new double[n];
