@@ -19,6 +19,10 @@ final class PaneLayout {
     private int navigatorWidth = 230;
     private int inspectorWidth = 340;
     private int problemsHeight = 130;
+    /** The centre split's width when the inspector was last placed in it. */
+    private int centreWidth;
+    /** Whether the divider is being placed here (not moved by the user). */
+    private boolean placing;
     /** The problems pane shrunk to its title line (nothing to list); its height in pixels then, else 0. */
     private int collapsedTo;
 
@@ -31,6 +35,26 @@ final class PaneLayout {
             s.setContinuousLayout(true);
             s.setOneTouchExpandable(false);
         }
+        // the inspector keeps its width when the window's width changes (start-up included, where the split may be
+        // laid out at a passing width before the window has its own); a divider moved at a steady width (by the
+        // user) sets the width it keeps
+        centre.addComponentListener(new java.awt.event.ComponentAdapter() {
+            @Override
+            public void componentResized(java.awt.event.ComponentEvent e) {
+                int w = centre.getWidth();
+                if (w > 0 && w != centreWidth) {
+                    centreWidth = w;
+                    if (isShown(Pane.INSPECTOR)) {
+                        placeInspector();
+                    }
+                }
+            }
+        });
+        centre.addPropertyChangeListener(JSplitPane.DIVIDER_LOCATION_PROPERTY, e -> {
+            if (!placing && centre.getWidth() > 0 && centre.getWidth() == centreWidth && isShown(Pane.INSPECTOR)) {
+                inspectorWidth = centre.getWidth() - centre.getDividerLocation();
+            }
+        });
         // the split's height is known only once the window is laid out (and changes with it): the problems pane
         // keeps its title line's height while it has nothing to list, and gets its remembered height at first
         vertical.addComponentListener(new java.awt.event.ComponentAdapter() {
@@ -80,10 +104,19 @@ final class PaneLayout {
 
     private void apply() {
         main.setDividerLocation(navigatorWidth);
-        centre.setDividerLocation(Math.max(200, centre.getWidth() - inspectorWidth));
+        placeInspector();
         int bottom = collapsedTo > 0 ? collapsedTo + vertical.getDividerSize() : problemsHeight;
         vertical.setDividerLocation(Math.max(200, vertical.getHeight() - bottom));
         main.revalidate();
+    }
+
+    private void placeInspector() {
+        placing = true;
+        try {
+            centre.setDividerLocation(Math.max(200, centre.getWidth() - inspectorWidth));
+        } finally {
+            placing = false;
+        }
     }
 
     /**
