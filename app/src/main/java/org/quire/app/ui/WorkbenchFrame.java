@@ -449,6 +449,25 @@ public final class WorkbenchFrame extends JFrame {
                     point.document().setReadOnly(true);
                     toFront();
                 });
+        // figures of an earlier budget are marked as such while the window is open
+        BudgetDocument.Listener changed = new BudgetDocument.Listener() {
+            @Override
+            public void budgetChanged(BudgetDocument d, org.quire.engine.budget.Budget before,
+                    org.quire.engine.budget.Budget after, String cause) {
+                w.sourceChanged();
+            }
+
+            @Override
+            public void documentStateChanged(BudgetDocument d) {
+            }
+        };
+        ed.document().addListener(changed);
+        w.addWindowListener(new java.awt.event.WindowAdapter() {
+            @Override
+            public void windowClosed(java.awt.event.WindowEvent e) {
+                ed.document().removeListener(changed);
+            }
+        });
         w.setLocationRelativeTo(this);
         w.setVisible(true);
         shown.accept(w);

@@ -223,8 +223,20 @@ class FlowRangeViewGuiTest extends GuiTestSupport {
                 near(p.expandedUncertainty(), (String) t.getValueAt(i, 6), "U at point " + (i + 1));
                 near(100 * p.relativeExpandedUncertainty(), (String) t.getValueAt(i, 8), "U/|y| at point " + (i + 1));
             }
-            window.get().dispose();
             return null;
         });
+        // an edit in the editor marks the figures as those of an earlier budget; Evaluate again clears the mark
+        FlowRangeWindow w = window.get();
+        java.util.function.Supplier<String> state = () -> ((javax.swing.JLabel) WorkbenchEditingTest.find(
+                w.getContentPane(), "flowRangeState")).getText();
+        assertTrue(onEdt(state::get).startsWith("Evaluated"), onEdt(state::get));
+        onEdt(() -> { ed.edit("Edit title", "", b -> b.withTitle("calibrated flow, edited")); return null; });
+        assertTrue(onEdt(state::get).startsWith("The budget has changed since this evaluation"), onEdt(state::get));
+        onEdt(() -> { ((javax.swing.JButton) WorkbenchEditingTest.find(w.getContentPane(), "evaluateAgain")).doClick();
+            return null; });
+        waitFor("the range evaluated again", () -> !w.isRunning() && state.get().startsWith("Evaluated"));
+        onEdt(() -> { w.dispose(); return null; });
+        onEdt(() -> { ed.edit("Edit title", "", b -> b.withTitle("calibrated flow, again")); return null; });
+        assertTrue(onEdt(() -> state.get().startsWith("Evaluated")), "a closed window is no longer told of edits");
     }
 }

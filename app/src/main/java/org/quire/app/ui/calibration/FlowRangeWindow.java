@@ -32,7 +32,6 @@ import org.quire.engine.conformity.PointDecision;
 import org.quire.engine.gum.Figures;
 import org.quire.engine.gum.FlowRange;
 import org.quire.engine.gum.FlowRangeResult;
-import org.quire.engine.gum.Rounding;
 import org.quire.engine.model.FunctionLibrary;
 import org.quire.engine.units.Units;
 
@@ -117,6 +116,19 @@ public final class FlowRangeWindow extends JFrame {
         evaluate(source.get());
     }
 
+    /**
+     * Told that the editor's budget has changed: figures shown for an earlier budget are marked as such (they
+     * stay, for comparison, until Evaluate again).
+     */
+    public void sourceChanged() {
+        if (result != null && !isRunning() && !source.get().equals(budget)) {
+            state.setText("The budget has changed since this evaluation; Evaluate again for the present budget.");
+            state.setForeground(Colors.get("Quire.warning"));
+        } else if (result != null && !isRunning()) {
+            shownCurrent();
+        }
+    }
+
     /** @return the result shown, or null before the first or after a cancelled run */
     public FlowRangeResult result() {
         return result;
@@ -188,6 +200,7 @@ public final class FlowRangeWindow extends JFrame {
                     FlowRangeResult shown = get();
                     budget = evaluated; // only a budget whose figures are shown is the one drilled into
                     show(shown);
+                    sourceChanged(); // the editor's budget may have changed during the run
                 } catch (CancellationException e) {
                     cleared("Cancelled: no result shown; Evaluate again to start over.");
                 } catch (InterruptedException e) {
@@ -241,6 +254,10 @@ public final class FlowRangeWindow extends JFrame {
         points.set(r, budget.settings().significantDigits());
         PointsTable.fitColumns(table);
         chart.setChart(CalibrationCharts.flowRange(r));
+        shownCurrent();
+    }
+
+    private void shownCurrent() {
         state.setText("Evaluated; double-click a point for its full budget.");
         state.setForeground(Colors.get("Label.foreground"));
     }
@@ -307,7 +324,7 @@ public final class FlowRangeWindow extends JFrame {
                 case 4: return Fmt.dof(p.result().dofUsed());
                 case 5: return Figures.coverageFactor(p.result().coverageFactor());
                 case 6: return Fmt.working(p.expandedUncertainty());
-                case 7: return "(" + Rounding.format(p.estimate(), p.expandedUncertainty(), digits) + ")"
+                case 7: return "(" + org.quire.engine.gum.Figures.statedResult(p.estimate(), p.expandedUncertainty(), digits) + ")"
                         + (r.unit().isBlank() ? "" : " " + Units.display(r.unit()));
                 case 8: return Figures.relativeUncertaintyMeaningful(r.unit(), p.estimate(), p.expandedUncertainty())
                         ? Fmt.working(100 * p.relativeExpandedUncertainty()) : "\u2013";

@@ -54,13 +54,6 @@ final class PointsTable {
 
     /** Sizes every column to its header and its widest cell, so that nothing is clipped. */
     static void fitColumns(JTable table) {
-        for (int c = 0; c < table.getColumnCount(); c++) {
-            int w = table.getTableHeader().getDefaultRenderer().getTableCellRendererComponent(table,
-                    table.getColumnName(c), false, false, -1, c).getPreferredSize().width;
-            for (int row = 0; row < table.getRowCount(); row++) {
-                w = Math.max(w, table.prepareRenderer(table.getCellRenderer(row, c), row, c).getPreferredSize().width);
-            }
-            table.getColumnModel().getColumn(c).setPreferredWidth(w + 12);
-        }
+        org.quire.app.ui.table.SpreadsheetTable.fitColumnWidths(table, Integer.MAX_VALUE);
     }
 }
