@@ -11,12 +11,12 @@ import javax.swing.JLabel;
 import javax.swing.JPanel;
 import javax.swing.JProgressBar;
 import org.quire.app.ui.common.Colors;
+import org.quire.app.ui.common.SettingsLock;
 import org.quire.app.ui.common.Fmt;
 import org.quire.app.ui.document.Recalculation;
 import org.quire.app.ui.common.Section;
 import org.quire.engine.budget.Budget;
 import org.quire.engine.gum.GumResult;
-import org.quire.engine.gum.Rounding;
 import org.quire.engine.montecarlo.CoverageInterval;
 import org.quire.engine.montecarlo.GumComparison;
 import org.quire.engine.montecarlo.MonteCarloOutcome;
@@ -46,8 +46,7 @@ public final class MonteCarloSection implements Section {
     private final javax.swing.JTextField trials = new javax.swing.JTextField(8);
     private final javax.swing.JTextField seed = new javax.swing.JTextField(10);
     private final javax.swing.JCheckBox adaptive = new javax.swing.JCheckBox("Adaptive (JCGM 101:2008 7.9)");
-    private final JLabel lock = new JLabel();
-    private final java.util.Map<JComponent, String> tips = new java.util.LinkedHashMap<>();
+    private final SettingsLock lock;
     private boolean updating;
 
     /**
@@ -94,15 +93,10 @@ public final class MonteCarloSection implements Section {
         progress.setPreferredSize(new java.awt.Dimension(fm.stringWidth(progressText(9_999_999, 9_999_999)) + 24,
                 progress.getPreferredSize().height));
         cancel.setEnabled(false);
-        for (JComponent c : new JComponent[] {trials, seed, adaptive}) {
-            tips.put(c, c.getToolTipText());
-        }
-        lock.setName("mcLock");
-        lock.setForeground(Colors.get("Quire.warning"));
-        lock.setVisible(false);
+        lock = new SettingsLock("mcLock", "Trials, seed and adaptive mode", trials, seed, adaptive);
         JPanel settingsAndLock = new JPanel(new BorderLayout());
         settingsAndLock.add(settings, BorderLayout.CENTER);
-        settingsAndLock.add(lock, BorderLayout.SOUTH);
+        settingsAndLock.add(lock.label(), BorderLayout.SOUTH);
         JPanel top = new JPanel(new BorderLayout());
         top.add(settingsAndLock, BorderLayout.NORTH);
         top.add(bar, BorderLayout.SOUTH);
@@ -194,15 +188,7 @@ public final class MonteCarloSection implements Section {
         trials.setEditable(!ro && o == null);
         seed.setEditable(!ro && o == null);
         adaptive.setEnabled(!ro && o == null);
-        for (java.util.Map.Entry<JComponent, String> e : tips.entrySet()) {
-            e.getKey().setToolTipText(o == null ? e.getValue() : o.lockReason() + " (a setting of the method)");
-        }
-        String text = o == null ? "" : "Trials, seed and adaptive mode: " + o.lockReason() + ", read-only.";
-        if (!text.equals(lock.getText())) {
-            lock.setText(text);
-            lock.setToolTipText(o == null ? null : "The settings are values of the method: " + o.lockReason());
-        }
-        lock.setVisible(o != null);
+        lock.show(o);
     }
 
     @Override
@@ -318,7 +304,7 @@ public final class MonteCarloSection implements Section {
         double u = o.hasStandardUncertainty() ? o.standardUncertainty() : Double.NaN;
         StringBuilder s = new StringBuilder("<html><b>").append(esc(o.name())).append(esc(unit)).append("</b><br>");
         if (o.hasStandardUncertainty()) {
-            s.append("y = ").append(Rounding.format(o.estimate(), o.standardUncertainty(), digits)).append(esc(unit))
+            s.append("y = ").append(org.quire.engine.gum.Figures.statedResult(o.estimate(), o.standardUncertainty(), digits)).append(esc(unit))
                     .append(" (u)<br>");
         } else {
             s.append("y = ").append(Fmt.num(o.estimate())).append(esc(unit)).append("<br>u(y) not defined<br>");

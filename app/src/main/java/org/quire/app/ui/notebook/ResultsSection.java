@@ -17,6 +17,7 @@ import javax.swing.JSpinner;
 import javax.swing.JTextField;
 import javax.swing.SpinnerNumberModel;
 import org.quire.app.ui.common.Colors;
+import org.quire.app.ui.common.SettingsLock;
 import org.quire.app.ui.common.Fmt;
 import org.quire.app.ui.document.Recalculation;
 import org.quire.engine.budget.Budget;
@@ -38,12 +39,10 @@ final class ResultsSection implements Section {
     private final JSpinner digits = new JSpinner(new SpinnerNumberModel(2, 1, 4, 1));
     private final JCheckBox higher = new JCheckBox("Higher-order terms");
     private final JCheckBox truncate = new JCheckBox("<html>Truncate \u03bd<sub>eff</sub></html>");
-    private final JLabel lock = new JLabel();
+    private final SettingsLock lock;
     private final JPanel flowRange = new JPanel(new org.quire.app.ui.common.WrapLayout(FlowLayout.LEFT, 6, 2));
     private final JLabel flowRangeText = new JLabel();
     private Runnable flowRangeOpener;
-    /** The settings' own tooltips, shown again when they are not locked. */
-    private final Map<JComponent, String> tips = new LinkedHashMap<>();
     private boolean updating;
     private GumResult last;
 
@@ -71,14 +70,10 @@ final class ResultsSection implements Section {
         state.setName("resultsState");
         state.setFont(state.getFont().deriveFont(java.awt.Font.BOLD));
         north.add(state, BorderLayout.NORTH);
-        lock.setName("resultsLock");
-        lock.setForeground(Colors.get("Quire.warning"));
-        lock.setVisible(false);
-        north.add(lock, BorderLayout.CENTER);
+        lock = new SettingsLock("resultsLock", "Coverage and evaluation settings", byP, byK, p, k, digits, higher,
+                truncate);
+        north.add(lock.label(), BorderLayout.CENTER);
         north.add(settings, BorderLayout.SOUTH);
-        for (JComponent c : new JComponent[] {byP, byK, p, k, digits, higher, truncate}) {
-            tips.put(c, c.getToolTipText());
-        }
         javax.swing.JButton showRange = new javax.swing.JButton("Show the flow range\u2026");
         showRange.setName("showFlowRange");
         showRange.addActionListener(e -> {
@@ -221,16 +216,10 @@ final class ResultsSection implements Section {
     @Override
     public void readOnlyChanged(boolean ro) {
         org.quire.engine.document.TemplateOrigin o = lockedBy();
-        for (Map.Entry<JComponent, String> e : tips.entrySet()) {
-            e.getKey().setEnabled(!ro && o == null);
-            e.getKey().setToolTipText(o == null ? e.getValue() : o.lockReason() + " (a setting of the method)");
+        for (JComponent c : lock.guarded()) {
+            c.setEnabled(!ro && o == null);
         }
-        String text = o == null ? "" : "Coverage and evaluation settings: " + o.lockReason() + ", read-only.";
-        if (!text.equals(lock.getText())) {
-            lock.setText(text);
-            lock.setToolTipText(o == null ? null : "The settings are values of the method: " + o.lockReason());
-        }
-        lock.setVisible(o != null);
+        lock.show(o);
     }
 
     /** @return the result panel of an output, for tests and reports */

@@ -75,6 +75,17 @@ public final class SpreadsheetTable {
      */
     public static void fitColumns(JTable t, int maxWidth) {
         t.setAutoResizeMode(JTable.AUTO_RESIZE_OFF);
+        fitColumnWidths(t, maxWidth);
+        if (!(t.getTableHeader() instanceof TippedHeader) && t.getTableHeader() != null) {
+            t.setTableHeader(new TippedHeader(t.getColumnModel()));
+        }
+    }
+
+    /**
+     * Sets each column's preferred width to that of its header or its widest cell (of the first 500 rows), plus a
+     * margin, at most {@code maxWidth}; the table's resize mode and header are left as they are.
+     */
+    public static void fitColumnWidths(JTable t, int maxWidth) {
         for (int c = 0; c < t.getColumnCount(); c++) {
             javax.swing.table.TableColumn col = t.getColumnModel().getColumn(c);
             Component h = t.getTableHeader().getDefaultRenderer().getTableCellRendererComponent(t,
@@ -84,9 +95,6 @@ public final class SpreadsheetTable {
                 w = Math.max(w, t.prepareRenderer(t.getCellRenderer(r, c), r, c).getPreferredSize().width);
             }
             col.setPreferredWidth(Math.min(maxWidth, w + 12));
-        }
-        if (!(t.getTableHeader() instanceof TippedHeader) && t.getTableHeader() != null) {
-            t.setTableHeader(new TippedHeader(t.getColumnModel()));
         }
     }
 
