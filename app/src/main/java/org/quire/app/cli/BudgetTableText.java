@@ -63,7 +63,7 @@ final class BudgetTableText {
                     !Figures.relativeUncertaintyMeaningful(o.unit(), o.estimate(), o.expandedUncertainty()) ? ""
                             : " (" + uncertainty(100 * o.relativeExpandedUncertainty(), digits) + " % of |y|)"));
             s.append(String.format(Locale.ROOT, "  result: %s = (%s)%s, k = %s, p = %s %%%n", o.name(),
-                    Rounding.format(o.estimate(), o.expandedUncertainty(), digits), unit,
+                    org.quire.engine.gum.Figures.statedResult(o.estimate(), o.expandedUncertainty(), digits), unit,
                     Figures.coverageFactor(o.coverageFactor()), Figures.probability(o.coverageProbability())));
             for (String w : o.warnings()) {
                 s.append("  warning: ").append(w).append('\n');

@@ -315,7 +315,7 @@ public final class ReportBuilder {
     public static MathText statement(OutputResult o, int digits) {
         List<MathText.Run> runs = new ArrayList<>(Typesetter.name(o.name()).runs());
         String unit = o.unit().isEmpty() ? "" : " " + Units.display(o.unit());
-        String text = " = (" + Rounding.format(o.estimate(), o.expandedUncertainty(), digits) + ")" + unit;
+        String text = " = (" + org.quire.engine.gum.Figures.statedResult(o.estimate(), o.expandedUncertainty(), digits) + ")" + unit;
         runs.add(new MathText.Run(text.replace("(-", "(−"), false, MathText.Shift.BASE));
         runs.add(new MathText.Run(", ", false, MathText.Shift.BASE));
         runs.add(new MathText.Run("k", true, MathText.Shift.BASE));

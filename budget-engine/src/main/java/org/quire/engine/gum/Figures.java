@@ -149,6 +149,18 @@ public final class Figures {
         return estimate(b.doubleValue());
     }
 
+    /**
+     * The one form of a stated result "y ± U" (or "y ± u") on screens, in reports and in command-line text: the
+     * uncertainty rounded to {@code digits} significant digits and the estimate to its last digit kept (JCGM
+     * 100:2008 7.2.6; {@link Rounding#format}), with the minus sign and digit groups of every other figure.
+     *
+     * @return e.g. "−0.11 ± 0.24"
+     */
+    public static String statedResult(double estimate, double uncertainty, int digits) {
+        return minus(Rounding.estimate(estimate, uncertainty, digits).toPlainString()) + " \u00b1 "
+                + minus(Rounding.uncertainty(uncertainty, digits).toPlainString());
+    }
+
     /** @return an estimate as its shortest exact decimal when that is short, else to 10 significant digits */
     public static String estimate(double v) {
         if (!Double.isFinite(v)) {

@@ -34,4 +34,12 @@ class FiguresTest {
         assertEquals("95.45", Figures.probability(0.9545));
         assertEquals("99", Figures.probability(0.99));
     }
+
+    @Test
+    void statedResultsRoundTheEstimateToTheUncertaintysLastDigit() {
+        // JCGM 100:2008 7.2.6: U to two significant digits, y to the same decimal place; worked by hand
+        assertEquals("−0.11 ± 0.24", Figures.statedResult(-0.1149, 0.2361, 2));
+        assertEquals("100.02147 ± 0.00079", Figures.statedResult(100.021466, 0.000788, 2));
+        assertEquals("12 345.7 ± 1.2", Figures.statedResult(12345.678, 1.23, 2), "digit groups as elsewhere");
+    }
 }

@@ -210,7 +210,7 @@ final class OutputResultPanel extends JPanel {
         figures.setForeground(Colors.get("Label.foreground"));
         figures2.setForeground(Colors.get("Label.foreground"));
         String unit = o.unit().isEmpty() ? "" : " " + org.quire.engine.units.Units.display(o.unit());
-        String rounded = Rounding.format(o.estimate(), o.expandedUncertainty(), digits);
+        String rounded = org.quire.engine.gum.Figures.statedResult(o.estimate(), o.expandedUncertainty(), digits);
         String dofNote = Double.isInfinite(o.effectiveDof()) ? "\u221e"
                 : Fmt.dof(o.effectiveDof()) + (o.dofUsed() != o.effectiveDof() ? " (" + Fmt.dof(o.dofUsed()) + " used)" : "");
         set(headline, o.name() + " = (" + rounded + ")" + unit + ",  k = "
