@@ -245,4 +245,29 @@ class Jcgm101SamplingTest {
                 () -> m.quantile(1.5));
         assertTrue(e.getMessage().contains("1.5"), e.getMessage());
     }
+
+    @Test
+    void meanDensitiesAreThoseOfTheDensitiesOfJcgm101Section6() {
+        double h = 1e-6;
+        // normal: g(x) = exp(-(x - mu)^2 / (2 sigma^2)) / (sigma sqrt(2 pi)) (JCGM 101:2008 6.4.7.2), against
+        // Commons Math's density
+        NormalDistribution normal = new NormalDistribution(10.0, 0.5);
+        Marginal n = Marginal.of(new Distribution.Normal(10.0, 0.5));
+        for (double x : new double[] {9.0, 10.0, 10.7}) {
+            assertEquals(normal.density(x), n.meanDensity(x, h), 1e-6 * normal.density(x), "normal at " + x);
+        }
+        // rectangular on [1, 3]: 1/2 inside, 0 outside (6.4.2.2); over a width straddling an edge, half of it
+        Marginal r = Marginal.of(new Distribution.Rectangular(1.0, 3.0));
+        assertEquals(0.5, r.meanDensity(2.0, h), 1e-9);
+        assertEquals(0.0, r.meanDensity(3.5, h), 0.0);
+        assertEquals(0.25, r.meanDensity(3.0, 0.2), 1e-12);
+        // triangular on [0, 2]: peak 1 at 1 (6.4.4.2), against Commons Math's density at 0.5
+        TriangularDistribution tri = new TriangularDistribution(0.0, 1.0, 2.0);
+        Marginal t = Marginal.of(new Distribution.Triangular(0.0, 2.0));
+        assertEquals(tri.density(0.5), t.meanDensity(0.5, h), 1e-6);
+        // arcsine on [-1, 1]: g(x) = 1 / (pi sqrt(1 - x^2)) (6.4.6.2), finite even over its end
+        Marginal a = Marginal.of(new Distribution.Arcsine(-1.0, 1.0));
+        assertEquals(1.0 / Math.PI, a.meanDensity(0.0, h), 1e-6);
+        assertTrue(Double.isFinite(a.meanDensity(1.0, 0.01)) && a.meanDensity(1.0, 0.01) > 0);
+    }
 }

@@ -11,8 +11,8 @@ import org.quire.engine.budget.TypeB;
 /**
  * A picture of an input's distribution: its probability density drawn over estimate ± 4 u (or a little beyond its
  * limits), with the estimate marked, drawn by the workbench's one chart code ({@link ChartView}) with axes, ticks,
- * axis titles and a legend. The density of each point is the engine's distribution function over a narrow bin
- * ({@code Marginal.cdf}); a drawing of the shape only, no figure of the budget comes from here.
+ * axis titles and a legend. The density of each point is the engine's, over a step of the picture
+ * ({@code Marginal.meanDensity}); a drawing of the shape only, no figure of the budget comes from here.
  */
 final class DistributionPlot extends ChartView {
     private static final int POINTS = 240;
@@ -62,9 +62,7 @@ final class DistributionPlot extends ChartView {
             double h = (hi - lo) / POINTS;
             for (int i = 0; i <= POINTS; i++) {
                 x[i] = lo + h * i;
-                // probability of a narrow bin around x over its width: the density the engine's distribution has
-                double p = (m.cdf(x[i] + 0.5 * h) - m.cdf(x[i] - 0.5 * h)) / h;
-                y[i] = Double.isFinite(p) && p > 0 ? p : 0;
+                y[i] = m.meanDensity(x[i], h); // the engine's density, over a step of the picture
                 peak = Math.max(peak, y[i]);
             }
             series.add(new Chart.Series(shape + " distribution", x, y, null, Chart.Style.LINE, Chart.Tone.FIRST));
