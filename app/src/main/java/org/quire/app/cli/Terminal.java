@@ -182,13 +182,18 @@ public final class Terminal {
 
         @Override
         public synchronized void flush() throws IOException {
-            // a partial line (a progress line ending in \r, a prompt) is passed on at a flush, at a character's end
+            // a partial line (a progress line, which ends in spaces or \r) is passed on at a flush up to its last
+            // space: the word after it (a number such as 1.2 x 10^-3 may be printed in pieces) waits for the rest,
+            // so that it is converted as a whole
             byte[] bytes = line.toByteArray();
-            int whole = completeCharacters(bytes);
-            if (whole > 0) {
-                target.write(plain(new String(bytes, 0, whole, StandardCharsets.UTF_8)).getBytes(StandardCharsets.US_ASCII));
+            int upTo = bytes.length;
+            while (upTo > 0 && bytes[upTo - 1] != ' ' && bytes[upTo - 1] != '\r' && bytes[upTo - 1] != '\t') {
+                upTo--;
+            }
+            if (upTo > 0) {
+                target.write(plain(new String(bytes, 0, upTo, StandardCharsets.UTF_8)).getBytes(StandardCharsets.US_ASCII));
                 line.reset();
-                line.write(bytes, whole, bytes.length - whole);
+                line.write(bytes, upTo, bytes.length - upTo);
             }
             target.flush();
         }
@@ -213,8 +218,11 @@ public final class Terminal {
         }
 
         @Override
-        public void close() throws IOException {
-            flush();
+        public synchronized void close() throws IOException {
+            byte[] rest = line.toByteArray();
+            line.reset();
+            int whole = completeCharacters(rest);
+            target.write(plain(new String(rest, 0, whole, StandardCharsets.UTF_8)).getBytes(StandardCharsets.US_ASCII));
             target.close();
         }
     }

@@ -57,8 +57,19 @@ class TerminalTest {
         plain.flush();
         assertEquals("", sink.toString(StandardCharsets.US_ASCII));
         plain.write(mu, 1, 1);
+        plain.write(' ');
         plain.flush();
-        assertEquals("u", sink.toString(StandardCharsets.US_ASCII));
+        assertEquals("u ", sink.toString(StandardCharsets.US_ASCII));
+        // a word is never cut at a flush: a power of ten printed in two pieces is not made "10^-^4"
+        sink.reset();
+        plain.write("u = 5.8 \u00d7 10\u207b".getBytes(StandardCharsets.UTF_8));
+        plain.flush();
+        plain.write("\u2074 m\n".getBytes(StandardCharsets.UTF_8));
+        assertEquals("u = 5.8 x 10^-4 m\n", sink.toString(StandardCharsets.US_ASCII));
+        sink.reset();
+        plain.write("no end of line".getBytes(StandardCharsets.UTF_8));
+        plain.close();
+        assertEquals("no end of line", sink.toString(StandardCharsets.US_ASCII), "what is left is passed at close");
         try (PrintStream p = new PrintStream(new Terminal.Plain(sink), true, StandardCharsets.UTF_8)) {
             sink.reset();
             p.println("\u03bd_eff = 12");
