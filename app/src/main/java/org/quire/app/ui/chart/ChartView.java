@@ -39,6 +39,7 @@ public class ChartView extends JComponent {
     public void setChart(Chart c) {
         chart = c;
         layout = null;
+        sized = null;
         caption = c == null ? "" : c.caption();
         setToolTipText(caption.isEmpty() ? null : caption);
         revalidate();
@@ -49,6 +50,7 @@ public class ChartView extends JComponent {
     public void setPlotHeight(float points) {
         plotHeight = points;
         layout = null;
+        sized = null;
         revalidate();
         repaint();
     }
@@ -97,8 +99,18 @@ public class ChartView extends JComponent {
             return 0;
         }
         float sc = scale();
-        return Math.round(ChartLayout.of(chart, widthPx / sc, plotHeight).height() * sc) + 1;
+        ChartLayout.Layout at = layout != null && Math.abs(layout.width() - Math.max(ChartLayout.MIN_WIDTH, widthPx / sc))
+                <= 0.5f ? layout : sized;
+        if (at == null || Math.abs(at.width() - Math.max(ChartLayout.MIN_WIDTH, widthPx / sc)) > 0.5f) {
+            // laid out once per width asked for: a container asks for the sizes many times per layout pass
+            at = ChartLayout.of(chart, widthPx / sc, plotHeight);
+            sized = at;
+        }
+        return Math.round(at.height() * sc) + 1;
     }
+
+    /** The layout last made for a size query at a width other than the one shown, or null. */
+    private ChartLayout.Layout sized;
 
     /** A new width can wrap the legend onto more or fewer rows: the container is asked for a new height. */
     @Override
