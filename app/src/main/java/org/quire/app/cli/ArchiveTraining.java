@@ -16,7 +16,8 @@ import java.util.List;
  * jar ships, copied into a scratch folder that is removed afterwards, so the run needs nothing of the checkout.
  *
  * <p>Where there is a display, the same JVM then starts the workbench with the demo budget and waits for its first
- * paint ({@link WorkbenchStart}), so that the archive also holds the classes of the workbench's start (measured:
+ * paint and for the results painted after it ({@link WorkbenchStart}), so that the archive also holds the classes of
+ * the workbench's start (measured:
  * content painted some 300 ms sooner); a workbench that cannot start, or does not paint within
  * {@link WorkbenchStart#LIMIT_SECONDS} s, only ends that part of the training.
  *
@@ -89,6 +90,8 @@ public final class ArchiveTraining {
 
     /** The workbench part of the training, in a class of its own so that the commands load no AWT class. */
     static final class WorkbenchStart {
+        /** The wait after the first paint for the results to come in and be painted. */
+        static final long RESULTS_MILLIS = 1500;
         /** The longest wait for the workbench's first paint. */
         static final int LIMIT_SECONDS = 30;
 
@@ -112,6 +115,16 @@ public final class ArchiveTraining {
                         }
                     });
                     if (painted[0]) {
+                        // then the budget's results, charts and checklist, which come from the background a
+                        // moment later, are painted too: their classes are what a start loads next
+                        Thread.sleep(RESULTS_MILLIS);
+                        java.awt.EventQueue.invokeAndWait(() -> {
+                            for (java.awt.Frame f : java.awt.Frame.getFrames()) {
+                                if (f.isShowing() && f instanceof javax.swing.JFrame j) {
+                                    j.getRootPane().paintImmediately(j.getRootPane().getBounds());
+                                }
+                            }
+                        });
                         return;
                     }
                     Thread.sleep(100);

@@ -234,7 +234,7 @@ public final class ReviewPanel implements Section {
                 drawn = new Drawn(null, null, null, e);
             }
             Drawn answer = drawn;
-            java.awt.EventQueue.invokeLater(() -> shown(d, prior, answer));
+            java.awt.EventQueue.invokeLater(() -> showDrawn(d, prior, answer));
         });
     }
 
@@ -267,7 +267,7 @@ public final class ReviewPanel implements Section {
     }
 
     /** Shows a checklist drawn up in the background, on the event thread, unless a newer one is on its way. */
-    private void shown(BudgetDocument d, Review prior, Drawn drawn) {
+    private void showDrawn(BudgetDocument d, Review prior, Drawn drawn) {
         if (pending != d || decided != null) {
             return;
         }
