@@ -49,14 +49,16 @@ import picocli.CommandLine.Parameters;
  * through), on all processor cores (with --mc, row after row on one set of Monte Carlo worker threads), and
  * writes per row the estimate, u, k and U of every output and an {@code error} column. A bad row is reported
  * on stderr with its line number and does not stop the others.
- * Exit status 0 when every row was evaluated, 1 when some failed, 2 for unusable files or arguments.
+ * Exit status 0 when every row was evaluated; 2 when a row was refused (its values are bad input: the other rows'
+ * results are still written) or for unusable files or arguments.
  */
 @Command(name = "batch", mixinStandardHelpOptions = true, sortOptions = false,
         description = {"Evaluate a template (GUM, and with --mc the Monte Carlo method) for every row of a CSV file "
                 + "whose columns are named after the template's parameters; an 'id' column is copied through.",
             "Writes per row the estimate, u, k and U of every output and an error column. A bad row is reported "
                 + "on stderr with its line number and does not stop the others. Exit status 0 when every row was "
-                + "evaluated, 1 when some failed, 2 for unusable files or arguments.",
+                + "evaluated; 2 when a row was refused (the other rows' results are still written) or for unusable "
+                + "files or arguments.",
             "On a terminal a progress line on stderr shows the rate and the time left."},
         footerHeading = "%nExamples:%n",
         footer = {"  quire batch tvfl-volumetric-proving-tank fleet.csv -o results.csv",
@@ -183,7 +185,8 @@ final class BatchCommand implements Callable<Integer> {
         info(err, "quire batch: " + (n - failed) + " rows evaluated, " + failed + " failed; results in " + out);
         info(err, String.format(java.util.Locale.ROOT, "quire batch: %.2f s, %.0f rows per second", seconds,
                 n / Math.max(seconds, 1e-9)));
-        return failed == 0 ? CommandLine.OK : CommandLine.CHECK_FAILED;
+        // a refused row is bad input, a user error like any other (the brief: exit status 2 for every user error)
+        return failed == 0 ? CommandLine.OK : CommandLine.USER_ERROR;
     }
 
     /** Prints a line of information, unless --quiet; a row's error is always printed. */

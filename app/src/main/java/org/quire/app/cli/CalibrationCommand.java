@@ -597,6 +597,6 @@ final class CalibrationCommand implements Callable<Integer> {
                 err.println(runsName + ": meter '" + o.meter() + "': " + o.error());
             }
         }
-        return failed == 0 ? 0 : 1;
+        return failed == 0 ? CommandLine.OK : CommandLine.USER_ERROR; // a refused meter is bad input
     }
 }

@@ -13,7 +13,8 @@ import java.nio.file.Path;
  *
  * <p>Exit status, one place for all commands: {@link #OK} 0 success, {@link #CHECK_FAILED} 1 a check or
  * comparison failed, {@link #USER_ERROR} 2 bad input or usage (the message says which file, field, line or
- * column and why, never a stack trace), {@link #BUG} 3 an internal error (a bug in Quire).
+ * column and why, never a stack trace; also when rows of a batch or meters of a fleet were refused, whose
+ * results for the others are still written), {@link #BUG} 3 an internal error (a bug in Quire).
  *
  * <p>The command classes only read their options and ask the engine; each call builds a new parser, so calls on
  * different threads do not share state.
@@ -21,7 +22,7 @@ import java.nio.file.Path;
 public final class CommandLine {
     /** Exit status of a successful command. */
     public static final int OK = 0;
-    /** Exit status when a check failed, budgets differ or rows failed. */
+    /** Exit status when a check failed or budgets differ. */
     public static final int CHECK_FAILED = 1;
     /** Exit status of a user error: bad input file, option or argument. */
     public static final int USER_ERROR = 2;

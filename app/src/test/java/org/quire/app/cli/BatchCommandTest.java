@@ -41,7 +41,7 @@ class BatchCommandTest {
         Files.writeString(data, s);
         Path out = dir.resolve("results.csv");
         ByteArrayOutputStream err = new ByteArrayOutputStream();
-        assertEquals(1, run(err, "batch", TEMPLATE.toString(), data.toString(), "-o", out.toString()));
+        assertEquals(2, run(err, "batch", TEMPLATE.toString(), data.toString(), "-o", out.toString()));
         String messages = err.toString(StandardCharsets.UTF_8);
         assertTrue(messages.contains("runs.csv line 58: parameter 'T_tank' = 60.0 lies outside"), messages);
         assertTrue(messages.contains("runs.csv line 202: parameter 'm_net': \"abc\" is not a number"), messages);
@@ -121,7 +121,7 @@ class BatchCommandTest {
                 + "TV-2,997.1,50,20.55,280000,72.0,100650,21.3,0.48" + own);
         Path out = dir.resolve("results.csv");
         ByteArrayOutputStream err = new ByteArrayOutputStream();
-        assertEquals(1, run(err, "batch", template.toString(), data.toString(), "-o", out.toString()));
+        assertEquals(2, run(err, "batch", template.toString(), data.toString(), "-o", out.toString()));
         List<String> lines = Files.readAllLines(out);
         String[] c = lines.get(1).split(",", -1);
         // E and u(E) of the template at its own values, from the independent GUM script named in
@@ -147,7 +147,7 @@ class BatchCommandTest {
         // a decimal comma that could be a thousands group is refused for its row
         Files.writeString(data, "id\tm_net\tT_tank\tV_meter\nrun-1\t1000\t20.5\t1002.6\nrun-2\t1,002\t20.5\t501.2\n");
         err.reset();
-        assertEquals(1, run(err, "batch", TEMPLATE.toString(), data.toString(), "-o", out.toString()));
+        assertEquals(2, run(err, "batch", TEMPLATE.toString(), data.toString(), "-o", out.toString()));
         m = err.toString(StandardCharsets.UTF_8);
         assertTrue(m.contains("runs.csv line 3: parameter 'm_net': \"1,002\" is ambiguous"), m);
     }

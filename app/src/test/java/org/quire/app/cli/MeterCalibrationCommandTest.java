@@ -162,4 +162,29 @@ class MeterCalibrationCommandTest {
         assertTrue(lines.get(6).startsWith("A,verdict,as left (predicted),"), lines.get(6));
         assertTrue(lines.get(12).startsWith("B,verdict,") && lines.get(12).contains(",1.100000000,"), lines.get(12));
     }
+
+    @Test
+    void aFleetWithARefusedMeterWritesTheOthersAndEndsWithTheUserErrorStatus() throws Exception {
+        // meter B lacks runs 2 and 3 of point 5 (one run, no stated repeatability: refused as above); A is whole
+        StringBuilder s = new StringBuilder("meter,constant,phase,point,run,I_full,I_empty,t_c,t_tank,t_meter,p_meter,N_p\n");
+        for (String line : Files.readAllLines(RUNS)) {
+            if (line.startsWith("as-found")) {
+                s.append("A,1.2345,").append(line).append('\n');
+                if (!(line.startsWith("as-found,P5,2") || line.startsWith("as-found,P5,3"))) {
+                    s.append("B,1.1000,").append(line).append('\n');
+                }
+            }
+        }
+        Path runs = dir.resolve("fleet-b-refused.csv");
+        Files.writeString(runs, s);
+        Path out = dir.resolve("fleet-b-results.csv");
+        Result r = run("calibration", "fleet", METHOD.toString(), runs.toString(), "--job", JOB.toString(), "-o",
+                out.toString());
+        assertEquals(2, r.status(), "a refused meter is bad input (exit status 2): " + r.err());
+        assertTrue(r.err().contains("1 of 2 meters evaluated"), r.err());
+        var lines = Files.readAllLines(out);
+        assertTrue(lines.stream().anyMatch(l -> l.startsWith("A,verdict,")), "meter A's results are written");
+        assertTrue(lines.stream().anyMatch(l -> l.startsWith("B,") && l.contains("has one run")),
+                "meter B's row says why: " + String.join("\n", lines));
+    }
 }
