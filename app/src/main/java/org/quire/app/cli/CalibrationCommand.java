@@ -158,7 +158,7 @@ final class CalibrationCommand implements Callable<Integer> {
     @Command(name = "fleet", mixinStandardHelpOptions = true,
             description = "Many meters' runs in one CSV file (a meter column, optionally a constant column), "
                     + "evaluated in one process in parallel with one job file: one row per meter and point and one "
-                    + "verdict row per meter. Exit status 1 when a meter could not be evaluated.",
+                    + "verdict row per meter. Exit status 2 when a meter was refused (the others' results are still written).",
             footerHeading = "%nExamples:%n",
             footer = {"  quire calibration fleet templates/tvfl-emf-gravimetric-calibration-run.json fleet.csv "
                     + "--job job.json -o results.csv"})

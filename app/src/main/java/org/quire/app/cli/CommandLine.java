@@ -20,6 +20,11 @@ import java.nio.file.Path;
  * different threads do not share state.
  */
 public final class CommandLine {
+    /** The exit statuses in words, as the help and the manual page give them (compile-time constant). */
+    public static final String EXIT_STATUS_TEXT = "0 success; 1 a check failed or budgets differ; 2 bad input or "
+            + "usage, also rows of a batch or meters of a fleet refused (the message names the file and the field, "
+            + "line or column); 3 an internal error (a bug).";
+
     /** Exit status of a successful command. */
     public static final int OK = 0;
     /** Exit status when a check failed or budgets differ. */

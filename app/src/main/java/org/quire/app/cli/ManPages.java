@@ -100,8 +100,7 @@ final class ManPages {
             }
             s.append(".fi\n");
         }
-        s.append(".SH EXIT STATUS\n0 success; 1 a check failed, budgets differ or rows failed; 2 bad input or usage "
-                + "(the message names the file and the field, line or column); 3 an internal error (a bug).\n");
+        s.append(".SH EXIT STATUS\n").append(esc(CommandLine.EXIT_STATUS_TEXT)).append('\n');
         s.append(".SH CAUTIONS\n").append(esc(Cautions.TEXT)).append('\n');
         if (spec.parent() != null) {
             s.append(".SH SEE ALSO\n\\fBquire\\fR(1)\n");
