@@ -97,7 +97,9 @@ public final class Workbench {
     /**
      * With {@code -Dquire.timing=true} the workbench prints {@code workbench_content_painted_ms=N} on standard
      * error once the window's content (menu, panes and the opened budget) has been painted, N counted from the
-     * start of the process: the startup benchmark of {@code app/src/test/resources/bench/run-benchmarks.sh}.
+     * start of the process as {@code ProcessHandle.info().startInstant()} gives it: the startup benchmark of
+     * {@code app/src/test/resources/bench/run-benchmarks.sh}. On Linux that start is early by the part of a second
+     * that {@code /proc/stat} drops from the boot time; the script measures that amount and takes it off.
      */
     public static final String TIMING_PROPERTY = "quire.timing";
 
