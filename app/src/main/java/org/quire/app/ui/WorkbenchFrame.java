@@ -438,7 +438,7 @@ public final class WorkbenchFrame extends JFrame {
      */
     public void openFlowRange(BudgetEditor ed, java.util.function.Consumer<org.quire.app.ui.calibration.FlowRangeWindow> shown) {
         if (ed.document().budget().flowPoints() == null) {
-            status("This budget has no flow points: list the flow points in the budget file to evaluate it across a flow range", true);
+            status(org.quire.app.ui.common.Fmt.sentence(org.quire.engine.gum.FlowRange.NO_FLOW_POINTS), true);
             return;
         }
         String name = ed.document().name();

@@ -39,6 +39,10 @@ import org.quire.engine.model.ModelException;
  * <p>Stateless and thread-safe.
  */
 public final class FlowRange {
+    /** Why a budget cannot be evaluated across a flow range: it lists no flow points. */
+    public static final String NO_FLOW_POINTS = "the budget has no flow points: list them in the budget file's table "
+            + "of flow points, one row per flow";
+
     private FlowRange() {
     }
 
@@ -51,8 +55,7 @@ public final class FlowRange {
      */
     public static FlowRangeResult evaluate(Budget budget, FunctionLibrary library) throws ModelException {
         if (budget.flowPoints() == null) {
-            throw new IllegalArgumentException("the budget has no flow points: add a 'flowPoints' table with one row "
-                    + "per flow");
+            throw new IllegalArgumentException(NO_FLOW_POINTS);
         }
         return evaluate(budget, budget.flowPoints(), library);
     }
@@ -90,8 +93,7 @@ public final class FlowRange {
     public static FlowRangeResult evaluate(Budget budget, FunctionLibrary library, Listener listener)
             throws ModelException {
         if (budget.flowPoints() == null) {
-            throw new IllegalArgumentException("the budget has no flow points: add a 'flowPoints' table with one row "
-                    + "per flow");
+            throw new IllegalArgumentException(NO_FLOW_POINTS);
         }
         return evaluate(budget, budget.flowPoints(), library, listener);
     }
@@ -204,8 +206,7 @@ public final class FlowRange {
      */
     public static Budget atPoint(Budget budget, int p) {
         if (budget == null || budget.flowPoints() == null) {
-            throw new IllegalArgumentException("the budget has no flow points: add a 'flowPoints' table with one row "
-                    + "per flow");
+            throw new IllegalArgumentException(NO_FLOW_POINTS);
         }
         int m = budget.flowPoints().rows().size();
         if (p < 0 || p >= m) {

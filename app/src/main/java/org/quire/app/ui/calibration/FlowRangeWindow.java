@@ -150,7 +150,7 @@ public final class FlowRangeWindow extends JFrame {
         if (b.flowPoints() == null) {
             worker = null;
             runEnded();
-            cleared("The budget has no flow points any more: list the flow points in the budget file to see its flow range.");
+            cleared(org.quire.app.ui.common.Fmt.sentence(FlowRange.NO_FLOW_POINTS) + ".");
             return;
         }
         Budget evaluated = b;

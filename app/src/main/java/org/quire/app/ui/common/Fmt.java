@@ -15,6 +15,11 @@ public final class Fmt {
     private Fmt() {
     }
 
+    /** @return an engine message as a sentence on screen: its first letter a capital */
+    public static String sentence(String message) {
+        return message.isEmpty() ? message : Character.toUpperCase(message.charAt(0)) + message.substring(1);
+    }
+
     /** @return an entered value (an estimate, a parameter) as its shortest exact decimal, "" for NaN */
     public static String num(double v) {
         return Double.isNaN(v) ? "" : Figures.estimate(v);

@@ -425,7 +425,7 @@ final class InputInspector extends JPanel {
     }
 
     private static String capital(String s) {
-        return s.isEmpty() ? s : Character.toUpperCase(s.charAt(0)) + s.substring(1);
+        return org.quire.app.ui.common.Fmt.sentence(s);
     }
 
     /** @return the name of the input the form is bound to, or null */
