@@ -227,15 +227,16 @@ public final class Unit {
 
     /**
      * @return the unit of a quotient, e.g. m^3/h; any offset is dropped (so 1/°C is a difference unit); a unit
-     *     divided by the unit one is itself, and divided by itself the unit one (not "%/1" or "(m^3/h)/(m^3/h)")
+     *     divided by the unit one is itself, and divided by itself, however written, the unit one (not "%/1",
+     *     "(m^3/h)/(m^3/h)" or "(m3/h)/(m^3/h)")
      */
     public Unit divide(Unit other) {
         Objects.requireNonNull(other, "other unit");
         if (other == ONE || other.equals(ONE)) {
             return this;
         }
-        if (other.equals(this)) {
-            return ONE;
+        if (other.dimension.equals(dimension) && other.factor == factor) {
+            return ONE; // the same unit, however written (m3/h and m^3/h); offsets are dropped as above
         }
         return new Unit(Symbols.quotient(symbol, other.symbol), dimension.divide(other.dimension),
                 factor / other.factor, 0.0);

@@ -205,4 +205,13 @@ class UnitTest {
         assertThrows(IllegalArgumentException.class, () -> Unit.of(" ", Dimension.NONE, 1.0));
         assertThrows(IllegalArgumentException.class, () -> Unit.ofAffine("x", Dimension.NONE, 1.0, Double.NaN));
     }
+
+    @Test
+    void aUnitOverTheSameUnitWrittenAnotherWayIsOne() {
+        // a quotient of like quantities is a number (ISO 80000-1 6.5.4, from memory): the unit one, not "(m3/h)/(m^3/h)"
+        assertEquals(Unit.ONE, Units.parse("m3/h").divide(Units.parse("m^3/h")));
+        // L/min over m^3/h is not one: 1 L/min = 0.06 m^3/h (NIST SP 811 B.8: 1 L = 10^-3 m^3)
+        Unit ratio = Units.parse("L/min").divide(Units.parse("m^3/h"));
+        assertEquals(0.06, ratio.convert(1.0, Unit.ONE), 1e-15);
+    }
 }
