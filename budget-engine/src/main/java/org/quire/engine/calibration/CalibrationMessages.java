@@ -217,7 +217,8 @@ final class CalibrationMessages {
     }
 
     static String flowUnitMismatch(String what, String from, String to, String message) {
-        return "the flows are in " + from + " but the " + what + " is in " + to + ": " + message;
+        return "the flows are in " + Units.display(from) + " but the " + what + " is in " + Units.display(to) + ": "
+                + message;
     }
 
     /**
