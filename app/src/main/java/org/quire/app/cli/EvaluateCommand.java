@@ -84,7 +84,7 @@ final class EvaluateCommand implements Callable<Integer> {
         } catch (IllegalArgumentException e) {
             throw new Files.FileProblem(file, e.getMessage());
         }
-        List<String> template = templateFindings(b);
+        List<String> template = Files.templateFindings(file, b);
         switch (format) {
             case "json":
                 JsonObject j = ResultJson.toJson(b.title(), r);
@@ -108,19 +108,6 @@ final class EvaluateCommand implements Callable<Integer> {
                 out.println(Cautions.TEXT);
         }
         return 0;
-    }
-
-    /**
-     * @return the engine's template check ({@link org.quire.engine.document.TemplateConformance}) of a budget made
-     *     from a template, one sentence per finding; empty for a budget that keeps every locked field or was not
-     *     made from a template
-     */
-    private List<String> templateFindings(Budget b) throws Exception {
-        if (!b.extensions().containsKey("templateOrigin")) {
-            return List.of();
-        }
-        org.quire.engine.document.BudgetDocument d = Files.loadDocument(file);
-        return org.quire.engine.document.TemplateConformance.check(d, TemplateCommand.Folders.preferred()).messages();
     }
 
     static String csv(GumResult r) {

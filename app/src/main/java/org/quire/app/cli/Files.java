@@ -103,4 +103,25 @@ final class Files {
             super(e.getMessage(), e);
         }
     }
+
+    /**
+     * The findings of a budget file as to its template, for the commands that print results: that the file is a
+     * template, whose figures are its example values, and the engine's template check of a budget made from a
+     * template ({@link org.quire.engine.document.TemplateConformance}).
+     *
+     * @return one sentence per finding; empty for a budget that keeps every locked field or has no template
+     */
+    static java.util.List<String> templateFindings(String file, org.quire.engine.budget.Budget b) throws Exception {
+        if (!b.extensions().containsKey("templateOrigin") && !b.extensions().containsKey("template")) {
+            return java.util.List.of();
+        }
+        org.quire.engine.document.BudgetDocument d = loadDocument(file);
+        java.util.List<String> out = new java.util.ArrayList<>();
+        org.quire.engine.document.TemplateConformance.exampleFigures(d).ifPresent(out::add);
+        if (d.templateOrigin() != null) {
+            out.addAll(org.quire.engine.document.TemplateConformance.check(d, TemplateCommand.Folders.preferred())
+                    .messages());
+        }
+        return out;
+    }
 }

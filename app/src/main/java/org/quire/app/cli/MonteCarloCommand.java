@@ -98,11 +98,21 @@ final class MonteCarloCommand implements Callable<Integer> {
         } finally {
             progress.finish();
         }
+        java.util.List<String> template = Files.templateFindings(file, b);
         if (format.equals("json")) {
-            out.print(BudgetJson.pretty(MonteCarloJson.toJson(o, true)));
+            jakarta.json.JsonObject j = MonteCarloJson.toJson(o, true);
+            if (!template.isEmpty()) {
+                jakarta.json.JsonArrayBuilder a = org.quire.engine.io.JsonSupport.JSON.createArrayBuilder();
+                template.forEach(a::add);
+                j = org.quire.engine.io.JsonSupport.JSON.createObjectBuilder(j).add("templateFindings", a).build();
+            }
+            out.print(BudgetJson.pretty(j));
             return 0;
         }
         out.print(text(b.title(), o));
+        for (String t : template) {
+            out.println("Warning (template): " + t);
+        }
         out.println();
         out.println(Cautions.TEXT);
         return 0;

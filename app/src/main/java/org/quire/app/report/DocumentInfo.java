@@ -92,6 +92,11 @@ public record DocumentInfo(String laboratory, String title, String deviceUnderTe
                                 + "outside Quire)";
             }
         }
+        // a template evaluated as it is: said in the status, and in the band of every page (notApprovedMark)
+        java.util.Optional<String> example = org.quire.engine.document.TemplateConformance.exampleFigures(doc);
+        if (example.isPresent()) {
+            status += "; " + example.get();
+        }
         List<RevisionEntry> history = new java.util.ArrayList<>();
         for (org.quire.engine.document.RevisionEntry e : doc.history()) {
             history.add(new RevisionEntry(Integer.toString(e.revision()), instant(e.at()), e.by(), e.status().label(),
@@ -115,9 +120,13 @@ public record DocumentInfo(String laboratory, String title, String deviceUnderTe
     /**
      * @return the words every page of a report carries in a band at its top when the content is not an approved
      *     revision (a draft, a document in review or withdrawn, a plain budget file that records no approval, an
-     *     approved document whose content changed since), or null for approved content whose hash is intact
+     *     approved document whose content changed since, a template's example), or null for approved content whose
+     *     hash is intact
      */
     public String notApprovedMark() {
+        if (status.contains(org.quire.engine.document.TemplateConformance.EXAMPLE_FIGURES)) {
+            return "TEMPLATE EXAMPLE: not a measurement's figures; not approved, not for issue";
+        }
         if (status.equals("approved (content unchanged since approval)")) {
             return null;
         }

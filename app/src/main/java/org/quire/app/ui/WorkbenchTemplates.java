@@ -74,6 +74,13 @@ final class WorkbenchTemplates {
     /** Looks, off the event thread, for a newer version of the template the budget follows, and offers it. */
     void checkTemplate(BudgetEditor ed) {
         org.quire.engine.document.BudgetDocument content = ed.document().content();
+        // a template opened as it is: its results are those of its example values, and it says so
+        java.util.Optional<String> example = org.quire.engine.document.TemplateConformance.exampleFigures(content);
+        if (example.isPresent()) {
+            Path file = ed.document().file();
+            ed.showNotice(org.quire.app.ui.common.Fmt.sentence(example.get()) + ".", "New budget from this template\u2026",
+                    () -> newFromTemplate(file));
+        }
         if (content.templateOrigin() == null) {
             return;
         }

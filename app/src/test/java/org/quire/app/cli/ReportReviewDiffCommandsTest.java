@@ -53,6 +53,20 @@ class ReportReviewDiffCommandsTest {
     }
 
     @Test
+    void aReportOfATemplateAsItIsSaysOnEveryPageThatItsFiguresAreExamples(@TempDir Path dir) throws Exception {
+        String template = Path.of("..", "templates", "gravimetric-emf-flow-point.json").toString();
+        assertEquals(0, run("report", template, "-o", dir.resolve("t.html").toString()));
+        String html = Files.readString(dir.resolve("t.html"));
+        assertTrue(html.contains("TEMPLATE EXAMPLE: not a measurement&#39;s figures; not approved, not for issue")
+                || html.contains("TEMPLATE EXAMPLE: not a measurement's figures; not approved, not for issue"),
+                "the band");
+        assertTrue(html.contains("the template&#39;s example values, not of a measurement")
+                || html.contains("the template's example values, not of a measurement"), "the status says why");
+        assertEquals(0, run("report", h1(), "-o", dir.resolve("h1.html").toString()));
+        assertTrue(!Files.readString(dir.resolve("h1.html")).contains("TEMPLATE EXAMPLE"), "not for a plain budget");
+    }
+
+    @Test
     void reportAgainstAnEarlierBudgetHasTheChanges(@TempDir Path dir) throws Exception {
         // JCGM 101:2008 9.2.3 to 9.2.4: X4 widened from u = 1 to u = 10
         assertEquals(0, run("report", Examples.file("jcgm101-9.2.4-additive-dominant.json").toString(), "-o",

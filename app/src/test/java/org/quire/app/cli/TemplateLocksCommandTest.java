@@ -124,4 +124,27 @@ class TemplateLocksCommandTest {
         assertTrue(kept.out().contains("[met]            The budget keeps every field its template locks"),
                 kept.out());
     }
+
+    @Test
+    void aTemplateEvaluatedAsItIsSaysItsFiguresAreItsExamples() throws Exception {
+        // never a silent figure from a template's example values: the text and the JSON say so
+        String template = java.nio.file.Path.of("..", "templates", "gravimetric-emf-flow-point.json").toString();
+        TemplateCommandTest.Run text = TemplateCommandTest.run("evaluate", template);
+        assertEquals(0, text.status(), text.err());
+        assertTrue(text.out().contains("Warning (template): this file is template tvfl-gravimetric-emf-point version 2: "
+                + "its figures are those of the template's example values, not of a measurement"), text.out());
+        TemplateCommandTest.Run json = TemplateCommandTest.run("evaluate", template, "--format", "json");
+        JsonObject o = jakarta.json.Json.createReader(new StringReader(json.out())).readObject();
+        assertTrue(o.getJsonArray("templateFindings").getString(0).startsWith("this file is template "), json.out());
+        TemplateCommandTest.Run mc = TemplateCommandTest.run("montecarlo", template, "--trials", "20000");
+        assertEquals(0, mc.status(), mc.err());
+        assertTrue(mc.out().contains("Warning (template): this file is template tvfl-gravimetric-emf-point"), mc.out());
+        TemplateCommandTest.Run mcJson = TemplateCommandTest.run("montecarlo", template, "--trials", "20000",
+                "--format", "json");
+        assertTrue(jakarta.json.Json.createReader(new StringReader(mcJson.out())).readObject()
+                .getJsonArray("templateFindings").getString(0).startsWith("this file is template "), mcJson.out());
+        TemplateCommandTest.Run example = TemplateCommandTest.run("evaluate",
+                java.nio.file.Path.of("..", "worked-examples", "jcgm100-h1-end-gauge.json").toString());
+        assertFalse(example.out().contains("Warning (template)"), "a budget that is no template has no such finding");
+    }
 }

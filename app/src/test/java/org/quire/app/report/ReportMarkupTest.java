@@ -72,7 +72,8 @@ class ReportMarkupTest {
             assertFalse(csv.toString().contains(bad), file.getFileName() + ": '" + bad + "' in the CSV tables");
             assertFalse(html.replaceAll("<[^>]+>", "").contains(bad), file.getFileName() + ": '" + bad + "' in the HTML");
         }
-        // the shipped files are drafts or plain budgets: every page says so
+        // the shipped files are drafts, plain budgets or templates (whose band says their figures are examples):
+        // every page says they are not approved
         int marks = text.split("not approved|NOT APPROVED|DRAFT", -1).length - 1;
         assertTrue(marks >= pages, file.getFileName() + ": " + marks + " draft marks on " + pages + " pages");
         // input notes are the author's guidance, not in the report's body

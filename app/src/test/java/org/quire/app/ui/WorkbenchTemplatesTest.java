@@ -396,4 +396,21 @@ class WorkbenchTemplatesTest extends GuiTestSupport {
                 "the user's parameter value is kept");
         assertTrue(ed.document().isDirty());
     }
+
+    @Test
+    void aTemplateOpenedAsItIsSaysItsFiguresAreItsExamplesAndOffersANewBudget() throws Exception {
+        Path file = personal.resolve("tvfl-tank-v1.json");
+        BudgetEditor ed = await(onEdt(() -> frame.open(file))).orElseThrow();
+        waitFor("the notice of a template's example figures", ed::noticeShown);
+        onEdt(() -> {
+            assertTrue(ed.noticeText().startsWith("This file is template "), ed.noticeText());
+            assertTrue(ed.noticeText().contains("its figures are those of the template's example values, not of a "
+                    + "measurement"), ed.noticeText());
+            assertEquals("New budget from this template\u2026", ed.noticeAction().getText());
+            return null;
+        });
+        EventQueue.invokeLater(() -> ed.noticeAction().doClick());
+        NewFromTemplateDialog dlg = waitForWindow("newFromTemplate", NewFromTemplateDialog.class);
+        onEdt(() -> { dlg.dispose(); return null; });
+    }
 }

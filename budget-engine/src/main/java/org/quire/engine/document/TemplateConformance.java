@@ -103,6 +103,25 @@ public final class TemplateConformance {
     }
 
     /**
+     * The finding for a template evaluated as it is: its figures are those of its example values, which a budget
+     * made from it never carries over ({@link TemplateSpec#carriedValues}), so they are not a measurement's.
+     *
+     * @return the sentence, or empty when {@code doc} is not a template
+     */
+    public static Optional<String> exampleFigures(BudgetDocument doc) {
+        TemplateSpec t = doc.template();
+        if (t == null) {
+            return Optional.empty();
+        }
+        return Optional.of("this file is template " + t.id() + " version " + t.version() + ": " + EXAMPLE_FIGURES
+                + "; make a budget from the template and give the measurement's values");
+    }
+
+    /** The words of {@link #exampleFigures} that say what a template's figures are. */
+    public static final String EXAMPLE_FIGURES = "its figures are those of the template's example values, not of a "
+            + "measurement";
+
+    /**
      * Checks a document against the template version it was made from, as found in {@code library}.
      *
      * @throws IOException when a folder of the library cannot be read

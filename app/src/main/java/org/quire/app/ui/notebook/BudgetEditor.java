@@ -368,6 +368,9 @@ public final class BudgetEditor extends JPanel implements EditorContext {
     /** @return whether a notice is shown */
     public boolean noticeShown() { return notice.isVisible(); }
 
+    /** @return the text of the notice above the notebook */
+    public String noticeText() { return noticeText.getText(); }
+
     /** @return the notice's action button, for tests */
     public JButton noticeAction() { return noticeAction; }
 
