@@ -142,20 +142,28 @@ class MeterCalibrationCommandTest {
                 + "repeatability is undefined"), e.err());
     }
 
-    @Test
-    void aFleetGivesOneRowPerMeterAndPointAndAVerdictPerMeter() throws Exception {
+    /**
+     * @return a fleet file of two meters, A and B, with the as-found runs of the worked example each; B without
+     *     runs 2 and 3 of point 5 when {@code bWithOneRunAtP5}
+     */
+    private Path fleet(String name, boolean bWithOneRunAtP5) throws Exception {
         StringBuilder s = new StringBuilder("meter,constant,phase,point,run,I_full,I_empty,t_c,t_tank,t_meter,p_meter,N_p\n");
         for (String line : Files.readAllLines(RUNS)) {
             if (line.startsWith("as-found")) {
                 s.append("A,1.2345,").append(line).append('\n');
-                s.append("B,1.1000,").append(line).append('\n');
+                if (!bWithOneRunAtP5 || !(line.startsWith("as-found,P5,2") || line.startsWith("as-found,P5,3"))) {
+                    s.append("B,1.1000,").append(line).append('\n');
+                }
             }
         }
-        Path runs = dir.resolve("fleet.csv");
-        Files.writeString(runs, s);
+        return Files.writeString(dir.resolve(name), s);
+    }
+
+    @Test
+    void aFleetGivesOneRowPerMeterAndPointAndAVerdictPerMeter() throws Exception {
         Path out = dir.resolve("fleet-results.csv");
-        Result r = run("calibration", "fleet", METHOD.toString(), runs.toString(), "--job", JOB.toString(), "-o",
-                out.toString());
+        Result r = run("calibration", "fleet", METHOD.toString(), fleet("fleet.csv", false).toString(), "--job",
+                JOB.toString(), "-o", out.toString());
         assertEquals(0, r.status(), r.err());
         var lines = Files.readAllLines(out);
         assertEquals(1 + 2 * (5 + 1), lines.size(), String.join("\n", lines));
@@ -166,20 +174,9 @@ class MeterCalibrationCommandTest {
     @Test
     void aFleetWithARefusedMeterWritesTheOthersAndEndsWithTheUserErrorStatus() throws Exception {
         // meter B lacks runs 2 and 3 of point 5 (one run, no stated repeatability: refused as above); A is whole
-        StringBuilder s = new StringBuilder("meter,constant,phase,point,run,I_full,I_empty,t_c,t_tank,t_meter,p_meter,N_p\n");
-        for (String line : Files.readAllLines(RUNS)) {
-            if (line.startsWith("as-found")) {
-                s.append("A,1.2345,").append(line).append('\n');
-                if (!(line.startsWith("as-found,P5,2") || line.startsWith("as-found,P5,3"))) {
-                    s.append("B,1.1000,").append(line).append('\n');
-                }
-            }
-        }
-        Path runs = dir.resolve("fleet-b-refused.csv");
-        Files.writeString(runs, s);
         Path out = dir.resolve("fleet-b-results.csv");
-        Result r = run("calibration", "fleet", METHOD.toString(), runs.toString(), "--job", JOB.toString(), "-o",
-                out.toString());
+        Result r = run("calibration", "fleet", METHOD.toString(), fleet("fleet-b-refused.csv", true).toString(),
+                "--job", JOB.toString(), "-o", out.toString());
         assertEquals(2, r.status(), "a refused meter is bad input (exit status 2): " + r.err());
         assertTrue(r.err().contains("1 of 2 meters evaluated"), r.err());
         var lines = Files.readAllLines(out);
