@@ -24,15 +24,16 @@ import picocli.CommandLine.ParentCommand;
 
 /**
  * {@code quire bench [--trials N] [--threads T] [--runs R]}: the Monte Carlo benchmark on the Tarrow Vale
- * benchmark budget (13 inputs, 2 outputs). Warm-up runs first, of N trials each, until a run is no more than 3 %
- * faster than the best before it (3 to {@value #WARM_UP_LIMIT} runs), then R timed runs; each timed run covers
+ * benchmark budget (13 inputs, 2 outputs). Warm-up runs first, of N trials each, until two runs in a row are no
+ * more than 3 % faster than the best before them ({@value #WARM_UP_LEAST} to {@value #WARM_UP_LIMIT} runs), then R
+ * timed runs; each timed run covers
  * sampling, model evaluation and the summaries of both outputs (mean, standard deviation, both coverage
  * intervals). The last line gives the median run. With {@code --budget-inputs N}: open, evaluate and save a
  * generated budget of N inputs.
  */
 @Command(name = "bench", mixinStandardHelpOptions = true, sortOptions = false,
         description = {"Measure Monte Carlo throughput on the Tarrow Vale benchmark budget (13 inputs, 2 outputs): "
-                + "warm-up runs of N trials until the times settle (3 to 20 runs), then R timed runs; the last line "
+                + "warm-up runs of N trials until the times settle (5 to 30 runs), then R timed runs; the last line "
                 + "gives the median run as "
                 + "trials_per_second=...",
             "With --budget-inputs N: the time to open, evaluate (GUM) and save a generated budget of N inputs."},
@@ -41,8 +42,9 @@ import picocli.CommandLine.ParentCommand;
             "  quire bench --budget-inputs 500"})
 final class BenchCommand implements Callable<Integer> {
     static final String BUDGET = "tarrow-vale-benchmark.json";
-    /** The most warm-up runs before the timed ones. */
-    static final int WARM_UP_LIMIT = 20;
+    /** The fewest and the most warm-up runs before the timed ones. */
+    static final int WARM_UP_LEAST = 5;
+    static final int WARM_UP_LIMIT = 30;
 
     @ParentCommand
     QuireCommand quire;
@@ -94,18 +96,19 @@ final class BenchCommand implements Callable<Integer> {
         CompiledModel model = b.compile(quire.engine.library());
         GumResult gum = GumEvaluator.evaluate(b, model, b.correlationMatrix(), b.settings());
         MonteCarloSettings base = BudgetSimulation.settings(b.settings(), gum).withThreads(threads).withTrials(trials);
-        // warm-up at the timed size until the just-in-time compiler has done its work: until a run is no more
-        // than 3 % faster than the best before it (at least 3 runs, at most WARM_UP_LIMIT), so that the timed runs
-        // measure the throughput of compiled code and not the compiler's progress
+        // warm-up at the timed size until the just-in-time compiler has done its work: until two runs in a row are
+        // no more than 3 % faster than the best before them (at least WARM_UP_LEAST runs, at most WARM_UP_LIMIT),
+        // so that the timed runs measure the throughput of compiled code and not the compiler's progress
         int warmUps = 0;
+        int settledRuns = 0;
         double best = Double.POSITIVE_INFINITY;
         while (warmUps < WARM_UP_LIMIT) {
             long t0 = System.nanoTime();
             BudgetSimulation.run(b, model, gum, base.withSeed(++warmUps), ProgressListener.NONE);
             double s = (System.nanoTime() - t0) / 1e9;
-            boolean settled = s > 0.97 * best;
+            settledRuns = s > 0.97 * best ? settledRuns + 1 : 0;
             best = Math.min(best, s);
-            if (warmUps >= 3 && settled) {
+            if (warmUps >= WARM_UP_LEAST && settledRuns >= 2) {
                 break;
             }
         }
