@@ -43,6 +43,19 @@ final class WorkbenchTemplates {
      * @param preselect the file to select in the list, or null
      */
     Optional<BudgetEditor> newFromTemplate(Path preselect) {
+        return newFromTemplate(dlg -> {
+            if (preselect != null) {
+                dlg.select(preselect);
+            }
+        });
+    }
+
+    /** File &gt; New from template with the template of this id and version selected, when the library has it. */
+    Optional<BudgetEditor> newFromTemplate(String id, int version) {
+        return newFromTemplate(dlg -> dlg.selectTemplate(id, version));
+    }
+
+    private Optional<BudgetEditor> newFromTemplate(java.util.function.Consumer<NewFromTemplateDialog> preselect) {
         TemplateCatalog.Listing listing;
         try {
             listing = templates().list();
@@ -51,9 +64,7 @@ final class WorkbenchTemplates {
             return Optional.empty();
         }
         NewFromTemplateDialog dlg = new NewFromTemplateDialog(frame, listing, prefs.userName());
-        if (preselect != null) {
-            dlg.select(preselect);
-        }
+        preselect.accept(dlg);
         dlg.setVisible(true);
         if (dlg.created() == null) {
             return Optional.empty();
@@ -77,9 +88,9 @@ final class WorkbenchTemplates {
         // a template opened as it is: its results are those of its example values, and it says so
         java.util.Optional<String> example = org.quire.engine.document.TemplateConformance.exampleFigures(content);
         if (example.isPresent()) {
-            Path file = ed.document().file();
+            org.quire.engine.document.TemplateSpec t = content.template();
             ed.showNotice(org.quire.app.ui.common.Fmt.sentence(example.get()) + ".", "New budget from this template\u2026",
-                    () -> newFromTemplate(file));
+                    () -> newFromTemplate(t.id(), t.version()), false);
         }
         if (content.templateOrigin() == null) {
             return;

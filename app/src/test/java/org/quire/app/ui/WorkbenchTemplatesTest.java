@@ -411,6 +411,15 @@ class WorkbenchTemplatesTest extends GuiTestSupport {
         });
         EventQueue.invokeLater(() -> ed.noticeAction().doClick());
         NewFromTemplateDialog dlg = waitForWindow("newFromTemplate", NewFromTemplateDialog.class);
-        onEdt(() -> { dlg.dispose(); return null; });
+        onEdt(() -> {
+            TemplateSpec opened = ed.document().content().template();
+            assertTrue(dlg.selected() != null && dlg.selected().isTemplate(), "a template is selected");
+            assertEquals(opened.id(), dlg.selected().template().id(), "the template opened is the one selected");
+            assertEquals(opened.version(), dlg.selected().template().version());
+            dlg.dispose();
+            return null;
+        });
+        waitFor("the dialog closed", () -> !dlg.isShowing());
+        assertTrue(onEdt(ed::noticeShown), "the finding stays after the dialog is cancelled");
     }
 }

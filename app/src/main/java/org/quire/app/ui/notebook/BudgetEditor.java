@@ -50,7 +50,8 @@ public final class BudgetEditor extends JPanel implements EditorContext {
     private final JLabel banner = new JLabel();
     private final ReviewPanel review;
     private final JPanel notice = new JPanel(new BorderLayout(8, 0));
-    private final JLabel noticeText = new JLabel();
+    /** The notice's text, wrapped onto as many lines as the notebook's width needs (never cut). */
+    private final javax.swing.JTextArea noticeText = new javax.swing.JTextArea();
     private final JButton noticeAction = new JButton();
     private NotebookSection reviewSection;
     private JButton reviewJump;
@@ -114,6 +115,12 @@ public final class BudgetEditor extends JPanel implements EditorContext {
         notice.setBackground(Colors.get("Quire.notice.background"));
         notice.setBorder(BorderFactory.createEmptyBorder(4, 8, 4, 8));
         noticeText.setForeground(Colors.get("Quire.notice.foreground"));
+        noticeText.setLineWrap(true);
+        noticeText.setWrapStyleWord(true);
+        noticeText.setEditable(false);
+        noticeText.setOpaque(false);
+        noticeText.setBorder(BorderFactory.createEmptyBorder(3, 0, 3, 0));
+        noticeText.setFont(javax.swing.UIManager.getFont("Label.font"));
         notice.add(noticeText, BorderLayout.CENTER);
         noticeAction.setName("noticeAction");
         JButton dismiss = new JButton("Dismiss");
@@ -352,13 +359,25 @@ public final class BudgetEditor extends JPanel implements EditorContext {
      * @param action what the button does; the notice is hidden first
      */
     public void showNotice(String text, String actionName, Runnable action) {
+        showNotice(text, actionName, action, true);
+    }
+
+    /**
+     * Shows a notice above the notebook with one action.
+     *
+     * @param hideOnAction whether the action hides the notice (an offer), or the notice stays (a finding that
+     *     holds whatever the action does; Dismiss hides it)
+     */
+    public void showNotice(String text, String actionName, Runnable action, boolean hideOnAction) {
         noticeText.setText(text);
         noticeAction.setText(actionName);
         for (java.awt.event.ActionListener l : noticeAction.getActionListeners()) {
             noticeAction.removeActionListener(l);
         }
         noticeAction.addActionListener(e -> {
-            notice.setVisible(false);
+            if (hideOnAction) {
+                notice.setVisible(false);
+            }
             action.run();
         });
         notice.setVisible(true);

@@ -243,6 +243,23 @@ public final class NewFromTemplateDialog extends JDialog {
         }
     }
 
+    /** @return the entry selected in the list, or null */
+    public TemplateCatalog.Entry selected() {
+        return list.getSelectedValue();
+    }
+
+    /** Selects the template of this id and version in the list, when it is there (wherever its file is). */
+    public void selectTemplate(String id, int version) {
+        for (int i = 0; i < list.getModel().getSize(); i++) {
+            TemplateCatalog.Entry e = list.getModel().getElementAt(i);
+            if (e.isTemplate() && e.template().id().equals(id) && e.template().version() == version) {
+                list.setSelectedIndex(i);
+                list.ensureIndexIsVisible(i);
+                return;
+            }
+        }
+    }
+
     /** @return the document made, or null when the dialog was cancelled */
     public BudgetDocument created() {
         return created;
