@@ -36,11 +36,13 @@ public final class Workbench {
         WorkbenchPrefs prefs = WorkbenchPrefs.user();
         installLookAndFeel(prefs.theme());
         Thread.setDefaultUncaughtExceptionHandler(Workbench::uncaught);
+        // the recovery folder is created and locked here, on the starting thread: the event thread touches no file
+        WorkbenchRecovery.Claimed recovery = WorkbenchRecovery.claim(prefs);
         EventQueue.invokeLater(() -> {
             Prepared p = join(prepared);
             Engine engine = p.engine();
             WorkbenchFrame frame = new WorkbenchFrame(prefs, engine.library(),
-                    MonteCarloRunner.engine(engine.library()));
+                    MonteCarloRunner.engine(engine.library()), recovery);
             frame.setIconImages(AppIcon.images());
             // the demo budget first, then the window: its first paint shows the content, not an empty grey frame;
             // a file is read off the event thread once the window shows

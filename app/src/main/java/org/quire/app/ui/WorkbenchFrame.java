@@ -76,6 +76,15 @@ public final class WorkbenchFrame extends JFrame {
     private BiConsumer<String, Boolean> statusHook = (m, e) -> { };
 
     public WorkbenchFrame(WorkbenchPrefs prefs, FunctionLibrary library, MonteCarloRunner runner) {
+        this(prefs, library, runner, null);
+    }
+
+    /**
+     * @param claimed the recovery folder claimed off the event thread before (the start does so), or null to
+     *     claim it here
+     */
+    WorkbenchFrame(WorkbenchPrefs prefs, FunctionLibrary library, MonteCarloRunner runner,
+            WorkbenchRecovery.Claimed claimed) {
         super("Quire");
         this.prefs = prefs;
         this.library = library;
@@ -111,7 +120,7 @@ public final class WorkbenchFrame extends JFrame {
                 quit();
             }
         });
-        recovery = new WorkbenchRecovery(this, prefs);
+        recovery = new WorkbenchRecovery(this, prefs, claimed);
         refreshNavigator();
         setMinimumSize(new Dimension(760, 500));
     }

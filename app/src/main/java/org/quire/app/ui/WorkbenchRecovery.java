@@ -32,18 +32,35 @@ final class WorkbenchRecovery {
     private final RecoverySessions.Session session;
     private final RecoveryKeeper keeper;
 
-    WorkbenchRecovery(WorkbenchFrame frame, WorkbenchPrefs prefs) {
+    /**
+     * This workbench's recovery folder, claimed (created and locked) before the window is built, off the event
+     * thread where the start allows it ({@link #claim}); or why it could not be.
+     */
+    record Claimed(RecoverySessions sessions, RecoverySessions.Session session, IOException failure) {
+    }
+
+    /** Claims a recovery folder in the preferences' recovery folder: file work, for the start-up thread. */
+    static Claimed claim(WorkbenchPrefs prefs) {
+        RecoverySessions sessions = RecoverySessions.in(prefs.recoveryFolder());
+        try {
+            return new Claimed(sessions, sessions.claim(), null);
+        } catch (IOException e) {
+            return new Claimed(sessions, null, e);
+        }
+    }
+
+    WorkbenchRecovery(WorkbenchFrame frame, WorkbenchPrefs prefs, Claimed claimed) {
         this.frame = frame;
         this.prefs = prefs;
-        sessions = RecoverySessions.in(prefs.recoveryFolder());
-        RecoverySessions.Session s;
+        Claimed c = claimed != null ? claimed : claim(prefs);
+        sessions = c.sessions();
+        RecoverySessions.Session s = c.session();
         RecoveryStore store;
-        try {
-            s = sessions.claim();
+        if (s != null) {
             store = s.store();
-        } catch (IOException e) {
-            s = null;
+        } else {
             store = RecoveryStore.of(sessions.base());
+            IOException e = c.failure();
             EventQueue.invokeLater(() -> frame.status("No recovery copies will be kept: " + e.getMessage(), true));
         }
         session = s;
