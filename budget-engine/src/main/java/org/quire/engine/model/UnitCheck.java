@@ -227,11 +227,11 @@ final class UnitCheck {
     }
 
     private static boolean sameFactor(Unit a, Unit b) {
-        return sameFactor(a.factor(), b.factor());
+        return a.sameScale(b);
     }
 
     private static boolean sameFactor(double a, double b) {
-        return Math.abs(a - b) <= 1e-12 * Math.max(Math.abs(a), Math.abs(b));
+        return Unit.sameFactor(a, b);
     }
 
     // ---- inference -----------------------------------------------------------------------------------------

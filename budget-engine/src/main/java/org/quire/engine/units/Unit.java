@@ -235,11 +235,28 @@ public final class Unit {
         if (other == ONE || other.equals(ONE)) {
             return this;
         }
-        if (other.dimension.equals(dimension) && other.factor == factor) {
-            return ONE; // the same unit, however written (m3/h and m^3/h); offsets are dropped as above
+        if (other.equals(this) || !isDimensionless() && other.dimension.equals(dimension) && sameScale(other)) {
+            // the same unit, however written (m3/h and m^3/h, L/min and dm^3/min); offsets are dropped as above.
+            // Dimensionless units of another name stay (rad/sr, 1/rad: the names say what the number counts)
+            return ONE;
         }
         return new Unit(Symbols.quotient(symbol, other.symbol), dimension.divide(other.dimension),
                 factor / other.factor, 0.0);
+    }
+
+    /**
+     * The one rule for "the same scale": factors equal to 1 part in 10^12, so that units whose factors are
+     * worked out along different paths (L/min = 10^-3 m^3 / 60 s, dm^3/min = (10^-1 m)^3 / 60 s) are the same.
+     *
+     * @return whether {@code other} has this unit's factor (its dimension is not compared)
+     */
+    public boolean sameScale(Unit other) {
+        return sameFactor(factor, other.factor);
+    }
+
+    /** @return whether two unit factors are the same to 1 part in 10^12 (see {@link #sameScale}) */
+    public static boolean sameFactor(double a, double b) {
+        return Math.abs(a - b) <= 1e-12 * Math.max(Math.abs(a), Math.abs(b));
     }
 
     /** @return this unit to a whole-number power; °C^2 is a difference unit; the power 1 returns this unit */

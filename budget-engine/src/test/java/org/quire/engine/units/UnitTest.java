@@ -210,6 +210,12 @@ class UnitTest {
     void aUnitOverTheSameUnitWrittenAnotherWayIsOne() {
         // a quotient of like quantities is a number (ISO 80000-1 6.5.4, from memory): the unit one, not "(m3/h)/(m^3/h)"
         assertEquals(Unit.ONE, Units.parse("m3/h").divide(Units.parse("m^3/h")));
+        // factors reached along different paths: 1 L = 1 dm^3 (NIST SP 811 B.8), 1 mL = 1 cm^3
+        assertEquals(Unit.ONE, Units.parse("L/min").divide(Units.parse("dm^3/min")));
+        assertEquals(Unit.ONE, Units.parse("mL/s").divide(Units.parse("cm^3/s")));
+        assertEquals(Unit.ONE, Units.parse("g/cm^3").divide(Units.parse("kg/L")));
+        // dimensionless units keep their names: a sensitivity per radian stays "1/rad" (common practice)
+        assertEquals("1/rad", Unit.ONE.divide(Units.parse("rad")).toString());
         // L/min over m^3/h is not one: 1 L/min = 0.06 m^3/h (NIST SP 811 B.8: 1 L = 10^-3 m^3)
         Unit ratio = Units.parse("L/min").divide(Units.parse("m^3/h"));
         assertEquals(0.06, ratio.convert(1.0, Unit.ONE), 1e-15);
