@@ -37,6 +37,7 @@ public final class Main {
         int status = CommandLine.run(words, Terminal.out(), Terminal.err(),
                 (file, review) -> opened[0] = Desktop.open(file, review));
         if (!opened[0]) {
+            Terminal.drain(); // output that ends without a line end, on a terminal that needs ASCII forms
             System.exit(status);
         }
     }

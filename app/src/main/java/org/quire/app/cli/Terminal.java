@@ -61,7 +61,26 @@ public final class Terminal {
         if (canShow(cs)) {
             return system;
         }
-        return new PrintStream(new Plain(new FileOutputStream(fd)), true, StandardCharsets.UTF_8);
+        Plain plain = new Plain(new FileOutputStream(fd));
+        OPEN.add(plain);
+        return new PrintStream(plain, true, StandardCharsets.UTF_8);
+    }
+
+    /** The ASCII streams made, whose last partial line {@link #drain} passes on. */
+    private static final java.util.List<Plain> OPEN = new java.util.concurrent.CopyOnWriteArrayList<>();
+
+    /**
+     * Passes on what the ASCII streams still hold (output that does not end with a line end): to be called before
+     * the program exits.
+     */
+    public static void drain() {
+        for (Plain p : OPEN) {
+            try {
+                p.drain();
+            } catch (IOException e) {
+                // the terminal has gone; nothing is left to tell
+            }
+        }
     }
 
     /** The character set the JVM writes standard output in (Java 17: the locale's, as {@code native.encoding}). */
@@ -182,12 +201,12 @@ public final class Terminal {
 
         @Override
         public synchronized void flush() throws IOException {
-            // a partial line (a progress line, which ends in spaces or \r) is passed on at a flush up to its last
-            // space: the word after it (a number such as 1.2 x 10^-3 may be printed in pieces) waits for the rest,
-            // so that it is converted as a whole
+            // a partial line is passed on at a flush only up to its last \r (a progress line rewritten in place,
+            // shown one update late); the rest waits for the line's end, so that a figure printed in pieces (the
+            // stream flushes after every print) is converted whole, as 5.8e-4 and not 5.8 x 10^-4
             byte[] bytes = line.toByteArray();
             int upTo = bytes.length;
-            while (upTo > 0 && bytes[upTo - 1] != ' ' && bytes[upTo - 1] != '\r' && bytes[upTo - 1] != '\t') {
+            while (upTo > 0 && bytes[upTo - 1] != '\r') {
                 upTo--;
             }
             if (upTo > 0) {
@@ -195,6 +214,16 @@ public final class Terminal {
                 line.reset();
                 line.write(bytes, upTo, bytes.length - upTo);
             }
+            target.flush();
+        }
+
+        /** Passes on everything held, up to the last whole character. */
+        synchronized void drain() throws IOException {
+            byte[] rest = line.toByteArray();
+            int whole = completeCharacters(rest);
+            line.reset();
+            line.write(rest, whole, rest.length - whole);
+            target.write(plain(new String(rest, 0, whole, StandardCharsets.UTF_8)).getBytes(StandardCharsets.US_ASCII));
             target.flush();
         }
 
@@ -219,10 +248,7 @@ public final class Terminal {
 
         @Override
         public synchronized void close() throws IOException {
-            byte[] rest = line.toByteArray();
-            line.reset();
-            int whole = completeCharacters(rest);
-            target.write(plain(new String(rest, 0, whole, StandardCharsets.UTF_8)).getBytes(StandardCharsets.US_ASCII));
+            drain();
             target.close();
         }
     }

@@ -53,23 +53,29 @@ class TerminalTest {
         assertEquals("U = 5.8e-4 m^3\nprogress 50 %\r", sink.toString(StandardCharsets.US_ASCII));
         sink.reset();
         byte[] mu = "\u00b5".getBytes(StandardCharsets.UTF_8);
-        plain.write(mu, 0, 1); // half a character: kept until its end arrives
+        plain.write(mu, 0, 1); // half a character, then the rest of a line without its end: held at a flush
         plain.flush();
         assertEquals("", sink.toString(StandardCharsets.US_ASCII));
         plain.write(mu, 1, 1);
         plain.write(' ');
         plain.flush();
-        assertEquals("u ", sink.toString(StandardCharsets.US_ASCII));
-        // a word is never cut at a flush: a power of ten printed in two pieces is not made "10^-^4"
+        assertEquals("", sink.toString(StandardCharsets.US_ASCII), "no line end, no \\r: nothing passed yet");
+        plain.drain();
+        assertEquals("u ", sink.toString(StandardCharsets.US_ASCII), "drained before the program exits");
+        // a figure printed in pieces, a flush after each (as the stream's automatic flush does), converts whole:
+        // the same form as the whole line (5.8e-4, plain()'s rule)
         sink.reset();
-        plain.write("u = 5.8 \u00d7 10\u207b".getBytes(StandardCharsets.UTF_8));
-        plain.flush();
-        plain.write("\u2074 m\n".getBytes(StandardCharsets.UTF_8));
-        assertEquals("u = 5.8 x 10^-4 m\n", sink.toString(StandardCharsets.US_ASCII));
+        try (PrintStream p = new PrintStream(new Terminal.Plain(sink), true, StandardCharsets.UTF_8)) {
+            p.printf("u = %s m%n", "5.8 \u00d7 10\u207b\u2074");
+            p.print("progress 10 %, 0.3 s left");
+            p.print("\rprogress 20 %, 0.2 s left");
+            assertEquals("u = 5.8e-4 m" + System.lineSeparator() + "progress 10 %, 0.3 s left\r",
+                    sink.toString(StandardCharsets.US_ASCII), "a progress update is passed at the next \\r, whole");
+            p.print("}");
+        }
+        assertTrue(sink.toString(StandardCharsets.US_ASCII).endsWith("progress 20 %, 0.2 s left}"),
+                "what is left is passed at close: " + sink.toString(StandardCharsets.US_ASCII));
         sink.reset();
-        plain.write("no end of line".getBytes(StandardCharsets.UTF_8));
-        plain.close();
-        assertEquals("no end of line", sink.toString(StandardCharsets.US_ASCII), "what is left is passed at close");
         try (PrintStream p = new PrintStream(new Terminal.Plain(sink), true, StandardCharsets.UTF_8)) {
             sink.reset();
             p.println("\u03bd_eff = 12");
