@@ -123,7 +123,8 @@ final class ReviewCommand implements Callable<Integer> {
             throw new Files.FileProblem(file, e.getMessage());
         }
         ReviewContext ctx = ReviewContext.none().withUnits(new org.quire.app.review.EngineUnitChecker(quire.engine.library()))
-                .withTemplate(org.quire.engine.document.TemplateConformance.check(doc, TemplateCommand.Folders.preferred()));
+                .withTemplate(org.quire.engine.document.TemplateConformance.check(doc, TemplateCommand.Folders.preferred()))
+                .withDocument(doc);
         if (mc) {
             ctx = ctx.withMonteCarlo(monteCarlo(trials, file, b, model, r));
         }

@@ -27,7 +27,13 @@ import java.util.Objects;
  */
 public record DocumentInfo(String laboratory, String title, String deviceUnderTest, String revision,
         String status, LocalDate date, String author, String hashAlgorithm, String hash,
-        List<RevisionEntry> revisions) {
+        List<RevisionEntry> revisions, String templateExample) {
+
+    /** A header of a document that is not a template evaluated as it is. */
+    public DocumentInfo(String laboratory, String title, String deviceUnderTest, String revision, String status,
+            LocalDate date, String author, String hashAlgorithm, String hash, List<RevisionEntry> revisions) {
+        this(laboratory, title, deviceUnderTest, revision, status, date, author, hashAlgorithm, hash, revisions, "");
+    }
 
     /** Shown for a field nobody stated. */
     public static final String NOT_STATED = "not stated";
@@ -35,6 +41,7 @@ public record DocumentInfo(String laboratory, String title, String deviceUnderTe
     public static final String NOT_RECORDED = "not recorded (plain budget file)";
 
     public DocumentInfo {
+        templateExample = templateExample == null ? "" : templateExample;
         laboratory = orNotStated(laboratory);
         title = orNotStated(title);
         deviceUnderTest = orNotStated(deviceUnderTest);
@@ -92,24 +99,27 @@ public record DocumentInfo(String laboratory, String title, String deviceUnderTe
                                 + "outside Quire)";
             }
         }
-        // a template evaluated as it is: said in the status, and in the band of every page (notApprovedMark)
-        java.util.Optional<String> example = org.quire.engine.document.TemplateConformance.exampleFigures(doc);
-        if (example.isPresent()) {
-            status += "; " + example.get();
-        }
         List<RevisionEntry> history = new java.util.ArrayList<>();
         for (org.quire.engine.document.RevisionEntry e : doc.history()) {
             history.add(new RevisionEntry(Integer.toString(e.revision()), instant(e.at()), e.by(), e.status().label(),
                     e.contentHash(), e.comment()));
         }
+        // a template evaluated as it is: said in a row of the header and in the band of every page
+        String example = org.quire.engine.document.TemplateConformance.exampleFigures(doc)
+                .map(org.quire.app.report.DocumentInfo::sentence).orElse("");
         return new DocumentInfo(doc.laboratory(), doc.title(), doc.deviceUnderTest(), revision, status, date,
-                doc.author(), HASH_ALGORITHM, doc.contentHash(), history);
+                doc.author(), HASH_ALGORITHM, doc.contentHash(), history, example);
     }
 
     /** The algorithm of every content hash Quire shows: that of {@code BudgetDocument.contentHash()}. */
     public static final String HASH_ALGORITHM = "SHA-256";
     /** Shown for revision and status of a document read from a file of format version 1. */
     public static final String NOT_RECORDED_V1 = "not recorded (file of format version 1)";
+
+    /** @return an engine finding as a sentence: its first letter a capital, a full stop at its end */
+    static String sentence(String finding) {
+        return finding.isEmpty() ? finding : Character.toUpperCase(finding.charAt(0)) + finding.substring(1) + ".";
+    }
 
     /** @return an instant as {@code 2026-11-20 14:03 UTC} */
     static String instant(java.time.Instant t) {
@@ -124,9 +134,16 @@ public record DocumentInfo(String laboratory, String title, String deviceUnderTe
      *     hash is intact
      */
     public String notApprovedMark() {
-        if (status.contains(org.quire.engine.document.TemplateConformance.EXAMPLE_FIGURES)) {
-            return "TEMPLATE EXAMPLE: not a measurement's figures; not approved, not for issue";
+        String mark = approvalMark();
+        if (!templateExample.isEmpty()) {
+            return "TEMPLATE EXAMPLE: not a measurement's figures" + (mark == null ? "" : "; " + mark.toLowerCase(
+                    java.util.Locale.ROOT));
         }
+        return mark;
+    }
+
+    /** @return the band of {@link #notApprovedMark} for the status alone */
+    private String approvalMark() {
         if (status.equals("approved (content unchanged since approval)")) {
             return null;
         }
@@ -150,10 +167,10 @@ public record DocumentInfo(String laboratory, String title, String deviceUnderTe
         return !revision.equals(NOT_RECORDED) && !revision.equals(NOT_RECORDED_V1);
     }
 
-    public DocumentInfo withLaboratory(String v) { return new DocumentInfo(v, title, deviceUnderTest, revision, status, date, author, hashAlgorithm, hash, revisions); }
-    public DocumentInfo withDeviceUnderTest(String v) { return new DocumentInfo(laboratory, title, v, revision, status, date, author, hashAlgorithm, hash, revisions); }
-    public DocumentInfo withAuthor(String v) { return new DocumentInfo(laboratory, title, deviceUnderTest, revision, status, date, v, hashAlgorithm, hash, revisions); }
-    public DocumentInfo withRevision(String v) { return new DocumentInfo(laboratory, title, deviceUnderTest, v, status, date, author, hashAlgorithm, hash, revisions); }
-    public DocumentInfo withStatus(String v) { return new DocumentInfo(laboratory, title, deviceUnderTest, revision, v, date, author, hashAlgorithm, hash, revisions); }
-    public DocumentInfo withRevisions(List<RevisionEntry> v) { return new DocumentInfo(laboratory, title, deviceUnderTest, revision, status, date, author, hashAlgorithm, hash, v); }
+    public DocumentInfo withLaboratory(String v) { return new DocumentInfo(v, title, deviceUnderTest, revision, status, date, author, hashAlgorithm, hash, revisions, templateExample); }
+    public DocumentInfo withDeviceUnderTest(String v) { return new DocumentInfo(laboratory, title, v, revision, status, date, author, hashAlgorithm, hash, revisions, templateExample); }
+    public DocumentInfo withAuthor(String v) { return new DocumentInfo(laboratory, title, deviceUnderTest, revision, status, date, v, hashAlgorithm, hash, revisions, templateExample); }
+    public DocumentInfo withRevision(String v) { return new DocumentInfo(laboratory, title, deviceUnderTest, v, status, date, author, hashAlgorithm, hash, revisions, templateExample); }
+    public DocumentInfo withStatus(String v) { return new DocumentInfo(laboratory, title, deviceUnderTest, revision, v, date, author, hashAlgorithm, hash, revisions, templateExample); }
+    public DocumentInfo withRevisions(List<RevisionEntry> v) { return new DocumentInfo(laboratory, title, deviceUnderTest, revision, status, date, author, hashAlgorithm, hash, v, templateExample); }
 }

@@ -76,6 +76,9 @@ public final class HtmlReport {
         fact(h, "Device under test", d.deviceUnderTest());
         fact(h, "Revision", d.revision());
         fact(h, "Status", d.status());
+        if (!d.templateExample().isEmpty()) {
+            fact(h, "Figures", d.templateExample());
+        }
         fact(h, "Date", d.date().toString());
         fact(h, "Author", d.author());
         h.append("<tr><th>Content hash (").append(esc(d.hashAlgorithm())).append(")</th><td class=\"hash\">")

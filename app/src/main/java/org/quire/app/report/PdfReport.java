@@ -139,6 +139,9 @@ public final class PdfReport {
         fact(facts, "Device under test", d.deviceUnderTest(), BODY);
         fact(facts, "Revision", d.revision(), BODY);
         fact(facts, "Status", d.status(), BODY);
+        if (!d.templateExample().isEmpty()) {
+            fact(facts, "Figures", d.templateExample(), BODY);
+        }
         fact(facts, "Date", d.date().toString(), BODY);
         fact(facts, "Author", d.author(), BODY);
         fact(facts, "Content hash (" + d.hashAlgorithm() + ")", d.hash(), 7.4f);

@@ -56,6 +56,7 @@ public final class Checklist {
         items.add(rounding(gum));
         items.add(warnings(gum));
         items.add(templateLocks(ctx.template()));
+        items.add(measuredValues(ctx.templateExample()));
         return items;
     }
 
@@ -277,6 +278,17 @@ public final class Checklist {
                 return new CheckItem("template-locks", title, ref, Outcome.NOT_MET, f.messages(), inputs);
             }
         }
+    }
+
+    /** A template evaluated as it is gives the figures of its example values: never endorsed as a measurement's. */
+    private static CheckItem measuredValues(String templateExample) {
+        String title = "The figures are of a measurement, not of a template's example values";
+        if (templateExample != null) {
+            return new CheckItem("measured-values", title, "common practice", Outcome.NOT_MET,
+                    List.of(templateExample), List.of());
+        }
+        return new CheckItem("measured-values", title, "common practice", Outcome.MET,
+                List.of("the file is a budget, not a template"), List.of());
     }
 
     private static CheckItem warnings(GumResult gum) {

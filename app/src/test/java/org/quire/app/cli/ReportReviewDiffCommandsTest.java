@@ -57,11 +57,11 @@ class ReportReviewDiffCommandsTest {
         String template = Path.of("..", "templates", "gravimetric-emf-flow-point.json").toString();
         assertEquals(0, run("report", template, "-o", dir.resolve("t.html").toString()));
         String html = Files.readString(dir.resolve("t.html"));
-        assertTrue(html.contains("TEMPLATE EXAMPLE: not a measurement&#39;s figures; not approved, not for issue")
-                || html.contains("TEMPLATE EXAMPLE: not a measurement's figures; not approved, not for issue"),
-                "the band");
-        assertTrue(html.contains("the template&#39;s example values, not of a measurement")
-                || html.contains("the template's example values, not of a measurement"), "the status says why");
+        String text = html.replace("&#39;", "'");
+        assertTrue(text.contains("TEMPLATE EXAMPLE: not a measurement's figures; draft: not approved, not for issue"),
+                "the band says both: a template's example, and a draft");
+        assertTrue(text.contains("<th>Figures</th><td>This file is template tvfl-gravimetric-emf-point version 2: its "
+                + "figures are those of the template's example values, not of a measurement"), "a header row says why");
         assertEquals(0, run("report", h1(), "-o", dir.resolve("h1.html").toString()));
         assertTrue(!Files.readString(dir.resolve("h1.html")).contains("TEMPLATE EXAMPLE"), "not for a plain budget");
     }

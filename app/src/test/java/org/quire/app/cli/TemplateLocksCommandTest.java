@@ -143,6 +143,15 @@ class TemplateLocksCommandTest {
                 "--format", "json");
         assertTrue(jakarta.json.Json.createReader(new StringReader(mcJson.out())).readObject()
                 .getJsonArray("templateFindings").getString(0).startsWith("this file is template "), mcJson.out());
+        // the assessor's checklist: an item not met, which needs the assessor's mark before any endorsement
+        TemplateCommandTest.Run review = TemplateCommandTest.run("review", template);
+        assertEquals(1, review.status(), review.out());
+        assertTrue(review.out().contains("[not met]        The figures are of a measurement, not of a template's "
+                + "example values"), review.out());
+        TemplateCommandTest.Run budgetReview = TemplateCommandTest.run("review",
+                java.nio.file.Path.of("..", "worked-examples", "jcgm100-h1-end-gauge.json").toString());
+        assertTrue(budgetReview.out().contains("[met]            The figures are of a measurement, not of a "
+                + "template's example values"), budgetReview.out());
         TemplateCommandTest.Run example = TemplateCommandTest.run("evaluate",
                 java.nio.file.Path.of("..", "worked-examples", "jcgm100-h1-end-gauge.json").toString());
         assertFalse(example.out().contains("Warning (template)"), "a budget that is no template has no such finding");

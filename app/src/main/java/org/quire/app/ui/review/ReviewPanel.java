@@ -252,7 +252,8 @@ public final class ReviewPanel implements Section {
         }
         org.quire.engine.document.TemplateConformance.Finding finding = null;
         String unchecked = null;
-        ReviewContext rc = ReviewContext.none().withUnits(new org.quire.app.review.EngineUnitChecker(ctx.library()));
+        ReviewContext rc = ReviewContext.none().withUnits(new org.quire.app.review.EngineUnitChecker(ctx.library()))
+                .withDocument(d);
         if (library != null && d.templateOrigin() != null) {
             try {
                 finding = org.quire.engine.document.TemplateConformance.check(d, library.get());
