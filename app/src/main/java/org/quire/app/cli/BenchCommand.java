@@ -4,7 +4,10 @@ import java.io.InputStream;
 import java.io.PrintStream;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Path;
+import java.util.ArrayList;
 import java.util.Arrays;
+import java.util.Collections;
+import java.util.List;
 import java.util.Locale;
 import java.util.Set;
 import org.quire.app.common.Engine;
@@ -24,16 +27,16 @@ import picocli.CommandLine.ParentCommand;
 
 /**
  * {@code quire bench [--trials N] [--threads T] [--runs R]}: the Monte Carlo benchmark on the Tarrow Vale
- * benchmark budget (13 inputs, 2 outputs). Warm-up runs first, of N trials each, until two runs in a row are no
- * more than 3 % faster than the best before them ({@value #WARM_UP_LEAST} to {@value #WARM_UP_LIMIT} runs), then R
- * timed runs; each timed run covers
+ * benchmark budget (13 inputs, 2 outputs). Warm-up runs first, of N trials each, until the best of the last
+ * {@value #SETTLE} is no more than 1 % faster than the best before them ({@value #WARM_UP_LEAST} to
+ * {@value #WARM_UP_LIMIT} runs), then R timed runs; each timed run covers
  * sampling, model evaluation and the summaries of both outputs (mean, standard deviation, both coverage
  * intervals). The last line gives the median run. With {@code --budget-inputs N}: open, evaluate and save a
  * generated budget of N inputs.
  */
 @Command(name = "bench", mixinStandardHelpOptions = true, sortOptions = false,
         description = {"Measure Monte Carlo throughput on the Tarrow Vale benchmark budget (13 inputs, 2 outputs): "
-                + "warm-up runs of N trials until the times settle (5 to 30 runs), then R timed runs; the last line "
+                + "warm-up runs of N trials until the times settle (6 to 30 runs), then R timed runs; the last line "
                 + "gives the median run as "
                 + "trials_per_second=...",
             "With --budget-inputs N: the time to open, evaluate (GUM) and save a generated budget of N inputs."},
@@ -43,8 +46,10 @@ import picocli.CommandLine.ParentCommand;
 final class BenchCommand implements Callable<Integer> {
     static final String BUDGET = "tarrow-vale-benchmark.json";
     /** The fewest and the most warm-up runs before the timed ones. */
-    static final int WARM_UP_LEAST = 5;
+    static final int WARM_UP_LEAST = 6;
     static final int WARM_UP_LIMIT = 30;
+    /** The last runs of the warm-up whose best is compared with the best before them. */
+    static final int SETTLE = 3;
 
     @ParentCommand
     QuireCommand quire;
@@ -96,22 +101,25 @@ final class BenchCommand implements Callable<Integer> {
         CompiledModel model = b.compile(quire.engine.library());
         GumResult gum = GumEvaluator.evaluate(b, model, b.correlationMatrix(), b.settings());
         MonteCarloSettings base = BudgetSimulation.settings(b.settings(), gum).withThreads(threads).withTrials(trials);
-        // warm-up at the timed size until the just-in-time compiler has done its work: until two runs in a row are
-        // no more than 3 % faster than the best before them (at least WARM_UP_LEAST runs, at most WARM_UP_LIMIT),
-        // so that the timed runs measure the throughput of compiled code and not the compiler's progress
-        int warmUps = 0;
-        int settledRuns = 0;
-        double best = Double.POSITIVE_INFINITY;
-        while (warmUps < WARM_UP_LIMIT) {
+        // warm-up at the timed size until the just-in-time compiler has done its work: until the best of the last
+        // SETTLE runs is no more than 1 % faster than the best of all runs before them (at least WARM_UP_LEAST
+        // runs, at most WARM_UP_LIMIT), so that the timed runs measure compiled code and not the compiler's
+        // progress; a slow run (a pause, other load) neither ends the warm-up nor holds it back
+        List<Double> times = new ArrayList<>();
+        while (times.size() < WARM_UP_LIMIT) {
             long t0 = System.nanoTime();
-            BudgetSimulation.run(b, model, gum, base.withSeed(++warmUps), ProgressListener.NONE);
-            double s = (System.nanoTime() - t0) / 1e9;
-            settledRuns = s > 0.97 * best ? settledRuns + 1 : 0;
-            best = Math.min(best, s);
-            if (warmUps >= WARM_UP_LEAST && settledRuns >= 2) {
-                break;
+            BudgetSimulation.run(b, model, gum, base.withSeed(times.size() + 1), ProgressListener.NONE);
+            times.add((System.nanoTime() - t0) / 1e9);
+            int n = times.size();
+            if (n >= WARM_UP_LEAST) {
+                double before = Collections.min(times.subList(0, n - SETTLE));
+                double recent = Collections.min(times.subList(n - SETTLE, n));
+                if (recent > 0.99 * before) {
+                    break;
+                }
             }
         }
+        int warmUps = times.size();
         out.printf(Locale.ROOT, "warm-up: %d runs of %d trials%n", warmUps, trials);
         double[] seconds = new double[(int) runs];
         for (int r = 0; r < runs; r++) {
