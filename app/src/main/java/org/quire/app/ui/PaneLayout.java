@@ -51,6 +51,7 @@ final class PaneLayout {
             }
         });
         centre.addPropertyChangeListener(JSplitPane.DIVIDER_LOCATION_PROPERTY, e -> {
+            // a move at a steady width, not made here: the user's
             if (!placing && centre.getWidth() > 0 && centre.getWidth() == centreWidth && isShown(Pane.INSPECTOR)) {
                 inspectorWidth = centre.getWidth() - centre.getDividerLocation();
             }
@@ -94,9 +95,8 @@ final class PaneLayout {
         if (isShown(Pane.NAVIGATOR) && main.getDividerLocation() > 0) {
             navigatorWidth = main.getDividerLocation();
         }
-        if (isShown(Pane.INSPECTOR) && centre.getWidth() > 0) {
-            inspectorWidth = centre.getWidth() - centre.getDividerLocation();
-        }
+        // the inspector's width is not read back here: the divider listener keeps the width the user set, and a
+        // window too narrow for it (the notebook held at its least width) must not shrink what is remembered
         if (isShown(Pane.PROBLEMS) && collapsedTo == 0 && vertical.getHeight() > 0) {
             problemsHeight = vertical.getHeight() - vertical.getDividerLocation();
         }
