@@ -139,10 +139,11 @@ workbench_ms() {
     wait 2> /dev/null
     painted=$(field workbench_content_painted_ms < "$log")
     t0=$(cat "$work/wb.t0" 2> /dev/null)
+    # no figure when the error cannot be measured: an uncorrected one would not compare with the others
     if [ -n "$painted" ] && [ -n "$start" ] && [ -n "$t0" ]; then
         echo $((painted - (t0 - start)))
     else
-        echo "$painted"
+        echo ""
     fi
 }
 

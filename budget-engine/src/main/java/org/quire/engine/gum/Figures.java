@@ -157,6 +157,12 @@ public final class Figures {
      * @return e.g. "−0.11 ± 0.24"
      */
     public static String statedResult(double estimate, double uncertainty, int digits) {
+        if (!Double.isFinite(estimate) || !Double.isFinite(uncertainty)) {
+            // nothing to round to: the estimate as it is, an infinite U as ∞ and an undefined one as –
+            return estimate(estimate) + " \u00b1 " + (Double.isNaN(uncertainty) ? "\u2013"
+                    : Double.isInfinite(uncertainty) ? "\u221e" : minus(Rounding.uncertainty(uncertainty, digits)
+                            .toPlainString()));
+        }
         return minus(Rounding.estimate(estimate, uncertainty, digits).toPlainString()) + " \u00b1 "
                 + minus(Rounding.uncertainty(uncertainty, digits).toPlainString());
     }

@@ -41,7 +41,7 @@ import org.quire.engine.model.ModelException;
 public final class FlowRange {
     /** Why a budget cannot be evaluated across a flow range: it lists no flow points. */
     public static final String NO_FLOW_POINTS = "the budget has no flow points: list them in the budget file's table "
-            + "of flow points, one row per flow";
+            + "of flow points (\"flowPoints\"), one row per flow";
 
     private FlowRange() {
     }

@@ -284,11 +284,19 @@ public final class BlockStream implements UniformRandomProvider {
         private static double[] read() {
             double[] x = new double[LAYERS];
             long[] next = new long[1];
-            UniformRandomProvider fixed = () -> next[0];
-            NormalizedGaussianSampler g = ZigguratSampler.NormalizedGaussian.of(fixed);
+            int[] calls = new int[1];
+            // the probe first, then a real stream: a sampler whose fast path has fewer layers than LAYERS takes
+            // its slow path for the probe, which ends (it reads the real stream) and is seen as a second call
+            BlockStream after = new BlockStream(0x9E3779B97F4A7C15L, 1L);
+            UniformRandomProvider probe = () -> calls[0]++ == 0 ? next[0] : after.nextLong();
+            NormalizedGaussianSampler g = ZigguratSampler.NormalizedGaussian.of(probe);
             for (int i = 0; i < LAYERS; i++) {
                 next[0] = (1L << 62) + i;
+                calls[0] = 0;
                 x[i] = g.sample() * 0x1.0p-62;
+                if (calls[0] != 1) {
+                    return null; // not the fast path this class was written for: every draw by the sampler
+                }
                 // a fast-path value lies inside the layers' span, 0 < x_i 2^63 < 3.7 (x_1 is the base strip's end)
                 if (!(x[i] > 0 && x[i] * 0x1.0p63 < 3.7)) {
                     return null;

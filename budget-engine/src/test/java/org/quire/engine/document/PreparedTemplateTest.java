@@ -91,6 +91,11 @@ class PreparedTemplateTest {
         PreparedTemplate p = PreparedTemplate.of(template(""), library);
         GumResult r = p.evaluate(p.budgetFor(values(501.0, 999.0, 998.0, 1000.0, 1002.0, 1004.0)));
         assertEquals(100.0 * 2001 / 499500, r.outputs().get(0).estimate(), 1e-12);
+        // u(E) by JCGM 100:2008 5.1.2, worked by hand: u(N) = s / sqrt(4) = sqrt(20/3) / 2 = 1.290994 (4.2.3);
+        // c(N) = 100 M / (N_ref M_ref) = 0.1003003, c(M) = 100 N / (N_ref M_ref) = 0.2004004,
+        // c(N_ref) = -100 N M / (N_ref^2 M_ref) = -0.1005011 (per unit of each);
+        // u^2 = (0.1003003 * 1.290994)^2 + (0.2004004 * 0.2)^2 + (0.1005011 * 0.1)^2 = 0.0184743, u = 0.135920 %
+        assertEquals(0.135920, r.outputs().get(0).standardUncertainty(), 5e-7);
     }
 
     @Test
@@ -103,6 +108,7 @@ class PreparedTemplateTest {
                 () -> prepared.budgetFor(noReadings));
         assertEquals(alone.getMessage(), batch.getMessage());
         // and the refusal of one row does not spoil the next
-        prepared.budgetFor(values(501.0, 999.0, 1000.0, 1001.0));
+        Budget next = prepared.budgetFor(values(501.0, 999.0, 1000.0, 1001.0));
+        assertEquals(1000.5, next.input("N").evaluation().estimate(), 1e-12, "the next row's mean of 1000 and 1001");
     }
 }

@@ -41,5 +41,7 @@ class FiguresTest {
         assertEquals("−0.11 ± 0.24", Figures.statedResult(-0.1149, 0.2361, 2));
         assertEquals("100.02147 ± 0.00079", Figures.statedResult(100.021466, 0.000788, 2));
         assertEquals("12 345.7 ± 1.2", Figures.statedResult(12345.678, 1.23, 2), "digit groups as elsewhere");
+        assertEquals("2.5 \u00b1 \u221e", Figures.statedResult(2.5, Double.POSITIVE_INFINITY, 2), "no rounding to U = inf");
+        assertEquals("2.5 \u00b1 \u2013", Figures.statedResult(2.5, Double.NaN, 2), "nor to an undefined U");
     }
 }

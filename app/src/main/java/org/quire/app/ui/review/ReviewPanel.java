@@ -274,7 +274,13 @@ public final class ReviewPanel implements Section {
         }
         pending = null;
         if (drawn.failure() != null) {
-            head.setText("The checklist cannot be drawn up: " + drawn.failure());
+            // a fault of Quire's (the expected failures, such as an unreadable template library, are findings of
+            // the checklist): said here, and handed to the workbench's internal-error report
+            Throwable f = drawn.failure();
+            head.setText("The checklist cannot be drawn up: an internal error ("
+                    + (f.getMessage() == null ? f.getClass().getSimpleName() : f.getMessage()) + ")");
+            Thread t = Thread.currentThread();
+            t.getUncaughtExceptionHandler().uncaughtException(t, f);
             return;
         }
         showTemplate(drawn.finding(), drawn.unchecked());
