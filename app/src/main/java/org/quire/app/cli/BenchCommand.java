@@ -9,8 +9,6 @@ import java.util.Arrays;
 import java.util.Collections;
 import java.util.List;
 import java.util.Locale;
-import java.util.Set;
-import org.quire.app.common.Engine;
 import org.quire.engine.budget.Budget;
 import org.quire.engine.gum.GumEvaluator;
 import org.quire.engine.gum.GumResult;

@@ -20,7 +20,6 @@ import jakarta.json.JsonObject;
 import org.apache.commons.csv.CSVFormat;
 import org.apache.commons.csv.CSVPrinter;
 import org.quire.app.common.Cautions;
-import org.quire.app.common.Engine;
 import org.quire.engine.calibration.AdjustmentResult;
 import org.quire.engine.calibration.CalibrationEvaluator;
 import org.quire.engine.calibration.CalibrationException;

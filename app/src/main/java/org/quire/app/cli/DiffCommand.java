@@ -4,8 +4,6 @@ import java.io.PrintStream;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Optional;
-import java.util.Set;
-import org.quire.app.common.Engine;
 import org.quire.app.compare.BudgetComparison;
 import org.quire.app.compare.Comparison;
 import org.quire.app.compare.ComparisonText;

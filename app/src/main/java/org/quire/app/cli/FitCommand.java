@@ -5,7 +5,6 @@ import java.io.PrintStream;
 import java.nio.file.NoSuchFileException;
 import java.nio.file.Path;
 import java.util.Locale;
-import java.util.Set;
 import org.quire.engine.csv.CalibrationCsv;
 import org.quire.engine.line.CalibrationData;
 import org.quire.engine.line.CalibrationPoint;

@@ -5,7 +5,6 @@ import java.util.Locale;
 import java.util.Set;
 import java.util.concurrent.Callable;
 import org.quire.app.common.Cautions;
-import org.quire.app.common.Engine;
 import org.quire.engine.budget.Budget;
 import org.quire.engine.budget.EvaluationSettings;
 import org.quire.engine.gum.Figures;

@@ -4,7 +4,6 @@ import java.io.PrintStream;
 import java.util.Locale;
 import java.util.Set;
 import org.quire.app.common.Cautions;
-import org.quire.app.common.Engine;
 import org.quire.engine.budget.Budget;
 import org.quire.engine.conformity.PointDecision;
 import org.quire.engine.gum.FlowRange;

@@ -7,8 +7,6 @@ import java.time.LocalDate;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
-import java.util.Set;
-import org.quire.app.common.Engine;
 import org.quire.app.review.ChecklistText;
 import org.quire.app.review.Mark;
 import org.quire.app.review.Review;

@@ -2,15 +2,8 @@ package org.quire.app.cli;
 
 import java.io.IOException;
 import java.io.PrintStream;
-import java.net.URI;
-import java.net.URISyntaxException;
-import java.nio.file.FileSystem;
-import java.nio.file.FileSystems;
 import java.nio.file.Path;
 import java.util.List;
-import java.util.Map;
-import java.util.Set;
-import org.quire.app.common.Engine;
 import org.quire.engine.validate.CheckOutcome;
 import org.quire.engine.validate.Validator;
 import java.util.concurrent.Callable;

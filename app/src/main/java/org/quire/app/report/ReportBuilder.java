@@ -1,7 +1,6 @@
 package org.quire.app.report;
 
 import java.util.ArrayList;
-import java.util.Comparator;
 import java.util.List;
 import org.quire.app.common.Cautions;
 import org.quire.app.report.ReportModel.Block;

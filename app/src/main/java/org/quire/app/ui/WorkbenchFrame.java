@@ -11,14 +11,12 @@ import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.time.Instant;
-import java.time.LocalDate;
 import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
 import java.util.concurrent.CompletableFuture;
-import java.util.concurrent.ExecutionException;
 import java.util.function.BiConsumer;
 import javax.swing.JFrame;
 import javax.swing.JLabel;
@@ -26,24 +24,17 @@ import javax.swing.JOptionPane;
 import javax.swing.JPanel;
 import javax.swing.JSplitPane;
 import javax.swing.JTabbedPane;
-import javax.swing.SwingWorker;
-import org.quire.app.compare.BudgetComparison;
-import org.quire.app.compare.Comparison;
 import org.quire.app.ui.common.FileDropHandler;
 import org.quire.app.ui.common.WorkbenchPrefs;
-import org.quire.app.ui.compare.CompareWindow;
 import org.quire.app.ui.document.BudgetDocument;
 import org.quire.app.ui.document.RecoveryKeeper;
-import org.quire.app.ui.export.ReportExport;
 import org.quire.app.ui.inspector.InspectorPanel;
 import org.quire.app.ui.montecarlo.MonteCarloRunner;
 import org.quire.app.ui.notebook.BudgetEditor;
 import org.quire.app.ui.templates.TemplateCatalog;
 import org.quire.app.ui.workspace.WorkspaceNavigator;
 import org.quire.engine.budget.Budget;
-import org.quire.engine.document.DocumentStore;
 import org.quire.engine.document.Template;
-import org.quire.engine.gum.GumResult;
 import org.quire.engine.io.BudgetFormatException;
 import org.quire.engine.model.FunctionLibrary;
 
@@ -292,9 +283,13 @@ public final class WorkbenchFrame extends JFrame {
         return templates.templates();
     }
 
-    /** File &gt; New from template; @param preselect the file to select in the list, or null */
-    public Optional<BudgetEditor> newFromTemplate(Path preselect) {
-        return templates.newFromTemplate(preselect);
+    /**
+     * File &gt; New from template, the templates listed off the event thread first.
+     *
+     * @param preselect the file to select in the list, or null
+     */
+    public void newFromTemplate(Path preselect) {
+        templates.newFromTemplate(preselect);
     }
 
     /** Shows the changes a newer template brings, field by field, and takes the checked ones over. */

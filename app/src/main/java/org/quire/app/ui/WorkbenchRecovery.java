@@ -7,7 +7,6 @@ import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
-import javax.swing.SwingWorker;
 import org.quire.app.ui.common.GuardedWorker;
 import org.quire.app.ui.common.WorkbenchPrefs;
 import org.quire.app.ui.document.BudgetDocument;

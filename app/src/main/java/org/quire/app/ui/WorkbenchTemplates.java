@@ -5,7 +5,6 @@ import java.nio.file.Path;
 import java.util.List;
 import java.util.Optional;
 import java.util.concurrent.ExecutionException;
-import javax.swing.SwingWorker;
 import org.quire.app.ui.common.GuardedWorker;
 import org.quire.app.ui.common.WorkbenchPrefs;
 import org.quire.app.ui.document.BudgetDocument;
@@ -38,12 +37,13 @@ final class WorkbenchTemplates {
     }
 
     /**
-     * File &gt; New from template: offers the catalogue, asks for the parameters, opens the new budget.
+     * File &gt; New from template: lists the catalogue off the event thread (the team folder may be a network
+     * share), then offers it, asks for the parameters and opens the new budget.
      *
      * @param preselect the file to select in the list, or null
      */
-    Optional<BudgetEditor> newFromTemplate(Path preselect) {
-        return newFromTemplate(dlg -> {
+    void newFromTemplate(Path preselect) {
+        newFromTemplate(dlg -> {
             if (preselect != null) {
                 dlg.select(preselect);
             }
@@ -51,30 +51,50 @@ final class WorkbenchTemplates {
     }
 
     /** File &gt; New from template with the template of this id and version selected, when the library has it. */
-    Optional<BudgetEditor> newFromTemplate(String id, int version) {
-        return newFromTemplate(dlg -> dlg.selectTemplate(id, version));
+    void newFromTemplate(String id, int version) {
+        newFromTemplate(dlg -> dlg.selectTemplate(id, version));
     }
 
-    private Optional<BudgetEditor> newFromTemplate(java.util.function.Consumer<NewFromTemplateDialog> preselect) {
-        TemplateCatalog.Listing listing;
-        try {
-            listing = templates().list();
-        } catch (IOException e) {
-            frame.showError("Cannot list the templates", e.getMessage());
-            return Optional.empty();
-        }
+    private void newFromTemplate(java.util.function.Consumer<NewFromTemplateDialog> preselect) {
+        TemplateCatalog catalog = templates();
+        frame.status("Listing the templates\u2026", false);
+        new GuardedWorker<TemplateCatalog.Listing, Void>() {
+            @Override
+            protected TemplateCatalog.Listing doInBackground() throws IOException {
+                return catalog.list();
+            }
+
+            @Override
+            protected void finished() {
+                TemplateCatalog.Listing listing;
+                try {
+                    listing = get();
+                } catch (InterruptedException e) {
+                    Thread.currentThread().interrupt();
+                    return;
+                } catch (ExecutionException e) {
+                    frame.status("", false);
+                    frame.showError("Cannot list the templates", e.getCause().getMessage());
+                    return;
+                }
+                frame.status("", false);
+                offer(listing, preselect);
+            }
+        }.execute();
+    }
+
+    private void offer(TemplateCatalog.Listing listing, java.util.function.Consumer<NewFromTemplateDialog> preselect) {
         NewFromTemplateDialog dlg = new NewFromTemplateDialog(frame, listing, prefs.userName());
         preselect.accept(dlg);
         dlg.setVisible(true);
         if (dlg.created() == null) {
-            return Optional.empty();
+            return;
         }
-        BudgetEditor ed = frame.open(new BudgetDocument(dlg.created(), null, "new from " + shortName(dlg.createdFrom()),
+        frame.open(new BudgetDocument(dlg.created(), null, "new from " + shortName(dlg.createdFrom()),
                 prefs.userName()));
         frame.status("New budget from " + dlg.createdFrom().file().getFileName()
                 + (dlg.createdFrom().isTemplate() ? "" : " (a plain budget: copied, no template origin recorded)"),
                 false);
-        return Optional.of(ed);
     }
 
     private static String shortName(TemplateCatalog.Entry e) {

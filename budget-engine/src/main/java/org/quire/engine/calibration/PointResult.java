@@ -3,7 +3,6 @@ package org.quire.engine.calibration;
 import java.util.List;
 import org.quire.engine.budget.Budget;
 import org.quire.engine.gum.OutputResult;
-import org.quire.engine.montecarlo.BudgetSimulation;
 
 /**
  * The result at one flow point of one series (as found, or as left): the mean of the runs, their repeatability

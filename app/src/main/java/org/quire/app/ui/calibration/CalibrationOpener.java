@@ -4,7 +4,6 @@ import java.nio.file.Path;
 import java.util.concurrent.ExecutionException;
 import java.util.function.BiConsumer;
 import java.util.function.Consumer;
-import javax.swing.SwingWorker;
 import org.quire.app.ui.common.GuardedWorker;
 import org.quire.engine.calibration.PointResult;
 import org.quire.engine.document.Template;

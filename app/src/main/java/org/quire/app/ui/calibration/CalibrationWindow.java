@@ -17,7 +17,6 @@ import javax.swing.JPanel;
 import javax.swing.JScrollPane;
 import javax.swing.JSplitPane;
 import javax.swing.JTable;
-import javax.swing.SwingWorker;
 import javax.swing.table.AbstractTableModel;
 import org.quire.app.report.CalibrationCharts;
 import org.quire.app.ui.common.Colors;

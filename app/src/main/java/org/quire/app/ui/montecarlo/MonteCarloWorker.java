@@ -3,7 +3,6 @@ package org.quire.app.ui.montecarlo;
 import java.util.List;
 import java.util.concurrent.atomic.AtomicBoolean;
 import java.util.function.Consumer;
-import javax.swing.SwingWorker;
 import org.quire.app.ui.common.GuardedWorker;
 import org.quire.engine.budget.Budget;
 import org.quire.engine.gum.GumResult;
