@@ -136,8 +136,23 @@ final class BenchCommand implements Callable<Integer> {
         return 0;
     }
 
+    /** @return one round of the document benchmark: open, evaluate and save in ms, and u_c of the first output */
+    private double[] documentRound(Path file) throws Exception {
+        long t0 = System.nanoTime();
+        org.quire.engine.document.BudgetDocument d = org.quire.engine.document.DocumentStore.open(file);
+        long t1 = System.nanoTime();
+        GumResult g = GumEvaluator.evaluate(d.budget(), quire.engine.library());
+        long t2 = System.nanoTime();
+        org.quire.engine.document.DocumentStore.save(d.withResults(org.quire.engine.document.ResultSnapshot.of(
+                org.quire.engine.io.ResultJson.toJson(d.budget().title(), g), java.time.Instant.now())), file);
+        long t3 = System.nanoTime();
+        return new double[] {(t1 - t0) / 1e6, (t2 - t1) / 1e6, (t3 - t2) / 1e6,
+            g.outputs().get(0).standardUncertainty()};
+    }
+
     /**
-     * Opens, evaluates (GUM) and saves a generated budget of N inputs, R times after two warm-up rounds; prints
+     * Opens, evaluates (GUM) and saves a generated budget of N inputs, R times after warm-up rounds that end when
+     * the evaluation time settles ({@value #WARM_UP_LEAST} to {@value #WARM_UP_LIMIT} rounds); prints
      * the median of each step and, last, {@code open_ms=.. evaluate_ms=.. save_ms=.. first_evaluate_ms=..
      * inputs=N}, where {@code first_evaluate_ms} is the first GUM evaluation in this JVM (cold: class loading
      * and interpretation included).
@@ -158,26 +173,27 @@ final class BenchCommand implements Callable<Integer> {
                     LargeBudget.of((int) n), "bench", java.time.Instant.now());
             org.quire.engine.document.DocumentStore.save(doc, file);
             double[][] ms = new double[3][(int) runs];
-            double first = 0;
-            for (int r = -2; r < runs; r++) {
-                long t0 = System.nanoTime();
-                org.quire.engine.document.BudgetDocument d = org.quire.engine.document.DocumentStore.open(file);
-                long t1 = System.nanoTime();
-                GumResult g = GumEvaluator.evaluate(d.budget(), quire.engine.library());
-                long t2 = System.nanoTime();
-                org.quire.engine.document.DocumentStore.save(d.withResults(org.quire.engine.document.ResultSnapshot.of(
-                        org.quire.engine.io.ResultJson.toJson(d.budget().title(), g), java.time.Instant.now())), file);
-                long t3 = System.nanoTime();
-                if (r == -2) {
-                    first = (t2 - t1) / 1e6;
+            // warm-up rounds first, as for the Monte Carlo benchmark: until the best evaluation of the last SETTLE
+            // rounds is within 5 % of the best before them (at least WARM_UP_LEAST, at most WARM_UP_LIMIT); the
+            // first evaluation in this JVM is reported apart (first_evaluate_ms)
+            List<Double> warm = new ArrayList<>();
+            while (warm.size() < WARM_UP_LIMIT) {
+                int k = warm.size();
+                if (k >= WARM_UP_LEAST && Collections.min(warm.subList(k - SETTLE, k))
+                        > 0.95 * Collections.min(warm.subList(0, k - SETTLE))) {
+                    break;
                 }
-                if (r >= 0) {
-                    ms[0][r] = (t1 - t0) / 1e6;
-                    ms[1][r] = (t2 - t1) / 1e6;
-                    ms[2][r] = (t3 - t2) / 1e6;
-                    out.printf(Locale.ROOT, "run %d: open %.1f ms, evaluate %.1f ms, save %.1f ms (u_c(E) = %.4g %%)%n",
-                            r + 1, ms[0][r], ms[1][r], ms[2][r], g.outputs().get(0).standardUncertainty());
+                warm.add(documentRound(file)[1]);
+            }
+            double first = warm.get(0);
+            out.printf(Locale.ROOT, "warm-up: %d rounds%n", warm.size());
+            for (int r = 0; r < runs; r++) {
+                double[] t = documentRound(file);
+                for (int k = 0; k < 3; k++) {
+                    ms[k][r] = t[k];
                 }
+                out.printf(Locale.ROOT, "run %d: open %.1f ms, evaluate %.1f ms, save %.1f ms (u_c(E) = %.4g %%)%n",
+                        r + 1, t[0], t[1], t[2], t[3]);
             }
             double[] median = new double[3];
             for (int k = 0; k < 3; k++) {
