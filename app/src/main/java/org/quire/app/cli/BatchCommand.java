@@ -178,7 +178,8 @@ final class BatchCommand implements Callable<Integer> {
         }
         DocumentStore.writeAtomically(out, text.toString().getBytes(StandardCharsets.UTF_8), false);
         double seconds = (System.nanoTime() - started) / 1e9;
-        info(err, "quire batch: " + (n - failed) + " rows evaluated, " + failed + " failed; results in " + out);
+        info(err, "quire batch: " + (n - failed) + (n - failed == 1 ? " row" : " rows") + " evaluated, " + failed
+                + " failed; results in " + out);
         info(err, String.format(java.util.Locale.ROOT, "quire batch: %.2f s, %.0f rows per second", seconds,
                 n / Math.max(seconds, 1e-9)));
         // a refused row is bad input, a user error like any other (the brief: exit status 2 for every user error)

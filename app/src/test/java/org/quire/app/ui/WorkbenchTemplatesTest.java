@@ -422,4 +422,24 @@ class WorkbenchTemplatesTest extends GuiTestSupport {
         waitFor("the dialog closed", () -> !dlg.isShowing());
         assertTrue(onEdt(ed::noticeShown), "the finding stays after the dialog is cancelled");
     }
+
+    @Test
+    void twoNoticesAreShownTogetherAndEachIsDismissedOnItsOwn() throws Exception {
+        // a template's example finding and a newer-version offer may both concern one budget: neither hides the
+        // other (invented notices, the editor's own method)
+        BudgetEditor ed = openDemo();
+        onEdt(() -> {
+            ed.showNotice("First notice: the figures are examples.", "Act on the first", () -> { }, false);
+            ed.showNotice("Second notice: version 3 is in the library.", "Act on the second", () -> { });
+            assertEquals("First notice: the figures are examples.\nSecond notice: version 3 is in the library.",
+                    ed.noticeText());
+            assertEquals("Act on the second", ed.noticeAction().getText(), "the newest notice's action");
+            ed.noticeAction().doClick(); // an offer: its notice goes, the first stays
+            assertEquals("First notice: the figures are examples.", ed.noticeText());
+            assertTrue(ed.noticeShown());
+            ed.noticeAction().doClick(); // a finding: it stays after its action
+            assertTrue(ed.noticeShown(), "a finding stays after its action");
+            return null;
+        });
+    }
 }

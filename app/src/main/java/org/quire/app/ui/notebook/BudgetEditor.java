@@ -48,10 +48,11 @@ public final class BudgetEditor extends JPanel implements EditorContext {
     private final MonteCarloSection monteCarlo;
     private final JLabel banner = new JLabel();
     private final ReviewPanel review;
-    private final JPanel notice = new JPanel(new BorderLayout(8, 0));
-    /** The notice's text, wrapped onto as many lines as the notebook's width needs (never cut). */
-    private final javax.swing.JTextArea noticeText = new javax.swing.JTextArea();
-    private final JButton noticeAction = new JButton();
+    /** The notices above the notebook, one row each, newest last; hidden when there is none. */
+    private final JPanel notices = new JPanel();
+    /** The texts and action buttons of the notices shown, in order. */
+    private final List<javax.swing.JTextArea> noticeTexts = new java.util.ArrayList<>();
+    private final List<JButton> noticeActions = new java.util.ArrayList<>();
     private NotebookSection reviewSection;
     private JButton reviewJump;
     private final Page page = new Page();
@@ -109,30 +110,14 @@ public final class BudgetEditor extends JPanel implements EditorContext {
         banner.setForeground(Colors.get("Quire.banner.foreground"));
         banner.setBorder(BorderFactory.createEmptyBorder(6, 8, 6, 8));
         banner.setText("Review copy: this budget is open read-only. Nothing in it can be changed.");
-        notice.setName("templateNotice");
-        notice.setOpaque(true);
-        notice.setBackground(Colors.get("Quire.notice.background"));
-        notice.setBorder(BorderFactory.createEmptyBorder(4, 8, 4, 8));
-        noticeText.setForeground(Colors.get("Quire.notice.foreground"));
-        noticeText.setLineWrap(true);
-        noticeText.setWrapStyleWord(true);
-        noticeText.setEditable(false);
-        noticeText.setOpaque(false);
-        noticeText.setBorder(BorderFactory.createEmptyBorder(3, 0, 3, 0));
-        noticeText.setFont(javax.swing.UIManager.getFont("Label.font"));
-        notice.add(noticeText, BorderLayout.CENTER);
-        noticeAction.setName("noticeAction");
-        JButton dismiss = new JButton("Dismiss");
-        dismiss.addActionListener(e -> notice.setVisible(false));
-        JPanel noticeButtons = new JPanel(new FlowLayout(FlowLayout.RIGHT, 4, 0));
-        noticeButtons.setOpaque(false);
-        noticeButtons.add(noticeAction);
-        noticeButtons.add(dismiss);
-        notice.add(noticeButtons, BorderLayout.EAST);
-        notice.setVisible(false);
+        notices.setName("templateNotice");
+        notices.setLayout(new BoxLayout(notices, BoxLayout.Y_AXIS));
+        notices.setOpaque(true);
+        notices.setBackground(Colors.get("Quire.notice.background"));
+        notices.setVisible(false);
         JPanel banners = new JPanel(new BorderLayout());
         banners.add(banner, BorderLayout.NORTH);
-        banners.add(notice, BorderLayout.SOUTH);
+        banners.add(notices, BorderLayout.SOUTH);
         JPanel north = new JPanel(new BorderLayout());
         north.add(banners, BorderLayout.NORTH);
         north.add(outline, BorderLayout.SOUTH);
@@ -368,29 +353,59 @@ public final class BudgetEditor extends JPanel implements EditorContext {
      *     holds whatever the action does; Dismiss hides it)
      */
     public void showNotice(String text, String actionName, Runnable action, boolean hideOnAction) {
-        noticeText.setText(text);
-        noticeAction.setText(actionName);
-        for (java.awt.event.ActionListener l : noticeAction.getActionListeners()) {
-            noticeAction.removeActionListener(l);
-        }
-        noticeAction.addActionListener(e -> {
+        JPanel row = new JPanel(new BorderLayout(8, 0));
+        row.setOpaque(false);
+        row.setBorder(BorderFactory.createEmptyBorder(4, 8, 4, 8));
+        // the text wrapped onto as many lines as the notebook's width needs (never cut)
+        javax.swing.JTextArea words = new javax.swing.JTextArea(text);
+        words.setForeground(Colors.get("Quire.notice.foreground"));
+        words.setLineWrap(true);
+        words.setWrapStyleWord(true);
+        words.setEditable(false);
+        words.setOpaque(false);
+        words.setBorder(BorderFactory.createEmptyBorder(3, 0, 3, 0));
+        words.setFont(javax.swing.UIManager.getFont("Label.font"));
+        row.add(words, BorderLayout.CENTER);
+        JButton act = new JButton(actionName);
+        act.setName("noticeAction");
+        JButton dismiss = new JButton("Dismiss");
+        Runnable remove = () -> {
+            notices.remove(row);
+            noticeTexts.remove(words);
+            noticeActions.remove(act);
+            notices.setVisible(notices.getComponentCount() > 0);
+            revalidate();
+            repaint();
+        };
+        act.addActionListener(e -> {
             if (hideOnAction) {
-                notice.setVisible(false);
+                remove.run();
             }
             action.run();
         });
-        notice.setVisible(true);
+        dismiss.addActionListener(e -> remove.run());
+        JPanel buttons = new JPanel(new FlowLayout(FlowLayout.RIGHT, 4, 0));
+        buttons.setOpaque(false);
+        buttons.add(act);
+        buttons.add(dismiss);
+        row.add(buttons, BorderLayout.EAST);
+        notices.add(row);
+        noticeTexts.add(words);
+        noticeActions.add(act);
+        notices.setVisible(true);
         revalidate();
     }
 
     /** @return whether a notice is shown */
-    public boolean noticeShown() { return notice.isVisible(); }
+    public boolean noticeShown() { return notices.isVisible() && !noticeTexts.isEmpty(); }
 
-    /** @return the text of the notice above the notebook */
-    public String noticeText() { return noticeText.getText(); }
+    /** @return the texts of the notices above the notebook, one a line, oldest first */
+    public String noticeText() {
+        return String.join("\n", noticeTexts.stream().map(javax.swing.JTextArea::getText).toList());
+    }
 
-    /** @return the notice's action button, for tests */
-    public JButton noticeAction() { return noticeAction; }
+    /** @return the action button of the newest notice, for tests, or null */
+    public JButton noticeAction() { return noticeActions.isEmpty() ? null : noticeActions.get(noticeActions.size() - 1); }
 
     /** @return the assessor's review section (shown on review copies) */
     public ReviewPanel reviewPanel() { return review; }
