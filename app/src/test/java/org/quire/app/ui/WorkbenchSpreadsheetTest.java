@@ -132,14 +132,7 @@ class WorkbenchSpreadsheetTest extends GuiTestSupport {
 
     @Test
     void aRowPastedIntoTheReadingsGridFillsItFromTheSelectedReading() throws Exception {
-        BudgetEditor ed = openDemo();
-        onEdt(() -> {
-            ed.revealSection("Inputs");
-            ed.selectInput("V_ind");
-            return null;
-        });
-        JTable grid = onEdt(() -> named(frame.getContentPane(), "readings"));
-        waitFor("the readings grid shown", grid::isShowing);
+        JTable grid = readingsGridOfTheDemo();
         onEdt(() -> {
             grid.clearSelection();
             Toolkit.getDefaultToolkit().getSystemClipboard().setContents(
@@ -160,6 +153,19 @@ class WorkbenchSpreadsheetTest extends GuiTestSupport {
         assertEquals("1002.6", onEdt(() -> grid.getValueAt(3, 1)));
     }
 
+    /** @return the readings grid of the demo budget's Type A input V_ind, shown in the inspector */
+    private JTable readingsGridOfTheDemo() throws Exception {
+        BudgetEditor ed = openDemo();
+        onEdt(() -> {
+            ed.revealSection("Inputs");
+            ed.selectInput("V_ind");
+            return null;
+        });
+        JTable grid = onEdt(() -> named(frame.getContentPane(), "readings"));
+        waitFor("the readings grid shown", grid::isShowing);
+        return grid;
+    }
+
     /** Each character as a real key press and release through the window system, as a user types it. */
     private static void typeWithRobot(java.awt.Robot robot, String text) {
         for (char ch : text.toCharArray()) {
@@ -173,14 +179,7 @@ class WorkbenchSpreadsheetTest extends GuiTestSupport {
 
     @Test
     void aSemicolonBlockOfSeveralLinesPastedIntoTheReadingsGridIsReadInReadingOrder() throws Exception {
-        BudgetEditor ed = openDemo();
-        onEdt(() -> {
-            ed.revealSection("Inputs");
-            ed.selectInput("V_ind");
-            return null;
-        });
-        JTable grid = onEdt(() -> named(frame.getContentPane(), "readings"));
-        waitFor("the readings grid shown", grid::isShowing);
+        JTable grid = readingsGridOfTheDemo();
         onEdt(() -> {
             grid.clearSelection();
             // two lines of two cells, semicolon-separated with decimal commas, as a European spreadsheet copies
@@ -199,14 +198,7 @@ class WorkbenchSpreadsheetTest extends GuiTestSupport {
 
     @Test
     void typingIntoASelectedReadingReplacesIt() throws Exception {
-        BudgetEditor ed = openDemo();
-        onEdt(() -> {
-            ed.revealSection("Inputs");
-            ed.selectInput("V_ind");
-            return null;
-        });
-        JTable grid = onEdt(() -> named(frame.getContentPane(), "readings"));
-        waitFor("the readings grid shown", grid::isShowing);
+        JTable grid = readingsGridOfTheDemo();
         onEdt(() -> {
             grid.clearSelection();
             Toolkit.getDefaultToolkit().getSystemClipboard().setContents(
