@@ -27,6 +27,22 @@ import org.quire.engine.budget.Distribution;
 class Jcgm101SamplingTest {
     private static final int N = 200_000;
 
+    /**
+     * @return the Kolmogorov-Smirnov distance sup |F_n - F| of n Student t draws (stream {@code stream}) from
+     *     Commons Math's t distribution function
+     */
+    private static double studentTDistance(double nu, int n, long stream) {
+        double[] v = draw(Distribution.StudentT.of(0, 1, nu), n, stream);
+        Arrays.sort(v);
+        TDistribution ref = new TDistribution(null, nu);
+        double sup = 0;
+        for (int i = 0; i < n; i++) {
+            double f = ref.cumulativeProbability(v[i]);
+            sup = Math.max(sup, Math.max(Math.abs(f - (double) i / n), Math.abs(f - (i + 1.0) / n)));
+        }
+        return sup;
+    }
+
     private static double[] draw(Distribution d, int n, long stream) {
         double[] v = new double[n];
         Marginal.of(d).fill(MonteCarlo.blockStream(6_4L, stream), v, 0, n);
@@ -179,28 +195,14 @@ class Jcgm101SamplingTest {
         // form (1, 2, 4), through the power w^(-2/nu) (0.6, 2.5, 7, 30, 31.5, 100) and through expm1 (200, 1e4)
         int n = 40_000;
         for (double nu : new double[] {1, 2, 4, 0.6, 2.5, 7, 30, 31.5, 100, 200, 1e4}) {
-            double[] v = draw(Distribution.StudentT.of(0, 1, nu), n, 11);
-            Arrays.sort(v);
-            TDistribution ref = new TDistribution(null, nu);
-            double sup = 0;
-            for (int i = 0; i < n; i++) {
-                double f = ref.cumulativeProbability(v[i]);
-                sup = Math.max(sup, Math.max(Math.abs(f - (double) i / n), Math.abs(f - (i + 1.0) / n)));
-            }
+            double sup = studentTDistance(nu, n, 11);
             assertTrue(sup < 1.95 / Math.sqrt(n), "nu = " + nu + ": KS distance " + sup);
         }
         // the same check at ten times the draws (critical value 1.95 / sqrt(n) three times as tight) for the
         // closed form used most (nu = 4) and one through the power
         int big = 400_000;
         for (double nu : new double[] {4, 2.5}) {
-            double[] v = draw(Distribution.StudentT.of(0, 1, nu), big, 13);
-            Arrays.sort(v);
-            TDistribution ref = new TDistribution(null, nu);
-            double sup = 0;
-            for (int i = 0; i < big; i++) {
-                double f = ref.cumulativeProbability(v[i]);
-                sup = Math.max(sup, Math.max(Math.abs(f - (double) i / big), Math.abs(f - (i + 1.0) / big)));
-            }
+            double sup = studentTDistance(nu, big, 13);
             assertTrue(sup < 1.95 / Math.sqrt(big), "nu = " + nu + ", " + big + " draws: KS distance " + sup);
         }
         // nu without bound is the normal
