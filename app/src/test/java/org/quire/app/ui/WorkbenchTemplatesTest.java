@@ -69,6 +69,13 @@ class WorkbenchTemplatesTest extends GuiTestSupport {
         return BudgetDocument.newDraft(b, "Template Keeper", t).withTemplate(spec, "Template Keeper", t);
     }
 
+    /** @return a budget made from the proving-tank template with one run's invented values */
+    private static BudgetDocument tankRun(org.quire.engine.document.Template shipped) {
+        return shipped.instantiate(java.util.Map.of("V_20", 500.08, "h_neck", 0.62, "t_tank", 17.8, "t_meter", 17.5,
+                "p_meter", 250000.0, "V_ind", 498.95, "V_ind_s", 0.054, "V_ind_n", 5.0), "Test Engineer",
+                Instant.parse("2026-12-01T10:00:00Z"));
+    }
+
     /**
      * A budget made from the shipped proving-tank template: the inputs its template locks are read-only in the
      * inspector and the inputs table, each with the reason "locked by template ID vN"; the inputs its
@@ -77,9 +84,7 @@ class WorkbenchTemplatesTest extends GuiTestSupport {
     @Test
     void theFieldsTheTemplateLocksAreReadOnlyWithTheTemplateNamedAsTheReason(@TempDir Path dir) throws Exception {
         org.quire.engine.document.Template shipped = org.quire.engine.document.Template.of(base);
-        BudgetDocument made = shipped.instantiate(java.util.Map.of("V_20", 500.08, "h_neck", 0.62, "t_tank", 17.8,
-                "t_meter", 17.5, "p_meter", 250000.0, "V_ind", 498.95, "V_ind_s", 0.054, "V_ind_n", 5.0),
-                "Test Engineer", Instant.parse("2026-12-01T10:00:00Z"));
+        BudgetDocument made = tankRun(shipped);
         Path file = dir.resolve("tank-run.json");
         DocumentStore.save(made, file);
         BudgetEditor ed = await(onEdt(() -> frame.open(file))).orElseThrow();
@@ -179,9 +184,7 @@ class WorkbenchTemplatesTest extends GuiTestSupport {
     @Test
     void theReviewPanelShowsTheDeviationsFromTheTemplateThatTemplateCheckPrints(@TempDir Path dir) throws Exception {
         org.quire.engine.document.Template shipped = org.quire.engine.document.Template.of(base);
-        BudgetDocument made = shipped.instantiate(java.util.Map.of("V_20", 500.08, "h_neck", 0.62, "t_tank", 17.8,
-                "t_meter", 17.5, "p_meter", 250000.0, "V_ind", 498.95, "V_ind_s", 0.054, "V_ind_n", 5.0),
-                "Test Engineer", Instant.parse("2026-12-01T10:00:00Z"));
+        BudgetDocument made = tankRun(shipped);
         org.quire.engine.budget.TypeB drain = (org.quire.engine.budget.TypeB) made.budget().input("d_drain").evaluation();
         assertEquals(0.03, drain.parameters().get("halfWidth"), "the template's drain allowance");
         BudgetDocument narrowed = made.withBudget(made.budget().withInput("d_drain", made.budget().input("d_drain")
